@@ -1,0 +1,20 @@
+namespace TripTestLog.Domain.Envelopes;
+
+/// <summary>Where the value of a band edge comes from, so a reader can tell a normative limit from a drawn line.</summary>
+public enum EdgeSource
+{
+    /// <summary>No limit on this side: zero for a minimum (may trip at once), unbounded for a maximum.</summary>
+    None,
+
+    /// <summary>A limit the standard states at this current.</summary>
+    NormativePoint,
+
+    /// <summary>A straight line on log-log axes between two normative points.</summary>
+    Interpolated,
+
+    /// <summary>Extended beyond the last thermal point with I²t = constant.</summary>
+    Extrapolated,
+
+    /// <summary>The instantaneous (magnetic) release requirement.</summary>
+    Instantaneous,
+}
