@@ -1,0 +1,41 @@
+using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Measurements;
+
+namespace TripTestLog.Domain.Records;
+
+/// <summary>
+/// Everything read from one record file: its kind, the records that parsed, and every problem found.
+/// Exactly one of the record lists is filled, the one matching <see cref="Kind"/>.
+/// </summary>
+public sealed record ParsedFile
+{
+    /// <summary>The path as given.</summary>
+    public required string Path { get; init; }
+
+    /// <summary>SHA-256 of the file's bytes, lower-case hex.</summary>
+    public required string Sha256 { get; init; }
+
+    /// <summary>The kind recognised from the header; null when the header was not recognised.</summary>
+    public RecordKind? Kind { get; init; }
+
+    /// <summary>Data rows read (header and blank lines not counted).</summary>
+    public long RowsRead { get; init; }
+
+    /// <summary>Every problem found, in file order.</summary>
+    public IReadOnlyList<RowProblem> Problems { get; init; } = [];
+
+    /// <summary>Device register rows.</summary>
+    public IReadOnlyList<Located<Device>> Devices { get; init; } = [];
+
+    /// <summary>Trip test rows.</summary>
+    public IReadOnlyList<Located<TripMeasurement>> Trips { get; init; } = [];
+
+    /// <summary>Contact resistance rows.</summary>
+    public IReadOnlyList<Located<ContactMeasurement>> Contacts { get; init; } = [];
+
+    /// <summary>Insulation resistance rows.</summary>
+    public IReadOnlyList<Located<InsulationMeasurement>> Insulations { get; init; } = [];
+
+    /// <summary>The number of rows that parsed into records.</summary>
+    public int RecordCount => Devices.Count + Trips.Count + Contacts.Count + Insulations.Count;
+}

@@ -1,0 +1,17 @@
+namespace TripTestLog.Domain.Records;
+
+/// <summary>The kinds of record file, recognised from the header row, never from the file name.</summary>
+public enum RecordKind
+{
+    /// <summary>The device register: one row per breaker.</summary>
+    DeviceRegister,
+
+    /// <summary>Primary-injection trip tests.</summary>
+    TripTests,
+
+    /// <summary>Contact (micro-ohm) resistance readings.</summary>
+    ContactResistance,
+
+    /// <summary>Insulation resistance readings.</summary>
+    InsulationResistance,
+}

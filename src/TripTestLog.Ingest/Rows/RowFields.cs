@@ -1,0 +1,204 @@
+using TripTestLog.Domain.Records;
+using System.Globalization;
+using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Measurements;
+using TripTestLog.Ingest.Columns;
+
+namespace TripTestLog.Ingest.Rows;
+
+/// <summary>
+/// Reads the fields of one row by column name, converting units and collecting every problem with its column,
+/// so a row reports all of its faults at once rather than the first.
+/// </summary>
+internal sealed class RowFields
+{
+    private readonly HeaderMap _map;
+    private readonly IReadOnlyList<string> _values;
+    private readonly string _file;
+    private readonly DateOnly _today;
+
+    public RowFields(HeaderMap map, IReadOnlyList<string> values, string file, long line, DateOnly today)
+    {
+        _map = map;
+        _values = values;
+        _file = file;
+        Line = line;
+        _today = today;
+    }
+
+    public long Line { get; }
+
+    public List<RowProblem> Problems { get; } = [];
+
+    public bool Ok => Problems.Count == 0;
+
+    public void Fail(string column, string reason) => Problems.Add(new RowProblem(_file, Line, Header(column), reason));
+
+    public string Header(string column) => _map.TryGet(column, out var c) ? c.Header : column;
+
+    /// <summary>The trimmed text of a column; empty when the column is absent or blank.</summary>
+    public string Text(string column) =>
+        _map.TryGet(column, out var c) && c.Index < _values.Count ? _values[c.Index].Trim() : "";
+
+    public string? RequiredText(string column, string what)
+    {
+        var text = Text(column);
+        if (text.Length == 0)
+        {
+            Fail(column, $"{what} is blank; every row needs one");
+            return null;
+        }
+
+        return text;
+    }
+
+    /// <summary>A number converted to the stored unit and checked against a plausible range [min, max] (in that unit).</summary>
+    public double? Number(string column, bool required, double min, double max, string unit, bool allowZero = false)
+    {
+        var text = Text(column);
+        if (text.Length == 0)
+        {
+            if (required)
+            {
+                Fail(column, $"a value is required here ({unit})");
+            }
+
+            return null;
+        }
+
+        return NumberFrom(text, column, min, max, allowZero);
+    }
+
+    /// <summary>Parses <paramref name="text"/> as a value of <paramref name="column"/>, with its unit factor and range check.</summary>
+    public double? NumberFrom(string text, string column, double min, double max, bool allowZero = false)
+    {
+        // Only plain decimal numbers: "NaN", "Infinity", hex and thousands separators are refused.
+        if (!double.TryParse(text, NumberStyles.AllowLeadingSign | NumberStyles.AllowDecimalPoint | NumberStyles.AllowExponent,
+                CultureInfo.InvariantCulture, out var raw) || !double.IsFinite(raw))
+        {
+            Fail(column, $"'{text}' is not a number; write a decimal number with a point, e.g. 12.5");
+            return null;
+        }
+
+        var factor = _map.TryGet(column, out var c) ? c.Factor : 1.0;
+        var value = raw * factor;
+        if (value < 0 || (value == 0 && !allowZero))
+        {
+            Fail(column, $"'{text}' must be above zero");
+            return null;
+        }
+
+        if (value < min || value > max)
+        {
+            Fail(column, $"'{text}' is outside the plausible range {Format(min / factor)} to {Format(max / factor)} for this column; check the value and its unit");
+            return null;
+        }
+
+        return value;
+    }
+
+    public TestedAt? When(string column)
+    {
+        var text = RequiredText(column, "the test date");
+        if (text is null)
+        {
+            return null;
+        }
+
+        if (!TestedAt.TryParse(text, out var when))
+        {
+            Fail(column, $"'{text}' is not an ISO 8601 date or date-time; write e.g. 2024-03-18 or 2024-03-18T09:30");
+            return null;
+        }
+
+        if (when.Date > _today)
+        {
+            Fail(column, $"'{text}' is in the future (today is {_today:yyyy-MM-dd})");
+            return null;
+        }
+
+        if (when.Date.Year < 1950)
+        {
+            Fail(column, $"'{text}' is before 1950; check the year");
+            return null;
+        }
+
+        return when;
+    }
+
+    public DateOnly? Date(string column)
+    {
+        var text = Text(column);
+        if (text.Length == 0)
+        {
+            return null;
+        }
+
+        if (!DateOnly.TryParseExact(text, "yyyy-MM-dd", CultureInfo.InvariantCulture, DateTimeStyles.None, out var date))
+        {
+            Fail(column, $"'{text}' is not a date; write yyyy-MM-dd, e.g. 2019-06-30");
+            return null;
+        }
+
+        if (date > _today)
+        {
+            Fail(column, $"'{text}' is in the future (today is {_today:yyyy-MM-dd})");
+            return null;
+        }
+
+        return date;
+    }
+
+    public AssetTag? Tag()
+    {
+        var text = RequiredText("asset_tag", "the asset tag");
+        if (text is null)
+        {
+            return null;
+        }
+
+        if (!AssetTag.IsValid(text, out var reason))
+        {
+            Fail("asset_tag", reason);
+            return null;
+        }
+
+        return AssetTag.Of(text);
+    }
+
+    public TestStage? Stage()
+    {
+        var text = RequiredText("stage", "the stage");
+        switch (text?.ToLowerInvariant())
+        {
+            case null:
+                return null;
+            case "as-found":
+                return TestStage.AsFound;
+            case "as-left":
+                return TestStage.AsLeft;
+            default:
+                Fail("stage", $"'{text}' is not a stage; write as-found or as-left");
+                return null;
+        }
+    }
+
+    public Pole? Pole()
+    {
+        var text = RequiredText("pole", "the pole");
+        if (text is null)
+        {
+            return null;
+        }
+
+        if (!Domain.Measurements.Pole.TryParse(text, out var pole))
+        {
+            Fail("pole", $"'{text}' is not a pole; write 1, 2, 3, 4, N or all");
+            return null;
+        }
+
+        return pole;
+    }
+
+    private static string Format(double value) => value.ToString("0.######", CultureInfo.InvariantCulture);
+}

@@ -1,0 +1,43 @@
+namespace TripTestLog.Storage.Entities;
+
+/// <summary>
+/// One state of a device's register entry, kept every time an import changes it, so the settings and ratings in
+/// force on any test date can be recovered.
+/// </summary>
+internal sealed class DeviceRevisionRow
+{
+    public long Id { get; set; }
+
+    public long DeviceId { get; set; }
+
+    public string Site { get; set; } = "";
+
+    public string Location { get; set; } = "";
+
+    public string Family { get; set; } = "";
+
+    public string Curve { get; set; } = "";
+
+    public double RatedCurrentA { get; set; }
+
+    public int Poles { get; set; }
+
+    public double RatedVoltageV { get; set; }
+
+    public string? CommissionedOn { get; set; }
+
+    public double? ContactLimitUohm { get; set; }
+
+    public string Make { get; set; } = "";
+
+    public string Model { get; set; } = "";
+
+    public string Serial { get; set; } = "";
+
+    public long SourceFileId { get; set; }
+
+    public long SourceLine { get; set; }
+
+    /// <summary>UTC, ISO 8601: when this state was imported.</summary>
+    public string RecordedAt { get; set; } = "";
+}

@@ -1,0 +1,37 @@
+namespace TripTestLog.Storage.Entities;
+
+/// <summary>A device as the newest register import describes it.</summary>
+internal sealed class DeviceRow
+{
+    public long Id { get; set; }
+
+    public string AssetTag { get; set; } = "";
+
+    public string Site { get; set; } = "";
+
+    public string Location { get; set; } = "";
+
+    public string Family { get; set; } = "";
+
+    public string Curve { get; set; } = "";
+
+    public double RatedCurrentA { get; set; }
+
+    public int Poles { get; set; }
+
+    public double RatedVoltageV { get; set; }
+
+    public string? CommissionedOn { get; set; }
+
+    public double? ContactLimitUohm { get; set; }
+
+    public string Make { get; set; } = "";
+
+    public string Model { get; set; } = "";
+
+    public string Serial { get; set; } = "";
+
+    public long SourceFileId { get; set; }
+
+    public long SourceLine { get; set; }
+}

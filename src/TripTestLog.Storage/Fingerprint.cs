@@ -1,0 +1,34 @@
+using System.Globalization;
+using System.Security.Cryptography;
+using System.Text;
+using TripTestLog.Domain.Measurements;
+
+namespace TripTestLog.Storage;
+
+/// <summary>
+/// A content hash of a measurement, over every field as stored. Two rows with the same fingerprint are the same
+/// measurement, whichever file they came in.
+/// </summary>
+internal static class Fingerprint
+{
+    public static string Of(TripMeasurement m, long deviceId) => Hash(
+        "trip", deviceId, m.TestedAt, m.Stage, m.Pole, R(m.Current.Value), m.Outcome.Tripped, R(m.Outcome.Time.Value), m.Start,
+        m.Ambient is { } a ? R(a.Value) : "", m.Instrument, m.Technician, m.Note);
+
+    public static string Of(ContactMeasurement m, long deviceId) => Hash(
+        "contact", deviceId, m.TestedAt, m.Stage, m.Pole, R(m.Resistance.Value), R(m.TestCurrent.Value),
+        m.Temperature is { } t ? R(t.Value) : "", m.Instrument, m.Technician);
+
+    public static string Of(InsulationMeasurement m, long deviceId) => Hash(
+        "insulation", deviceId, m.TestedAt, m.Stage, m.Path, R(m.TestVoltage.Value), R(m.Resistance.Value.Value), m.Resistance.OverRange,
+        m.Temperature is { } t ? R(t.Value) : "", m.Duration is { } d ? R(d.Value) : "");
+
+    // Round-trip formatting keeps 0.1 and 0.10000000000000001 apart only where the doubles really differ.
+    private static string R(double value) => value.ToString("R", CultureInfo.InvariantCulture);
+
+    private static string Hash(params object[] parts)
+    {
+        var text = string.Join('\u001f', parts.Select(p => Convert.ToString(p, CultureInfo.InvariantCulture)));
+        return Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(text)))[..32];
+    }
+}

@@ -1,0 +1,26 @@
+using TripTestLog.Domain.Records;
+
+namespace TripTestLog.Storage;
+
+/// <summary>The result of importing one file. Every data row read is accounted for.</summary>
+/// <param name="File">The file's path as given.</param>
+/// <param name="Kind">The kind recognised, when it was.</param>
+/// <param name="Status">Imported, already imported, or refused.</param>
+/// <param name="RowsRead">Data rows in the file.</param>
+/// <param name="Added">New records stored (for a register: new devices).</param>
+/// <param name="Updated">Register only: devices whose entry changed (a revision was kept).</param>
+/// <param name="Duplicates">Rows identical to a record already stored, or to an earlier row of the same file.</param>
+/// <param name="Problems">Why the file was refused; empty otherwise.</param>
+public sealed record ImportOutcome(
+    string File,
+    RecordKind? Kind,
+    ImportStatus Status,
+    long RowsRead,
+    long Added,
+    long Updated,
+    long Duplicates,
+    IReadOnlyList<RowProblem> Problems)
+{
+    /// <summary>Register rows that matched the stored entry exactly.</summary>
+    public long Unchanged => Status == ImportStatus.Imported && Kind == RecordKind.DeviceRegister ? RowsRead - Added - Updated - Duplicates : 0;
+}

@@ -1,0 +1,92 @@
+using System.Text;
+using Microsoft.EntityFrameworkCore;
+using TripTestLog.Storage.Entities;
+
+namespace TripTestLog.Storage;
+
+/// <summary>The EF Core model of the store. Tables and columns are snake_case so plain SQL reads naturally.</summary>
+internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> options) : DbContext(options)
+{
+    public DbSet<SourceFileRow> SourceFiles => Set<SourceFileRow>();
+
+    public DbSet<DeviceRow> Devices => Set<DeviceRow>();
+
+    public DbSet<DeviceRevisionRow> DeviceRevisions => Set<DeviceRevisionRow>();
+
+    public DbSet<TripTestRow> TripTests => Set<TripTestRow>();
+
+    public DbSet<ContactTestRow> ContactTests => Set<ContactTestRow>();
+
+    public DbSet<InsulationTestRow> InsulationTests => Set<InsulationTestRow>();
+
+    protected override void OnModelCreating(ModelBuilder modelBuilder)
+    {
+        modelBuilder.Entity<SourceFileRow>(e =>
+        {
+            e.ToTable("source_files");
+            e.HasIndex(x => x.Sha256).IsUnique();
+        });
+        modelBuilder.Entity<DeviceRow>(e =>
+        {
+            e.ToTable("devices");
+            e.HasIndex(x => x.AssetTag).IsUnique();
+            e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
+        });
+        modelBuilder.Entity<DeviceRevisionRow>(e =>
+        {
+            e.ToTable("device_revisions");
+            e.HasIndex(x => x.DeviceId);
+            e.HasOne<DeviceRow>().WithMany().HasForeignKey(x => x.DeviceId).OnDelete(DeleteBehavior.Restrict);
+            e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
+        });
+        modelBuilder.Entity<TripTestRow>(e =>
+        {
+            e.ToTable("trip_tests");
+            e.HasIndex(x => x.Fingerprint).IsUnique();
+            e.HasIndex(x => new { x.DeviceId, x.TestedAt });
+            e.HasOne<DeviceRow>().WithMany().HasForeignKey(x => x.DeviceId).OnDelete(DeleteBehavior.Restrict);
+            e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
+        });
+        modelBuilder.Entity<ContactTestRow>(e =>
+        {
+            e.ToTable("contact_tests");
+            e.HasIndex(x => x.Fingerprint).IsUnique();
+            e.HasIndex(x => new { x.DeviceId, x.TestedAt });
+            e.HasOne<DeviceRow>().WithMany().HasForeignKey(x => x.DeviceId).OnDelete(DeleteBehavior.Restrict);
+            e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
+        });
+        modelBuilder.Entity<InsulationTestRow>(e =>
+        {
+            e.ToTable("insulation_tests");
+            e.HasIndex(x => x.Fingerprint).IsUnique();
+            e.HasIndex(x => new { x.DeviceId, x.TestedAt });
+            e.HasOne<DeviceRow>().WithMany().HasForeignKey(x => x.DeviceId).OnDelete(DeleteBehavior.Restrict);
+            e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
+        });
+
+        foreach (var entity in modelBuilder.Model.GetEntityTypes())
+        {
+            foreach (var property in entity.GetProperties())
+            {
+                property.SetColumnName(SnakeCase(property.Name));
+            }
+        }
+    }
+
+    internal static string SnakeCase(string name)
+    {
+        var sb = new StringBuilder(name.Length + 8);
+        for (var i = 0; i < name.Length; i++)
+        {
+            var c = name[i];
+            if (char.IsUpper(c) && i > 0)
+            {
+                sb.Append('_');
+            }
+
+            sb.Append(char.ToLowerInvariant(c));
+        }
+
+        return sb.ToString();
+    }
+}
