@@ -103,7 +103,7 @@ public sealed class Iec60898Envelope : ITripEnvelope
 
         if (m == t.InstantaneousLow)
         {
-            return new BandEdge(Seconds.Of(Iec60898Table.InstantaneousSeconds), EdgeSource.Instantaneous, d.Requirement, StartCondition.Cold);
+            return new BandEdge(Seconds.Of(Iec60898Table.InstantaneousSeconds), EdgeSource.NormativePoint, d.Requirement, StartCondition.Cold);
         }
 
         return BandEdge.NoMinimum($"above {t.InstantaneousLow:0} In the instantaneous release of curve {t.Curve} may act at once");
@@ -146,6 +146,8 @@ public sealed class Iec60898Envelope : ITripEnvelope
             return new BandEdge(Seconds.Of(s), EdgeSource.Extrapolated, "I²t = constant from IEC 60898-1 Table 7 c", StartCondition.Cold);
         }
 
-        return new BandEdge(Seconds.Of(Iec60898Table.InstantaneousSeconds), EdgeSource.Instantaneous, e.Requirement, StartCondition.Cold);
+        return m == t.InstantaneousHigh
+            ? new BandEdge(Seconds.Of(Iec60898Table.InstantaneousSeconds), EdgeSource.NormativePoint, e.Requirement, StartCondition.Cold)
+            : new BandEdge(Seconds.Of(Iec60898Table.InstantaneousSeconds), EdgeSource.Instantaneous, $"above {t.InstantaneousHigh:0} In: {e.Requirement}", StartCondition.Cold);
     }
 }

@@ -16,4 +16,20 @@ public sealed record NormativePoint(
     StartCondition Start,
     Seconds? MustHoldFor,
     Seconds? MustTripWithin,
-    string Requirement);
+    string Requirement)
+{
+    /// <summary>
+    /// The band this point alone sets, for a test matched to it: its hold time as the minimum, its trip time as the
+    /// maximum, and no limit where the point sets none.
+    /// </summary>
+    public TripBand BandAt(Amperes current, CurrentMultiple multiple)
+    {
+        var min = MustHoldFor is { } hold
+            ? new BandEdge(hold, EdgeSource.NormativePoint, Requirement, Start)
+            : BandEdge.NoMinimum($"{Requirement}: sets no minimum");
+        var max = MustTripWithin is { } trip
+            ? new BandEdge(trip, EdgeSource.NormativePoint, Requirement, Start)
+            : BandEdge.NoMaximum($"{Requirement}: requires no trip");
+        return new TripBand(current, multiple, min, max, null);
+    }
+}

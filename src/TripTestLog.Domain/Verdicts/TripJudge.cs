@@ -12,9 +12,10 @@ namespace TripTestLog.Domain.Verdicts;
 public static class TripJudge
 {
     /// <summary>
-    /// How close, relative, the measured multiple must be to one of the standard's points for the verdict to be called
-    /// normative: ±3 %. A lab policy chosen for this tool (primary-injection sets commonly regulate to a few per cent);
-    /// it is not a figure from IEC 60898-1. The band itself is always evaluated at the measured current.
+    /// How close, relative, the measured multiple must be to one of the standard's points (with the same start condition)
+    /// for the test to be judged by that point's own limits, basis normative: ±3 %. A lab policy chosen for this tool
+    /// (primary-injection sets commonly hold the current to a few per cent); it is not a figure from IEC 60898-1.
+    /// Outside it, the band is evaluated at the measured current, basis band.
     /// </summary>
     public const double PointTolerance = 0.03;
 
@@ -24,8 +25,12 @@ public static class TripJudge
         ArgumentNullException.ThrowIfNull(envelope);
         ArgumentNullException.ThrowIfNull(measurement);
 
-        var band = envelope.At(measurement.Current);
-        var point = MatchingPoint(envelope, band.Multiple, measurement.Start);
+        var measured = envelope.At(measurement.Current);
+        var point = MatchingPoint(envelope, measured.Multiple, measurement.Start);
+
+        // Within the tolerance of one of the standard's points, the point's own limits are the requirement; elsewhere the
+        // band drawn between the points is evaluated at the measured current.
+        var band = point?.BandAt(measurement.Current, measured.Multiple) ?? measured;
         var basis = point is null ? VerdictBasis.Band : VerdictBasis.Normative;
         var time = measurement.Outcome.Time;
         var margin = MarginOf(band, time);
@@ -37,7 +42,7 @@ public static class TripJudge
 
         var (verdict, reason) = measurement.Outcome.Tripped
             ? JudgeTrip(band, time, measurement.Start)
-            : JudgeHold(band, time, measurement.Start);
+            : JudgeHold(band, time, measurement.Start, point);
         return new(measurement, band, verdict, basis, point, margin, reason);
     }
 
@@ -62,7 +67,7 @@ public static class TripJudge
         return (Verdict.Pass, $"tripped after {time}, inside {Describe(band)}");
     }
 
-    private static (Verdict, string) JudgeHold(TripBand band, Seconds held, StartCondition start)
+    private static (Verdict, string) JudgeHold(TripBand band, Seconds held, StartCondition start, NormativePoint? point)
     {
         var min = band.Minimum;
         var max = band.Maximum;
@@ -73,12 +78,21 @@ public static class TripJudge
                 : (Verdict.TooLate, $"held {held} without tripping; it must trip within {latest} ({max.Requirement})");
         }
 
-        var earliest = min.Limit!.Value;
+        // A hold at a current proves no trip at that current or below for that long. At one of the standard's no-trip
+        // points (IEC 60898-1 Table 7 a and d) that is the whole requirement.
+        if (point is { MustTripWithin: null, MustHoldFor: { } required })
+        {
+            return held >= required
+                ? (Verdict.Pass, $"held {held} without tripping, as required ({point.Requirement})")
+                : (Verdict.NotAssessable, $"held only {held}; the no-trip requirement runs to {required} ({point.Requirement})");
+        }
+
         if (min.IsOpen)
         {
             return (Verdict.NotAssessable, $"held {held} and stopped before the {max.Limit} maximum; a hold proves nothing where the release may act at once");
         }
 
+        var earliest = min.Limit!.Value;
         if (held < earliest)
         {
             return (Verdict.NotAssessable, $"held only {held}; the no-trip requirement runs to {earliest} ({min.Requirement})");

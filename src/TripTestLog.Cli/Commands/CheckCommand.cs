@@ -1,0 +1,61 @@
+using System.CommandLine;
+using TripTestLog.Cli.Output;
+using TripTestLog.Cli.Services;
+using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Verdicts;
+using TripTestLog.Storage;
+
+namespace TripTestLog.Cli.Commands;
+
+/// <summary>`check`: the verdict of every stored trip test, as a table or as JSON.</summary>
+internal static class CheckCommand
+{
+    public static Command Create(CliContext cli)
+    {
+        var db = CommonOptions.Database();
+        var asset = new Option<string?>("--asset") { Description = "Only this device's tests", HelpName = "TAG" };
+        var json = new Option<bool>("--json") { Description = "Write a JSON array, one object per trip test (fields in the README)" };
+        var failOnFindings = new Option<bool>("--fail-on-findings") { Description = "Exit with 1 when any test is too early or too late" };
+        var command = new Command("check", "Judge every trip test against the band its standard allows: pass, too-early, too-late or not-assessable")
+        {
+            db, asset, json, failOnFindings,
+        };
+        command.SetAction(parse => Run(cli, parse.GetValue(db)!, parse.GetValue(asset), parse.GetValue(json), parse.GetValue(failOnFindings)));
+        return command;
+    }
+
+    private static int Run(CliContext cli, FileInfo db, string? asset, bool json, bool failOnFindings)
+    {
+        if (!db.Exists)
+        {
+            cli.Error.WriteLine($"error: no database at {db.FullName}; import records first (triptestlog import PATH --db {db.Name})");
+            return ExitCodes.BadInput;
+        }
+
+        AssetTag? only = null;
+        if (asset is not null)
+        {
+            if (!AssetTag.IsValid(asset, out var reason))
+            {
+                cli.Error.WriteLine($"error: --asset: {reason}");
+                return ExitCodes.BadInput;
+            }
+
+            only = AssetTag.Of(asset);
+        }
+
+        using var store = RecordStore.Open(db.FullName);
+        var results = CheckRunner.Run(store, only);
+        if (json)
+        {
+            VerdictJson.Write(cli.Out, results);
+        }
+        else
+        {
+            VerdictTable.Write(cli.Out, results);
+        }
+
+        var findings = results.Any(r => r.Assessment.Verdict is Verdict.TooEarly or Verdict.TooLate);
+        return failOnFindings && findings ? ExitCodes.Findings : ExitCodes.Ok;
+    }
+}

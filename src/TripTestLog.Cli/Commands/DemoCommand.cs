@@ -1,0 +1,103 @@
+using System.CommandLine;
+using TripTestLog.Cli.Output;
+using TripTestLog.Cli.Services;
+using TripTestLog.Domain.Verdicts;
+using TripTestLog.Storage;
+
+namespace TripTestLog.Cli.Commands;
+
+/// <summary>`demo`: a fresh database from the sample records, checked, with the outputs written to one folder.</summary>
+internal static class DemoCommand
+{
+    public static Command Create(CliContext cli)
+    {
+        var records = new Option<DirectoryInfo?>("--records")
+        {
+            Description = "Folder of record files (default: the project's sample-records folder)",
+            HelpName = "FOLDER",
+        };
+        var output = new Option<DirectoryInfo>("--out")
+        {
+            Description = "Folder for the demo database, log and verdicts; its old demo database is replaced",
+            DefaultValueFactory = _ => new DirectoryInfo("demo-output"),
+            HelpName = "FOLDER",
+        };
+        var command = new Command("demo", "Build a fresh database from the sample records, check every trip test, and say where the results are")
+        {
+            records, output,
+        };
+        command.SetAction(parse => Run(cli, parse.GetValue(records), parse.GetValue(output)!));
+        return command;
+    }
+
+    private static int Run(CliContext cli, DirectoryInfo? records, DirectoryInfo output)
+    {
+        var folder = records?.FullName ?? FindSampleRecords();
+        if (folder is null || !Directory.Exists(folder))
+        {
+            cli.Error.WriteLine("error: sample-records folder not found; run from the project folder or give --records FOLDER");
+            return ExitCodes.BadInput;
+        }
+
+        output.Create();
+        var db = new FileInfo(Path.Combine(output.FullName, "triptestlog.db"));
+        foreach (var stale in new[] { db.FullName, db.FullName + "-wal", db.FullName + "-shm" })
+        {
+            File.Delete(stale);
+        }
+
+        var (files, _) = ImportRunner.Expand([folder]);
+        IReadOnlyList<ImportOutcome> outcomes;
+        IReadOnlyList<CheckedTrip> results;
+        using (var log = Logging.BesideDatabase(db))
+        using (var store = RecordStore.Open(db.FullName))
+        {
+            outcomes = new ImportRunner(store, log, cli).Run(files);
+            results = CheckRunner.Run(store, null);
+        }
+
+        var text = Path.Combine(output.FullName, "verdicts.txt");
+        var json = Path.Combine(output.FullName, "verdicts.json");
+        using (var writer = new StreamWriter(text))
+        {
+            VerdictTable.Write(writer, results);
+        }
+
+        using (var writer = new StreamWriter(json))
+        {
+            VerdictJson.Write(writer, results);
+        }
+
+        cli.Out.WriteLine($"Imported the sample records from {folder}:");
+        ImportReport.Write(cli.Out, outcomes, ImportCommand.LogPath(db));
+        cli.Out.WriteLine();
+        var counts = Enum.GetValues<Verdict>().Select(v => $"{results.Count(r => r.Assessment.Verdict == v)} {Format.Verdict(v)}");
+        cli.Out.WriteLine($"Checked {results.Count} trip tests: {string.Join(", ", counts)}.");
+        cli.Out.WriteLine();
+        cli.Out.WriteLine("Results:");
+        cli.Out.WriteLine($"  database   {db.FullName}");
+        cli.Out.WriteLine($"  verdicts   {text}");
+        cli.Out.WriteLine($"  json       {json}");
+        cli.Out.WriteLine($"  log        {ImportCommand.LogPath(db)}");
+        cli.Out.WriteLine($"Next: triptestlog check --db {db.FullName}");
+        return outcomes.Any(o => o.Status == ImportStatus.Refused) ? ExitCodes.BadInput : ExitCodes.Ok;
+    }
+
+    /// <summary>The sample-records folder next to the working folder or any folder above it, then above the program.</summary>
+    private static string? FindSampleRecords()
+    {
+        foreach (var start in new[] { Directory.GetCurrentDirectory(), AppContext.BaseDirectory })
+        {
+            for (var dir = new DirectoryInfo(start); dir is not null; dir = dir.Parent)
+            {
+                var candidate = Path.Combine(dir.FullName, "sample-records");
+                if (Directory.Exists(candidate))
+                {
+                    return candidate;
+                }
+            }
+        }
+
+        return null;
+    }
+}

@@ -1,0 +1,15 @@
+using System.CommandLine;
+
+namespace TripTestLog.Cli;
+
+/// <summary>Options shared by several commands.</summary>
+internal static class CommonOptions
+{
+    /// <summary>The database file; created on first use. The log file is written beside it.</summary>
+    public static Option<FileInfo> Database() => new("--db")
+    {
+        Description = "SQLite database file (created if missing); the log is written beside it",
+        DefaultValueFactory = _ => new FileInfo("triptestlog.db"),
+        HelpName = "PATH",
+    };
+}

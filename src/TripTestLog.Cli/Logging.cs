@@ -1,0 +1,19 @@
+using Serilog;
+using Serilog.Core;
+
+namespace TripTestLog.Cli;
+
+/// <summary>The log file beside the database: everything a later reader needs to trace an import, nothing on the console.</summary>
+internal static class Logging
+{
+    public static Logger BesideDatabase(FileInfo database)
+    {
+        var folder = database.Directory?.FullName ?? Directory.GetCurrentDirectory();
+        Directory.CreateDirectory(folder);
+        return new LoggerConfiguration()
+            .MinimumLevel.Information()
+            .WriteTo.File(Path.Combine(folder, "triptestlog.log"), shared: true,
+                outputTemplate: "{Timestamp:yyyy-MM-ddTHH:mm:ss.fffzzz} [{Level:u3}] {Message:lj}{NewLine}{Exception}")
+            .CreateLogger();
+    }
+}

@@ -1,0 +1,67 @@
+using System.Globalization;
+using TripTestLog.Domain.Envelopes;
+using TripTestLog.Domain.Quantities;
+
+namespace TripTestLog.Cli.Output;
+
+/// <summary>An envelope sampled at a list of current multiples, as a table for people or CSV for programs.</summary>
+internal static class EnvelopeWriter
+{
+    /// <summary>Multiples a band is usually read at, joined with the standard's own points.</summary>
+    public static IReadOnlyList<double> Multiples(ITripEnvelope envelope) =>
+        new[] { 1.0, 1.2, 1.3, 1.6, 1.8, 2.0, 2.25, 3.0, 4.0, 5.0, 7.0, 10.0, 15.0, 20.0, 30.0, 50.0 }
+            .Concat(envelope.Points.Select(p => p.Multiple.Value))
+            .Distinct()
+            .Order()
+            .ToList();
+
+    public static void WriteTable(TextWriter writer, ITripEnvelope envelope, string title)
+    {
+        writer.WriteLine(title);
+        writer.WriteLine();
+        var table = new TextTable($"x {envelope.ReferenceName}>", "Current>", "Min>", "Max>", "Min from", "Max from", "Point");
+        foreach (var m in Multiples(envelope))
+        {
+            var band = envelope.At(CurrentMultiple.Of(m) * envelope.Reference);
+            var point = envelope.Points.FirstOrDefault(p => p.Multiple.Value == m);
+            table.Add(
+                Format.Number(m, "0.00"),
+                band.Current.ToString(),
+                band.HasRequirement ? Format.Edge(band.Minimum) : "no band",
+                band.HasRequirement ? Format.Edge(band.Maximum) : "no band",
+                band.HasRequirement ? Format.Source(band.Minimum.Source) : "-",
+                band.HasRequirement ? Format.Source(band.Maximum.Source) : "-",
+                point?.Label ?? "");
+        }
+
+        table.WriteTo(writer);
+        writer.WriteLine();
+        writer.WriteLine("Normative points:");
+        foreach (var p in envelope.Points)
+        {
+            writer.WriteLine($"  {p.Label}: {p.Requirement}");
+        }
+
+        writer.WriteLine();
+        writer.WriteLine("Between the points the edges are straight lines on log-log axes; beyond 2.55 In the maximum follows I²t = constant.");
+        writer.WriteLine(Safety.Caution);
+    }
+
+    /// <summary>CSV: multiple,current_a,min_s,max_s,min_source,max_source,point. An empty max_s means unbounded; a row with empty min_s and max_s has no band.</summary>
+    public static void WriteCsv(TextWriter writer, ITripEnvelope envelope)
+    {
+        writer.WriteLine("multiple,current_a,min_s,max_s,min_source,max_source,point");
+        foreach (var m in Multiples(envelope))
+        {
+            var band = envelope.At(CurrentMultiple.Of(m) * envelope.Reference);
+            var point = envelope.Points.FirstOrDefault(p => p.Multiple.Value == m)?.Label ?? "";
+            var min = band.HasRequirement ? R(band.Minimum.Limit?.Value) : "";
+            var max = band.HasRequirement ? R(band.Maximum.Limit?.Value) : "";
+            writer.WriteLine(string.Join(',', R(m), R(band.Current.Value), min, max,
+                band.HasRequirement ? Format.Source(band.Minimum.Source) : "none",
+                band.HasRequirement ? Format.Source(band.Maximum.Source) : "none", point));
+        }
+    }
+
+    private static string R(double? value) => value is { } v ? v.ToString("0.######", CultureInfo.InvariantCulture) : "";
+}

@@ -1,0 +1,60 @@
+using System.Text;
+
+namespace TripTestLog.Cli.Output;
+
+/// <summary>
+/// A plain text table with aligned columns, no colour and no box drawing, so it reads the same in a terminal, a
+/// redirected file and a golden test file.
+/// </summary>
+internal sealed class TextTable
+{
+    private readonly string[] _headers;
+    private readonly bool[] _rightAligned;
+    private readonly List<string[]> _rows = [];
+
+    /// <summary>Columns whose header ends with '>' are right-aligned (the marker is not printed).</summary>
+    public TextTable(params string[] headers)
+    {
+        _rightAligned = headers.Select(h => h.EndsWith('>')).ToArray();
+        _headers = headers.Select(h => h.TrimEnd('>')).ToArray();
+    }
+
+    public int RowCount => _rows.Count;
+
+    public void Add(params string[] cells)
+    {
+        if (cells.Length != _headers.Length)
+        {
+            throw new ArgumentException($"a row needs {_headers.Length} cells; got {cells.Length}", nameof(cells));
+        }
+
+        _rows.Add(cells);
+    }
+
+    public void WriteTo(TextWriter writer)
+    {
+        var widths = _headers.Select((h, i) => Math.Max(h.Length, _rows.Count == 0 ? 0 : _rows.Max(r => r[i].Length))).ToArray();
+        writer.WriteLine(Line(_headers, widths));
+        writer.WriteLine(string.Join("  ", widths.Select(w => new string('-', w))));
+        foreach (var row in _rows)
+        {
+            writer.WriteLine(Line(row, widths));
+        }
+    }
+
+    private string Line(string[] cells, int[] widths)
+    {
+        var sb = new StringBuilder();
+        for (var i = 0; i < cells.Length; i++)
+        {
+            if (i > 0)
+            {
+                sb.Append("  ");
+            }
+
+            sb.Append(_rightAligned[i] ? cells[i].PadLeft(widths[i]) : cells[i].PadRight(widths[i]));
+        }
+
+        return sb.ToString().TrimEnd();
+    }
+}

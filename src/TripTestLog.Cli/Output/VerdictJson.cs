@@ -1,0 +1,80 @@
+using System.Text.Json;
+using System.Text.Json.Serialization;
+using TripTestLog.Cli.Services;
+
+namespace TripTestLog.Cli.Output;
+
+/// <summary>
+/// The verdicts for programs: a JSON array, one object per trip test. The field names and meanings are documented in
+/// the README ("check --json") and pinned by a golden test; add fields at the end, never rename.
+/// </summary>
+internal static class VerdictJson
+{
+    private static readonly JsonSerializerOptions Options = new()
+    {
+        PropertyNamingPolicy = JsonNamingPolicy.SnakeCaseLower,
+        WriteIndented = true,
+        DefaultIgnoreCondition = JsonIgnoreCondition.Never,
+    };
+
+    public static void Write(TextWriter writer, IReadOnlyList<CheckedTrip> results)
+    {
+        writer.WriteLine(JsonSerializer.Serialize(results.Select(Row).ToList(), Options));
+    }
+
+    private static VerdictRow Row(CheckedTrip r)
+    {
+        var m = r.Trip.Measurement;
+        var a = r.Assessment;
+        var band = a.Band;
+        return new VerdictRow(
+            m.Tag.Value,
+            m.TestedAt.ToString(),
+            Format.Stage(m.Stage),
+            m.Pole.Code,
+            Format.Start(m.Start),
+            m.Current.Value,
+            Math.Round(band.Multiple.Value, 4),
+            m.Outcome.Tripped,
+            m.Outcome.Tripped ? m.Outcome.Time.Value : null,
+            m.Outcome.Tripped ? null : m.Outcome.Time.Value,
+            band.HasRequirement ? band.Minimum.Limit?.Value : null,
+            band.HasRequirement ? band.Maximum.Limit?.Value : null,
+            band.HasRequirement ? Format.Source(band.Minimum.Source) : null,
+            band.HasRequirement ? Format.Source(band.Maximum.Source) : null,
+            Format.Verdict(a.Verdict),
+            Format.Basis(a.Basis),
+            a.Point?.Label,
+            a.Margin.DecadesToNearerEdge is { } d ? Math.Round(d, 4) : null,
+            a.Margin.PositionInBand is { } p ? Math.Round(p, 4) : null,
+            a.Reason,
+            r.Envelope.Standard,
+            r.Trip.SourceFile,
+            r.Trip.SourceLine);
+    }
+
+    private sealed record VerdictRow(
+        string AssetTag,
+        string TestedAt,
+        string Stage,
+        string Pole,
+        string Start,
+        double CurrentA,
+        double MultipleOfIn,
+        bool Tripped,
+        double? TripTimeS,
+        double? HeldS,
+        double? BandMinS,
+        double? BandMaxS,
+        string? BandMinSource,
+        string? BandMaxSource,
+        string Verdict,
+        string Basis,
+        string? NormativePoint,
+        double? MarginDecades,
+        double? PositionInBand,
+        string Reason,
+        string Standard,
+        string SourceFile,
+        long SourceLine);
+}

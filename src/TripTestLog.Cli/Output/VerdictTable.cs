@@ -1,0 +1,59 @@
+using TripTestLog.Cli.Services;
+using TripTestLog.Domain.Verdicts;
+
+namespace TripTestLog.Cli.Output;
+
+/// <summary>The verdicts as a person reads them: a table, then what needs attention with the reasons, then the caution.</summary>
+internal static class VerdictTable
+{
+    public static void Write(TextWriter writer, IReadOnlyList<CheckedTrip> results)
+    {
+        var table = new TextTable("Asset", "Tested", "Stage", "Pole", "Start", "Current>", "x In>", "Result", "Band min>", "Band max>", "Verdict", "Basis");
+        foreach (var r in results)
+        {
+            var m = r.Trip.Measurement;
+            var a = r.Assessment;
+            table.Add(
+                m.Tag.Value,
+                m.TestedAt.ToString(),
+                Format.Stage(m.Stage),
+                m.Pole.Code,
+                Format.Start(m.Start),
+                m.Current.ToString(),
+                Format.Number(a.Band.Multiple.Value, "0.00"),
+                Format.Outcome(m.Outcome),
+                a.Band.HasRequirement ? Format.Edge(a.Band.Minimum) : "-",
+                a.Band.HasRequirement ? Format.Edge(a.Band.Maximum) : "-",
+                Format.Verdict(a.Verdict),
+                Format.Basis(a.Basis));
+        }
+
+        table.WriteTo(writer);
+        writer.WriteLine();
+        var counts = Enum.GetValues<Verdict>().Select(v => $"{results.Count(r => r.Assessment.Verdict == v)} {Format.Verdict(v)}");
+        writer.WriteLine($"{results.Count} trip tests: {string.Join(", ", counts)}.");
+
+        WriteReasons(writer, "Outside the band (act on these):", results.Where(r => r.Assessment.Verdict is Verdict.TooEarly or Verdict.TooLate));
+        WriteReasons(writer, "Not assessable (repeat or complete the test):", results.Where(r => r.Assessment.Verdict == Verdict.NotAssessable));
+        writer.WriteLine();
+        writer.WriteLine(Safety.Caution);
+    }
+
+    private static void WriteReasons(TextWriter writer, string heading, IEnumerable<CheckedTrip> results)
+    {
+        var list = results.ToList();
+        if (list.Count == 0)
+        {
+            return;
+        }
+
+        writer.WriteLine();
+        writer.WriteLine(heading);
+        foreach (var r in list)
+        {
+            var m = r.Trip.Measurement;
+            writer.WriteLine($"  {m.Tag} {m.TestedAt} {Format.Stage(m.Stage)} pole {m.Pole} at {m.Current} ({Format.Number(r.Assessment.Band.Multiple.Value, "0.00")} In): "
+                + $"{Format.Verdict(r.Assessment.Verdict)}: {r.Assessment.Reason} [{Path.GetFileName(r.Trip.SourceFile)}:{r.Trip.SourceLine}]");
+        }
+    }
+}

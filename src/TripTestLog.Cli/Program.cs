@@ -1,0 +1,3 @@
+using TripTestLog.Cli;
+
+return CliApp.Run(args, new CliContext(Console.Out, Console.Error, TimeProvider.System, !Console.IsErrorRedirected));
