@@ -1,0 +1,141 @@
+using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Envelopes;
+using TripTestLog.Domain.Quantities;
+
+namespace TripTestLog.Domain.Tests.Envelopes;
+
+/// <summary>
+/// The envelope must reproduce IEC 60898-1 Table 7 ("Time-current operating characteristics") exactly at its points.
+/// Source of every expected value in this file: IEC 60898-1:2015, Table 7, rows a to e, and the instantaneous tripping
+/// ranges of Table 2 (B: 3-5 In, C: 5-10 In, D: 10-20 In).
+/// </summary>
+public sealed class Iec60898EnvelopeTests
+{
+    private const double Tolerance = 1e-9;
+
+    private static TripBand BandAt(TripCurve curve, double rated, double multiple) =>
+        new Iec60898Envelope(curve, Amperes.Of(rated)).At(Amperes.Of(rated * multiple));
+
+    [Theory]
+    // Row a: 1.13 In, from cold, no trip within 1 h for In <= 63 A, 2 h above.
+    [InlineData(TripCurve.B, 6, 3600)]
+    [InlineData(TripCurve.C, 63, 3600)]
+    [InlineData(TripCurve.C, 80, 7200)]
+    [InlineData(TripCurve.D, 125, 7200)]
+    public void RowA_NoTripTimeAt113In_IsOneHourUpTo63AAndTwoHoursAbove(TripCurve curve, double rated, double expectedMin)
+    {
+        var band = BandAt(curve, rated, 1.13);
+
+        Assert.Equal(expectedMin, band.Minimum.Limit!.Value.Value, Tolerance);
+        Assert.Equal(EdgeSource.NormativePoint, band.Minimum.Source);
+        Assert.Null(band.Maximum.Limit);
+    }
+
+    [Theory]
+    // Row b: 1.45 In, straight after a, trip within 1 h for In <= 63 A, 2 h above.
+    [InlineData(TripCurve.B, 10, 3600)]
+    [InlineData(TripCurve.C, 63, 3600)]
+    [InlineData(TripCurve.C, 80, 7200)]
+    [InlineData(TripCurve.D, 100, 7200)]
+    public void RowB_TripByTimeAt145In_IsOneHourUpTo63AAndTwoHoursAbove(TripCurve curve, double rated, double expectedMax)
+    {
+        var band = BandAt(curve, rated, 1.45);
+
+        Assert.Equal(expectedMax, band.Maximum.Limit!.Value.Value, Tolerance);
+        Assert.Equal(EdgeSource.NormativePoint, band.Maximum.Source);
+    }
+
+    [Theory]
+    // Row c: 2.55 In, from cold, 1 s < t < 60 s for In <= 32 A, 1 s < t < 120 s above.
+    [InlineData(TripCurve.B, 6, 60)]
+    [InlineData(TripCurve.C, 32, 60)]
+    [InlineData(TripCurve.C, 40, 120)]
+    [InlineData(TripCurve.D, 63, 120)]
+    [InlineData(TripCurve.B, 125, 120)]
+    public void RowC_BandAt255In_IsOneSecondTo60sUpTo32AAnd120sAbove(TripCurve curve, double rated, double expectedMax)
+    {
+        var band = BandAt(curve, rated, 2.55);
+
+        Assert.Equal(1.0, band.Minimum.Limit!.Value.Value, Tolerance);
+        Assert.Equal(expectedMax, band.Maximum.Limit!.Value.Value, Tolerance);
+    }
+
+    [Theory]
+    // Row d: lower limit of the instantaneous range, from cold, no trip within 0.1 s.
+    [InlineData(TripCurve.B, 16, 3)]
+    [InlineData(TripCurve.C, 16, 5)]
+    [InlineData(TripCurve.D, 16, 10)]
+    public void RowD_AtLowerInstantaneousLimit_NoTripWithinOneTenthSecond(TripCurve curve, double rated, double multiple)
+    {
+        var band = BandAt(curve, rated, multiple);
+
+        Assert.Equal(0.1, band.Minimum.Limit!.Value.Value, Tolerance);
+        Assert.Equal(EdgeSource.NormativePoint, band.Minimum.Source);
+    }
+
+    [Theory]
+    // Row e: upper limit of the instantaneous range, from cold, trip within 0.1 s.
+    [InlineData(TripCurve.B, 16, 5)]
+    [InlineData(TripCurve.C, 16, 10)]
+    [InlineData(TripCurve.D, 16, 20)]
+    public void RowE_AtUpperInstantaneousLimit_TripWithinOneTenthSecond(TripCurve curve, double rated, double multiple)
+    {
+        var band = BandAt(curve, rated, multiple);
+
+        Assert.Equal(0.1, band.Maximum.Limit!.Value.Value, Tolerance);
+        Assert.True(band.Minimum.IsOpen);
+    }
+
+    [Theory]
+    [InlineData(TripCurve.B, 3.01)]
+    [InlineData(TripCurve.C, 5.01)]
+    [InlineData(TripCurve.D, 10.01)]
+    public void JustAboveTheLowerInstantaneousLimit_TheMinimumIsOpen(TripCurve curve, double multiple)
+    {
+        // Table 2: the instantaneous release may act anywhere above the lower limit of its range.
+        Assert.True(BandAt(curve, 20, multiple).Minimum.IsOpen);
+    }
+
+    [Fact]
+    public void Below113In_TheStandardSetsNoBand()
+    {
+        // Table 7 starts at 1.13 In; below it there is no requirement to test against.
+        var band = BandAt(TripCurve.C, 16, 1.10);
+
+        Assert.False(band.HasRequirement);
+        Assert.Contains("1.13 In", band.NoRequirement);
+    }
+
+    [Fact]
+    public void Between113And255In_TheMinimumIsTheLogLogLineThroughRowsAAndC()
+    {
+        // The documented choice of this tool (not a value from the standard): a straight line on log-log axes through
+        // (1.13, 3600 s) and (2.55, 1 s). Worked by hand: n = ln(3600) / ln(2.55 / 1.13) = 10.0612; t(2) = 3600 (2 / 1.13)^-n.
+        var expected = 3600 * Math.Pow(2.0 / 1.13, -Math.Log(3600) / Math.Log(2.55 / 1.13));
+
+        var band = BandAt(TripCurve.C, 16, 2.0);
+
+        Assert.Equal(expected, band.Minimum.Limit!.Value.Value, 1e-6);
+        Assert.Equal(11.52, band.Minimum.Limit!.Value.Value, 0.01);
+        Assert.Equal(EdgeSource.Interpolated, band.Minimum.Source);
+    }
+
+    [Fact]
+    public void Beyond255In_TheMaximumFollowsConstantI2T()
+    {
+        // Documented choice: I²t = constant from row c. By hand for C 16 A at 5 In: 60 s x (2.55 / 5)² = 15.606 s.
+        var band = BandAt(TripCurve.C, 16, 5.0);
+
+        Assert.Equal(15.606, band.Maximum.Limit!.Value.Value, 0.001);
+        Assert.Equal(EdgeSource.Extrapolated, band.Maximum.Source);
+    }
+
+    [Fact]
+    public void TheNormativePointsAreRowsAToEInRisingCurrent()
+    {
+        var points = new Iec60898Envelope(TripCurve.C, Amperes.Of(16)).Points;
+
+        Assert.Equal(["a", "b", "c", "d", "e"], points.Select(p => p.Label));
+        Assert.Equal([1.13, 1.45, 2.55, 5.0, 10.0], points.Select(p => p.Multiple.Value));
+    }
+}
