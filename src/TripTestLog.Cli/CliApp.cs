@@ -6,9 +6,12 @@ namespace TripTestLog.Cli;
 /// <summary>The `triptestlog` command line: builds the commands and runs one.</summary>
 internal static class CliApp
 {
-    public static RootCommand Build(CliContext cli) =>
-        new("Keep breaker test records (trip times, contact and insulation resistance) in one SQLite database and judge every trip time against the band its standard allows.")
+    // A named command rather than RootCommand, whose name follows the host process (e.g. a test runner's).
+    public static Command Build(CliContext cli) =>
+        new("triptestlog", "Keep breaker test records (trip times, contact and insulation resistance) in one SQLite database and judge every trip time against the band its standard allows.")
         {
+            new System.CommandLine.Help.HelpOption(),
+            new VersionOption(),
             ImportCommand.Create(cli),
             CheckCommand.Create(cli),
             EnvelopeCommand.Create(cli),

@@ -1,0 +1,102 @@
+using System.Text.Json;
+using TripTestLog.SampleGenerator;
+
+namespace TripTestLog.Cli.Tests;
+
+/// <summary>The main job end to end on the committed sample records: a real database, real files, real output.</summary>
+public sealed class DemoAndCheckTests : IDisposable
+{
+    private readonly string _folder = Path.Combine(Path.GetTempPath(), "ttl-cli-" + Guid.NewGuid().ToString("N")[..12]);
+
+    private static string SampleRecords => Path.Combine(Golden.RepositoryRoot(), "sample-records");
+
+    public void Dispose()
+    {
+        Microsoft.Data.Sqlite.SqliteConnection.ClearAllPools();
+        if (Directory.Exists(_folder))
+        {
+            Directory.Delete(_folder, recursive: true);
+        }
+    }
+
+    [Fact]
+    public void Demo_ImportsEverySampleFile_AndFindsTheFleetsStory()
+    {
+        var (exit, output, _) = CliRun.Run("demo", "--records", SampleRecords, "--out", _folder);
+
+        Assert.Equal(0, exit);
+        Assert.Contains("37 files: 37 imported, 0 already imported, 0 refused", output);
+        var verdicts = JsonDocument.Parse(File.ReadAllText(Path.Combine(_folder, "verdicts.json"))).RootElement.EnumerateArray().ToList();
+        var findings = verdicts.Where(v => v.GetProperty("verdict").GetString() is "too-late" or "too-early").ToList();
+
+        // The generator gives one device a 1.45 In hold for the full hour in its last year (IEC 60898-1 Table 7 b).
+        var late = Assert.Single(findings);
+        Assert.Equal(("BPS-DB1-Q03", "b", "normative"), (late.GetProperty("asset_tag").GetString(), late.GetProperty("normative_point").GetString(), late.GetProperty("basis").GetString()));
+        Assert.Contains(verdicts, v => v.GetProperty("basis").GetString() == "band");
+        Assert.Contains(verdicts, v => v.GetProperty("verdict").GetString() == "not-assessable");
+        Assert.Contains("Caution:", File.ReadAllText(Path.Combine(_folder, "verdicts.txt")));
+    }
+
+    [Fact]
+    public void CheckJson_HasTheDocumentedFieldsInTheirOrder()
+    {
+        CliRun.Run("demo", "--records", SampleRecords, "--out", _folder);
+
+        var (exit, output, _) = CliRun.Run("check", "--db", Path.Combine(_folder, "triptestlog.db"), "--asset", "ARW-DB1-Q03", "--json");
+
+        Assert.Equal(0, exit);
+        var rows = JsonDocument.Parse(output).RootElement.EnumerateArray().ToList();
+        Assert.All(rows, r => Assert.Equal("ARW-DB1-Q03", r.GetProperty("asset_tag").GetString()));
+        Golden.Matches("check-json-fields.txt", string.Join('\n', rows[0].EnumerateObject().Select(p => p.Name)) + "\n");
+    }
+
+    [Fact]
+    public void CheckWithFailOnFindings_ExitsWith1WhenATestIsOutsideTheBand()
+    {
+        CliRun.Run("demo", "--records", SampleRecords, "--out", _folder);
+        var db = Path.Combine(_folder, "triptestlog.db");
+
+        Assert.Equal(1, CliRun.Run("check", "--db", db, "--fail-on-findings").Exit);
+        Assert.Equal(0, CliRun.Run("check", "--db", db, "--asset", "ARW-DB1-Q01", "--fail-on-findings").Exit);
+    }
+
+    [Fact]
+    public void Import_OfABadFile_ExitsWith2_NamesTheLine_AndStoresNothingFromIt()
+    {
+        Directory.CreateDirectory(_folder);
+        var db = Path.Combine(_folder, "t.db");
+        var bad = Path.Combine(_folder, "bad.csv");
+        File.WriteAllText(bad, "asset_tag,tested_at,stage,pole,current_a,trip_time_s,held_s,start\nARW-DB1-Q01,2024-03-18,as-found,all,6.8,,3600,cold\nARW-DB1-Q01,2024-03-18,as-found,all,x,,3600,cold\n");
+        CliRun.Run("import", Path.Combine(SampleRecords, "device-register.csv"), "--db", db);
+
+        var (exit, output, _) = CliRun.Run("import", bad, "--db", db);
+
+        Assert.Equal(2, exit);
+        Assert.Contains($"{bad}:3, column current_a: 'x' is not a number", output);
+        Assert.Contains("nothing from it was stored", output);
+        Assert.Contains("0 trip tests", CliRun.Run("check", "--db", db).Out);
+    }
+
+    [Fact]
+    public void Check_WithoutADatabase_SaysToImportFirst()
+    {
+        var (exit, _, error) = CliRun.Run("check", "--db", Path.Combine(_folder, "none.db"));
+
+        Assert.Equal(2, exit);
+        Assert.Contains("import records first", error);
+    }
+
+    [Fact]
+    public void TheGenerator_ReproducesTheCommittedSampleRecordsByteForByte()
+    {
+        var written = SampleFleet.WriteTo(_folder);
+
+        Assert.Equal(37, written.Count);
+        foreach (var file in written)
+        {
+            var committed = Path.Combine(SampleRecords, Path.GetRelativePath(_folder, file));
+            Assert.True(File.Exists(committed), $"{committed} is not committed");
+            Assert.Equal(File.ReadAllBytes(committed), File.ReadAllBytes(file));
+        }
+    }
+}

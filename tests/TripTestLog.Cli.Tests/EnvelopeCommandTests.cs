@@ -1,0 +1,47 @@
+using System.Globalization;
+
+namespace TripTestLog.Cli.Tests;
+
+/// <summary>`envelope` prints the band; its CSV is a stable, documented format.</summary>
+public sealed class EnvelopeCommandTests
+{
+    [Fact]
+    public void CurveC16A_Table_MatchesTheGoldenFile()
+    {
+        var (exit, output, _) = CliRun.Run("envelope", "--curve", "C", "--rated", "16");
+
+        Assert.Equal(0, exit);
+        Golden.Matches("envelope-c16.txt", output);
+    }
+
+    [Fact]
+    public void Csv_HasTheTablePointsOfIec60898Table7()
+    {
+        // IEC 60898-1:2015 Table 7 for curve B, In = 40 A (> 32 A: 120 s at 2.55 In; <= 63 A: 1 h at 1.13 and 1.45 In).
+        var (exit, output, _) = CliRun.Run("envelope", "--curve", "B", "--rated", "40", "--csv");
+
+        Assert.Equal(0, exit);
+        var rows = output.Split('\n', StringSplitOptions.RemoveEmptyEntries).Select(l => l.Split(',')).ToList();
+        Assert.Equal("multiple,current_a,min_s,max_s,min_source,max_source,point", string.Join(',', rows[0]));
+        var byPoint = rows.Skip(1).Where(r => r[6].Length > 0).ToDictionary(r => r[6]);
+        Assert.Equal("3600", byPoint["a"][2]);
+        Assert.Equal("3600", byPoint["b"][3]);
+        Assert.Equal(("1", "120"), (byPoint["c"][2], byPoint["c"][3]));
+        Assert.Equal(("3", "0.1"), (byPoint["d"][0], byPoint["d"][2]));
+        Assert.Equal(("5", "0.1"), (byPoint["e"][0], byPoint["e"][3]));
+        Assert.Equal(40 * 2.55, double.Parse(byPoint["c"][1], CultureInfo.InvariantCulture), 9);
+    }
+
+    [Theory]
+    [InlineData("--curve", "E", "--rated", "16")]
+    [InlineData("--curve", "C", "--rated", "-3")]
+    [InlineData("--curve", "C")]
+    [InlineData("--family", "unknown", "--curve", "C", "--rated", "16")]
+    public void BadSettings_AreRefusedWithExitCode2(params string[] args)
+    {
+        var (exit, _, error) = CliRun.Run(["envelope", .. args]);
+
+        Assert.Equal(2, exit);
+        Assert.StartsWith("error:", error);
+    }
+}

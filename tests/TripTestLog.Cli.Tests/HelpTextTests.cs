@@ -1,0 +1,28 @@
+namespace TripTestLog.Cli.Tests;
+
+/// <summary>Every command has help; its text is pinned by golden files.</summary>
+public sealed class HelpTextTests
+{
+    [Theory]
+    [InlineData("root", new string[0])]
+    [InlineData("import", new[] { "import" })]
+    [InlineData("check", new[] { "check" })]
+    [InlineData("envelope", new[] { "envelope" })]
+    [InlineData("demo", new[] { "demo" })]
+    public void HelpText_MatchesTheGoldenFile(string name, string[] command)
+    {
+        var (exit, output, _) = CliRun.Run([.. command, "--help"]);
+
+        Assert.Equal(0, exit);
+        Golden.Matches($"help-{name}.txt", output);
+    }
+
+    [Fact]
+    public void AnUnknownOption_IsBadUsage()
+    {
+        var (exit, _, error) = CliRun.Run("check", "--colour");
+
+        Assert.Equal(2, exit);
+        Assert.Contains("--colour", error);
+    }
+}
