@@ -1,14 +1,14 @@
 using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Settings;
 
 namespace TripTestLog.Domain.Devices;
 
-/// <summary>A breaker as the register describes it. Immutable; a register re-import yields a new value.</summary>
+/// <summary>A breaker as one register entry describes it. Immutable; a register re-import yields a new value.</summary>
 /// <param name="Tag">Unique key.</param>
 /// <param name="Site">Site name.</param>
 /// <param name="Location">Where on the site (board, panel, way).</param>
 /// <param name="Family">Breaker family, deciding the standard applied.</param>
-/// <param name="Curve">Instantaneous tripping type for IEC 60898-1 devices.</param>
-/// <param name="RatedCurrent">Rated current In.</param>
+/// <param name="RatedCurrent">Rated current In (for IEC 60947-2 breakers the frame rating; it sets the conventional time).</param>
 /// <param name="Poles">Number of protected poles, 1 to 4.</param>
 /// <param name="RatedVoltage">Rated operational voltage.</param>
 /// <param name="CommissionedOn">Date the device went into service, when known.</param>
@@ -16,12 +16,12 @@ namespace TripTestLog.Domain.Devices;
 /// <param name="Make">Free-text maker name.</param>
 /// <param name="Model">Free-text model.</param>
 /// <param name="Serial">Free-text serial number.</param>
+/// <param name="Settings">The protection settings of this entry, of the family's kind.</param>
 public sealed record Device(
     AssetTag Tag,
     string Site,
     string Location,
     DeviceFamily Family,
-    TripCurve Curve,
     Amperes RatedCurrent,
     int Poles,
     Volts RatedVoltage,
@@ -29,4 +29,18 @@ public sealed record Device(
     MicroOhms? ContactLimit,
     string Make,
     string Model,
-    string Serial);
+    string Serial,
+    DeviceSettings Settings)
+{
+    /// <summary>The date these settings took effect; null when the entry does not say (then they hold from the start).</summary>
+    public DateOnly? SettingsFrom { get; init; }
+
+    /// <summary>A curve table entered from the maker's data that bands the device where its standard sets no band.</summary>
+    public string? CurveTable { get; init; }
+
+    /// <summary>The ambient the thermal release is calibrated at; null for the family's default.</summary>
+    public Celsius? ReferenceAmbient { get; init; }
+
+    /// <summary>An ambient correction (derating) table from the maker's data, when the lab has entered one.</summary>
+    public string? AmbientTable { get; init; }
+}

@@ -17,4 +17,13 @@ public enum EdgeSource
 
     /// <summary>The instantaneous (magnetic) release requirement.</summary>
     Instantaneous,
+
+    /// <summary>The standard's own time-current formula (IEC 60255-151, IEEE C37.112) within its stated range.</summary>
+    Characteristic,
+
+    /// <summary>The device's settings with their tolerances (pickup tolerance from the standard, time tolerance by lab policy).</summary>
+    Setting,
+
+    /// <summary>A band the lab entered from the maker's published curve.</summary>
+    CurveTable,
 }

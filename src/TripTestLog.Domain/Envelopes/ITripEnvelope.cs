@@ -23,4 +23,7 @@ public interface ITripEnvelope
 
     /// <summary>The band at <paramref name="current"/>.</summary>
     TripBand At(Amperes current);
+
+    /// <summary>Whether a trip at <paramref name="current"/> is the thermal (long-time) release's, which ambient temperature shifts.</summary>
+    bool IsThermal(Amperes current);
 }

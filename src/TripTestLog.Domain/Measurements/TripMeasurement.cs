@@ -1,5 +1,6 @@
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Settings;
 
 namespace TripTestLog.Domain.Measurements;
 
@@ -26,4 +27,8 @@ public sealed record TripMeasurement(
     Celsius? Ambient,
     string Instrument,
     string Technician,
-    string Note);
+    string Note)
+{
+    /// <summary>Settings read off the device at this test, when the record carries them.</summary>
+    public SettingsFound? FoundSettings { get; init; }
+}

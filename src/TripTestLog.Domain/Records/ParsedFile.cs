@@ -1,5 +1,7 @@
 using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Envelopes;
 using TripTestLog.Domain.Measurements;
+using TripTestLog.Domain.Settings;
 
 namespace TripTestLog.Domain.Records;
 
@@ -36,6 +38,12 @@ public sealed record ParsedFile
     /// <summary>Insulation resistance rows.</summary>
     public IReadOnlyList<Located<InsulationMeasurement>> Insulations { get; init; } = [];
 
+    /// <summary>Curve table rows.</summary>
+    public IReadOnlyList<Located<CurveTableRow>> CurveTableRows { get; init; } = [];
+
+    /// <summary>Ambient table rows.</summary>
+    public IReadOnlyList<Located<AmbientTableRow>> AmbientTableRows { get; init; } = [];
+
     /// <summary>The number of rows that parsed into records.</summary>
-    public int RecordCount => Devices.Count + Trips.Count + Contacts.Count + Insulations.Count;
+    public int RecordCount => Devices.Count + Trips.Count + Contacts.Count + Insulations.Count + CurveTableRows.Count + AmbientTableRows.Count;
 }

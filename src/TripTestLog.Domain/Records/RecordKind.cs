@@ -14,4 +14,10 @@ public enum RecordKind
 
     /// <summary>Insulation resistance readings.</summary>
     InsulationResistance,
+
+    /// <summary>A band entered from a maker's curve: rows of current multiple, minimum and maximum time.</summary>
+    CurveTable,
+
+    /// <summary>A maker's ambient derating table: rows of ambient temperature and current factor.</summary>
+    AmbientTable,
 }

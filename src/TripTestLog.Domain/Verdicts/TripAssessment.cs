@@ -18,4 +18,8 @@ public sealed record TripAssessment(
     VerdictBasis Basis,
     NormativePoint? Point,
     Margin Margin,
-    string Reason);
+    string Reason)
+{
+    /// <summary>Remarks beside the verdict: settings found at the test, ambient corrections or warnings.</summary>
+    public IReadOnlyList<string> Notes { get; init; } = [];
+}

@@ -31,7 +31,7 @@ public static class TripJudge
         // Within the tolerance of one of the standard's points, the point's own limits are the requirement; elsewhere the
         // band drawn between the points is evaluated at the measured current.
         var band = point?.BandAt(measurement.Current, measured.Multiple) ?? measured;
-        var basis = point is null ? VerdictBasis.Band : VerdictBasis.Normative;
+        var basis = point is not null || IsCharacteristic(band) ? VerdictBasis.Normative : VerdictBasis.Band;
         var time = measurement.Outcome.Time;
         var margin = MarginOf(band, time);
 
@@ -50,7 +50,12 @@ public static class TripJudge
     {
         var min = band.Minimum;
         var max = band.Maximum;
-        if (time < min.Limit!.Value)
+        if (min.Limit is null)
+        {
+            return (Verdict.TooEarly, $"tripped after {time} where it must not operate at all ({min.Requirement})");
+        }
+
+        if (time < min.Limit.Value)
         {
             return start == StartCondition.Warm && min.Start == StartCondition.Cold
                 ? (Verdict.NotAssessable, $"warm start: tripped after {time}, before the {min.Limit} minimum, but that limit applies from cold; repeat from cold")
@@ -92,7 +97,12 @@ public static class TripJudge
             return (Verdict.NotAssessable, $"held {held} and stopped before the {max.Limit} maximum; a hold proves nothing where the release may act at once");
         }
 
-        var earliest = min.Limit!.Value;
+        if (min.Limit is null)
+        {
+            return (Verdict.Pass, $"held {held} without operating, as required ({min.Requirement})");
+        }
+
+        var earliest = min.Limit.Value;
         if (held < earliest)
         {
             return (Verdict.NotAssessable, $"held only {held}; the no-trip requirement runs to {earliest} ({min.Requirement})");
@@ -102,6 +112,13 @@ public static class TripJudge
             ? (Verdict.Pass, $"held {held} without tripping, as required ({min.Requirement})")
             : (Verdict.NotAssessable, $"held {held} and stopped before the {max.Limit} maximum; the test shows no trip");
     }
+
+    // A band drawn by the standard's own formula (IEC 60255-151 and IEEE C37.112 curves) is normative everywhere it is defined.
+    private static bool IsCharacteristic(TripBand band) =>
+        band.HasRequirement
+        && (band.Minimum.Source == EdgeSource.Characteristic || band.Maximum.Source == EdgeSource.Characteristic)
+        && band.Minimum.Source is EdgeSource.Characteristic or EdgeSource.None
+        && band.Maximum.Source is EdgeSource.Characteristic or EdgeSource.None;
 
     private static bool ColdPastWarmLimit(StartCondition start, BandEdge max) =>
         start == StartCondition.Cold && max.Start == StartCondition.Warm;
@@ -118,7 +135,7 @@ public static class TripJudge
         }
 
         var logT = Math.Log10(time.Value);
-        double? toMin = band.Minimum.IsOpen ? null : logT - Math.Log10(band.Minimum.Limit!.Value.Value);
+        double? toMin = band.Minimum.IsOpen || band.Minimum.Limit is null ? null : logT - Math.Log10(band.Minimum.Limit.Value.Value);
         double? toMax = band.Maximum.Limit is { } max ? Math.Log10(max.Value) - logT : null;
         double? position = toMin is { } lo && toMax is { } hi && lo + hi > 0 ? lo / (lo + hi) : null;
 

@@ -1,0 +1,23 @@
+using TripTestLog.Domain.Quantities;
+
+namespace TripTestLog.Domain.Envelopes;
+
+/// <summary>
+/// The fixed figures of IEC 60947-2 that every industrial breaker envelope uses. Source: IEC 60947-2, clause 8.3.3
+/// (tripping limits and characteristics) and its table of conventional times, quoted from memory of the 2016 edition:
+/// conventional non-tripping current 1.05 x setting and conventional tripping current 1.30 x setting within the
+/// conventional time of 1 h (In &lt;= 63 A) or 2 h (In &gt; 63 A); short-time and instantaneous pickup tolerance ±20 %
+/// of the setting. Check the edition your lab works to.
+/// </summary>
+internal static class Iec60947Conventions
+{
+    public const double NonTrippingMultiple = 1.05;
+
+    public const double TrippingMultiple = 1.30;
+
+    public const double PickupTolerance = 0.20;
+
+    public static Seconds ConventionalTime(Amperes rated) => Seconds.FromHours(rated.Value <= 63.0 ? 1.0 : 2.0);
+
+    public static string Hours(Seconds conventional) => $"{conventional.Value / 3600.0:0} h";
+}

@@ -1,0 +1,26 @@
+using TripTestLog.Domain.Quantities;
+
+namespace TripTestLog.Domain.Envelopes;
+
+/// <summary>Stands in where a device's envelope cannot be built (e.g. its curve table is missing): every band says why.</summary>
+public sealed class UnavailableEnvelope(string standard, Amperes reference, string reason) : ITripEnvelope
+{
+    /// <inheritdoc />
+    public string Standard => standard;
+
+    /// <inheritdoc />
+    public string ReferenceName => "In";
+
+    /// <inheritdoc />
+    public Amperes Reference => reference;
+
+    /// <inheritdoc />
+    public IReadOnlyList<NormativePoint> Points => [];
+
+    /// <inheritdoc />
+    public bool IsThermal(Amperes current) => false;
+
+    /// <inheritdoc />
+    public TripBand At(Amperes current) =>
+        new(current, current / reference, BandEdge.NoMinimum(reason), BandEdge.NoMaximum(reason), reason);
+}
