@@ -75,6 +75,7 @@ public static class RecordFileReader
             problems.Add(new RowProblem(path, e.LineNumber, "", $"the CSV is malformed here ({Describe(e)}); reading stopped"));
         }
 
+        problems.AddRange(sink.TableProblems(path));
         if (rows == 0 && problems.Count == 0)
         {
             problems.Add(new RowProblem(path, 1, "", $"the file has a {HeaderMap.Describe(map.Schema.Kind)} header but no data rows"));

@@ -14,17 +14,8 @@ internal static class Codes
 
     public static StartCondition Start(string code) => code == "cold" ? StartCondition.Cold : StartCondition.Warm;
 
-    public static string Of(DeviceFamily family) => family switch
-    {
-        DeviceFamily.Iec60898 => "iec60898",
-        _ => throw new ArgumentOutOfRangeException(nameof(family), family, "no storage code for this family"),
-    };
+    public static string Of(DeviceFamily family) => FamilyCodes.Of(family);
 
-    public static DeviceFamily Family(string code) => code switch
-    {
-        "iec60898" => DeviceFamily.Iec60898,
-        _ => throw new InvalidDataException($"the store holds an unknown device family '{code}'"),
-    };
-
-    public static TripCurve Curve(string code) => Enum.Parse<TripCurve>(code);
+    public static DeviceFamily Family(string code) =>
+        FamilyCodes.TryParse(code, out var family) ? family : throw new InvalidDataException($"the store holds an unknown device family '{code}'");
 }

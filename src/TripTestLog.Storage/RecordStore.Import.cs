@@ -30,7 +30,8 @@ public sealed partial class RecordStore
             return Refused(file, conflicts);
         }
 
-        var deviceIds = file.Kind == RecordKind.DeviceRegister ? null : DeviceIds();
+        var needsDevices = file.Kind is RecordKind.TripTests or RecordKind.ContactResistance or RecordKind.InsulationResistance;
+        var deviceIds = needsDevices ? DeviceIds() : null;
         if (deviceIds is not null)
         {
             var unknown = UnknownTags(file, deviceIds);
@@ -47,7 +48,9 @@ public sealed partial class RecordStore
             RecordKind.DeviceRegister => ImportRegister(transaction, file, sourceId, now),
             RecordKind.TripTests => (InsertTrips(transaction, file, sourceId, deviceIds!), 0, 0),
             RecordKind.ContactResistance => (InsertContacts(transaction, file, sourceId, deviceIds!), 0, 0),
-            _ => (InsertInsulations(transaction, file, sourceId, deviceIds!), 0, 0),
+            RecordKind.InsulationResistance => (InsertInsulations(transaction, file, sourceId, deviceIds!), 0, 0),
+            RecordKind.CurveTable => (InsertCurveTableRows(transaction, file, sourceId), 0, 0),
+            _ => (InsertAmbientTableRows(transaction, file, sourceId), 0, 0),
         };
         if (file.Kind != RecordKind.DeviceRegister)
         {
@@ -89,14 +92,18 @@ public sealed partial class RecordStore
 
     private static List<RowProblem> ConflictingRegisterRows(ParsedFile file)
     {
-        var first = new Dictionary<string, Located<Device>>(StringComparer.Ordinal);
+        // Several entries for one device are its settings history, told apart by settings_from; two different entries
+        // with the same date cannot both be right.
+        var first = new Dictionary<(string, DateOnly?), Located<Device>>();
         var problems = new List<RowProblem>();
         foreach (var row in file.Devices)
         {
-            if (!first.TryAdd(row.Record.Tag.Value, row) && first[row.Record.Tag.Value].Record != row.Record)
+            var key = (row.Record.Tag.Value, row.Record.SettingsFrom);
+            if (!first.TryAdd(key, row) && first[key].Record != row.Record)
             {
                 problems.Add(new RowProblem(file.Path, row.Line, "asset_tag",
-                    $"asset tag '{row.Record.Tag}' is already listed on line {first[row.Record.Tag.Value].Line} with other values; keep one entry per device"));
+                    $"asset tag '{row.Record.Tag}' is already listed on line {first[key].Line} with other values and the same settings_from; "
+                    + "keep one entry per device and date"));
             }
         }
 

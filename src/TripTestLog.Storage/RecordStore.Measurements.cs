@@ -10,9 +10,11 @@ public sealed partial class RecordStore
     {
         using var insert = Command(transaction,
             "INSERT OR IGNORE INTO trip_tests (device_id, tested_at, stage, pole, current_a, tripped, time_s, start, ambient_c, "
-            + "instrument, technician, note, source_file_id, source_line, fingerprint) "
-            + "VALUES ($d, $at, $stage, $pole, $i, $tripped, $t, $start, $amb, $inst, $tech, $note, $src, $line, $fp)");
-        var p = Parameters(insert, "$d", "$at", "$stage", "$pole", "$i", "$tripped", "$t", "$start", "$amb", "$inst", "$tech", "$note", "$src", "$line", "$fp");
+            + "instrument, technician, note, source_file_id, source_line, fingerprint, "
+            + "found_ir_a, found_isd_a, found_ii_a, found_im_a, found_pickup_a, found_tms) "
+            + "VALUES ($d, $at, $stage, $pole, $i, $tripped, $t, $start, $amb, $inst, $tech, $note, $src, $line, $fp, $fir, $fisd, $fii, $fim, $fpk, $ftms)");
+        var p = Parameters(insert, "$d", "$at", "$stage", "$pole", "$i", "$tripped", "$t", "$start", "$amb", "$inst", "$tech", "$note", "$src", "$line", "$fp",
+            "$fir", "$fisd", "$fii", "$fim", "$fpk", "$ftms");
         long added = 0;
         foreach (var (m, line) in file.Trips)
         {
@@ -32,6 +34,13 @@ public sealed partial class RecordStore
             p[12].Value = sourceId;
             p[13].Value = line;
             p[14].Value = Fingerprint.Of(m, device);
+            var found = m.FoundSettings;
+            p[15].Value = Db(found?.Ir?.Value);
+            p[16].Value = Db(found?.Isd?.Value);
+            p[17].Value = Db(found?.Ii?.Value);
+            p[18].Value = Db(found?.Im?.Value);
+            p[19].Value = Db(found?.Pickup?.Value);
+            p[20].Value = Db(found?.Tms);
             added += insert.ExecuteNonQuery();
         }
 
@@ -94,6 +103,43 @@ public sealed partial class RecordStore
         }
 
         return added;
+    }
+
+    private long InsertCurveTableRows(SqliteTransaction transaction, ParsedFile file, long sourceId)
+    {
+        using var insert = Command(transaction,
+            "INSERT INTO curve_table_rows (table_name, multiple, min_s, max_s, source_file_id, source_line) VALUES ($n, $m, $min, $max, $src, $line)");
+        var p = Parameters(insert, "$n", "$m", "$min", "$max", "$src", "$line");
+        foreach (var (row, line) in file.CurveTableRows)
+        {
+            p[0].Value = row.Table;
+            p[1].Value = row.Point.Multiple.Value;
+            p[2].Value = row.Point.Minimum.Value;
+            p[3].Value = Db(row.Point.Maximum?.Value);
+            p[4].Value = sourceId;
+            p[5].Value = line;
+            insert.ExecuteNonQuery();
+        }
+
+        return file.CurveTableRows.Count;
+    }
+
+    private long InsertAmbientTableRows(SqliteTransaction transaction, ParsedFile file, long sourceId)
+    {
+        using var insert = Command(transaction,
+            "INSERT INTO ambient_table_rows (table_name, ambient_c, current_factor, source_file_id, source_line) VALUES ($n, $t, $f, $src, $line)");
+        var p = Parameters(insert, "$n", "$t", "$f", "$src", "$line");
+        foreach (var (row, line) in file.AmbientTableRows)
+        {
+            p[0].Value = row.Table;
+            p[1].Value = row.Point.Ambient.Value;
+            p[2].Value = row.Point.CurrentFactor;
+            p[3].Value = sourceId;
+            p[4].Value = line;
+            insert.ExecuteNonQuery();
+        }
+
+        return file.AmbientTableRows.Count;
     }
 
     private static SqliteParameter[] Parameters(SqliteCommand command, params string[] names)

@@ -1,4 +1,3 @@
-using System.Globalization;
 using Microsoft.Data.Sqlite;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Records;
@@ -7,25 +6,26 @@ namespace TripTestLog.Storage;
 
 public sealed partial class RecordStore
 {
-    private const string RegisterColumns =
-        "site, location, family, curve, rated_current_a, poles, rated_voltage_v, commissioned_on, contact_limit_uohm, make, model, serial";
+    private const string RegisterColumns = DeviceMapping.Columns;
 
-    private const string RegisterValues =
-        "$site, $location, $family, $curve, $rated, $poles, $voltage, $commissioned, $limit, $make, $model, $serial";
+    private const string RegisterValues = DeviceMapping.Parameters;
 
-    /// <summary>Adds new devices, updates changed ones and keeps a revision for every new or changed entry.</summary>
+    /// <summary>
+    /// Adds new devices and keeps every new register entry as a revision. A register may list several entries for one
+    /// device with different settings_from dates (its settings history). The `devices` row holds the entry with the
+    /// newest settings. Counts are per row: a row adds a device, adds an entry to a known one, repeats an earlier row of
+    /// the file, or matches a stored entry.
+    /// </summary>
     private (long Added, long Updated, long Duplicates) ImportRegister(SqliteTransaction transaction, ParsedFile file, long sourceId, DateTimeOffset now)
     {
-        var stored = StoredRegister(transaction);
+        var stored = StoredEntries(transaction);
         long added = 0, updated = 0, duplicates = 0;
-        var seen = new Dictionary<string, Device>(StringComparer.Ordinal);
+        var seen = new HashSet<Device>();
+        var lines = new Dictionary<Device, long>();
+        var touched = new HashSet<string>(StringComparer.Ordinal);
 
         using var insert = Command(transaction,
             $"INSERT INTO devices (asset_tag, {RegisterColumns}, source_file_id, source_line) VALUES ($tag, {RegisterValues}, $source, $line) RETURNING id");
-        using var update = Command(transaction,
-            "UPDATE devices SET site=$site, location=$location, family=$family, curve=$curve, rated_current_a=$rated, poles=$poles, "
-            + "rated_voltage_v=$voltage, commissioned_on=$commissioned, contact_limit_uohm=$limit, make=$make, model=$model, serial=$serial, "
-            + "source_file_id=$source, source_line=$line WHERE asset_tag=$tag RETURNING id");
         using var revision = Command(transaction,
             $"INSERT INTO device_revisions (device_id, {RegisterColumns}, source_file_id, source_line, recorded_at) "
             + $"VALUES ($device, {RegisterValues}, $source, $line, $at)");
@@ -33,75 +33,82 @@ public sealed partial class RecordStore
         foreach (var (device, line) in file.Devices)
         {
             var tag = device.Tag.Value;
-            if (seen.TryGetValue(tag, out var earlier))
+            if (!seen.Add(device))
             {
-                // The same row twice is harmless; two different entries for one tag cannot both be right.
-                if (earlier == device)
-                {
-                    duplicates++;
-                    continue;
-                }
-
-                throw new InvalidOperationException($"register rows for {tag} conflict; Import refuses such files before writing");
-            }
-
-            seen[tag] = device;
-            SqliteCommand command;
-            if (!stored.TryGetValue(tag, out var before))
-            {
-                command = insert;
-                added++;
-            }
-            else if (before != device)
-            {
-                command = update;
-                updated++;
-            }
-            else
-            {
+                duplicates++;
                 continue;
             }
 
-            Bind(command, device, sourceId, line);
-            var deviceId = (long)command.ExecuteScalar()!;
+            lines[device] = line;
+            if (!stored.TryGetValue(tag, out var entries))
+            {
+                Bind(insert, device, sourceId, line);
+                entries = ((long)insert.ExecuteScalar()!, []);
+                stored[tag] = entries;
+                added++;
+            }
+            else if (entries.Revisions.Contains(device))
+            {
+                continue;
+            }
+            else
+            {
+                updated++;
+            }
+
             Bind(revision, device, sourceId, line);
-            Set(revision, "$device", deviceId);
+            Set(revision, "$device", entries.Id);
             Set(revision, "$at", Utc(now));
             revision.ExecuteNonQuery();
+            entries.Revisions.Add(device);
+            touched.Add(tag);
+        }
+
+        using var update = Command(transaction,
+            $"UPDATE devices SET ({RegisterColumns}, source_file_id, source_line) = ({RegisterValues}, $source, $line) WHERE asset_tag=$tag");
+        foreach (var tag in touched)
+        {
+            var latest = new DeviceHistory(stored[tag].Revisions).Latest;
+            if (lines.TryGetValue(latest, out var line))
+            {
+                Bind(update, latest, sourceId, line);
+                update.ExecuteNonQuery();
+            }
         }
 
         return (added, updated, duplicates);
     }
 
-    private Dictionary<string, Device> StoredRegister(SqliteTransaction transaction)
+    private Dictionary<string, (long Id, List<Device> Revisions)> StoredEntries(SqliteTransaction transaction)
     {
-        using var select = Command(transaction, $"SELECT asset_tag, {RegisterColumns} FROM devices");
+        using var select = Command(transaction,
+            $"SELECT d.id, d.asset_tag, {string.Join(", ", RegisterColumns.Split(", ").Select(c => "r." + c))} "
+            + "FROM device_revisions r JOIN devices d ON d.id = r.device_id ORDER BY r.id");
         using var reader = select.ExecuteReader();
-        var devices = new Dictionary<string, Device>(StringComparer.Ordinal);
+        var entries = new Dictionary<string, (long Id, List<Device> Revisions)>(StringComparer.Ordinal);
         while (reader.Read())
         {
-            var device = DeviceMapping.Read(reader);
-            devices[device.Tag.Value] = device;
+            var device = DeviceMapping.Read(reader, first: 1);
+            if (!entries.TryGetValue(device.Tag.Value, out var entry))
+            {
+                entry = (reader.GetInt64(0), []);
+                entries[device.Tag.Value] = entry;
+            }
+
+            entry.Revisions.Add(device);
         }
 
-        return devices;
+        return entries;
     }
 
     private static void Bind(SqliteCommand command, Device d, long sourceId, long line)
     {
         Set(command, "$tag", d.Tag.Value);
-        Set(command, "$site", d.Site);
-        Set(command, "$location", d.Location);
-        Set(command, "$family", Codes.Of(d.Family));
-        Set(command, "$curve", d.Curve.ToString());
-        Set(command, "$rated", d.RatedCurrent.Value);
-        Set(command, "$poles", d.Poles);
-        Set(command, "$voltage", d.RatedVoltage.Value);
-        Set(command, "$commissioned", Db(d.CommissionedOn?.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture)));
-        Set(command, "$limit", Db(d.ContactLimit?.Value));
-        Set(command, "$make", d.Make);
-        Set(command, "$model", d.Model);
-        Set(command, "$serial", d.Serial);
+        foreach (var (name, value) in DeviceMapping.Values(d))
+        {
+            Set(command, name, value);
+        }
+
         Set(command, "$source", sourceId);
         Set(command, "$line", line);
     }

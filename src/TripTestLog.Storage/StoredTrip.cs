@@ -3,9 +3,9 @@ using TripTestLog.Domain.Measurements;
 
 namespace TripTestLog.Storage;
 
-/// <summary>A stored trip test with its device and where it was imported from.</summary>
-/// <param name="Device">The device as the register now describes it.</param>
+/// <summary>A stored trip test and where it was imported from.</summary>
+/// <param name="Tag">The device tested.</param>
 /// <param name="Measurement">The test.</param>
 /// <param name="SourceFile">The file it was imported from.</param>
 /// <param name="SourceLine">The line of that file.</param>
-public sealed record StoredTrip(Device Device, TripMeasurement Measurement, string SourceFile, long SourceLine);
+public sealed record StoredTrip(AssetTag Tag, TripMeasurement Measurement, string SourceFile, long SourceLine);

@@ -19,6 +19,10 @@ internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> op
 
     public DbSet<InsulationTestRow> InsulationTests => Set<InsulationTestRow>();
 
+    public DbSet<CurveTableRowEntity> CurveTableRows => Set<CurveTableRowEntity>();
+
+    public DbSet<AmbientTableRowEntity> AmbientTableRows => Set<AmbientTableRowEntity>();
+
     protected override void OnModelCreating(ModelBuilder modelBuilder)
     {
         modelBuilder.Entity<SourceFileRow>(e =>
@@ -30,12 +34,14 @@ internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> op
         {
             e.ToTable("devices");
             e.HasIndex(x => x.AssetTag).IsUnique();
+            e.Property(x => x.SettingsJson).HasDefaultValue("");
             e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
         });
         modelBuilder.Entity<DeviceRevisionRow>(e =>
         {
             e.ToTable("device_revisions");
             e.HasIndex(x => x.DeviceId);
+            e.Property(x => x.SettingsJson).HasDefaultValue("");
             e.HasOne<DeviceRow>().WithMany().HasForeignKey(x => x.DeviceId).OnDelete(DeleteBehavior.Restrict);
             e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
         });
@@ -61,6 +67,19 @@ internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> op
             e.HasIndex(x => x.Fingerprint).IsUnique();
             e.HasIndex(x => new { x.DeviceId, x.TestedAt });
             e.HasOne<DeviceRow>().WithMany().HasForeignKey(x => x.DeviceId).OnDelete(DeleteBehavior.Restrict);
+            e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
+        });
+
+        modelBuilder.Entity<CurveTableRowEntity>(e =>
+        {
+            e.ToTable("curve_table_rows");
+            e.HasIndex(x => x.TableName);
+            e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
+        });
+        modelBuilder.Entity<AmbientTableRowEntity>(e =>
+        {
+            e.ToTable("ambient_table_rows");
+            e.HasIndex(x => x.TableName);
             e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
         });
 

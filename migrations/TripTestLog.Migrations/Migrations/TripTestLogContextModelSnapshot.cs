@@ -16,6 +16,43 @@ namespace TripTestLog.Migrations.Migrations
 #pragma warning disable 612, 618
             modelBuilder.HasAnnotation("ProductVersion", "10.0.15");
 
+            modelBuilder.Entity("TripTestLog.Storage.Entities.AmbientTableRowEntity", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER")
+                        .HasColumnName("id");
+
+                    b.Property<double>("AmbientC")
+                        .HasColumnType("REAL")
+                        .HasColumnName("ambient_c");
+
+                    b.Property<double>("CurrentFactor")
+                        .HasColumnType("REAL")
+                        .HasColumnName("current_factor");
+
+                    b.Property<long>("SourceFileId")
+                        .HasColumnType("INTEGER")
+                        .HasColumnName("source_file_id");
+
+                    b.Property<long>("SourceLine")
+                        .HasColumnType("INTEGER")
+                        .HasColumnName("source_line");
+
+                    b.Property<string>("TableName")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("table_name");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("SourceFileId");
+
+                    b.HasIndex("TableName");
+
+                    b.ToTable("ambient_table_rows", (string)null);
+                });
+
             modelBuilder.Entity("TripTestLog.Storage.Entities.ContactTestRow", b =>
                 {
                     b.Property<long>("Id")
@@ -89,12 +126,57 @@ namespace TripTestLog.Migrations.Migrations
                     b.ToTable("contact_tests", (string)null);
                 });
 
+            modelBuilder.Entity("TripTestLog.Storage.Entities.CurveTableRowEntity", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER")
+                        .HasColumnName("id");
+
+                    b.Property<double?>("MaxS")
+                        .HasColumnType("REAL")
+                        .HasColumnName("max_s");
+
+                    b.Property<double>("MinS")
+                        .HasColumnType("REAL")
+                        .HasColumnName("min_s");
+
+                    b.Property<double>("Multiple")
+                        .HasColumnType("REAL")
+                        .HasColumnName("multiple");
+
+                    b.Property<long>("SourceFileId")
+                        .HasColumnType("INTEGER")
+                        .HasColumnName("source_file_id");
+
+                    b.Property<long>("SourceLine")
+                        .HasColumnType("INTEGER")
+                        .HasColumnName("source_line");
+
+                    b.Property<string>("TableName")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("table_name");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("SourceFileId");
+
+                    b.HasIndex("TableName");
+
+                    b.ToTable("curve_table_rows", (string)null);
+                });
+
             modelBuilder.Entity("TripTestLog.Storage.Entities.DeviceRevisionRow", b =>
                 {
                     b.Property<long>("Id")
                         .ValueGeneratedOnAdd()
                         .HasColumnType("INTEGER")
                         .HasColumnName("id");
+
+                    b.Property<string>("AmbientTable")
+                        .HasColumnType("TEXT")
+                        .HasColumnName("ambient_table");
 
                     b.Property<string>("CommissionedOn")
                         .HasColumnType("TEXT")
@@ -108,6 +190,10 @@ namespace TripTestLog.Migrations.Migrations
                         .IsRequired()
                         .HasColumnType("TEXT")
                         .HasColumnName("curve");
+
+                    b.Property<string>("CurveTable")
+                        .HasColumnType("TEXT")
+                        .HasColumnName("curve_table");
 
                     b.Property<long>("DeviceId")
                         .HasColumnType("INTEGER")
@@ -150,10 +236,25 @@ namespace TripTestLog.Migrations.Migrations
                         .HasColumnType("TEXT")
                         .HasColumnName("recorded_at");
 
+                    b.Property<double?>("ReferenceAmbientC")
+                        .HasColumnType("REAL")
+                        .HasColumnName("reference_ambient_c");
+
                     b.Property<string>("Serial")
                         .IsRequired()
                         .HasColumnType("TEXT")
                         .HasColumnName("serial");
+
+                    b.Property<string>("SettingsFrom")
+                        .HasColumnType("TEXT")
+                        .HasColumnName("settings_from");
+
+                    b.Property<string>("SettingsJson")
+                        .IsRequired()
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("TEXT")
+                        .HasDefaultValue("")
+                        .HasColumnName("settings_json");
 
                     b.Property<string>("Site")
                         .IsRequired()
@@ -184,6 +285,10 @@ namespace TripTestLog.Migrations.Migrations
                         .HasColumnType("INTEGER")
                         .HasColumnName("id");
 
+                    b.Property<string>("AmbientTable")
+                        .HasColumnType("TEXT")
+                        .HasColumnName("ambient_table");
+
                     b.Property<string>("AssetTag")
                         .IsRequired()
                         .HasColumnType("TEXT")
@@ -201,6 +306,10 @@ namespace TripTestLog.Migrations.Migrations
                         .IsRequired()
                         .HasColumnType("TEXT")
                         .HasColumnName("curve");
+
+                    b.Property<string>("CurveTable")
+                        .HasColumnType("TEXT")
+                        .HasColumnName("curve_table");
 
                     b.Property<string>("Family")
                         .IsRequired()
@@ -234,10 +343,25 @@ namespace TripTestLog.Migrations.Migrations
                         .HasColumnType("REAL")
                         .HasColumnName("rated_voltage_v");
 
+                    b.Property<double?>("ReferenceAmbientC")
+                        .HasColumnType("REAL")
+                        .HasColumnName("reference_ambient_c");
+
                     b.Property<string>("Serial")
                         .IsRequired()
                         .HasColumnType("TEXT")
                         .HasColumnName("serial");
+
+                    b.Property<string>("SettingsFrom")
+                        .HasColumnType("TEXT")
+                        .HasColumnName("settings_from");
+
+                    b.Property<string>("SettingsJson")
+                        .IsRequired()
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("TEXT")
+                        .HasDefaultValue("")
+                        .HasColumnName("settings_json");
 
                     b.Property<string>("Site")
                         .IsRequired()
@@ -404,6 +528,30 @@ namespace TripTestLog.Migrations.Migrations
                         .HasColumnType("TEXT")
                         .HasColumnName("fingerprint");
 
+                    b.Property<double?>("FoundIiA")
+                        .HasColumnType("REAL")
+                        .HasColumnName("found_ii_a");
+
+                    b.Property<double?>("FoundImA")
+                        .HasColumnType("REAL")
+                        .HasColumnName("found_im_a");
+
+                    b.Property<double?>("FoundIrA")
+                        .HasColumnType("REAL")
+                        .HasColumnName("found_ir_a");
+
+                    b.Property<double?>("FoundIsdA")
+                        .HasColumnType("REAL")
+                        .HasColumnName("found_isd_a");
+
+                    b.Property<double?>("FoundPickupA")
+                        .HasColumnType("REAL")
+                        .HasColumnName("found_pickup_a");
+
+                    b.Property<double?>("FoundTms")
+                        .HasColumnType("REAL")
+                        .HasColumnName("found_tms");
+
                     b.Property<string>("Instrument")
                         .IsRequired()
                         .HasColumnType("TEXT")
@@ -467,6 +615,15 @@ namespace TripTestLog.Migrations.Migrations
                     b.ToTable("trip_tests", (string)null);
                 });
 
+            modelBuilder.Entity("TripTestLog.Storage.Entities.AmbientTableRowEntity", b =>
+                {
+                    b.HasOne("TripTestLog.Storage.Entities.SourceFileRow", null)
+                        .WithMany()
+                        .HasForeignKey("SourceFileId")
+                        .OnDelete(DeleteBehavior.Restrict)
+                        .IsRequired();
+                });
+
             modelBuilder.Entity("TripTestLog.Storage.Entities.ContactTestRow", b =>
                 {
                     b.HasOne("TripTestLog.Storage.Entities.DeviceRow", null)
@@ -475,6 +632,15 @@ namespace TripTestLog.Migrations.Migrations
                         .OnDelete(DeleteBehavior.Restrict)
                         .IsRequired();
 
+                    b.HasOne("TripTestLog.Storage.Entities.SourceFileRow", null)
+                        .WithMany()
+                        .HasForeignKey("SourceFileId")
+                        .OnDelete(DeleteBehavior.Restrict)
+                        .IsRequired();
+                });
+
+            modelBuilder.Entity("TripTestLog.Storage.Entities.CurveTableRowEntity", b =>
+                {
                     b.HasOne("TripTestLog.Storage.Entities.SourceFileRow", null)
                         .WithMany()
                         .HasForeignKey("SourceFileId")

@@ -29,7 +29,8 @@ internal sealed class HeaderMap
         if (schema is null)
         {
             return (null, [("", "the header matches no record kind: a device register needs family and rated_current_a, "
-                + "trip tests trip_time_s or held_s, contact resistance test_current_a, insulation resistance path and test_voltage_v "
+                + "trip tests trip_time_s or held_s, contact resistance test_current_a, insulation resistance path and test_voltage_v, "
+                + "a curve table table and multiple, an ambient table table and current_factor "
                 + "(files are comma-separated UTF-8 with a header row)")]);
         }
 
@@ -79,6 +80,8 @@ internal sealed class HeaderMap
         RecordKind.TripTests => "trip test",
         RecordKind.ContactResistance => "contact resistance",
         RecordKind.InsulationResistance => "insulation resistance",
+        RecordKind.CurveTable => "curve table",
+        RecordKind.AmbientTable => "ambient table",
         _ => kind.ToString(),
     };
 

@@ -14,6 +14,12 @@ internal sealed record RecordSchema(RecordKind Kind, IReadOnlyList<ColumnSpec> C
             Req("asset_tag"), Req("site"), Req("location"), Req("family"), Opt("curve"),
             Req("rated_current", Quantity.Current), Req("poles", Quantity.Count), Req("rated_voltage", Quantity.Voltage),
             Opt("commissioned_on"), Opt("contact_limit", Quantity.ContactResistance), Opt("make"), Opt("model"), Opt("serial"),
+            Opt("settings_from"), Opt("ir", Quantity.Current), Opt("tr", Quantity.Time), Opt("tr_ref_multiple"),
+            Opt("isd", Quantity.Current), Opt("tsd", Quantity.Time), Opt("tsd_i2t"), Opt("ii", Quantity.Current), Opt("im", Quantity.Current),
+            Opt("pickup", Quantity.Current), Opt("tms"), Opt("highset", Quantity.Current), Opt("highset_delay", Quantity.Time),
+            Opt("opening_time", Quantity.Time), Opt("time_tolerance_pct"), Opt("time_tolerance_min", Quantity.Time),
+            Opt("pickup_tolerance_pct"), Opt("inst_max", Quantity.Time), Opt("curve_table"),
+            Opt("reference_ambient", Quantity.Temperature), Opt("ambient_table"),
         ],
         ["family", "rated_current", "rated_voltage", "commissioned_on"]);
 
@@ -23,6 +29,8 @@ internal sealed record RecordSchema(RecordKind Kind, IReadOnlyList<ColumnSpec> C
             Req("asset_tag"), Req("tested_at"), Req("stage"), Req("pole"), Req("current", Quantity.Current),
             Opt("trip_time", Quantity.Time), Opt("held", Quantity.Time), Req("start"), Opt("ambient", Quantity.Temperature),
             Opt("instrument"), Opt("technician"), Opt("note"),
+            Opt("ir", Quantity.Current), Opt("isd", Quantity.Current), Opt("ii", Quantity.Current), Opt("im", Quantity.Current),
+            Opt("pickup", Quantity.Current), Opt("tms"),
         ],
         ["trip_time", "held", "start"]);
 
@@ -42,7 +50,17 @@ internal sealed record RecordSchema(RecordKind Kind, IReadOnlyList<ColumnSpec> C
         ],
         ["path", "test_voltage"]);
 
-    public static IReadOnlyList<RecordSchema> All { get; } = [Register, Trip, Contact, Insulation];
+    public static RecordSchema CurveTable { get; } = new(
+        RecordKind.CurveTable,
+        [Req("table"), Req("multiple"), Req("min", Quantity.Time), Req("max", Quantity.Time)],
+        ["table", "multiple"]);
+
+    public static RecordSchema AmbientTable { get; } = new(
+        RecordKind.AmbientTable,
+        [Req("table"), Req("ambient", Quantity.Temperature), Req("current_factor")],
+        ["table", "current_factor"]);
+
+    public static IReadOnlyList<RecordSchema> All { get; } = [Register, Trip, Contact, Insulation, CurveTable, AmbientTable];
 
     public ColumnSpec? Find(string name) => Columns.FirstOrDefault(c => c.Name == name);
 }

@@ -1,10 +1,10 @@
-using TripTestLog.Domain.Records;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Settings;
 
 namespace TripTestLog.Ingest.Rows;
 
-/// <summary>Turns a device register row into a <see cref="Device"/>, or into problems.</summary>
+/// <summary>Turns a device register row into a <see cref="Device"/> with the settings its family needs, or into problems.</summary>
 internal static class DeviceRowParser
 {
     public static Device? Parse(RowFields f)
@@ -13,56 +13,47 @@ internal static class DeviceRowParser
         var site = f.RequiredText("site", "the site");
         var location = f.RequiredText("location", "the location");
         var family = Family(f);
-        var curve = family == DeviceFamily.Iec60898 ? Curve(f) : null;
         var rated = f.Number("rated_current", true, 0.1, PlausibleRange.MaxCurrentA, "A");
         var poles = Poles(f);
         var voltage = f.Number("rated_voltage", true, 1, PlausibleRange.MaxVoltageV, "V");
         var commissioned = f.Date("commissioned_on");
         var limit = f.Number("contact_limit", false, 0.01, PlausibleRange.MaxContactUohm, "uOhm");
+        var settings = family is { } fam && rated is { } r ? SettingsParser.Parse(f, fam, Amperes.Of(r)) : null;
+        var settingsFrom = f.Date("settings_from");
+        var referenceAmbient = f.Number("reference_ambient", false, -60, 150, "C", allowZero: true);
 
-        if (!f.Ok || tag is null || site is null || location is null || family is null || curve is null
+        if (!f.Ok || tag is null || site is null || location is null || family is null || settings is null
             || rated is null || poles is null || voltage is null)
         {
             return null;
         }
 
         return new Device(
-            tag.Value, site, location, family.Value, curve.Value, Amperes.Of(rated.Value), poles.Value, Volts.Of(voltage.Value),
-            commissioned, limit is { } l ? MicroOhms.Of(l) : null, f.Text("make"), f.Text("model"), f.Text("serial"));
+            tag.Value, site, location, family.Value, Amperes.Of(rated.Value), poles.Value, Volts.Of(voltage.Value),
+            commissioned, limit is { } l ? MicroOhms.Of(l) : null, f.Text("make"), f.Text("model"), f.Text("serial"), settings)
+        {
+            SettingsFrom = settingsFrom,
+            CurveTable = family == DeviceFamily.CurveTable ? null : f.OptionalText("curve_table"),
+            ReferenceAmbient = referenceAmbient is { } ra ? Celsius.Of(ra) : null,
+            AmbientTable = f.OptionalText("ambient_table"),
+        };
     }
 
     private static DeviceFamily? Family(RowFields f)
     {
         var text = f.RequiredText("family", "the device family");
-        switch (text?.ToLowerInvariant())
+        if (text is null)
         {
-            case null:
-                return null;
-            case "iec60898":
-                return DeviceFamily.Iec60898;
-            default:
-                f.Fail("family", $"'{text}' is not a known device family; write iec60898");
-                return null;
+            return null;
         }
-    }
 
-    private static TripCurve? Curve(RowFields f)
-    {
-        var text = f.RequiredText("curve", "the trip curve (B, C or D) of an iec60898 device");
-        switch (text?.ToUpperInvariant())
+        if (FamilyCodes.TryParse(text, out var family))
         {
-            case null:
-                return null;
-            case "B":
-                return TripCurve.B;
-            case "C":
-                return TripCurve.C;
-            case "D":
-                return TripCurve.D;
-            default:
-                f.Fail("curve", $"'{text}' is not an IEC 60898-1 curve; write B, C or D");
-                return null;
+            return family;
         }
+
+        f.Fail("family", $"'{text}' is not a known device family; write one of {string.Join(", ", FamilyCodes.All)}");
+        return null;
     }
 
     private static int? Poles(RowFields f)

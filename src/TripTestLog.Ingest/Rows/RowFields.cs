@@ -97,6 +97,30 @@ internal sealed class RowFields
         return value;
     }
 
+    /// <summary>A yes/no column: yes, no, on, off, true, false, 1 or 0; <paramref name="absent"/> when blank.</summary>
+    public bool Flag(string column, bool absent)
+    {
+        var text = Text(column);
+        switch (text.ToLowerInvariant())
+        {
+            case "":
+                return absent;
+            case "yes" or "on" or "true" or "1":
+                return true;
+            case "no" or "off" or "false" or "0":
+                return false;
+            default:
+                Fail(column, $"'{text}' is not yes or no");
+                return absent;
+        }
+    }
+
+    /// <summary>The text of an optional column, or null when blank.</summary>
+    public string? OptionalText(string column) => Text(column) is { Length: > 0 } text ? text : null;
+
+    /// <summary>Whether the row gives a value in <paramref name="column"/>.</summary>
+    public bool Has(string column) => Text(column).Length > 0;
+
     public TestedAt? When(string column)
     {
         var text = RequiredText(column, "the test date");

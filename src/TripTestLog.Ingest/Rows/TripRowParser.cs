@@ -1,6 +1,7 @@
 using TripTestLog.Domain.Records;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Settings;
 
 namespace TripTestLog.Ingest.Rows;
 
@@ -17,6 +18,7 @@ internal static class TripRowParser
         var outcome = Outcome(f);
         var start = Start(f);
         var ambient = f.Number("ambient", false, -60, 150, "C", allowZero: true);
+        var found = Found(f);
 
         if (!f.Ok || tag is null || when is null || stage is null || pole is null || current is null || outcome is null || start is null)
         {
@@ -25,7 +27,20 @@ internal static class TripRowParser
 
         return new TripMeasurement(
             tag.Value, when.Value, stage.Value, pole.Value, Amperes.Of(current.Value), outcome.Value, start.Value,
-            ambient is { } a ? Celsius.Of(a) : null, f.Text("instrument"), f.Text("technician"), f.Text("note"));
+            ambient is { } a ? Celsius.Of(a) : null, f.Text("instrument"), f.Text("technician"), f.Text("note"))
+        {
+            FoundSettings = found.IsEmpty ? null : found,
+        };
+    }
+
+    // Settings read off the device at the test; they win over the register for this test.
+    private static SettingsFound Found(RowFields f)
+    {
+        Amperes? Current(string column) =>
+            f.Number(column, false, 0.1, PlausibleRange.MaxCurrentA, "A") is { } v ? Amperes.Of(v) : null;
+
+        return new SettingsFound(Current("ir"), Current("isd"), Current("ii"), Current("im"), Current("pickup"),
+            f.Number("tms", false, 0.01, 15, "(multiplier)"));
     }
 
     private static TripOutcome? Outcome(RowFields f)

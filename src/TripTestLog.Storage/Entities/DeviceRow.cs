@@ -31,6 +31,17 @@ internal sealed class DeviceRow
 
     public string Serial { get; set; } = "";
 
+    /// <summary>The family's settings as JSON (see SettingsCodec).</summary>
+    public string SettingsJson { get; set; } = "";
+
+    public string? SettingsFrom { get; set; }
+
+    public string? CurveTable { get; set; }
+
+    public double? ReferenceAmbientC { get; set; }
+
+    public string? AmbientTable { get; set; }
+
     public long SourceFileId { get; set; }
 
     public long SourceLine { get; set; }

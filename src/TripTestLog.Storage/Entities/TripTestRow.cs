@@ -31,6 +31,19 @@ internal sealed class TripTestRow
 
     public string Note { get; set; } = "";
 
+    // Settings read off the device at the test, when the record gave them.
+    public double? FoundIrA { get; set; }
+
+    public double? FoundIsdA { get; set; }
+
+    public double? FoundIiA { get; set; }
+
+    public double? FoundImA { get; set; }
+
+    public double? FoundPickupA { get; set; }
+
+    public double? FoundTms { get; set; }
+
     public long SourceFileId { get; set; }
 
     public long SourceLine { get; set; }

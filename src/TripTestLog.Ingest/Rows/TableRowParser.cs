@@ -1,0 +1,42 @@
+using TripTestLog.Domain.Envelopes;
+using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Records;
+using TripTestLog.Domain.Settings;
+
+namespace TripTestLog.Ingest.Rows;
+
+/// <summary>Turns curve table and ambient table rows into table rows, or into problems.</summary>
+internal static class TableRowParser
+{
+    public static CurveTableRow? Curve(RowFields f)
+    {
+        var table = f.RequiredText("table", "the table name");
+        var multiple = f.Number("multiple", true, 0.01, 10_000, "x reference");
+        var min = f.Number("min", false, 0, PlausibleRange.MaxTimeS, "s", allowZero: true);
+        var max = f.Number("max", false, 0.0001, PlausibleRange.MaxTimeS, "s");
+        if (!f.Has("min"))
+        {
+            f.Fail("min", "the minimum time is required; write 0 where the device may trip at once");
+        }
+
+        if (!f.Ok || table is null || multiple is null || min is null)
+        {
+            return null;
+        }
+
+        return new CurveTableRow(table, new CurveTablePoint(CurrentMultiple.Of(multiple.Value), Seconds.Of(min.Value), max is { } m ? Seconds.Of(m) : null));
+    }
+
+    public static AmbientTableRow? Ambient(RowFields f)
+    {
+        var table = f.RequiredText("table", "the table name");
+        var ambient = f.Number("ambient", true, -60, 150, "C", allowZero: true);
+        var factor = f.Number("current_factor", true, 0.5, 1.5, "(factor)");
+        if (!f.Ok || table is null || ambient is null || factor is null)
+        {
+            return null;
+        }
+
+        return new AmbientTableRow(table, new AmbientPoint(Celsius.Of(ambient.Value), factor.Value));
+    }
+}

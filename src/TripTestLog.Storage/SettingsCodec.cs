@@ -1,0 +1,107 @@
+using System.Text.Json;
+using System.Text.Json.Serialization;
+using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Settings;
+
+namespace TripTestLog.Storage;
+
+/// <summary>
+/// Device settings stored as one JSON text column (`settings_json`), so a new family adds fields, not table columns.
+/// Field names are snake_case and carry their unit; readable with SQLite's json_extract.
+/// </summary>
+internal static class SettingsCodec
+{
+    private static readonly JsonSerializerOptions Options = new()
+    {
+        PropertyNamingPolicy = JsonNamingPolicy.SnakeCaseLower,
+        DefaultIgnoreCondition = JsonIgnoreCondition.WhenWritingNull,
+    };
+
+    public static string Write(DeviceSettings settings) => JsonSerializer.Serialize(settings switch
+    {
+        Iec60898Settings s => new Dto { Kind = "iec60898", Curve = s.Curve.ToString() },
+        ElectronicTripSettings s => new Dto
+        {
+            Kind = "iec60947-electronic", IrA = s.Ir.Value, TrS = s.Tr.Value, TrRefMultiple = s.TrReferenceMultiple, IsdA = s.Isd?.Value,
+            TsdS = s.Tsd?.Value, TsdI2t = s.TsdI2t, IiA = s.Ii?.Value, TimeTolerancePct = s.TimeTolerance.Fraction * 100,
+            TimeToleranceMinS = s.TimeTolerance.Floor.Value, InstMaxS = s.InstantaneousMax.Value,
+        },
+        ThermalMagneticSettings s => new Dto { Kind = "iec60947-thermal-magnetic", IrA = s.Ir.Value, ImA = s.Im.Value, InstMaxS = s.InstantaneousMax.Value },
+        RelaySettings s => new Dto
+        {
+            Kind = "relay-idmt", Curve = CurveCodes.Of(s.Curve), PickupA = s.Pickup.Value, Tms = s.Tms, HighsetA = s.HighSet?.Value,
+            HighsetDelayS = s.HighSetDelay?.Value, TimeTolerancePct = s.TimeTolerance.Fraction * 100, TimeToleranceMinS = s.TimeTolerance.Floor.Value,
+            PickupTolerancePct = s.PickupTolerance * 100, OpeningTimeS = s.OpeningTime.Value,
+        },
+        CurveTableSettings s => new Dto { Kind = "curve-table", CurveTable = s.Table },
+        _ => throw new ArgumentOutOfRangeException(nameof(settings), settings.GetType().Name, "no storage form for these settings"),
+    }, Options);
+
+    public static DeviceSettings Read(string json)
+    {
+        var d = JsonSerializer.Deserialize<Dto>(json, Options) ?? throw new InvalidDataException("empty settings_json");
+        return d.Kind switch
+        {
+            "iec60898" => new Iec60898Settings(Enum.Parse<TripCurve>(d.Curve!)),
+            "iec60947-electronic" => new ElectronicTripSettings(
+                Amperes.Of(d.IrA!.Value), Seconds.Of(d.TrS!.Value), d.TrRefMultiple!.Value, A(d.IsdA), S(d.TsdS), d.TsdI2t ?? false, A(d.IiA),
+                TimeTolerance.Of(d.TimeTolerancePct!.Value / 100, Seconds.Of(d.TimeToleranceMinS!.Value)), Seconds.Of(d.InstMaxS!.Value)),
+            "iec60947-thermal-magnetic" => new ThermalMagneticSettings(Amperes.Of(d.IrA!.Value), Amperes.Of(d.ImA!.Value), Seconds.Of(d.InstMaxS!.Value)),
+            "relay-idmt" => new RelaySettings(
+                CurveCodes.TryParse(d.Curve!, out var c) ? c : throw new InvalidDataException($"unknown relay curve '{d.Curve}' in settings_json"),
+                Amperes.Of(d.PickupA!.Value), d.Tms!.Value, A(d.HighsetA), S(d.HighsetDelayS),
+                TimeTolerance.Of(d.TimeTolerancePct!.Value / 100, Seconds.Of(d.TimeToleranceMinS!.Value)), d.PickupTolerancePct!.Value / 100,
+                Seconds.Of(d.OpeningTimeS!.Value)),
+            "curve-table" => new CurveTableSettings(d.CurveTable!),
+            _ => throw new InvalidDataException($"unknown settings kind '{d.Kind}' in settings_json"),
+        };
+    }
+
+    private static Amperes? A(double? value) => value is { } v ? Amperes.Of(v) : null;
+
+    private static Seconds? S(double? value) => value is { } v ? Seconds.Of(v) : null;
+
+    private sealed class Dto
+    {
+        public string Kind { get; set; } = "";
+
+        public string? Curve { get; set; }
+
+        public double? IrA { get; set; }
+
+        public double? TrS { get; set; }
+
+        public double? TrRefMultiple { get; set; }
+
+        public double? IsdA { get; set; }
+
+        public double? TsdS { get; set; }
+
+        public bool? TsdI2t { get; set; }
+
+        public double? IiA { get; set; }
+
+        public double? ImA { get; set; }
+
+        public double? PickupA { get; set; }
+
+        public double? Tms { get; set; }
+
+        public double? HighsetA { get; set; }
+
+        public double? HighsetDelayS { get; set; }
+
+        public double? TimeTolerancePct { get; set; }
+
+        public double? TimeToleranceMinS { get; set; }
+
+        public double? PickupTolerancePct { get; set; }
+
+        public double? OpeningTimeS { get; set; }
+
+        public double? InstMaxS { get; set; }
+
+        public string? CurveTable { get; set; }
+    }
+}

@@ -1,0 +1,46 @@
+using Microsoft.Data.Sqlite;
+using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Settings;
+using TripTestLog.Storage;
+
+namespace TripTestLog.Ingest.Tests;
+
+/// <summary>A database written by an older release opens, upgrades in place and keeps every record (schemas/README.md).</summary>
+public sealed class SchemaUpgradeTests
+{
+    [Fact]
+    public void ASchema1Database_UpgradesWithItsRecordsIntact()
+    {
+        using var temp = new TempFolder();
+        var db = Path.Combine(temp.Path, "old.db");
+        File.Copy(Path.Combine(AppContext.BaseDirectory, "schemas", "schema-1.db"), db);
+        Assert.Equal(["20261201223055_InitialSchema"], Migrations(db));
+
+        using var store = RecordStore.Open(db);
+
+        Assert.Contains(store.AppliedMigrations(), m => m.EndsWith("_DeviceFamiliesAndTables", StringComparison.Ordinal));
+        Assert.Equal(new StoreCounts(4, 2, 4, 1, 1), store.Counts());
+        var histories = store.Histories();
+        Assert.Equal(TripCurve.C, Assert.IsType<Iec60898Settings>(histories["OLD-01"].Latest.Settings).Curve);
+        Assert.Equal(TripCurve.B, Assert.IsType<Iec60898Settings>(histories["OLD-02"].Latest.Settings).Curve);
+        var trips = store.Trips();
+        Assert.Equal([18.2, 23.3, 40.9, 400.5], trips.Select(t => t.Measurement.Current.Value));
+        Assert.Equal("drifting", trips[2].Measurement.Note);
+    }
+
+    private static List<string> Migrations(string db)
+    {
+        using var connection = new SqliteConnection($"Data Source={db};Pooling=False");
+        connection.Open();
+        using var command = connection.CreateCommand();
+        command.CommandText = "SELECT MigrationId FROM __EFMigrationsHistory ORDER BY MigrationId";
+        using var reader = command.ExecuteReader();
+        var ids = new List<string>();
+        while (reader.Read())
+        {
+            ids.Add(reader.GetString(0));
+        }
+
+        return ids;
+    }
+}
