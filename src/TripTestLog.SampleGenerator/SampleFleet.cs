@@ -30,6 +30,9 @@ internal static class SampleFleet
 
         Directory.CreateDirectory(folder);
         written.Add(Write(Path.Combine(folder, "device-register.csv"), Register(fleet, random)));
+        written.Add(Write(Path.Combine(folder, "curve-tables.csv"), new StringBuilder(IndustrialFleet.CurveTables())));
+        written.Add(Write(Path.Combine(folder, "ambient-tables.csv"), new StringBuilder(IndustrialFleet.AmbientTables())));
+        var industrial = new Random(Seed + 1);
         for (var site = 0; site < SiteNames.Length; site++)
         {
             var siteFolder = Path.Combine(folder, SiteFolders[site]);
@@ -41,6 +44,8 @@ internal static class SampleFleet
                 written.Add(Write(Path.Combine(siteFolder, $"{y}-trip-tests.csv"), Trips(devices, traits, site, year, random)));
                 written.Add(Write(Path.Combine(siteFolder, $"{y}-contact-resistance.csv"), Contacts(devices, traits, site, year, random)));
                 written.Add(Write(Path.Combine(siteFolder, $"{y}-insulation.csv"), Insulation(devices, site, year, random)));
+                written.Add(Write(Path.Combine(siteFolder, $"{y}-industrial-trip-tests.csv"),
+                    new StringBuilder(IndustrialFleet.Trips(site, year, industrial, Technicians[site][year % 2]))));
             }
         }
 
@@ -76,7 +81,8 @@ internal static class SampleFleet
 
     private static StringBuilder Register(List<FleetDevice> fleet, Random random)
     {
-        var sb = new StringBuilder("asset_tag,site,location,family,curve,rated_current_a,poles,rated_voltage_v,commissioned_on,contact_limit_uohm,make,model,serial\n");
+        var sb = new StringBuilder("asset_tag,site,location,family,curve,rated_current_a,poles,rated_voltage_v,commissioned_on,contact_limit_uohm,make,model,serial"
+            + IndustrialFleet.RegisterTail + "\n");
         foreach (var d in fleet)
         {
             var make = Makes[d.Site];
@@ -85,7 +91,12 @@ internal static class SampleFleet
             var model = $"{make[..2].ToUpperInvariant()}{d.Poles}-{d.Curve}{d.Rated:0}";
             var serial = $"{make[0]}{commissioned.Year % 100:00}{random.Next(100000, 999999)}";
             Row(sb, d.Tag, SiteNames[d.Site], d.Location, "iec60898", d.Curve.ToString(), F(d.Rated, "0"), d.Poles.ToString(CultureInfo.InvariantCulture),
-                F(voltage, "0"), commissioned.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture), F(ContactLimit(d), "0"), make, model, serial);
+                F(voltage, "0"), commissioned.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture), F(ContactLimit(d), "0"), make, model, serial + IndustrialFleet.EmptyTail);
+        }
+
+        foreach (var row in IndustrialFleet.RegisterRows())
+        {
+            sb.Append(row).Append('\n');
         }
 
         return sb;
@@ -107,6 +118,12 @@ internal static class SampleFleet
             var at = day.AddDays(index / 5).AddHours(index % 5 * 1.5);
             var tech = Technicians[site][(index + year) % 2];
             var ambient = F(18 + random.NextDouble() * 8, "0.0");
+            if (site == 0 && year == 1 && index == 0)
+            {
+                // Tested in the unheated pump room in winter: far from the 30 °C reference, with no correction table.
+                ambient = "6.0";
+            }
+
             var longHold = d.Rated <= 63 ? 3600.0 : 7200.0;
             var cMax = d.Rated <= 32 ? 60.0 : 120.0;
             var (low, high) = d.Curve switch { 'B' => (3.0, 5.0), 'C' => (5.0, 10.0), _ => (10.0, 20.0) };

@@ -25,7 +25,7 @@ public sealed class DemoAndCheckTests : IDisposable
         var (exit, output, _) = CliRun.Run("demo", "--records", SampleRecords, "--out", _folder);
 
         Assert.Equal(0, exit);
-        Assert.Contains("37 files: 37 imported, 0 already imported, 0 refused", output);
+        Assert.Contains("51 files: 51 imported, 0 already imported, 0 refused", output);
         var verdicts = JsonDocument.Parse(File.ReadAllText(Path.Combine(_folder, "verdicts.json"))).RootElement.EnumerateArray().ToList();
         var findings = verdicts.Where(v => v.GetProperty("verdict").GetString() is "too-late" or "too-early").ToList();
 
@@ -35,6 +35,17 @@ public sealed class DemoAndCheckTests : IDisposable
         Assert.Contains(verdicts, v => v.GetProperty("basis").GetString() == "band");
         Assert.Contains(verdicts, v => v.GetProperty("verdict").GetString() == "not-assessable");
         Assert.Contains("Caution:", File.ReadAllText(Path.Combine(_folder, "verdicts.txt")));
+
+        // Every family is judged, and the settings history matters: the electronic unit's 2021 tests (Ir 400 A) and
+        // 2023 tests (Ir 500 A) both pass only because each is judged with the settings of its date.
+        var families = verdicts.Select(v => v.GetProperty("family").GetString()).ToHashSet();
+        Assert.Equal(["curve-table", "iec60898", "iec60947-electronic", "iec60947-thermal-magnetic", "relay-idmt"], families.Order());
+        var unit = verdicts.Where(v => v.GetProperty("asset_tag").GetString() == "ARW-MSB-Q01").ToList();
+        Assert.All(unit, v => Assert.Equal("pass", v.GetProperty("verdict").GetString()));
+        Assert.Contains(unit, v => v.GetProperty("reference_a").GetDouble() == 400);
+        Assert.Contains(unit, v => v.GetProperty("reference_a").GetDouble() == 500);
+        Assert.Contains(unit, v => v.GetProperty("notes").EnumerateArray().Any(n => n.GetString()!.Contains("Ir 420 A found", StringComparison.Ordinal)));
+        Assert.Contains(verdicts, v => v.GetProperty("notes").EnumerateArray().Any(n => n.GetString()!.Contains("ambient table HB-TM-AMBIENT", StringComparison.Ordinal)));
     }
 
     [Fact]
@@ -91,7 +102,7 @@ public sealed class DemoAndCheckTests : IDisposable
     {
         var written = SampleFleet.WriteTo(_folder);
 
-        Assert.Equal(37, written.Count);
+        Assert.Equal(51, written.Count);
         foreach (var file in written)
         {
             var committed = Path.Combine(SampleRecords, Path.GetRelativePath(_folder, file));

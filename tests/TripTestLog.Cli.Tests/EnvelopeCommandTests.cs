@@ -32,7 +32,52 @@ public sealed class EnvelopeCommandTests
         Assert.Equal(40 * 2.55, double.Parse(byPoint["c"][1], CultureInfo.InvariantCulture), 9);
     }
 
+    [Fact]
+    public void RelayIdmt_Csv_HasTheCharacteristicAtTenTimesPickup()
+    {
+        // IEC 60255-151 standard inverse, TMS 0.1, 10 x 200 A: 0.29706 s, ±40 ms (lab policy floor) = 0.25706 s to 0.33706 s.
+        var (exit, output, _) = CliRun.Run("envelope", "--family", "relay-idmt", "--curve", "standard-inverse", "--pickup", "200", "--tms", "0.1", "--rated", "400", "--csv");
+
+        Assert.Equal(0, exit);
+        var row = output.Split('\n').Select(l => l.Split(',')).Single(r => r[0] == "10");
+        Assert.Equal(("2000", "0.25706", "0.33706", "characteristic"), (row[1], row[2], row[3], row[4]));
+    }
+
+    [Fact]
+    public void Electronic_Table_MatchesTheGoldenFile()
+    {
+        var (exit, output, _) = CliRun.Run("envelope", "--family", "iec60947-electronic", "--rated", "630", "--ir", "400", "--tr", "10",
+            "--isd", "2400", "--tsd", "0.2", "--ii", "4800");
+
+        Assert.Equal(0, exit);
+        Golden.Matches("envelope-electronic.txt", output);
+    }
+
+    [Fact]
+    public void ThermalMagnetic_ShowsNoBandBetweenTheConventionalPointsAndTheMagneticRange()
+    {
+        var (exit, output, _) = CliRun.Run("envelope", "--family", "iec60947-thermal-magnetic", "--rated", "160", "--ir", "125", "--im", "1250", "--csv");
+
+        Assert.Equal(0, exit);
+        var row = output.Split('\n').Select(l => l.Split(',')).Single(r => r[0] == "3");
+        Assert.Equal(("", "none"), (row[2], row[4]));
+    }
+
+    [Fact]
+    public void CurveTable_IsDrawnFromAFile()
+    {
+        var file = Path.Combine(Golden.RepositoryRoot(), "sample-records", "curve-tables.csv");
+
+        var (exit, output, error) = CliRun.Run("envelope", "--family", "curve-table", "--rated", "160", "--table", file, "--csv");
+
+        Assert.True(exit == 0, error);
+        Assert.Contains("2,320,40,400,curve-table,curve-table,", output);
+    }
+
     [Theory]
+    [InlineData("--family", "relay-idmt", "--curve", "sideways", "--pickup", "200", "--tms", "0.1", "--rated", "400")]
+    [InlineData("--family", "iec60947-electronic", "--rated", "630", "--ir", "400")]
+    [InlineData("--family", "iec60947-thermal-magnetic", "--rated", "160", "--ir", "125", "--im", "100")]
     [InlineData("--curve", "E", "--rated", "16")]
     [InlineData("--curve", "C", "--rated", "-3")]
     [InlineData("--curve", "C")]

@@ -3,62 +3,151 @@ using TripTestLog.Cli.Output;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Envelopes;
 using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Records;
+using TripTestLog.Domain.Settings;
+using TripTestLog.Ingest;
+using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Commands;
 
-/// <summary>`envelope`: the allowed trip-time band of a device type, as a table or CSV.</summary>
+/// <summary>`envelope`: the allowed trip-time band of a device type or of a registered device, as a table or CSV.</summary>
 internal static class EnvelopeCommand
 {
     public static Command Create(CliContext cli)
     {
-        var family = new Option<string>("--family") { Description = "Device family: iec60898", DefaultValueFactory = _ => "iec60898", HelpName = "FAMILY" };
-        var curve = new Option<string?>("--curve") { Description = "IEC 60898-1 curve: B, C or D", HelpName = "B|C|D" };
-        var rated = new Option<double?>("--rated") { Description = "Rated current In in amperes", HelpName = "AMPERES" };
-        var csv = new Option<bool>("--csv") { Description = "Write CSV: multiple,current_a,min_s,max_s,min_source,max_source,point" };
-        var command = new Command("envelope", "Show the trip-time band a device must meet, from its standard")
+        var o = new EnvelopeOptions();
+        var command = new Command("envelope", "Show the trip-time band a device must meet, from its standard and settings, or of a registered device (--asset)");
+        foreach (var option in o.All)
         {
-            family, curve, rated, csv,
-        };
-        command.SetAction(parse => Run(cli, parse.GetValue(family)!, parse.GetValue(curve), parse.GetValue(rated), parse.GetValue(csv)));
+            command.Add(option);
+        }
+
+        command.SetAction(parse => Run(cli, o.Read(parse)));
         return command;
     }
 
-    private static int Run(CliContext cli, string family, string? curveText, double? rated, bool csv)
+    private static int Run(CliContext cli, EnvelopeRequest request)
     {
-        if (!string.Equals(family, "iec60898", StringComparison.OrdinalIgnoreCase))
+        if (request.Family is not { } family)
         {
-            return Usage(cli, $"--family: '{family}' is not a known family; use iec60898");
+            return Usage(cli, $"--family: '{request.FamilyText}' is not a known family; use one of {string.Join(", ", FamilyCodes.All)}");
         }
 
-        TripCurve? parsed = curveText?.Trim().ToUpperInvariant() switch
+        ITripEnvelope envelope;
+        string title;
+        if (request.Asset is { } asset)
         {
-            "B" => TripCurve.B,
-            "C" => TripCurve.C,
-            "D" => TripCurve.D,
-            _ => null,
-        };
-        if (parsed is not { } curve)
+            if (!request.Database.Exists)
+            {
+                return Usage(cli, $"--asset: no database at {request.Database.FullName}");
+            }
+
+            using var store = RecordStore.Open(request.Database.FullName);
+            if (!store.Histories().TryGetValue(asset, out var history))
+            {
+                return Usage(cli, $"--asset: '{asset}' is not in the device register");
+            }
+
+            var device = history.Latest;
+            envelope = EnvelopeFactory.For(device, device.Settings, 1.0, store.CurveTables());
+            title = $"{device.Tag}: {FamilyCodes.Of(device.Family)}, In = {device.RatedCurrent}, {device.Settings.Summary} ({envelope.Standard})";
+        }
+        else
         {
-            return Usage(cli, "--curve: give B, C or D");
+            var (settings, error) = SettingsFromOptions(request, cli.Today);
+            if (settings is null)
+            {
+                return Usage(cli, error!);
+            }
+
+            var rated = Amperes.Of(request.Rated!.Value);
+            var device = new Device(AssetTag.Of("envelope"), "", "", family, rated, 1, Volts.Of(400), null, null, "", "", "", settings.Value.Settings);
+            envelope = EnvelopeFactory.For(device, device.Settings, 1.0, settings.Value.Tables);
+            title = $"{FamilyCodes.Of(family)}, In = {rated}, {device.Settings.Summary} ({envelope.Standard})";
         }
 
-        if (rated is not { } amps || !double.IsFinite(amps) || amps <= 0 || amps > 10_000)
-        {
-            return Usage(cli, "--rated: give the rated current in amperes, e.g. --rated 16");
-        }
-
-        var envelope = new Iec60898Envelope(curve, Amperes.Of(amps));
-        if (csv)
+        if (request.Csv)
         {
             EnvelopeWriter.WriteCsv(cli.Out, envelope);
         }
         else
         {
-            EnvelopeWriter.WriteTable(cli.Out, envelope, $"IEC 60898-1 curve {curve}, In = {Amperes.Of(amps)}");
+            EnvelopeWriter.WriteTable(cli.Out, envelope, title);
         }
 
         return ExitCodes.Ok;
     }
+
+    private static ((DeviceSettings Settings, IReadOnlyDictionary<string, CurveTable> Tables)? Value, string? Error) SettingsFromOptions(EnvelopeRequest r, DateOnly today)
+    {
+        if (r.Rated is not { } rated || !double.IsFinite(rated) || rated <= 0 || rated > 10_000)
+        {
+            return (null, "--rated: give the rated current In in amperes, e.g. --rated 16");
+        }
+
+        var noTables = new Dictionary<string, CurveTable>();
+        switch (r.Family!.Value)
+        {
+            case DeviceFamily.Iec60898:
+                TripCurve? curve = r.Curve?.Trim().ToUpperInvariant() switch { "B" => TripCurve.B, "C" => TripCurve.C, "D" => TripCurve.D, _ => null };
+                return curve is { } c ? ((new Iec60898Settings(c), noTables), null) : (null, "--curve: give B, C or D");
+
+            case DeviceFamily.Iec60947Electronic:
+                if (Positive(r.Ir) is not { } ir || Positive(r.Tr) is not { } tr)
+                {
+                    return (null, "--ir and --tr: give the long-time pickup in amperes and the delay in seconds");
+                }
+
+                if (Positive(r.Isd).HasValue != Positive(r.Tsd).HasValue)
+                {
+                    return (null, "--isd and --tsd: give both or neither");
+                }
+
+                return ((new ElectronicTripSettings(Amperes.Of(ir), Seconds.Of(tr), Positive(r.TrReference) ?? LabPolicy.TrReferenceMultiple,
+                    A(r.Isd), S(r.Tsd), r.I2t, A(r.Ii), LabPolicy.ElectronicTimeTolerance, LabPolicy.InstantaneousMax), noTables), null);
+
+            case DeviceFamily.Iec60947ThermalMagnetic:
+                return Positive(r.Ir) is { } tir && Positive(r.Im) is { } im && im > tir
+                    ? ((new ThermalMagneticSettings(Amperes.Of(tir), Amperes.Of(im), LabPolicy.InstantaneousMax), noTables), null)
+                    : (null, "--ir and --im: give the thermal and magnetic settings in amperes, Im above Ir");
+
+            case DeviceFamily.RelayIdmt:
+                if (r.Curve is null || !CurveCodes.TryParse(r.Curve, out var idmt))
+                {
+                    return (null, $"--curve: give one of {string.Join(", ", CurveCodes.All)}");
+                }
+
+                if (Positive(r.Pickup) is not { } pickup || r.Tms is not (> 0 and <= 15))
+                {
+                    return (null, "--pickup and --tms: give the pickup in amperes and the time multiplier (0.01 to 15)");
+                }
+
+                return ((new RelaySettings(idmt, Amperes.Of(pickup), r.Tms.Value, A(r.HighSet), S(r.HighSetDelay), LabPolicy.RelayTimeTolerance,
+                    LabPolicy.RelayPickupTolerance, Seconds.Of(Positive(r.OpeningTime) ?? 0)), noTables), null);
+
+            default:
+                if (r.Table is not { } file || !file.Exists)
+                {
+                    return (null, "--table: give a curve table CSV file (table,multiple,min_s,max_s)");
+                }
+
+                var parsed = RecordFileReader.Read(file.FullName, today);
+                if (parsed.Problems.Count > 0 || parsed.Kind != RecordKind.CurveTable)
+                {
+                    return (null, parsed.Problems.Count > 0 ? parsed.Problems[0].ToString() : $"{file.Name} is not a curve table file");
+                }
+
+                var name = parsed.CurveTableRows[0].Record.Table;
+                var table = CurveTable.Create(name, parsed.CurveTableRows.Where(x => x.Record.Table == name).Select(x => x.Record.Point).ToList());
+                return ((new CurveTableSettings(name), new Dictionary<string, CurveTable> { [name] = table }), null);
+        }
+    }
+
+    private static double? Positive(double? value) => value is { } v && double.IsFinite(v) && v > 0 ? v : null;
+
+    private static Amperes? A(double? value) => Positive(value) is { } v ? Amperes.Of(v) : null;
+
+    private static Seconds? S(double? value) => Positive(value) is { } v ? Seconds.Of(v) : null;
 
     private static int Usage(CliContext cli, string message)
     {

@@ -9,7 +9,7 @@ internal static class EnvelopeWriter
 {
     /// <summary>Multiples a band is usually read at, joined with the standard's own points.</summary>
     public static IReadOnlyList<double> Multiples(ITripEnvelope envelope) =>
-        new[] { 1.0, 1.2, 1.3, 1.6, 1.8, 2.0, 2.25, 3.0, 4.0, 5.0, 7.0, 10.0, 15.0, 20.0, 30.0, 50.0 }
+        new[] { 1.0, 1.05, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.25, 2.5, 3.0, 4.0, 5.0, 6.0, 7.0, 8.0, 10.0, 12.0, 15.0, 20.0, 30.0, 50.0 }
             .Concat(envelope.Points.Select(p => p.Multiple.Value))
             .Distinct()
             .Order()
@@ -27,8 +27,8 @@ internal static class EnvelopeWriter
             table.Add(
                 Format.Number(m, "0.00"),
                 band.Current.ToString(),
-                band.HasRequirement ? Format.Edge(band.Minimum) : "no band",
-                band.HasRequirement ? Format.Edge(band.Maximum) : "no band",
+                band.HasRequirement ? Format.Minimum(band.Minimum) : "no band",
+                band.HasRequirement ? Format.Maximum(band.Maximum) : "no band",
                 band.HasRequirement ? Format.Source(band.Minimum.Source) : "-",
                 band.HasRequirement ? Format.Source(band.Maximum.Source) : "-",
                 point?.Label ?? "");
@@ -36,14 +36,21 @@ internal static class EnvelopeWriter
 
         table.WriteTo(writer);
         writer.WriteLine();
-        writer.WriteLine("Normative points:");
-        foreach (var p in envelope.Points)
+        if (envelope.Points.Count > 0)
         {
-            writer.WriteLine($"  {p.Label}: {p.Requirement}");
+            writer.WriteLine("Normative points:");
+            foreach (var p in envelope.Points)
+            {
+                writer.WriteLine($"  {p.Label}: {p.Requirement}");
+            }
+
+            writer.WriteLine();
         }
 
-        writer.WriteLine();
-        writer.WriteLine("Between the points the edges are straight lines on log-log axes; beyond 2.55 In the maximum follows I²t = constant.");
+        writer.WriteLine("Edge sources: normative = the standard's own point; characteristic = the standard's formula; setting = the device's");
+        writer.WriteLine("settings with their tolerances; interpolated = log-log line between points; extrapolated = beyond the last point");
+        writer.WriteLine("(I²t = constant for a thermal release, the formula outside its accuracy range for a relay); curve-table = the lab's");
+        writer.WriteLine("table from the maker's curve. Min \"never\": must not trip at all; max \"none\": no trip required.");
         writer.WriteLine(Safety.Caution);
     }
 

@@ -11,8 +11,11 @@ internal static class Format
 {
     public static string Number(double value, string format = "0.###") => value.ToString(format, CultureInfo.InvariantCulture);
 
-    /// <summary>An edge's time; "0" for a minimum that sets no limit, "none" for an unbounded maximum.</summary>
-    public static string Edge(BandEdge edge) => edge.Limit is { } s ? (edge.IsOpen ? "0" : s.ToString()) : "none";
+    /// <summary>A minimum edge: "0" where the release may act at once, "never" where it must not act at all.</summary>
+    public static string Minimum(BandEdge edge) => edge.Limit is { } s ? (edge.IsOpen ? "0" : s.ToString()) : "never";
+
+    /// <summary>A maximum edge: "none" where no trip is required.</summary>
+    public static string Maximum(BandEdge edge) => edge.Limit is { } s ? s.ToString() : "none";
 
     public static string Outcome(TripOutcome outcome) => outcome.Tripped ? $"tripped {outcome.Time}" : $"held {outcome.Time}";
 
@@ -34,10 +37,17 @@ internal static class Format
     {
         EdgeSource.NormativePoint => "normative",
         EdgeSource.Interpolated => "interpolated",
-        EdgeSource.Extrapolated => "i2t-extrapolated",
+        EdgeSource.Extrapolated => "extrapolated",
         EdgeSource.Instantaneous => "instantaneous",
+        EdgeSource.Characteristic => "characteristic",
+        EdgeSource.Setting => "setting",
+        EdgeSource.CurveTable => "curve-table",
         _ => "none",
     };
+
+    /// <summary>The test current as a multiple of the envelope's reference, e.g. "2.56 In" or "6.02 Ir".</summary>
+    public static string Multiple(Services.CheckedTrip r) =>
+        $"{Number(r.Trip.Measurement.Current.Value / r.Envelope.Reference.Value, "0.00")} {r.Envelope.ReferenceName}";
 
     public static string Seconds(Seconds? value) => value is { } s ? s.ToString() : "-";
 }

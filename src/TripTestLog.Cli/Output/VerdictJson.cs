@@ -34,7 +34,7 @@ internal static class VerdictJson
             m.Pole.Code,
             Format.Start(m.Start),
             m.Current.Value,
-            Math.Round(band.Multiple.Value, 4),
+            Math.Round(m.Current.Value / r.Device.RatedCurrent.Value, 4),
             m.Outcome.Tripped,
             m.Outcome.Tripped ? m.Outcome.Time.Value : null,
             m.Outcome.Tripped ? null : m.Outcome.Time.Value,
@@ -50,7 +50,14 @@ internal static class VerdictJson
             a.Reason,
             r.Envelope.Standard,
             r.Trip.SourceFile,
-            r.Trip.SourceLine);
+            r.Trip.SourceLine,
+            r.Envelope.ReferenceName,
+            r.Envelope.Reference.Value,
+            Math.Round(m.Current.Value / r.Envelope.Reference.Value, 4),
+            Domain.Devices.FamilyCodes.Of(r.Device.Family),
+            r.Device.Settings.Summary,
+            a.Notes,
+            band.HasRequirement && band.Minimum.Limit is null);
     }
 
     private sealed record VerdictRow(
@@ -76,5 +83,12 @@ internal static class VerdictJson
         string Reason,
         string Standard,
         string SourceFile,
-        long SourceLine);
+        long SourceLine,
+        string Reference,
+        double ReferenceA,
+        double MultipleOfReference,
+        string Family,
+        string Settings,
+        IReadOnlyList<string> Notes,
+        bool MustNotTrip);
 }

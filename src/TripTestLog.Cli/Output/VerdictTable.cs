@@ -8,7 +8,7 @@ internal static class VerdictTable
 {
     public static void Write(TextWriter writer, IReadOnlyList<CheckedTrip> results)
     {
-        var table = new TextTable("Asset", "Tested", "Stage", "Pole", "Start", "Current>", "x In>", "Result", "Band min>", "Band max>", "Verdict", "Basis");
+        var table = new TextTable("Asset", "Tested", "Stage", "Pole", "Start", "Current>", "Multiple>", "Result", "Band min>", "Band max>", "Verdict", "Basis");
         foreach (var r in results)
         {
             var m = r.Trip.Measurement;
@@ -20,10 +20,10 @@ internal static class VerdictTable
                 m.Pole.Code,
                 Format.Start(m.Start),
                 m.Current.ToString(),
-                Format.Number(a.Band.Multiple.Value, "0.00"),
+                Format.Multiple(r),
                 Format.Outcome(m.Outcome),
-                a.Band.HasRequirement ? Format.Edge(a.Band.Minimum) : "-",
-                a.Band.HasRequirement ? Format.Edge(a.Band.Maximum) : "-",
+                a.Band.HasRequirement ? Format.Minimum(a.Band.Minimum) : "-",
+                a.Band.HasRequirement ? Format.Maximum(a.Band.Maximum) : "-",
                 Format.Verdict(a.Verdict),
                 Format.Basis(a.Basis));
         }
@@ -35,8 +35,29 @@ internal static class VerdictTable
 
         WriteReasons(writer, "Outside the band (act on these):", results.Where(r => r.Assessment.Verdict is Verdict.TooEarly or Verdict.TooLate));
         WriteReasons(writer, "Not assessable (repeat or complete the test):", results.Where(r => r.Assessment.Verdict == Verdict.NotAssessable));
+        WriteNotes(writer, results.Where(r => r.Assessment.Notes.Count > 0));
         writer.WriteLine();
         writer.WriteLine(Safety.Caution);
+    }
+
+    private static void WriteNotes(TextWriter writer, IEnumerable<CheckedTrip> results)
+    {
+        var list = results.ToList();
+        if (list.Count == 0)
+        {
+            return;
+        }
+
+        writer.WriteLine();
+        writer.WriteLine("Notes:");
+        foreach (var r in list)
+        {
+            var m = r.Trip.Measurement;
+            foreach (var note in r.Assessment.Notes)
+            {
+                writer.WriteLine($"  {m.Tag} {m.TestedAt} at {m.Current}: {note}");
+            }
+        }
     }
 
     private static void WriteReasons(TextWriter writer, string heading, IEnumerable<CheckedTrip> results)
@@ -52,7 +73,7 @@ internal static class VerdictTable
         foreach (var r in list)
         {
             var m = r.Trip.Measurement;
-            writer.WriteLine($"  {m.Tag} {m.TestedAt} {Format.Stage(m.Stage)} pole {m.Pole} at {m.Current} ({Format.Number(r.Assessment.Band.Multiple.Value, "0.00")} In): "
+            writer.WriteLine($"  {m.Tag} {m.TestedAt} {Format.Stage(m.Stage)} pole {m.Pole} at {m.Current} ({Format.Multiple(r)}): "
                 + $"{Format.Verdict(r.Assessment.Verdict)}: {r.Assessment.Reason} [{Path.GetFileName(r.Trip.SourceFile)}:{r.Trip.SourceLine}]");
         }
     }

@@ -1,3 +1,4 @@
+using TripTestLog.Domain.Assessment;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Envelopes;
 using TripTestLog.Domain.Verdicts;
@@ -5,30 +6,26 @@ using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Services;
 
-/// <summary>A judged trip test with its device and where it came from.</summary>
+/// <summary>A judged trip test with the register entry and envelope it was judged by, and where it came from.</summary>
 /// <param name="Trip">The stored test.</param>
+/// <param name="Device">The register entry in force on the test date.</param>
 /// <param name="Envelope">The envelope it was judged against.</param>
 /// <param name="Assessment">The verdict.</param>
-internal sealed record CheckedTrip(StoredTrip Trip, ITripEnvelope Envelope, TripAssessment Assessment);
+internal sealed record CheckedTrip(StoredTrip Trip, Device Device, ITripEnvelope Envelope, TripAssessment Assessment);
 
-/// <summary>Judges every stored trip test against its device's envelope.</summary>
+/// <summary>Judges every stored trip test with the settings in force on its date.</summary>
 internal static class CheckRunner
 {
     public static IReadOnlyList<CheckedTrip> Run(RecordStore store, AssetTag? only)
     {
-        var envelopes = new Dictionary<Device, ITripEnvelope>();
-        var results = new List<CheckedTrip>();
-        foreach (var trip in store.Trips(only))
-        {
-            if (!envelopes.TryGetValue(trip.Device, out var envelope))
+        var histories = store.Histories();
+        var assessor = new TripAssessor(store.CurveTables(), store.AmbientTables());
+        return store.Trips(only)
+            .Select(trip =>
             {
-                envelope = EnvelopeFactory.For(trip.Device);
-                envelopes[trip.Device] = envelope;
-            }
-
-            results.Add(new CheckedTrip(trip, envelope, TripJudge.Assess(envelope, trip.Measurement)));
-        }
-
-        return results;
+                var result = assessor.Assess(histories[trip.Tag.Value], trip.Measurement);
+                return new CheckedTrip(trip, result.Device, result.Envelope, result.Assessment);
+            })
+            .ToList();
     }
 }

@@ -1,0 +1,51 @@
+using System.CommandLine;
+using TripTestLog.Domain.Devices;
+
+namespace TripTestLog.Cli.Commands;
+
+/// <summary>What `envelope` was asked for.</summary>
+internal sealed record EnvelopeRequest(
+    DeviceFamily? Family, string FamilyText, string? Curve, double? Rated, double? Ir, double? Tr, double? TrReference, double? Isd, double? Tsd, bool I2t,
+    double? Ii, double? Im, double? Pickup, double? Tms, double? HighSet, double? HighSetDelay, double? OpeningTime, FileInfo? Table,
+    string? Asset, FileInfo Database, bool Csv);
+
+/// <summary>The options of `envelope`, declared once and read into an <see cref="EnvelopeRequest"/>.</summary>
+internal sealed class EnvelopeOptions
+{
+    private readonly Option<string> _family = new("--family")
+    {
+        Description = $"Device family: {string.Join(", ", FamilyCodes.All)}",
+        DefaultValueFactory = _ => "iec60898",
+        HelpName = "FAMILY",
+    };
+
+    private readonly Option<string?> _curve = new("--curve") { Description = "iec60898: B, C or D; relay-idmt: the IDMT curve, e.g. standard-inverse", HelpName = "CURVE" };
+    private readonly Option<double?> _rated = new("--rated") { Description = "Rated current In, A", HelpName = "AMPERES" };
+    private readonly Option<double?> _ir = new("--ir") { Description = "iec60947: long-time or thermal setting Ir, A", HelpName = "AMPERES" };
+    private readonly Option<double?> _tr = new("--tr") { Description = "iec60947-electronic: long-time delay tr, s", HelpName = "SECONDS" };
+    private readonly Option<double?> _trRef = new("--tr-ref") { Description = "iec60947-electronic: multiple of Ir at which tr is stated (default 6)", HelpName = "MULTIPLE" };
+    private readonly Option<double?> _isd = new("--isd") { Description = "iec60947-electronic: short-time pickup Isd, A", HelpName = "AMPERES" };
+    private readonly Option<double?> _tsd = new("--tsd") { Description = "iec60947-electronic: short-time delay tsd, s", HelpName = "SECONDS" };
+    private readonly Option<bool> _i2t = new("--i2t") { Description = "iec60947-electronic: short-time delay with I²t on" };
+    private readonly Option<double?> _ii = new("--ii") { Description = "iec60947-electronic: instantaneous pickup Ii, A", HelpName = "AMPERES" };
+    private readonly Option<double?> _im = new("--im") { Description = "iec60947-thermal-magnetic: magnetic setting Im, A", HelpName = "AMPERES" };
+    private readonly Option<double?> _pickup = new("--pickup") { Description = "relay-idmt: pickup (start) current, primary A", HelpName = "AMPERES" };
+    private readonly Option<double?> _tms = new("--tms") { Description = "relay-idmt: time multiplier (IEC) or time dial (IEEE)", HelpName = "VALUE" };
+    private readonly Option<double?> _highSet = new("--highset") { Description = "relay-idmt: definite-time high-set pickup, A", HelpName = "AMPERES" };
+    private readonly Option<double?> _highSetDelay = new("--highset-delay") { Description = "relay-idmt: high-set delay, s", HelpName = "SECONDS" };
+    private readonly Option<double?> _opening = new("--opening-time") { Description = "relay-idmt: breaker opening time added to the latest time, s", HelpName = "SECONDS" };
+    private readonly Option<FileInfo?> _table = new("--table") { Description = "curve-table: a curve table CSV file", HelpName = "FILE" };
+    private readonly Option<string?> _asset = new("--asset") { Description = "Draw a registered device's band instead, from --db", HelpName = "TAG" };
+    private readonly Option<FileInfo> _db = CommonOptions.Database();
+    private readonly Option<bool> _csv = new("--csv") { Description = "Write CSV: multiple,current_a,min_s,max_s,min_source,max_source,point" };
+
+    public IEnumerable<Option> All => [_family, _curve, _rated, _ir, _tr, _trRef, _isd, _tsd, _i2t, _ii, _im, _pickup, _tms, _highSet, _highSetDelay, _opening, _table, _asset, _db, _csv];
+
+    public EnvelopeRequest Read(ParseResult p)
+    {
+        var text = p.GetValue(_family)!;
+        return new EnvelopeRequest(FamilyCodes.TryParse(text, out var family) ? family : null, text, p.GetValue(_curve), p.GetValue(_rated), p.GetValue(_ir), p.GetValue(_tr), p.GetValue(_trRef),
+            p.GetValue(_isd), p.GetValue(_tsd), p.GetValue(_i2t), p.GetValue(_ii), p.GetValue(_im), p.GetValue(_pickup), p.GetValue(_tms),
+            p.GetValue(_highSet), p.GetValue(_highSetDelay), p.GetValue(_opening), p.GetValue(_table), p.GetValue(_asset), p.GetValue(_db)!, p.GetValue(_csv));
+    }
+}
