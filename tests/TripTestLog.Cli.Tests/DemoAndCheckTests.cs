@@ -62,6 +62,18 @@ public sealed class DemoAndCheckTests : IDisposable
     }
 
     [Fact]
+    public void Envelope_OfARegisteredDevice_UsesItsNewestSettings()
+    {
+        CliRun.Run("demo", "--records", SampleRecords, "--out", _folder);
+
+        var (exit, output, error) = CliRun.Run("envelope", "--asset", "ARW-MSB-F01", "--db", Path.Combine(_folder, "triptestlog.db"));
+
+        Assert.True(exit == 0, error);
+        Assert.Contains("standard-inverse, pickup 800 A, TMS 0.2, high-set 8000 A after 50 ms", output);
+        Assert.Contains("characteristic", output);
+    }
+
+    [Fact]
     public void CheckWithFailOnFindings_ExitsWith1WhenATestIsOutsideTheBand()
     {
         CliRun.Run("demo", "--records", SampleRecords, "--out", _folder);
