@@ -15,6 +15,8 @@ internal static class CliApp
             ImportCommand.Create(cli),
             CheckCommand.Create(cli),
             EnvelopeCommand.Create(cli),
+            VerifyCommand.Create(cli),
+            BackupCommand.Create(cli),
             DemoCommand.Create(cli),
         };
 

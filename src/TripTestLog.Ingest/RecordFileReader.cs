@@ -1,5 +1,6 @@
-using TripTestLog.Domain.Records;
+using System.Text;
 using CsvHelper;
+using TripTestLog.Domain.Records;
 using TripTestLog.Ingest.Columns;
 using TripTestLog.Ingest.Rows;
 
@@ -11,34 +12,37 @@ namespace TripTestLog.Ingest;
 /// </summary>
 public static class RecordFileReader
 {
+    /// <summary>Reads <paramref name="path"/> with the default options.</summary>
+    public static ParsedFile Read(string path, DateOnly today) => Read(path, today, ReadOptions.Default);
+
     /// <summary>Reads <paramref name="path"/>; dates after <paramref name="today"/> are refused as future dates.</summary>
     /// <exception cref="IOException">When the file cannot be opened at all.</exception>
-    public static ParsedFile Read(string path, DateOnly today)
+    public static ParsedFile Read(string path, DateOnly today, ReadOptions options)
     {
+        ArgumentNullException.ThrowIfNull(options);
         var sha = FileHash.Sha256(path);
-        var fileProblem = CheckReadable(path);
-        if (fileProblem is not null)
+        if (CheckReadable(path, options.MaxBytes) is { } fileProblem)
         {
-            return new ParsedFile { Path = path, Sha256 = sha, Problems = [new RowProblem(path, 1, "", fileProblem)] };
+            return Unreadable(path, sha, 1, "", fileProblem);
         }
 
-        var options = new CsvReaderOptions
+        var layout = Layout.Recognise(path, options);
+        if (layout.Problem is { } layoutProblem)
         {
-            HasHeader = true,
-            Separator = ',',
-            TrackLineNumbers = true,
-            FieldCountMismatch = CsvFieldCountHandling.Allow,
-            MalformedData = CsvMalformedDataHandling.Throw,
-        };
-        using var csv = CsvReader.FromFile(path, options);
+            return Unreadable(path, sha, 1, "", layoutProblem);
+        }
+
+        using var csv = CsvReader.FromFile(path, CsvOptions(layout.Separator));
         csv.ReadHeader();
-        var (map, headerProblems) = HeaderMap.Resolve(csv.Headers);
+        var headers = layout.Headers(csv.Headers);
+        var (map, headerProblems) = HeaderMap.Resolve(headers.Names);
         if (map is null)
         {
             return new ParsedFile
             {
                 Path = path,
                 Sha256 = sha,
+                IsUnreadable = true,
                 Problems = headerProblems.Select(p => new RowProblem(path, 1, p.Column, p.Reason)).ToList(),
             };
         }
@@ -46,46 +50,63 @@ public static class RecordFileReader
         var sink = new RowSink(map.Schema.Kind);
         var problems = new List<RowProblem>();
         long rows = 0;
-        var values = new List<string>();
+        var unreadable = false;
         try
         {
             while (csv.Read())
             {
                 rows++;
-                values.Clear();
-                for (var i = 0; i < csv.FieldCount; i++)
-                {
-                    values.Add(csv.GetString(i));
-                }
-
-                if (values.Count != csv.Headers.Count)
+                if (csv.FieldCount != csv.Headers.Count)
                 {
                     problems.Add(new RowProblem(path, csv.LineNumber, "",
-                        $"this row has {values.Count} fields but the header has {csv.Headers.Count}; check for a missing or extra comma, or quote fields that hold commas"));
+                        $"this row has {csv.FieldCount} fields but the header has {csv.Headers.Count}; check for a missing or extra "
+                        + $"'{layout.Separator}', or quote fields that hold one"));
                     continue;
                 }
 
-                var fields = new RowFields(map, values, path, csv.LineNumber, today);
+                var fields = new RowFields(map, headers.Values(csv), path, csv.LineNumber, today, layout.DecimalComma, options.Profile?.DateFormats ?? []);
                 sink.Add(fields);
                 problems.AddRange(fields.Problems);
             }
         }
         catch (CsvFormatException e)
         {
-            problems.Add(new RowProblem(path, e.LineNumber, "", $"the CSV is malformed here ({Describe(e)}); reading stopped"));
+            // Past a malformed record the rest of the file cannot be read, so its rows cannot be accounted for.
+            unreadable = true;
+            problems.Add(new RowProblem(path, e.LineNumber, "", $"the CSV is malformed here ({Describe(e)}); reading stopped, so the file is refused"));
         }
 
         problems.AddRange(sink.TableProblems(path));
         if (rows == 0 && problems.Count == 0)
         {
+            unreadable = true;
             problems.Add(new RowProblem(path, 1, "", $"the file has a {HeaderMap.Describe(map.Schema.Kind)} header but no data rows"));
         }
 
-        return sink.ToParsedFile(path, sha, rows, problems);
+        return sink.ToParsedFile(path, sha, rows, problems) with { IsUnreadable = unreadable };
     }
 
-    private static string? CheckReadable(string path)
+    internal static CsvReaderOptions CsvOptions(char separator) => new()
     {
+        HasHeader = true,
+        Separator = separator,
+        TrackLineNumbers = true,
+        FieldCountMismatch = CsvFieldCountHandling.Allow,
+        MalformedData = CsvMalformedDataHandling.Throw,
+    };
+
+    private static ParsedFile Unreadable(string path, string sha, long line, string column, string reason) =>
+        new() { Path = path, Sha256 = sha, IsUnreadable = true, Problems = [new RowProblem(path, line, column, reason)] };
+
+    private static string? CheckReadable(string path, long maxBytes)
+    {
+        var length = new FileInfo(path).Length;
+        if (length > maxBytes)
+        {
+            return $"the file is {length / 1048576.0:0.#} MB, over the {maxBytes / 1048576.0:0.#} MB limit for one import "
+                + "(a file is stored whole, in one transaction); split it into smaller files, or raise the limit with --max-file-mb";
+        }
+
         var head = new byte[8192];
         int read;
         using (var stream = File.OpenRead(path))
@@ -98,9 +119,33 @@ public static class RecordFileReader
             return "the file is empty; a record file needs a header row and at least one data row";
         }
 
-        return Array.IndexOf(head, (byte)0, 0, read) >= 0
-            ? "this is not a text file (it holds NUL bytes); export the records as UTF-8 CSV"
-            : null;
+        if (Array.IndexOf(head, (byte)0, 0, read) >= 0)
+        {
+            return "this is not a text file (it holds NUL bytes); export the records as UTF-8 CSV";
+        }
+
+        try
+        {
+            new UTF8Encoding(false, throwOnInvalidBytes: true).GetCharCount(head, 0, TrimPartialCharacter(head, read));
+        }
+        catch (DecoderFallbackException)
+        {
+            return "the file is not UTF-8 text (it may be a spreadsheet or another encoding); save it as CSV UTF-8";
+        }
+
+        return null;
+    }
+
+    // The 8 KB sample may end inside a multi-byte character; do not count that as invalid.
+    private static int TrimPartialCharacter(byte[] bytes, int count)
+    {
+        var i = count;
+        while (i > 0 && count - i < 3 && (bytes[i - 1] & 0xC0) == 0x80)
+        {
+            i--;
+        }
+
+        return i > 0 && bytes[i - 1] >= 0xC0 ? i - 1 : count;
     }
 
     private static string Describe(CsvFormatException e)

@@ -1,6 +1,7 @@
 using TripTestLog.Domain.Records;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Envelopes;
+using TripTestLog.Domain.Instruments;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Ingest.Rows;
 
@@ -15,6 +16,7 @@ internal sealed class RowSink(RecordKind kind)
     private readonly List<Located<InsulationMeasurement>> _insulations = [];
     private readonly List<Located<CurveTableRow>> _curveRows = [];
     private readonly List<Located<AmbientTableRow>> _ambientRows = [];
+    private readonly List<Located<InstrumentCalibration>> _instruments = [];
 
     public void Add(RowFields fields)
     {
@@ -38,6 +40,9 @@ internal sealed class RowSink(RecordKind kind)
             case RecordKind.AmbientTable:
                 Keep(_ambientRows, TableRowParser.Ambient(fields), fields.Line);
                 break;
+            case RecordKind.InstrumentRegister:
+                Keep(_instruments, TableRowParser.Instrument(fields), fields.Line);
+                break;
         }
     }
 
@@ -54,6 +59,7 @@ internal sealed class RowSink(RecordKind kind)
         Insulations = _insulations,
         CurveTableRows = _curveRows,
         AmbientTableRows = _ambientRows,
+        Instruments = _instruments,
     };
 
     /// <summary>Problems that only show across rows: the shape of each curve or ambient table.</summary>

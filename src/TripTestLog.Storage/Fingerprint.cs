@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Security.Cryptography;
 using System.Text;
+using TripTestLog.Domain.Instruments;
 using TripTestLog.Domain.Measurements;
 
 namespace TripTestLog.Storage;
@@ -28,6 +29,8 @@ internal static class Fingerprint
     public static string Of(InsulationMeasurement m, long deviceId) => Hash(
         "insulation", deviceId, m.TestedAt, m.Stage, m.Path, R(m.TestVoltage.Value), R(m.Resistance.Value.Value), m.Resistance.OverRange,
         m.Temperature is { } t ? R(t.Value) : "", m.Duration is { } d ? R(d.Value) : "");
+
+    public static string Of(InstrumentCalibration c) => Hash("instrument", c.Instrument, c.Kind, c.Serial, c.CalibratedOn, c.CalibrationDue);
 
     // Rows without settings hash as they did before settings could be recorded, so older fingerprints stay valid.
     private static string Found(TripMeasurement m) => m.FoundSettings is not { } f ? "" :

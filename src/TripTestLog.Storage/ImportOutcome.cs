@@ -10,7 +10,7 @@ namespace TripTestLog.Storage;
 /// <param name="Added">New records stored (for a register: new devices).</param>
 /// <param name="Updated">Register only: devices whose entry changed (a revision was kept).</param>
 /// <param name="Duplicates">Rows identical to a record already stored, or to an earlier row of the same file.</param>
-/// <param name="Problems">Why the file was refused; empty otherwise.</param>
+/// <param name="Problems">Why the file, or (with accept-valid) some of its rows, were refused.</param>
 public sealed record ImportOutcome(
     string File,
     RecordKind? Kind,
@@ -21,6 +21,15 @@ public sealed record ImportOutcome(
     long Duplicates,
     IReadOnlyList<RowProblem> Problems)
 {
+    /// <summary>Rows refused while the rest of the file was stored (accept-valid), or every row when the file was refused.</summary>
+    public long RefusedRows { get; init; }
+
+    /// <summary>Where the refused rows were written (accept-valid), when any were.</summary>
+    public string? RejectsFile { get; init; }
+
+    /// <summary>Stored rows replaced by a corrected file (with --replace); their old values are in the audit table.</summary>
+    public long Replaced { get; init; }
+
     /// <summary>Register rows that matched the stored entry exactly.</summary>
-    public long Unchanged => Status == ImportStatus.Imported && Kind == RecordKind.DeviceRegister ? RowsRead - Added - Updated - Duplicates : 0;
+    public long Unchanged => Status == ImportStatus.Imported && Kind == RecordKind.DeviceRegister ? RowsRead - Added - Updated - Duplicates - RefusedRows : 0;
 }

@@ -23,6 +23,10 @@ internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> op
 
     public DbSet<AmbientTableRowEntity> AmbientTableRows => Set<AmbientTableRowEntity>();
 
+    public DbSet<AuditChangeRow> AuditChanges => Set<AuditChangeRow>();
+
+    public DbSet<InstrumentRow> Instruments => Set<InstrumentRow>();
+
     protected override void OnModelCreating(ModelBuilder modelBuilder)
     {
         modelBuilder.Entity<SourceFileRow>(e =>
@@ -80,6 +84,19 @@ internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> op
         {
             e.ToTable("ambient_table_rows");
             e.HasIndex(x => x.TableName);
+            e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
+        });
+
+        modelBuilder.Entity<AuditChangeRow>(e =>
+        {
+            e.ToTable("audit_changes");
+            e.HasIndex(x => new { x.TableName, x.RecordId });
+        });
+        modelBuilder.Entity<InstrumentRow>(e =>
+        {
+            e.ToTable("instruments");
+            e.HasIndex(x => x.Instrument);
+            e.HasIndex(x => x.Fingerprint).IsUnique();
             e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
         });
 

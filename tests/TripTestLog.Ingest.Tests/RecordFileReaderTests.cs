@@ -7,57 +7,84 @@ public sealed class RecordFileReaderTests
 {
     private const string TripHeader = "asset_tag,tested_at,stage,pole,current_a,trip_time_s,held_s,start\n";
 
-    public static TheoryData<string, string, long, string, string> BadFiles => new()
+    private static string Corpus => Path.Combine(AppContext.BaseDirectory, "bad-input");
+
+    /// <summary>The bad-input corpus: each file in bad-input/ with the line, column and reason cases.txt expects.</summary>
+    public static TheoryData<string, long, string, string> BadFiles()
     {
-        // name, content, expected line, expected column, a phrase the reason must hold
-        { "empty", "", 1, "", "empty" },
-        { "header only", TripHeader, 1, "", "no data rows" },
-        { "no known header", "alpha,beta\n1,2\n", 1, "", "matches no record kind" },
-        { "unknown column", TripHeader.TrimEnd() + ",colour\nT-01,2024-03-18,as-found,all,18,,3600,cold,red\n", 1, "colour", "unknown column" },
-        { "unknown unit", TripHeader.Replace("trip_time_s", "trip_time_min") + "T-01,2024-03-18,as-found,all,18,,3600,cold\n", 1, "trip_time_min", "unknown unit" },
-        { "missing column", "asset_tag,tested_at,stage,current_a,trip_time_s,held_s,start\nT-01,2024-03-18,as-found,18,,3600,cold\n", 1, "pole", "required column pole" },
-        { "column twice", TripHeader.TrimEnd() + ",trip_time_ms\nT-01,2024-03-18,as-found,all,18,,3600,cold,\n", 1, "trip_time_ms", "appears twice" },
-        { "no unit", TripHeader.Replace("current_a", "current") + "T-01,2024-03-18,as-found,all,18,,3600,cold\n", 1, "current", "needs a unit suffix" },
-        { "not a number", TripHeader + "T-01,2024-03-18,as-found,all,eighteen,,3600,cold\n", 2, "current_a", "not a number" },
-        { "NaN", TripHeader + "T-01,2024-03-18,as-found,all,NaN,,3600,cold\n", 2, "current_a", "not a number" },
-        { "infinite", TripHeader + "T-01,2024-03-18,as-found,all,Infinity,,3600,cold\n", 2, "current_a", "not a number" },
-        { "negative", TripHeader + "T-01,2024-03-18,as-found,all,-18,,3600,cold\n", 2, "current_a", "above zero" },
-        { "zero current", TripHeader + "T-01,2024-03-18,as-found,all,0,,3600,cold\n", 2, "current_a", "above zero" },
-        { "absurd time", TripHeader + "T-01,2024-03-18,as-found,all,18,1e9,,cold\n", 2, "trip_time_s", "plausible range" },
-        { "future date", TripHeader + "T-01,2027-01-05,as-found,all,18,,3600,cold\n", 2, "tested_at", "future" },
-        { "bad date", TripHeader + "T-01,18/03/2024,as-found,all,18,,3600,cold\n", 2, "tested_at", "ISO 8601" },
-        { "bad stage", TripHeader + "T-01,2024-03-18,before,all,18,,3600,cold\n", 2, "stage", "as-found or as-left" },
-        { "bad pole", TripHeader + "T-01,2024-03-18,as-found,7,18,,3600,cold\n", 2, "pole", "1, 2, 3, 4, N or all" },
-        { "no time", TripHeader + "T-01,2024-03-18,as-found,all,18,,,cold\n", 2, "held_s", "no trip time and no hold time" },
-        { "both times", TripHeader + "T-01,2024-03-18,as-found,all,18,5,3600,cold\n", 2, "held_s", "did not trip" },
-        { "short row", TripHeader + "T-01,2024-03-18,as-found,all,18\n", 2, "", "5 fields but the header has 8" },
-        { "open quote", TripHeader + "T-01,2024-03-18,as-found,all,18,,3600,cold\n\"T-02,2024-03-18,as-found,all,18,,3600,cold\n", 3, "", "malformed" },
-        { "semicolons", "asset_tag;tested_at;stage;pole;current_a;trip_time_s;held_s;start\nT-01;2024-03-18;as-found;all;18,2;;3600;cold\n", 1, "", "matches no record kind" },
-    };
+        var data = new TheoryData<string, long, string, string>();
+        foreach (var line in File.ReadAllLines(Path.Combine(Corpus, "cases.txt")).Where(l => l.Length > 0 && l[0] != '#'))
+        {
+            var f = line.Split('|');
+            data.Add(f[0], long.Parse(f[1], System.Globalization.CultureInfo.InvariantCulture), f[2], f[3]);
+        }
+
+        return data;
+    }
 
     [Theory]
     [MemberData(nameof(BadFiles))]
-    public void BadInput_IsReportedWithLineColumnAndReason(string name, string content, long line, string column, string phrase)
+    public void EveryFileOfTheBadInputCorpus_IsReportedWithLineColumnAndReason(string file, long line, string column, string phrase)
     {
-        using var temp = new TempFolder();
-        var path = temp.Write(name.Replace(' ', '-') + ".csv", content);
+        var path = Path.Combine(Corpus, file);
 
         var parsed = RecordFileReader.Read(path, Records.Today);
 
         var problem = Assert.Single(parsed.Problems, p => p.Reason.Contains(phrase, StringComparison.OrdinalIgnoreCase));
         Assert.Equal((path, line, column), (problem.File, problem.Line, problem.Column));
+        Assert.DoesNotContain(line, parsed.RecordLines);
     }
 
     [Fact]
-    public void ABinaryFile_IsRefusedAsNotText()
+    public void TheCorpusIndex_CoversEveryCorpusFile()
+    {
+        var indexed = BadFiles().Select(row => (string)row[0]).ToHashSet();
+        var files = Directory.GetFiles(Corpus, "*.csv").Select(Path.GetFileName).ToHashSet();
+
+        Assert.Equal(files.Order(), indexed.Order());
+    }
+
+    [Fact]
+    public void AFileOverTheSizeLimit_IsRefusedBeforeItIsRead_SayingHowToProceed()
     {
         using var temp = new TempFolder();
-        var path = Path.Combine(temp.Path, "garbage.csv");
-        File.WriteAllBytes(path, [0x50, 0x4B, 0x03, 0x04, 0x00, 0x00, 0xFF, 0x10]);
+        var path = Path.Combine(temp.Path, "huge.csv");
+        using (var stream = File.Create(path))
+        {
+            // 200 MB, written sparse: the limit is checked before any byte is read.
+            stream.SetLength(200L * 1024 * 1024);
+        }
 
-        var problem = Assert.Single(RecordFileReader.Read(path, Records.Today).Problems);
+        var parsed = RecordFileReader.Read(path, Records.Today);
 
-        Assert.Contains("not a text file", problem.Reason);
+        var problem = Assert.Single(parsed.Problems);
+        Assert.Contains("200 MB, over the 100 MB limit", problem.Reason);
+        Assert.Contains("--max-file-mb", problem.Reason);
+        Assert.True(parsed.IsUnreadable);
+    }
+
+    [Fact]
+    public void ASemicolonFileWithDecimalCommas_IsReadWhenItsHeaderIsUnambiguous()
+    {
+        using var temp = new TempFolder();
+        var path = temp.Write("semi.csv", "asset_tag;tested_at;stage;pole;current_a;trip_time_s;held_s;start\nT-01;2024-03-18;as-found;all;40,8;22,5;;cold\n");
+
+        var parsed = RecordFileReader.Read(path, Records.Today);
+
+        Assert.Empty(parsed.Problems);
+        Assert.Equal((40.8, 22.5), (parsed.Trips[0].Record.Current.Value, parsed.Trips[0].Record.Outcome.Time.Value));
+    }
+
+    [Fact]
+    public void ADeclaredSeparatorAndDecimalMark_AreUsed()
+    {
+        using var temp = new TempFolder();
+        var path = temp.Write("tab.csv", "asset_tag|tested_at|stage|pole|current_a|trip_time_s|held_s|start\nT-01|2024-03-18|as-found|all|40,8|22,5||cold\n");
+
+        var parsed = RecordFileReader.Read(path, Records.Today, new ReadOptions { Separator = '|', Decimal = ',' });
+
+        Assert.Empty(parsed.Problems);
+        Assert.Equal(40.8, parsed.Trips[0].Record.Current.Value, 9);
     }
 
     [Fact]

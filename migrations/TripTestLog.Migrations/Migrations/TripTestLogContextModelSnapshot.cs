@@ -53,6 +53,57 @@ namespace TripTestLog.Migrations.Migrations
                     b.ToTable("ambient_table_rows", (string)null);
                 });
 
+            modelBuilder.Entity("TripTestLog.Storage.Entities.AuditChangeRow", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER")
+                        .HasColumnName("id");
+
+                    b.Property<string>("ChangedAt")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("changed_at");
+
+                    b.Property<string>("ColumnName")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("column_name");
+
+                    b.Property<long>("NewSourceFileId")
+                        .HasColumnType("INTEGER")
+                        .HasColumnName("new_source_file_id");
+
+                    b.Property<string>("NewValue")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("new_value");
+
+                    b.Property<long>("OldSourceFileId")
+                        .HasColumnType("INTEGER")
+                        .HasColumnName("old_source_file_id");
+
+                    b.Property<string>("OldValue")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("old_value");
+
+                    b.Property<long>("RecordId")
+                        .HasColumnType("INTEGER")
+                        .HasColumnName("record_id");
+
+                    b.Property<string>("TableName")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("table_name");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("TableName", "RecordId");
+
+                    b.ToTable("audit_changes", (string)null);
+                });
+
             modelBuilder.Entity("TripTestLog.Storage.Entities.ContactTestRow", b =>
                 {
                     b.Property<long>("Id")
@@ -386,6 +437,63 @@ namespace TripTestLog.Migrations.Migrations
                     b.ToTable("devices", (string)null);
                 });
 
+            modelBuilder.Entity("TripTestLog.Storage.Entities.InstrumentRow", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER")
+                        .HasColumnName("id");
+
+                    b.Property<string>("CalibratedOn")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("calibrated_on");
+
+                    b.Property<string>("CalibrationDue")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("calibration_due");
+
+                    b.Property<string>("Fingerprint")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("fingerprint");
+
+                    b.Property<string>("Instrument")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("instrument");
+
+                    b.Property<string>("Kind")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("kind");
+
+                    b.Property<string>("Serial")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("serial");
+
+                    b.Property<long>("SourceFileId")
+                        .HasColumnType("INTEGER")
+                        .HasColumnName("source_file_id");
+
+                    b.Property<long>("SourceLine")
+                        .HasColumnType("INTEGER")
+                        .HasColumnName("source_line");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("Fingerprint")
+                        .IsUnique();
+
+                    b.HasIndex("Instrument");
+
+                    b.HasIndex("SourceFileId");
+
+                    b.ToTable("instruments", (string)null);
+                });
+
             modelBuilder.Entity("TripTestLog.Storage.Entities.InsulationTestRow", b =>
                 {
                     b.Property<long>("Id")
@@ -664,6 +772,15 @@ namespace TripTestLog.Migrations.Migrations
                 });
 
             modelBuilder.Entity("TripTestLog.Storage.Entities.DeviceRow", b =>
+                {
+                    b.HasOne("TripTestLog.Storage.Entities.SourceFileRow", null)
+                        .WithMany()
+                        .HasForeignKey("SourceFileId")
+                        .OnDelete(DeleteBehavior.Restrict)
+                        .IsRequired();
+                });
+
+            modelBuilder.Entity("TripTestLog.Storage.Entities.InstrumentRow", b =>
                 {
                     b.HasOne("TripTestLog.Storage.Entities.SourceFileRow", null)
                         .WithMany()

@@ -15,16 +15,17 @@ internal static class CheckCommand
         var db = CommonOptions.Database();
         var asset = new Option<string?>("--asset") { Description = "Only this device's tests", HelpName = "TAG" };
         var json = new Option<bool>("--json") { Description = "Write a JSON array, one object per trip test (fields in the README)" };
-        var failOnFindings = new Option<bool>("--fail-on-findings") { Description = "Exit with 1 when any test is too early or too late" };
+        var failOnFindings = new Option<bool>("--fail-on-findings") { Description = "Exit with 1 when any test is too early or too late, or its instrument was not traceable" };
+        var registered = new Option<bool>("--require-registered-instruments") { Description = "Report tests made with an instrument missing from the instrument register" };
         var command = new Command("check", "Judge every trip test against the band its standard allows: pass, too-early, too-late or not-assessable")
         {
-            db, asset, json, failOnFindings,
+            db, asset, json, failOnFindings, registered,
         };
-        command.SetAction(parse => Run(cli, parse.GetValue(db)!, parse.GetValue(asset), parse.GetValue(json), parse.GetValue(failOnFindings)));
+        command.SetAction(parse => Run(cli, parse.GetValue(db)!, parse.GetValue(asset), parse.GetValue(json), parse.GetValue(failOnFindings), parse.GetValue(registered)));
         return command;
     }
 
-    private static int Run(CliContext cli, FileInfo db, string? asset, bool json, bool failOnFindings)
+    private static int Run(CliContext cli, FileInfo db, string? asset, bool json, bool failOnFindings, bool requireRegistered)
     {
         if (!db.Exists)
         {
@@ -45,7 +46,7 @@ internal static class CheckCommand
         }
 
         using var store = RecordStore.Open(db.FullName);
-        var results = CheckRunner.Run(store, only);
+        var results = CheckRunner.Run(store, only, requireRegistered);
         if (json)
         {
             VerdictJson.Write(cli.Out, results);
@@ -55,7 +56,7 @@ internal static class CheckCommand
             VerdictTable.Write(cli.Out, results);
         }
 
-        var findings = results.Any(r => r.Assessment.Verdict is Verdict.TooEarly or Verdict.TooLate);
+        var findings = results.Any(r => r.Assessment.Verdict is Verdict.TooEarly or Verdict.TooLate || r.InstrumentFinding is not null);
         return failOnFindings && findings ? ExitCodes.Findings : ExitCodes.Ok;
     }
 }

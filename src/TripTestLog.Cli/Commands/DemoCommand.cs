@@ -46,13 +46,18 @@ internal static class DemoCommand
             File.Delete(stale);
         }
 
-        var (files, _) = ImportRunner.Expand([folder]);
+        var (files, problems) = ImportRunner.Expand([folder], Ingest.ReadOptions.Default);
+        foreach (var problem in problems)
+        {
+            cli.Error.WriteLine("warning: " + problem);
+        }
+
         IReadOnlyList<ImportOutcome> outcomes;
         IReadOnlyList<CheckedTrip> results;
         using (var log = Logging.BesideDatabase(db))
         using (var store = RecordStore.Open(db.FullName))
         {
-            outcomes = new ImportRunner(store, log, cli).Run(files);
+            outcomes = new ImportRunner(store, log, cli).Run(files, ImportOptions.Strict);
             results = CheckRunner.Run(store, null);
         }
 

@@ -1,6 +1,7 @@
 using System.CommandLine;
 using TripTestLog.Cli.Output;
 using TripTestLog.Cli.Services;
+using TripTestLog.Ingest;
 using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Commands;
@@ -16,22 +17,54 @@ internal static class ImportCommand
             Arity = ArgumentArity.OneOrMore,
         };
         var db = CommonOptions.Database();
-        var command = new Command("import", "Import record files; a file with any bad row is refused whole and the summary says where and why")
+        var acceptValid = new Option<bool>("--accept-valid")
         {
-            paths, db,
+            Description = "Store the good rows of a file with bad rows; the bad rows go, unchanged and with their reasons, to NAME.rejects.csv beside it",
         };
-        command.SetAction(parse => Run(cli, parse.GetValue(paths)!, parse.GetValue(db)!));
+        var replace = new Option<bool>("--replace")
+        {
+            Description = "Apply corrected files: rows that differ from the same lines of an earlier import from the same path replace the stored values (old values are kept in the audit table)",
+        };
+        var profile = new Option<FileInfo?>("--profile") { Description = "A column-mapping profile (JSON) for another layout; applies to every file given", HelpName = "FILE" };
+        var delimiter = new Option<string?>("--delimiter") { Description = "Field separator, e.g. ';' (default: recognised from the header)", HelpName = "CHAR" };
+        var decimalMark = new Option<string?>("--decimal") { Description = "Decimal mark: '.' or ',' (default: '.' for comma files, ',' accepted in semicolon files)", HelpName = "CHAR" };
+        var maxMb = new Option<int>("--max-file-mb") { Description = "Refuse files larger than this", DefaultValueFactory = _ => 100, HelpName = "MB" };
+        var command = new Command("import", "Import record files; a file with any bad row is refused whole (unless --accept-valid) and the summary says where and why")
+        {
+            paths, db, acceptValid, replace, profile, delimiter, decimalMark, maxMb,
+        };
+        command.SetAction(parse => Run(cli, parse.GetValue(paths)!, parse.GetValue(db)!, new ImportOptions(parse.GetValue(acceptValid), parse.GetValue(replace)),
+            parse.GetValue(profile), parse.GetValue(delimiter), parse.GetValue(decimalMark), parse.GetValue(maxMb)));
         return command;
     }
 
-    private static int Run(CliContext cli, string[] paths, FileInfo db)
+    private static int Run(CliContext cli, string[] paths, FileInfo db, ImportOptions options, FileInfo? profileFile, string? delimiter, string? decimalMark, int maxMb)
     {
-        var (files, missing) = ImportRunner.Expand(paths);
-        if (missing.Count > 0)
+        if (delimiter is { Length: not 1 } || decimalMark is not (null or "." or ",") || maxMb is < 1 or > 100_000)
         {
-            foreach (var path in missing)
+            cli.Error.WriteLine("error: --delimiter takes one character, --decimal '.' or ',', --max-file-mb 1 to 100000");
+            return ExitCodes.BadInput;
+        }
+
+        var read = new ReadOptions { Separator = delimiter?[0], Decimal = decimalMark?[0], MaxBytes = maxMb * 1024L * 1024L };
+        if (profileFile is not null)
+        {
+            var (profile, problem) = profileFile.Exists ? ColumnProfile.Load(profileFile.FullName) : (null, $"{profileFile.FullName}: no such file");
+            if (profile is null)
             {
-                cli.Error.WriteLine($"error: {path}: no such file or folder");
+                cli.Error.WriteLine("error: --profile: " + problem);
+                return ExitCodes.BadInput;
+            }
+
+            read = read with { Profile = profile };
+        }
+
+        var (files, problems) = ImportRunner.Expand(paths, read);
+        if (problems.Count > 0)
+        {
+            foreach (var problem in problems)
+            {
+                cli.Error.WriteLine("error: " + problem);
             }
 
             return ExitCodes.BadInput;
@@ -45,9 +78,11 @@ internal static class ImportCommand
 
         using var log = Logging.BesideDatabase(db);
         using var store = RecordStore.Open(db.FullName);
-        var outcomes = new ImportRunner(store, log, cli).Run(files);
+        var outcomes = new ImportRunner(store, log, cli).Run(files, options);
         ImportReport.Write(cli.Out, outcomes, LogPath(db));
-        return outcomes.Any(o => o.Status == ImportStatus.Refused) ? ExitCodes.BadInput : ExitCodes.Ok;
+        return outcomes.Any(o => o.Status == ImportStatus.Refused) ? ExitCodes.BadInput
+            : outcomes.Any(o => o.RefusedRows > 0) ? ExitCodes.Findings
+            : ExitCodes.Ok;
     }
 
     public static string LogPath(FileInfo db) => Path.Combine(db.Directory?.FullName ?? ".", "triptestlog.log");

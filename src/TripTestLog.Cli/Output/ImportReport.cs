@@ -11,7 +11,7 @@ internal static class ImportReport
 
     public static void Write(TextWriter writer, IReadOnlyList<ImportOutcome> outcomes, string logPath)
     {
-        var table = new TextTable("File", "Kind", "Result", "Rows>", "Added>", "Updated>", "Duplicates>", "Refused>");
+        var table = new TextTable("File", "Kind", "Result", "Rows>", "Added>", "Updated>", "Unchanged>", "Duplicates>", "Replaced>", "Refused>");
         foreach (var o in outcomes)
         {
             table.Add(
@@ -21,8 +21,10 @@ internal static class ImportReport
                 o.RowsRead.ToString(),
                 o.Added.ToString(),
                 o.Updated.ToString(),
+                o.Unchanged.ToString(),
                 o.Duplicates.ToString(),
-                o.Status == ImportStatus.Refused ? o.RowsRead.ToString() : "0");
+                o.Replaced.ToString(),
+                o.RefusedRows.ToString());
         }
 
         table.WriteTo(writer);
@@ -32,20 +34,34 @@ internal static class ImportReport
         writer.WriteLine();
         writer.WriteLine($"{outcomes.Count} files: {imported} imported, {again} already imported, {refused.Count} refused; "
             + $"{outcomes.Where(o => o.Status == ImportStatus.Imported).Sum(o => o.Added)} records added.");
+        writer.WriteLine("Every row is accounted for: rows = added + updated + unchanged + duplicates + replaced + refused.");
+
+        foreach (var o in outcomes.Where(o => o.Status == ImportStatus.Imported && o.RefusedRows > 0))
+        {
+            writer.WriteLine();
+            writer.WriteLine($"{o.File}: {o.RefusedRows} rows refused, the rest stored."
+                + (o.RejectsFile is { } rejects ? $" The refused rows, with their reasons, are in {rejects}:" : ""));
+            WriteProblems(writer, o, logPath);
+        }
 
         foreach (var o in refused)
         {
             writer.WriteLine();
             writer.WriteLine($"{o.File} was refused: nothing from it was stored. Fix these and import it again:");
-            foreach (var p in o.Problems.Take(ProblemsShownPerFile))
-            {
-                writer.WriteLine("  " + p);
-            }
+            WriteProblems(writer, o, logPath);
+        }
+    }
 
-            if (o.Problems.Count > ProblemsShownPerFile)
-            {
-                writer.WriteLine($"  ... and {o.Problems.Count - ProblemsShownPerFile} more (all are in {logPath})");
-            }
+    private static void WriteProblems(TextWriter writer, ImportOutcome o, string logPath)
+    {
+        foreach (var p in o.Problems.Take(ProblemsShownPerFile))
+        {
+            writer.WriteLine("  " + p);
+        }
+
+        if (o.Problems.Count > ProblemsShownPerFile)
+        {
+            writer.WriteLine($"  ... and {o.Problems.Count - ProblemsShownPerFile} more (all are in {logPath})");
         }
     }
 
@@ -54,6 +70,9 @@ internal static class ImportReport
         RecordKind.DeviceRegister => "register",
         RecordKind.TripTests => "trip tests",
         RecordKind.ContactResistance => "contact",
-        _ => "insulation",
+        RecordKind.InsulationResistance => "insulation",
+        RecordKind.CurveTable => "curve table",
+        RecordKind.AmbientTable => "ambient table",
+        _ => "instruments",
     };
 }

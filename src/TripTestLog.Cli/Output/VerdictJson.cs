@@ -57,7 +57,8 @@ internal static class VerdictJson
             Domain.Devices.FamilyCodes.Of(r.Device.Family),
             r.Device.Settings.Summary,
             a.Notes,
-            band.HasRequirement && band.Minimum.Limit is null);
+            band.HasRequirement && band.Minimum.Limit is null,
+            r.InstrumentFinding);
     }
 
     private sealed record VerdictRow(
@@ -90,5 +91,6 @@ internal static class VerdictJson
         string Family,
         string Settings,
         IReadOnlyList<string> Notes,
-        bool MustNotTrip);
+        bool MustNotTrip,
+        string? InstrumentFinding);
 }

@@ -35,9 +35,27 @@ internal static class VerdictTable
 
         WriteReasons(writer, "Outside the band (act on these):", results.Where(r => r.Assessment.Verdict is Verdict.TooEarly or Verdict.TooLate));
         WriteReasons(writer, "Not assessable (repeat or complete the test):", results.Where(r => r.Assessment.Verdict == Verdict.NotAssessable));
+        WriteInstrumentFindings(writer, results.Where(r => r.InstrumentFinding is not null));
         WriteNotes(writer, results.Where(r => r.Assessment.Notes.Count > 0));
         writer.WriteLine();
         writer.WriteLine(Safety.Caution);
+    }
+
+    private static void WriteInstrumentFindings(TextWriter writer, IEnumerable<CheckedTrip> results)
+    {
+        var list = results.ToList();
+        if (list.Count == 0)
+        {
+            return;
+        }
+
+        writer.WriteLine();
+        writer.WriteLine("Instrument traceability (the verdict stands, but the measurement is not traceable):");
+        foreach (var r in list)
+        {
+            var m = r.Trip.Measurement;
+            writer.WriteLine($"  {m.Tag} {m.TestedAt} at {m.Current}: {r.InstrumentFinding} [{Path.GetFileName(r.Trip.SourceFile)}:{r.Trip.SourceLine}]");
+        }
     }
 
     private static void WriteNotes(TextWriter writer, IEnumerable<CheckedTrip> results)

@@ -11,20 +11,24 @@ namespace TripTestLog.Cli.Services;
 /// <param name="Device">The register entry in force on the test date.</param>
 /// <param name="Envelope">The envelope it was judged against.</param>
 /// <param name="Assessment">The verdict.</param>
-internal sealed record CheckedTrip(StoredTrip Trip, Device Device, ITripEnvelope Envelope, TripAssessment Assessment);
+/// <param name="InstrumentFinding">Why the test's instrument was not traceable on the test date, or null.</param>
+internal sealed record CheckedTrip(StoredTrip Trip, Device Device, ITripEnvelope Envelope, TripAssessment Assessment, string? InstrumentFinding);
 
 /// <summary>Judges every stored trip test with the settings in force on its date.</summary>
 internal static class CheckRunner
 {
-    public static IReadOnlyList<CheckedTrip> Run(RecordStore store, AssetTag? only)
+    /// <summary>Every stored trip test judged; <paramref name="requireRegisteredInstruments"/> makes an unregistered instrument a finding.</summary>
+    public static IReadOnlyList<CheckedTrip> Run(RecordStore store, AssetTag? only, bool requireRegisteredInstruments = false)
     {
         var histories = store.Histories();
         var assessor = new TripAssessor(store.CurveTables(), store.AmbientTables());
+        var instruments = store.Instruments();
         return store.Trips(only)
             .Select(trip =>
             {
                 var result = assessor.Assess(histories[trip.Tag.Value], trip.Measurement);
-                return new CheckedTrip(trip, result.Device, result.Envelope, result.Assessment);
+                var finding = instruments.Check(trip.Measurement.Instrument, trip.Measurement.TestedAt.Date, requireRegisteredInstruments);
+                return new CheckedTrip(trip, result.Device, result.Envelope, result.Assessment, finding);
             })
             .ToList();
     }

@@ -5,55 +5,73 @@ using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Services;
 
+/// <summary>A file to import and the way to read it.</summary>
+/// <param name="Path">The file.</param>
+/// <param name="Read">Separator, decimal mark, size limit, profile.</param>
+internal sealed record ImportFile(string Path, ReadOptions Read);
+
 /// <summary>
 /// Imports files and folders: finds the CSV files, reads each, and stores it in its own transaction.
 /// Registers go first so that measurement files in the same run find their devices.
 /// </summary>
 internal sealed class ImportRunner(RecordStore store, ILogger log, CliContext cli)
 {
-    /// <summary>Expands folders to the *.csv files inside them (recursively), sorted for a repeatable order.</summary>
-    public static (List<string> Files, List<string> Missing) Expand(IEnumerable<string> paths)
+    /// <summary>
+    /// Expands folders to the *.csv files inside them (recursively, sorted, rejects files skipped). A *.profile.json in a
+    /// folder applies to the files its patterns name; <paramref name="baseOptions"/>' own profile, when given, applies to all.
+    /// </summary>
+    public static (List<ImportFile> Files, List<string> Problems) Expand(IEnumerable<string> paths, ReadOptions baseOptions)
     {
-        var files = new List<string>();
-        var missing = new List<string>();
+        var files = new List<ImportFile>();
+        var problems = new List<string>();
         foreach (var path in paths)
         {
             if (File.Exists(path))
             {
-                files.Add(path);
+                files.Add(new ImportFile(path, baseOptions.Profile is null ? baseOptions with { Profile = ProfileFor(path, problems) } : baseOptions));
             }
             else if (Directory.Exists(path))
             {
-                files.AddRange(Directory.EnumerateFiles(path, "*.csv", SearchOption.AllDirectories).Order(StringComparer.Ordinal));
+                foreach (var file in Directory.EnumerateFiles(path, "*.csv", SearchOption.AllDirectories)
+                             .Where(f => !f.EndsWith(RejectsFile.Suffix, StringComparison.OrdinalIgnoreCase))
+                             .Order(StringComparer.Ordinal))
+                {
+                    files.Add(new ImportFile(file, baseOptions.Profile is null ? baseOptions with { Profile = ProfileFor(file, problems) } : baseOptions));
+                }
             }
             else
             {
-                missing.Add(path);
+                problems.Add($"{path}: no such file or folder");
             }
         }
 
-        return (files.Distinct().ToList(), missing);
+        return (files.DistinctBy(f => Path.GetFullPath(f.Path)).ToList(), problems.Distinct().ToList());
     }
 
     /// <summary>Reads and stores every file, reporting progress; returns one outcome per file, in the order stored.</summary>
-    public IReadOnlyList<ImportOutcome> Run(IReadOnlyList<string> files)
+    public IReadOnlyList<ImportOutcome> Run(IReadOnlyList<ImportFile> files, ImportOptions options)
     {
         using var progress = Progress.For(cli, files.Count);
 
         // Parse everything first: cheap, and it lets the register go in before the tests that need it.
-        var parsed = new List<ParsedFile>(files.Count);
+        var parsed = new List<(ParsedFile File, ReadOptions Read)>(files.Count);
         foreach (var file in files)
         {
-            progress.Step("reading " + Path.GetFileName(file));
-            parsed.Add(RecordFileReader.Read(file, cli.Today));
+            progress.Step("reading " + Path.GetFileName(file.Path));
+            parsed.Add((RecordFileReader.Read(file.Path, cli.Today, file.Read), file.Read));
         }
 
         var outcomes = new List<ImportOutcome>(files.Count);
         progress.Restart(files.Count);
-        foreach (var file in parsed.OrderBy(p => p.Kind == RecordKind.DeviceRegister ? 0 : 1))
+        foreach (var (file, read) in parsed.OrderBy(p => Order(p.File.Kind)))
         {
             progress.Step("storing " + Path.GetFileName(file.Path));
-            var outcome = store.Import(file, cli.Clock.GetUtcNow());
+            var outcome = store.Import(file, cli.Clock.GetUtcNow(), options);
+            if (options.AcceptValid && outcome.Status == ImportStatus.Imported && outcome.RefusedRows > 0)
+            {
+                outcome = outcome with { RejectsFile = RejectsFile.Write(file.Path, read, outcome.Problems) };
+            }
+
             Log(outcome, file.Sha256);
             outcomes.Add(outcome);
         }
@@ -61,10 +79,39 @@ internal sealed class ImportRunner(RecordStore store, ILogger log, CliContext cl
         return outcomes;
     }
 
+    // Registers and tables first: measurement files need their devices, and checks need the tables.
+    private static int Order(RecordKind? kind) => kind switch
+    {
+        RecordKind.DeviceRegister => 0,
+        RecordKind.InstrumentRegister or RecordKind.CurveTable or RecordKind.AmbientTable => 1,
+        _ => 2,
+    };
+
+    private static ColumnProfile? ProfileFor(string file, List<string> problems)
+    {
+        var folder = Path.GetDirectoryName(Path.GetFullPath(file))!;
+        foreach (var candidate in Directory.EnumerateFiles(folder, "*.profile.json").Order(StringComparer.Ordinal))
+        {
+            var (profile, problem) = ColumnProfile.Load(candidate);
+            if (problem is not null)
+            {
+                problems.Add(problem);
+                continue;
+            }
+
+            if (profile!.AppliesTo(Path.GetFileName(file)))
+            {
+                return profile;
+            }
+        }
+
+        return null;
+    }
+
     private void Log(ImportOutcome o, string sha)
     {
-        log.Information("Import {File} sha256 {Sha} kind {Kind}: {Status}, {Rows} rows, {Added} added, {Updated} updated, {Duplicates} duplicates",
-            o.File, sha, o.Kind, o.Status, o.RowsRead, o.Added, o.Updated, o.Duplicates);
+        log.Information("Import {File} sha256 {Sha} kind {Kind}: {Status}, {Rows} rows, {Added} added, {Updated} updated, {Duplicates} duplicates, {Refused} refused, {Replaced} replaced",
+            o.File, sha, o.Kind, o.Status, o.RowsRead, o.Added, o.Updated, o.Duplicates, o.RefusedRows, o.Replaced);
         foreach (var problem in o.Problems)
         {
             log.Warning("Refused {Problem}", problem.ToString());

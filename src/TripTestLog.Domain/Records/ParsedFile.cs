@@ -1,5 +1,6 @@
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Envelopes;
+using TripTestLog.Domain.Instruments;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Settings;
 
@@ -44,6 +45,20 @@ public sealed record ParsedFile
     /// <summary>Ambient table rows.</summary>
     public IReadOnlyList<Located<AmbientTableRow>> AmbientTableRows { get; init; } = [];
 
+    /// <summary>Instrument register rows.</summary>
+    public IReadOnlyList<Located<InstrumentCalibration>> Instruments { get; init; } = [];
+
     /// <summary>The number of rows that parsed into records.</summary>
-    public int RecordCount => Devices.Count + Trips.Count + Contacts.Count + Insulations.Count + CurveTableRows.Count + AmbientTableRows.Count;
+    public int RecordCount => Devices.Count + Trips.Count + Contacts.Count + Insulations.Count + CurveTableRows.Count + AmbientTableRows.Count + Instruments.Count;
+
+    /// <summary>The lines of the rows that parsed into records.</summary>
+    public IEnumerable<long> RecordLines =>
+        Devices.Select(r => r.Line).Concat(Trips.Select(r => r.Line)).Concat(Contacts.Select(r => r.Line)).Concat(Insulations.Select(r => r.Line))
+            .Concat(CurveTableRows.Select(r => r.Line)).Concat(AmbientTableRows.Select(r => r.Line)).Concat(Instruments.Select(r => r.Line));
+
+    /// <summary>
+    /// True when the file as a whole could not be read (empty, not text, unknown header, malformed CSV, too large): then
+    /// it is refused even where good rows would otherwise be accepted, because not every row could be accounted for.
+    /// </summary>
+    public bool IsUnreadable { get; init; }
 }

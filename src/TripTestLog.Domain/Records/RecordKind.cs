@@ -20,4 +20,7 @@ public enum RecordKind
 
     /// <summary>A maker's ambient derating table: rows of ambient temperature and current factor.</summary>
     AmbientTable,
+
+    /// <summary>The instrument register: test sets and their calibration periods.</summary>
+    InstrumentRegister,
 }

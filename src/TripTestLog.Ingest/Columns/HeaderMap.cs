@@ -15,6 +15,9 @@ internal sealed class HeaderMap
         _columns = columns;
     }
 
+    /// <summary>The column a rejects file adds; ignored on import.</summary>
+    public const string RejectsColumn = "reject_reasons";
+
     public RecordSchema Schema { get; }
 
     public bool TryGet(string name, out MappedColumn column) => _columns.TryGetValue(name, out column!);
@@ -30,8 +33,8 @@ internal sealed class HeaderMap
         {
             return (null, [("", "the header matches no record kind: a device register needs family and rated_current_a, "
                 + "trip tests trip_time_s or held_s, contact resistance test_current_a, insulation resistance path and test_voltage_v, "
-                + "a curve table table and multiple, an ambient table table and current_factor "
-                + "(files are comma-separated UTF-8 with a header row)")]);
+                + "a curve table table and multiple, an ambient table table and current_factor, an instrument register calibrated_on and calibration_due "
+                + "(files are comma-separated UTF-8 with a header row, or semicolon-separated with decimal commas; another layout needs a profile)")]);
         }
 
         var problems = new List<(string, string)>();
@@ -42,6 +45,12 @@ internal sealed class HeaderMap
             if (header.Length == 0)
             {
                 problems.Add(($"#{i + 1}", "the header has an empty column name"));
+                continue;
+            }
+
+            // A rejects file's reasons column is skipped, so fixed rejects import as they are.
+            if (header == RejectsColumn)
+            {
                 continue;
             }
 
@@ -82,6 +91,7 @@ internal sealed class HeaderMap
         RecordKind.InsulationResistance => "insulation resistance",
         RecordKind.CurveTable => "curve table",
         RecordKind.AmbientTable => "ambient table",
+        RecordKind.InstrumentRegister => "instrument register",
         _ => kind.ToString(),
     };
 

@@ -60,7 +60,12 @@ internal sealed record RecordSchema(RecordKind Kind, IReadOnlyList<ColumnSpec> C
         [Req("table"), Req("ambient", Quantity.Temperature), Req("current_factor")],
         ["table", "current_factor"]);
 
-    public static IReadOnlyList<RecordSchema> All { get; } = [Register, Trip, Contact, Insulation, CurveTable, AmbientTable];
+    public static RecordSchema Instruments { get; } = new(
+        RecordKind.InstrumentRegister,
+        [Req("instrument"), Req("kind"), Req("serial"), Req("calibrated_on"), Req("calibration_due")],
+        ["calibrated_on", "calibration_due"]);
+
+    public static IReadOnlyList<RecordSchema> All { get; } = [Register, Trip, Contact, Insulation, CurveTable, AmbientTable, Instruments];
 
     public ColumnSpec? Find(string name) => Columns.FirstOrDefault(c => c.Name == name);
 }

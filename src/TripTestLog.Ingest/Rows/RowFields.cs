@@ -16,14 +16,18 @@ internal sealed class RowFields
     private readonly IReadOnlyList<string> _values;
     private readonly string _file;
     private readonly DateOnly _today;
+    private readonly bool _decimalComma;
+    private readonly IReadOnlyList<string> _dateFormats;
 
-    public RowFields(HeaderMap map, IReadOnlyList<string> values, string file, long line, DateOnly today)
+    public RowFields(HeaderMap map, IReadOnlyList<string> values, string file, long line, DateOnly today, bool decimalComma = false, IReadOnlyList<string>? dateFormats = null)
     {
         _map = map;
         _values = values;
         _file = file;
         Line = line;
         _today = today;
+        _decimalComma = decimalComma;
+        _dateFormats = dateFormats ?? [];
     }
 
     public long Line { get; }
@@ -72,6 +76,23 @@ internal sealed class RowFields
     /// <summary>Parses <paramref name="text"/> as a value of <paramref name="column"/>, with its unit factor and range check.</summary>
     public double? NumberFrom(string text, string column, double min, double max, bool allowZero = false)
     {
+        if (text.Contains(',', StringComparison.Ordinal))
+        {
+            if (!_decimalComma)
+            {
+                Fail(column, $"'{text}' has a comma; write the decimal mark as a point, e.g. 12.5 (semicolon-separated files may use decimal commas)");
+                return null;
+            }
+
+            if (text.Contains('.', StringComparison.Ordinal))
+            {
+                Fail(column, $"'{text}' has both a point and a comma, so the decimal mark is ambiguous; write it without a thousands separator, e.g. 1234,5");
+                return null;
+            }
+
+            text = text.Replace(',', '.');
+        }
+
         // Only plain decimal numbers: "NaN", "Infinity", hex and thousands separators are refused.
         if (!double.TryParse(text, NumberStyles.AllowLeadingSign | NumberStyles.AllowDecimalPoint | NumberStyles.AllowExponent,
                 CultureInfo.InvariantCulture, out var raw) || !double.IsFinite(raw))
@@ -129,9 +150,11 @@ internal sealed class RowFields
             return null;
         }
 
-        if (!TestedAt.TryParse(text, out var when))
+        if (!TryParseWhen(text, out var when))
         {
-            Fail(column, $"'{text}' is not an ISO 8601 date or date-time; write e.g. 2024-03-18 or 2024-03-18T09:30");
+            Fail(column, _dateFormats.Count == 0
+                ? $"'{text}' is not an ISO 8601 date or date-time; write e.g. 2024-03-18 or 2024-03-18T09:30"
+                : $"'{text}' matches neither the profile's date format ({string.Join(" or ", _dateFormats)}) nor ISO 8601");
             return null;
         }
 
@@ -150,7 +173,23 @@ internal sealed class RowFields
         return when;
     }
 
-    public DateOnly? Date(string column)
+    private bool TryParseWhen(string text, out TestedAt when)
+    {
+        foreach (var format in _dateFormats)
+        {
+            if (DateTime.TryParseExact(text, format, CultureInfo.InvariantCulture, DateTimeStyles.None, out var parsed))
+            {
+                when = format.Contains('H', StringComparison.Ordinal) || format.Contains('h', StringComparison.Ordinal)
+                    ? TestedAt.At(parsed)
+                    : TestedAt.OnDate(DateOnly.FromDateTime(parsed));
+                return true;
+            }
+        }
+
+        return TestedAt.TryParse(text, out when);
+    }
+
+    public DateOnly? Date(string column, bool allowFuture = false)
     {
         var text = Text(column);
         if (text.Length == 0)
@@ -164,7 +203,7 @@ internal sealed class RowFields
             return null;
         }
 
-        if (date > _today)
+        if (date > _today && !allowFuture)
         {
             Fail(column, $"'{text}' is in the future (today is {_today:yyyy-MM-dd})");
             return null;

@@ -1,4 +1,5 @@
 using TripTestLog.Domain.Envelopes;
+using TripTestLog.Domain.Instruments;
 using TripTestLog.Domain.Quantities;
 using TripTestLog.Domain.Records;
 using TripTestLog.Domain.Settings;
@@ -25,6 +26,29 @@ internal static class TableRowParser
         }
 
         return new CurveTableRow(table, new CurveTablePoint(CurrentMultiple.Of(multiple.Value), Seconds.Of(min.Value), max is { } m ? Seconds.Of(m) : null));
+    }
+
+    public static InstrumentCalibration? Instrument(RowFields f)
+    {
+        var name = f.RequiredText("instrument", "the instrument name");
+        var kind = f.RequiredText("kind", "the kind of instrument");
+        var serial = f.RequiredText("serial", "the serial number");
+        var on = f.Has("calibrated_on") ? f.Date("calibrated_on") : Missing(f, "calibrated_on");
+        var due = f.Has("calibration_due") ? f.Date("calibration_due", allowFuture: true) : Missing(f, "calibration_due");
+        if (on is { } a && due is { } b && b < a)
+        {
+            f.Fail("calibration_due", $"the calibration falls due ({b:yyyy-MM-dd}) before it was made ({a:yyyy-MM-dd})");
+        }
+
+        return f.Ok && name is not null && kind is not null && serial is not null && on is { } x && due is { } y
+            ? new InstrumentCalibration(name, kind, serial, x, y)
+            : null;
+    }
+
+    private static DateOnly? Missing(RowFields f, string column)
+    {
+        f.Fail(column, "a date is required here (yyyy-MM-dd)");
+        return null;
     }
 
     public static AmbientTableRow? Ambient(RowFields f)

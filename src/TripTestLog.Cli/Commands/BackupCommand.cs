@@ -1,0 +1,42 @@
+using System.CommandLine;
+using TripTestLog.Storage;
+
+namespace TripTestLog.Cli.Commands;
+
+/// <summary>`backup PATH`: a consistent copy of a live database.</summary>
+internal static class BackupCommand
+{
+    public static Command Create(CliContext cli)
+    {
+        var target = new Argument<FileInfo>("PATH") { Description = "The new file to write the copy to (must not exist)" };
+        var db = CommonOptions.Database();
+        var command = new Command("backup", "Write a consistent copy of the database, safe while other imports run (SQLite online backup)")
+        {
+            target, db,
+        };
+        command.SetAction(parse => Run(cli, parse.GetValue(target)!, parse.GetValue(db)!));
+        return command;
+    }
+
+    private static int Run(CliContext cli, FileInfo target, FileInfo db)
+    {
+        if (!db.Exists)
+        {
+            cli.Error.WriteLine($"error: no database at {db.FullName}");
+            return ExitCodes.BadInput;
+        }
+
+        if (target.Exists)
+        {
+            cli.Error.WriteLine($"error: {target.FullName} exists; choose a new file for the backup");
+            return ExitCodes.BadInput;
+        }
+
+        using var store = RecordStore.Open(db.FullName);
+        store.Backup(target.FullName);
+        var counts = store.Counts();
+        cli.Out.WriteLine($"Backed up {db.FullName} to {target.FullName}: {counts.Files} files, {counts.Devices} devices, "
+            + $"{counts.TripTests} trip tests, {counts.ContactTests} contact and {counts.InsulationTests} insulation readings.");
+        return ExitCodes.Ok;
+    }
+}

@@ -1,0 +1,53 @@
+using System.CommandLine;
+using TripTestLog.Cli.Output;
+using TripTestLog.Storage;
+
+namespace TripTestLog.Cli.Commands;
+
+/// <summary>`verify`: SQLite's integrity check plus the project's own traceability checks.</summary>
+internal static class VerifyCommand
+{
+    public static Command Create(CliContext cli)
+    {
+        var db = CommonOptions.Database();
+        var command = new Command("verify", "Check the database: SQLite integrity and foreign keys, every record traced to an imported file, and each file still at hand unchanged")
+        {
+            db,
+        };
+        command.SetAction(parse => Run(cli, parse.GetValue(db)!));
+        return command;
+    }
+
+    private static int Run(CliContext cli, FileInfo db)
+    {
+        if (!db.Exists)
+        {
+            cli.Error.WriteLine($"error: no database at {db.FullName}");
+            return ExitCodes.BadInput;
+        }
+
+        using var store = RecordStore.Open(db.FullName);
+        var report = store.Verify();
+        var table = new TextTable("File", "Records>", "State");
+        foreach (var f in report.Files)
+        {
+            table.Add(f.Path, f.Records.ToString(), f.State switch
+            {
+                SourceFileState.Matches => "unchanged",
+                SourceFileState.Changed => "CHANGED since import",
+                _ => "not at hand",
+            });
+        }
+
+        table.WriteTo(cli.Out);
+        cli.Out.WriteLine();
+        cli.Out.WriteLine($"SQLite integrity check: {(report.IntegrityErrors.Count == 0 ? "ok" : string.Join("; ", report.IntegrityErrors))}");
+        cli.Out.WriteLine($"Foreign keys: {(report.ForeignKeyErrors == 0 ? "ok" : $"{report.ForeignKeyErrors} broken references")}");
+        cli.Out.WriteLine($"Records without an imported file: {report.UntracedRecords}");
+        var changed = report.Files.Count(f => f.State == SourceFileState.Changed);
+        var away = report.Files.Count(f => f.State == SourceFileState.NotAtHand);
+        cli.Out.WriteLine($"Imported files: {report.Files.Count}, {changed} changed since import, {away} not at hand to check.");
+        cli.Out.WriteLine(report.Sound ? "The database is sound." : "The database needs attention: see above.");
+        return report.Sound ? ExitCodes.Ok : ExitCodes.Findings;
+    }
+}

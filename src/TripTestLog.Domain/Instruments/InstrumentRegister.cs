@@ -1,0 +1,41 @@
+namespace TripTestLog.Domain.Instruments;
+
+/// <summary>
+/// Every calibration period of every registered instrument. A measurement is traceable when its instrument was in a
+/// calibration period on the test date; a lab may also require every instrument to be registered.
+/// </summary>
+public sealed class InstrumentRegister(IReadOnlyList<InstrumentCalibration> calibrations)
+{
+    private readonly ILookup<string, InstrumentCalibration> _byName = calibrations.ToLookup(c => c.Instrument, StringComparer.Ordinal);
+
+    /// <summary>An empty register.</summary>
+    public static InstrumentRegister Empty { get; } = new([]);
+
+    /// <summary>
+    /// The finding for a measurement taken with <paramref name="instrument"/> on <paramref name="date"/>, or null when it
+    /// is traceable. An instrument left blank or unregistered is a finding only when <paramref name="requireRegistered"/>.
+    /// </summary>
+    public string? Check(string instrument, DateOnly date, bool requireRegistered)
+    {
+        if (instrument.Length == 0)
+        {
+            return requireRegistered ? "no instrument recorded; the lab requires registered instruments" : null;
+        }
+
+        var periods = _byName[instrument].ToList();
+        if (periods.Count == 0)
+        {
+            return requireRegistered ? $"instrument {instrument} is not in the instrument register" : null;
+        }
+
+        if (periods.Any(p => p.CalibratedOn <= date && date <= p.CalibrationDue))
+        {
+            return null;
+        }
+
+        var before = periods.Where(p => p.CalibrationDue < date).OrderByDescending(p => p.CalibrationDue).FirstOrDefault();
+        return before is not null
+            ? $"instrument {instrument} calibration lapsed on {before.CalibrationDue:yyyy-MM-dd}, before this test"
+            : $"instrument {instrument} had no calibration yet on this date (first calibrated {periods.Min(p => p.CalibratedOn):yyyy-MM-dd})";
+    }
+}

@@ -1,0 +1,23 @@
+namespace TripTestLog.Storage.Entities;
+
+/// <summary>One calibration period of a test instrument, from the instrument register.</summary>
+internal sealed class InstrumentRow
+{
+    public long Id { get; set; }
+
+    public string Instrument { get; set; } = "";
+
+    public string Kind { get; set; } = "";
+
+    public string Serial { get; set; } = "";
+
+    public string CalibratedOn { get; set; } = "";
+
+    public string CalibrationDue { get; set; } = "";
+
+    public long SourceFileId { get; set; }
+
+    public long SourceLine { get; set; }
+
+    public string Fingerprint { get; set; } = "";
+}

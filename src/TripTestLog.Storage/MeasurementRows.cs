@@ -1,0 +1,85 @@
+using System.Globalization;
+using TripTestLog.Domain.Measurements;
+using TripTestLog.Domain.Records;
+
+namespace TripTestLog.Storage;
+
+/// <summary>One measurement as the values of its table's columns, ready to insert, compare or update.</summary>
+/// <param name="Values">The values, aligned with <see cref="MeasurementTable.Columns"/>.</param>
+/// <param name="Fingerprint">The record's content hash.</param>
+/// <param name="Line">The line of the file it came from.</param>
+internal sealed record MeasurementRow(object[] Values, string Fingerprint, long Line);
+
+/// <summary>A measurement table and the columns a row of it holds (besides id, source and fingerprint).</summary>
+/// <param name="Table">The table name.</param>
+/// <param name="Columns">The value columns, in order.</param>
+internal sealed record MeasurementTable(string Table, string[] Columns)
+{
+    public static MeasurementTable Trips { get; } = new("trip_tests",
+    [
+        "device_id", "tested_at", "stage", "pole", "current_a", "tripped", "time_s", "start", "ambient_c", "instrument", "technician", "note",
+        "found_ir_a", "found_isd_a", "found_ii_a", "found_im_a", "found_pickup_a", "found_tms",
+    ]);
+
+    public static MeasurementTable Contacts { get; } = new("contact_tests",
+        ["device_id", "tested_at", "stage", "pole", "resistance_uohm", "test_current_a", "temperature_c", "instrument", "technician"]);
+
+    public static MeasurementTable Insulations { get; } = new("insulation_tests",
+        ["device_id", "tested_at", "stage", "path", "test_voltage_v", "resistance_mohm", "over_range", "temperature_c", "duration_s"]);
+
+    /// <summary>The table and rows of a measurement file, skipping <paramref name="excluded"/> lines.</summary>
+    public static (MeasurementTable Table, List<MeasurementRow> Rows) Of(ParsedFile file, IReadOnlyDictionary<string, long> deviceIds, IReadOnlySet<long> excluded)
+    {
+        bool Keep(long line) => !excluded.Contains(line);
+        return file.Kind switch
+        {
+            RecordKind.TripTests => (Trips, file.Trips.Where(t => Keep(t.Line)).Select(t => Trip(t.Record, deviceIds[t.Record.Tag.Value], t.Line)).ToList()),
+            RecordKind.ContactResistance => (Contacts, file.Contacts.Where(t => Keep(t.Line)).Select(t => Contact(t.Record, deviceIds[t.Record.Tag.Value], t.Line)).ToList()),
+            RecordKind.InsulationResistance => (Insulations, file.Insulations.Where(t => Keep(t.Line)).Select(t => Insulation(t.Record, deviceIds[t.Record.Tag.Value], t.Line)).ToList()),
+            _ => throw new ArgumentOutOfRangeException(nameof(file), file.Kind, "not a measurement file"),
+        };
+    }
+
+    /// <summary>A value as text for comparing a stored row with a new one and for the audit table.</summary>
+    public static string Text(object? value) => value switch
+    {
+        null or DBNull => "",
+        double d => d.ToString("R", CultureInfo.InvariantCulture),
+        bool b => b ? "1" : "0",
+        _ => Convert.ToString(value, CultureInfo.InvariantCulture) ?? "",
+    };
+
+    private static MeasurementRow Trip(TripMeasurement m, long device, long line)
+    {
+        var f = m.FoundSettings;
+        object[] values =
+        [
+            device, m.TestedAt.ToString(), Codes.Of(m.Stage), m.Pole.Code, m.Current.Value, m.Outcome.Tripped, m.Outcome.Time.Value,
+            Codes.Of(m.Start), Db(m.Ambient?.Value), m.Instrument, m.Technician, m.Note,
+            Db(f?.Ir?.Value), Db(f?.Isd?.Value), Db(f?.Ii?.Value), Db(f?.Im?.Value), Db(f?.Pickup?.Value), Db(f?.Tms),
+        ];
+        return new MeasurementRow(values, Fingerprint.Of(m, device), line);
+    }
+
+    private static MeasurementRow Contact(ContactMeasurement m, long device, long line)
+    {
+        object[] values =
+        [
+            device, m.TestedAt.ToString(), Codes.Of(m.Stage), m.Pole.Code, m.Resistance.Value, m.TestCurrent.Value,
+            Db(m.Temperature?.Value), m.Instrument, m.Technician,
+        ];
+        return new MeasurementRow(values, Fingerprint.Of(m, device), line);
+    }
+
+    private static MeasurementRow Insulation(InsulationMeasurement m, long device, long line)
+    {
+        object[] values =
+        [
+            device, m.TestedAt.ToString(), Codes.Of(m.Stage), m.Path, m.TestVoltage.Value, m.Resistance.Value.Value, m.Resistance.OverRange,
+            Db(m.Temperature?.Value), Db(m.Duration?.Value),
+        ];
+        return new MeasurementRow(values, Fingerprint.Of(m, device), line);
+    }
+
+    private static object Db(double? value) => value is { } v ? v : DBNull.Value;
+}

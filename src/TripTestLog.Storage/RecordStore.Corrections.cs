@@ -1,0 +1,135 @@
+using Microsoft.Data.Sqlite;
+using TripTestLog.Domain.Records;
+
+namespace TripTestLog.Storage;
+
+public sealed partial class RecordStore
+{
+    /// <summary>
+    /// A corrected file is one at the same path (and of the same kind) as an earlier import but with other content: the
+    /// test set's export written again. Its rows are matched with the earlier file's by line; a matched row whose values
+    /// differ is a correction. A copy under another path is a new file, whose identical rows are duplicates.
+    /// </summary>
+    private List<Correction> Corrections(SqliteTransaction transaction, ParsedFile file, MeasurementTable table, List<MeasurementRow> rows)
+    {
+        var earlier = EarlierFileOfTheSameName(transaction, file);
+        if (earlier is not { } source)
+        {
+            return [];
+        }
+
+        using var select = Command(transaction,
+            $"SELECT id, source_line, {string.Join(", ", table.Columns)} FROM {table.Table} WHERE source_file_id = $src");
+        select.Parameters.AddWithValue("$src", source.Id);
+        using var reader = select.ExecuteReader();
+        var stored = new Dictionary<long, (long Id, object[] Values)>();
+        while (reader.Read())
+        {
+            var values = new object[table.Columns.Length];
+            for (var i = 0; i < values.Length; i++)
+            {
+                values[i] = reader.GetValue(i + 2);
+            }
+
+            stored[reader.GetInt64(1)] = (reader.GetInt64(0), values);
+        }
+
+        var corrections = new List<Correction>();
+        foreach (var row in rows)
+        {
+            if (stored.TryGetValue(row.Line, out var old))
+            {
+                var correction = new Correction(row, old.Id, old.Values, source.Id, source.Name, table.Columns);
+                if (correction.Changes.Any())
+                {
+                    corrections.Add(correction);
+                }
+            }
+        }
+
+        return corrections;
+    }
+
+    private (long Id, string Name)? EarlierFileOfTheSameName(SqliteTransaction transaction, ParsedFile file)
+    {
+        using var select = Command(transaction, "SELECT id, file_name FROM source_files WHERE kind = $kind ORDER BY id DESC");
+        select.Parameters.AddWithValue("$kind", file.Kind!.Value.ToString());
+        using var reader = select.ExecuteReader();
+        var path = System.IO.Path.GetFullPath(file.Path);
+        while (reader.Read())
+        {
+            if (string.Equals(reader.GetString(1), path, StringComparison.Ordinal))
+            {
+                return (reader.GetInt64(0), reader.GetString(1));
+            }
+        }
+
+        return null;
+    }
+
+    /// <summary>Replaces the corrected records' values and writes every old value to `audit_changes`.</summary>
+    private long ApplyCorrections(SqliteTransaction transaction, MeasurementTable table, List<Correction> corrections, long sourceId, DateTimeOffset now)
+    {
+        if (corrections.Count == 0)
+        {
+            return 0;
+        }
+
+        var sets = string.Join(", ", table.Columns.Select((c, i) => $"{c} = $p{i}"));
+        using var update = Command(transaction, $"UPDATE {table.Table} SET {sets}, fingerprint = $fp, source_file_id = $src WHERE id = $id");
+        var p = Parameters(update, [.. table.Columns.Select((_, i) => "$p" + i), "$fp", "$src", "$id"]);
+        using var audit = Command(transaction,
+            "INSERT INTO audit_changes (table_name, record_id, column_name, old_value, new_value, old_source_file_id, new_source_file_id, changed_at) "
+            + "VALUES ($t, $r, $c, $o, $n, $os, $ns, $at)");
+        var a = Parameters(audit, "$t", "$r", "$c", "$o", "$n", "$os", "$ns", "$at");
+        foreach (var c in corrections)
+        {
+            for (var i = 0; i < c.New.Values.Length; i++)
+            {
+                p[i].Value = c.New.Values[i];
+            }
+
+            p[^3].Value = c.New.Fingerprint;
+            p[^2].Value = sourceId;
+            p[^1].Value = c.StoredId;
+            update.ExecuteNonQuery();
+            foreach (var (column, old, value) in c.Changes)
+            {
+                a[0].Value = table.Table;
+                a[1].Value = c.StoredId;
+                a[2].Value = column;
+                a[3].Value = old;
+                a[4].Value = value;
+                a[5].Value = c.OldSourceId;
+                a[6].Value = sourceId;
+                a[7].Value = Utc(now);
+                audit.ExecuteNonQuery();
+            }
+        }
+
+        return corrections.Count;
+    }
+
+    private (long Added, long Updated, long Duplicates) InsertInstruments(SqliteTransaction transaction, ParsedFile file, long sourceId)
+    {
+        using var insert = Command(transaction,
+            "INSERT OR IGNORE INTO instruments (instrument, kind, serial, calibrated_on, calibration_due, source_file_id, source_line, fingerprint) "
+            + "VALUES ($i, $k, $s, $on, $due, $src, $line, $fp)");
+        var p = Parameters(insert, "$i", "$k", "$s", "$on", "$due", "$src", "$line", "$fp");
+        long added = 0;
+        foreach (var (c, line) in file.Instruments)
+        {
+            p[0].Value = c.Instrument;
+            p[1].Value = c.Kind;
+            p[2].Value = c.Serial;
+            p[3].Value = c.CalibratedOn.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture);
+            p[4].Value = c.CalibrationDue.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture);
+            p[5].Value = sourceId;
+            p[6].Value = line;
+            p[7].Value = Fingerprint.Of(c);
+            added += insert.ExecuteNonQuery();
+        }
+
+        return (added, 0, file.Instruments.Count - added);
+    }
+}

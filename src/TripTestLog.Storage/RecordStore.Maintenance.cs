@@ -1,0 +1,102 @@
+using System.Globalization;
+
+using Microsoft.EntityFrameworkCore;
+using TripTestLog.Domain.Instruments;
+
+namespace TripTestLog.Storage;
+
+public sealed partial class RecordStore
+{
+    private static readonly string[] RecordTables = ["devices", "device_revisions", "trip_tests", "contact_tests", "insulation_tests", "curve_table_rows", "ambient_table_rows", "instruments"];
+
+    /// <summary>Every instrument calibration period imported.</summary>
+    public InstrumentRegister Instruments() => new(_context.Instruments.AsNoTracking().AsEnumerable()
+        .Select(i => new InstrumentCalibration(i.Instrument, i.Kind, i.Serial, Date(i.CalibratedOn), Date(i.CalibrationDue)))
+        .ToList());
+
+    /// <summary>Every value a corrected file replaced, oldest first: table, record id, column, old value, new value.</summary>
+    public IReadOnlyList<(string Table, long RecordId, string Column, string Old, string New)> AuditTrail() =>
+        _context.AuditChanges.AsNoTracking().OrderBy(a => a.Id).AsEnumerable()
+            .Select(a => (a.TableName, a.RecordId, a.ColumnName, a.OldValue, a.NewValue)).ToList();
+
+    /// <summary>
+    /// SQLite's integrity and foreign-key checks, then the project's own: every record traces to an imported file, and
+    /// every imported file still at its recorded path has the hash it had when imported.
+    /// </summary>
+    public VerifyReport Verify()
+    {
+        var integrity = Lines("PRAGMA integrity_check").Where(l => l != "ok").ToList();
+        var foreignKeys = Lines("PRAGMA foreign_key_check").LongCount();
+        long untraced = 0;
+        foreach (var table in RecordTables)
+        {
+            untraced += Scalar($"SELECT COUNT(*) FROM {table} t WHERE NOT EXISTS (SELECT 1 FROM source_files f WHERE f.id = t.source_file_id)");
+        }
+
+        var counts = new Dictionary<long, long>();
+        foreach (var table in RecordTables)
+        {
+            using var count = _connection.CreateCommand();
+            count.CommandText = $"SELECT source_file_id, COUNT(*) FROM {table} GROUP BY source_file_id";
+            using var reader = count.ExecuteReader();
+            while (reader.Read())
+            {
+                counts[reader.GetInt64(0)] = counts.GetValueOrDefault(reader.GetInt64(0)) + reader.GetInt64(1);
+            }
+        }
+
+        var files = _context.SourceFiles.AsNoTracking().OrderBy(f => f.Id).AsEnumerable().Select(f => new VerifiedFile(
+            f.FileName, f.Sha256, StateOf(f.FileName, f.Sha256), counts.GetValueOrDefault(f.Id))).ToList();
+        return new VerifyReport(integrity, foreignKeys, untraced, files);
+    }
+
+    /// <summary>A consistent copy of the live database at <paramref name="destination"/>, made with SQLite's online backup.</summary>
+    /// <exception cref="IOException">When the destination exists.</exception>
+    public void Backup(string destination)
+    {
+        if (File.Exists(destination))
+        {
+            throw new IOException($"{destination} exists; choose a new file for the backup");
+        }
+
+        using var target = StoreOptions.Connect(destination);
+        target.Open();
+        _connection.BackupDatabase(target);
+    }
+
+    private static SourceFileState StateOf(string path, string sha)
+    {
+        if (!File.Exists(path))
+        {
+            return SourceFileState.NotAtHand;
+        }
+
+        using var stream = File.OpenRead(path);
+        var now = Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(stream));
+        return now == sha ? SourceFileState.Matches : SourceFileState.Changed;
+    }
+
+    private List<string> Lines(string sql)
+    {
+        using var command = _connection.CreateCommand();
+        command.CommandText = sql;
+        using var reader = command.ExecuteReader();
+        var lines = new List<string>();
+        while (reader.Read())
+        {
+            lines.Add(Convert.ToString(reader.GetValue(0), CultureInfo.InvariantCulture) ?? "");
+        }
+
+        return lines;
+    }
+
+    private long Scalar(string sql)
+    {
+        using var command = _connection.CreateCommand();
+        command.CommandText = sql;
+        return (long)command.ExecuteScalar()!;
+    }
+
+    private static DateOnly Date(string text) => DateOnly.ParseExact(text, "yyyy-MM-dd", CultureInfo.InvariantCulture);
+
+}

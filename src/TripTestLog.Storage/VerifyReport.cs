@@ -1,0 +1,32 @@
+namespace TripTestLog.Storage;
+
+/// <summary>What `verify` found about one imported file.</summary>
+public enum SourceFileState
+{
+    /// <summary>The file is at its recorded path and its SHA-256 matches.</summary>
+    Matches,
+
+    /// <summary>The file is at its recorded path but its content has changed since import.</summary>
+    Changed,
+
+    /// <summary>The file is not at its recorded path; it cannot be checked here.</summary>
+    NotAtHand,
+}
+
+/// <summary>One imported file as verified.</summary>
+/// <param name="Path">The path recorded at import.</param>
+/// <param name="Sha256">The hash recorded at import.</param>
+/// <param name="State">Matches, changed, or not at hand.</param>
+/// <param name="Records">How many stored records trace to it.</param>
+public sealed record VerifiedFile(string Path, string Sha256, SourceFileState State, long Records);
+
+/// <summary>The result of `verify`: SQLite's own checks and the project's traceability checks.</summary>
+/// <param name="IntegrityErrors">Lines from PRAGMA integrity_check other than "ok".</param>
+/// <param name="ForeignKeyErrors">Rows from PRAGMA foreign_key_check.</param>
+/// <param name="UntracedRecords">Records whose source file row is missing.</param>
+/// <param name="Files">Every imported file.</param>
+public sealed record VerifyReport(IReadOnlyList<string> IntegrityErrors, long ForeignKeyErrors, long UntracedRecords, IReadOnlyList<VerifiedFile> Files)
+{
+    /// <summary>True when nothing is wrong (files not at hand are not faults).</summary>
+    public bool Sound => IntegrityErrors.Count == 0 && ForeignKeyErrors == 0 && UntracedRecords == 0 && Files.All(f => f.State != SourceFileState.Changed);
+}
