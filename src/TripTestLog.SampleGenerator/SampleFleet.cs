@@ -49,6 +49,13 @@ internal static class SampleFleet
             }
         }
 
+        foreach (var (relative, content) in OtherLayouts.Files(new Random(Seed + 2)))
+        {
+            var path = Path.Combine(folder, relative);
+            Directory.CreateDirectory(Path.GetDirectoryName(path)!);
+            written.Add(Write(path, new StringBuilder(content)));
+        }
+
         return written;
     }
 

@@ -25,7 +25,7 @@ public sealed class DemoAndCheckTests : IDisposable
         var (exit, output, _) = CliRun.Run("demo", "--records", SampleRecords, "--out", _folder);
 
         Assert.Equal(0, exit);
-        Assert.Contains("51 files: 51 imported, 0 already imported, 0 refused", output);
+        Assert.Contains("54 files: 54 imported, 0 already imported, 0 refused", output);
         var verdicts = JsonDocument.Parse(File.ReadAllText(Path.Combine(_folder, "verdicts.json"))).RootElement.EnumerateArray().ToList();
         var findings = verdicts.Where(v => v.GetProperty("verdict").GetString() is "too-late" or "too-early").ToList();
 
@@ -46,6 +46,53 @@ public sealed class DemoAndCheckTests : IDisposable
         Assert.Contains(unit, v => v.GetProperty("reference_a").GetDouble() == 500);
         Assert.Contains(unit, v => v.GetProperty("notes").EnumerateArray().Any(n => n.GetString()!.Contains("Ir 420 A found", StringComparison.Ordinal)));
         Assert.Contains(verdicts, v => v.GetProperty("notes").EnumerateArray().Any(n => n.GetString()!.Contains("ambient table HB-TM-AMBIENT", StringComparison.Ordinal)));
+
+        // The instrument register: Brackenford's injection set lapsed before its September 2025 tests.
+        var untraceable = verdicts.Where(v => v.GetProperty("instrument_finding").GetString() is not null).ToList();
+        Assert.NotEmpty(untraceable);
+        Assert.All(untraceable, v => Assert.StartsWith("2025-09", v.GetProperty("tested_at").GetString()));
+
+        // The two other layouts came in through their profiles.
+        Assert.Contains(verdicts, v => v.GetProperty("source_file").GetString()!.EndsWith("bench-2026-11.csv", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void ImportAcceptValid_StoresTheGoodRows_WritesTheRejects_AndExitsWith1()
+    {
+        Directory.CreateDirectory(_folder);
+        var db = Path.Combine(_folder, "t.db");
+        var file = Path.Combine(_folder, "mixed.csv");
+        File.WriteAllText(file, "asset_tag,tested_at,stage,pole,current_a,trip_time_s,held_s,start\nARW-DB1-Q01,2024-03-18,as-found,all,6.8,,3600,cold\nARW-DB1-Q01,2024-03-19,as-found,all,x,,3600,cold\n");
+        CliRun.Run("import", Path.Combine(SampleRecords, "device-register.csv"), "--db", db);
+
+        var (exit, output, _) = CliRun.Run("import", file, "--db", db, "--accept-valid");
+
+        Assert.Equal(1, exit);
+        Assert.Contains("1 rows refused, the rest stored", output);
+        var rejects = Path.Combine(_folder, "mixed.rejects.csv");
+        Assert.Contains(rejects, output);
+        Assert.Contains("'x' is not a number", File.ReadAllText(rejects));
+    }
+
+    [Fact]
+    public void VerifyAndBackup_WorkOnALiveDatabase()
+    {
+        Directory.CreateDirectory(_folder);
+        var db = Path.Combine(_folder, "t.db");
+        var register = Path.Combine(_folder, "register.csv");
+        File.Copy(Path.Combine(SampleRecords, "device-register.csv"), register);
+        CliRun.Run("import", register, "--db", db);
+
+        var sound = CliRun.Run("verify", "--db", db);
+        File.AppendAllText(register, "\n");
+        var changed = CliRun.Run("verify", "--db", db);
+        var backup = CliRun.Run("backup", Path.Combine(_folder, "copy.db"), "--db", db);
+
+        Assert.Equal((0, 1, 0), (sound.Exit, changed.Exit, backup.Exit));
+        Assert.Contains("The database is sound.", sound.Out);
+        Assert.Contains("CHANGED since import", changed.Out);
+        Assert.Contains("45 devices", backup.Out);
+        Assert.Equal(2, CliRun.Run("backup", Path.Combine(_folder, "copy.db"), "--db", db).Exit);
     }
 
     [Fact]
@@ -114,7 +161,7 @@ public sealed class DemoAndCheckTests : IDisposable
     {
         var written = SampleFleet.WriteTo(_folder);
 
-        Assert.Equal(51, written.Count);
+        Assert.Equal(56, written.Count);
         foreach (var file in written)
         {
             var committed = Path.Combine(SampleRecords, Path.GetRelativePath(_folder, file));

@@ -9,6 +9,8 @@ public sealed class HelpTextTests
     [InlineData("check", new[] { "check" })]
     [InlineData("envelope", new[] { "envelope" })]
     [InlineData("demo", new[] { "demo" })]
+    [InlineData("verify", new[] { "verify" })]
+    [InlineData("backup", new[] { "backup" })]
     public void HelpText_MatchesTheGoldenFile(string name, string[] command)
     {
         var (exit, output, _) = CliRun.Run([.. command, "--help"]);

@@ -28,6 +28,28 @@ public sealed class SchemaUpgradeTests
         Assert.Equal("drifting", trips[2].Measurement.Note);
     }
 
+    [Fact]
+    public void ASchema2Database_UpgradesWithItsSettingsHistoryTablesAndFoundSettingsIntact()
+    {
+        using var temp = new TempFolder();
+        var db = Path.Combine(temp.Path, "old.db");
+        File.Copy(Path.Combine(AppContext.BaseDirectory, "schemas", "schema-2.db"), db);
+        Assert.EndsWith("_DeviceFamiliesAndTables", Migrations(db)[^1]);
+
+        using var store = RecordStore.Open(db);
+
+        Assert.EndsWith("_InstrumentsAndAudit", store.AppliedMigrations()[^1]);
+        var histories = store.Histories();
+        Assert.Equal(2, histories["TWO-01"].Entries.Count);
+        Assert.Equal(500, Assert.IsType<ElectronicTripSettings>(histories["TWO-01"].InForceOn(new DateOnly(2024, 6, 1)).Settings).Ir.Value);
+        Assert.Equal(IdmtCurve.StandardInverse, Assert.IsType<RelaySettings>(histories["TWO-02"].Latest.Settings).Curve);
+        Assert.Equal(3, store.CurveTables()["SPECIAL"].Points.Count);
+        var trips = store.Trips();
+        Assert.Equal(4, trips.Count);
+        Assert.Equal(420, trips.Single(t => t.Measurement.Note == "dial found low").Measurement.FoundSettings!.Ir!.Value.Value);
+        Assert.True(store.Verify().IntegrityErrors.Count == 0);
+    }
+
     private static List<string> Migrations(string db)
     {
         using var connection = new SqliteConnection($"Data Source={db};Pooling=False");

@@ -50,11 +50,14 @@ internal static class VerdictTable
         }
 
         writer.WriteLine();
-        writer.WriteLine("Instrument traceability (the verdict stands, but the measurement is not traceable):");
-        foreach (var r in list)
+        writer.WriteLine("Instrument traceability (the verdicts stand, but these measurements are not traceable):");
+        foreach (var group in list.GroupBy(r => r.InstrumentFinding!))
         {
-            var m = r.Trip.Measurement;
-            writer.WriteLine($"  {m.Tag} {m.TestedAt} at {m.Current}: {r.InstrumentFinding} [{Path.GetFileName(r.Trip.SourceFile)}:{r.Trip.SourceLine}]");
+            var tests = group.ToList();
+            var dates = tests.Select(r => r.Trip.Measurement.TestedAt.Date).ToList();
+            var devices = tests.Select(r => r.Trip.Measurement.Tag).Distinct().Count();
+            var files = string.Join(", ", tests.Select(r => Path.GetFileName(r.Trip.SourceFile)).Distinct());
+            writer.WriteLine($"  {group.Key}: {tests.Count} tests of {devices} devices, {dates.Min():yyyy-MM-dd} to {dates.Max():yyyy-MM-dd} [{files}]");
         }
     }
 

@@ -35,7 +35,7 @@ public sealed class InstrumentRegister(IReadOnlyList<InstrumentCalibration> cali
 
         var before = periods.Where(p => p.CalibrationDue < date).OrderByDescending(p => p.CalibrationDue).FirstOrDefault();
         return before is not null
-            ? $"instrument {instrument} calibration lapsed on {before.CalibrationDue:yyyy-MM-dd}, before this test"
+            ? $"instrument {instrument} calibration lapsed on {before.CalibrationDue:yyyy-MM-dd}"
             : $"instrument {instrument} had no calibration yet on this date (first calibrated {periods.Min(p => p.CalibratedOn):yyyy-MM-dd})";
     }
 }

@@ -1,0 +1,143 @@
+using System.Diagnostics;
+using System.Globalization;
+using System.Text;
+using Microsoft.Data.Sqlite;
+
+namespace TripTestLog.Cli.Tests;
+
+/// <summary>
+/// Real processes against one real database: an import killed halfway leaves the database consistent and the next
+/// import completes it, and two imports at once both finish. These take a few seconds each.
+/// </summary>
+public sealed class ChildProcessTests : IDisposable
+{
+    private readonly string _folder = Path.Combine(Path.GetTempPath(), "ttl-proc-" + Guid.NewGuid().ToString("N")[..12]);
+
+    public ChildProcessTests() => Directory.CreateDirectory(_folder);
+
+    private string Db => Path.Combine(_folder, "shared.db");
+
+    public void Dispose()
+    {
+        SqliteConnection.ClearAllPools();
+        Directory.Delete(_folder, recursive: true);
+    }
+
+    [Fact]
+    public void AnImportKilledHalfway_LeavesNothingHalfDone_AndTheNextImportCompletesIt()
+    {
+        Assert.Equal(0, Cli("import", Register(), "--db", Db).WaitForExitCode());
+        var big = Trips("big.csv", 300_000, 0);
+
+        using (var child = Cli("import", big, "--db", Db))
+        {
+            // Kill once the transaction has spilled pages into the write-ahead log: mid-write, not before or after.
+            Assert.True(WaitFor(() => WalBytes() > 2_000_000 || child.HasExited, TimeSpan.FromSeconds(120)), "the import never started writing");
+            Assert.False(child.HasExited, "the import finished before it could be killed; make the file larger");
+            child.Kill(entireProcessTree: true);
+            child.WaitForExit();
+        }
+
+        Assert.Equal(("ok", 0L, 1L), (Scalar<string>("PRAGMA integrity_check"), Scalar<long>("SELECT COUNT(*) FROM trip_tests"), Scalar<long>("SELECT COUNT(*) FROM source_files")));
+
+        var again = Cli("import", big, "--db", Db);
+        Assert.Equal(0, again.WaitForExitCode());
+        Assert.Equal((300_000L, 2L), (Scalar<long>("SELECT COUNT(*) FROM trip_tests"), Scalar<long>("SELECT COUNT(*) FROM source_files")));
+    }
+
+    [Fact]
+    public void TwoImportsAtOnce_BothFinish_AndBothFilesAreStored()
+    {
+        Assert.Equal(0, Cli("import", Register(), "--db", Db).WaitForExitCode());
+        var a = Trips("a.csv", 100_000, 0);
+        var b = Trips("b.csv", 100_000, 1_000_000);
+
+        using var first = Cli("import", a, "--db", Db);
+        using var second = Cli("import", b, "--db", Db);
+
+        Assert.Equal((0, 0), (first.WaitForExitCode(), second.WaitForExitCode()));
+        Assert.Equal((200_000L, 3L), (Scalar<long>("SELECT COUNT(*) FROM trip_tests"), Scalar<long>("SELECT COUNT(*) FROM source_files")));
+        Assert.Equal("ok", Scalar<string>("PRAGMA integrity_check"));
+    }
+
+    private string Register()
+    {
+        var path = Path.Combine(_folder, "register.csv");
+        File.WriteAllText(path, "asset_tag,site,location,family,curve,rated_current_a,poles,rated_voltage_v\nP-01,Process Site,Board 1,iec60898,C,16,1,230\n");
+        return path;
+    }
+
+    // Distinct rows, one second apart from the offset: each is a new measurement.
+    private string Trips(string name, int rows, int offsetSeconds)
+    {
+        var path = Path.Combine(_folder, name);
+        var start = new DateTime(2020, 1, 1);
+        var sb = new StringBuilder("asset_tag,tested_at,stage,pole,current_a,trip_time_s,held_s,start\n");
+        for (var i = 0; i < rows; i++)
+        {
+            var at = start.AddSeconds(offsetSeconds + i).ToString("yyyy-MM-ddTHH:mm:ss", CultureInfo.InvariantCulture);
+            sb.Append("P-01,").Append(at).Append(",as-found,all,40.9,").Append((10 + i % 40).ToString(CultureInfo.InvariantCulture)).Append(",,cold\n");
+        }
+
+        File.WriteAllText(path, sb.ToString());
+        return path;
+    }
+
+    private static Process Cli(params string[] args)
+    {
+        var info = new ProcessStartInfo("dotnet") { RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false };
+        info.ArgumentList.Add(Path.Combine(AppContext.BaseDirectory, "triptestlog.dll"));
+        foreach (var arg in args)
+        {
+            info.ArgumentList.Add(arg);
+        }
+
+        var process = Process.Start(info)!;
+        process.OutputDataReceived += (_, _) => { };
+        process.ErrorDataReceived += (_, _) => { };
+        process.BeginOutputReadLine();
+        process.BeginErrorReadLine();
+        return process;
+    }
+
+    private long WalBytes() => File.Exists(Db + "-wal") ? new FileInfo(Db + "-wal").Length : 0;
+
+    private static bool WaitFor(Func<bool> condition, TimeSpan limit)
+    {
+        var watch = Stopwatch.StartNew();
+        while (!condition())
+        {
+            if (watch.Elapsed > limit)
+            {
+                return false;
+            }
+
+            Thread.Sleep(10);
+        }
+
+        return true;
+    }
+
+    private T Scalar<T>(string sql)
+    {
+        using var connection = new SqliteConnection($"Data Source={Db};Pooling=False");
+        connection.Open();
+        using var command = connection.CreateCommand();
+        command.CommandText = sql;
+        return (T)command.ExecuteScalar()!;
+    }
+}
+
+internal static class ProcessExtensions
+{
+    public static int WaitForExitCode(this Process process)
+    {
+        if (!process.WaitForExit(TimeSpan.FromMinutes(5)))
+        {
+            process.Kill(entireProcessTree: true);
+            throw new TimeoutException("the child import did not finish within 5 minutes");
+        }
+
+        return process.ExitCode;
+    }
+}
