@@ -24,11 +24,14 @@ internal sealed class ImportRunner(RecordStore store, ILogger log, CliContext cl
     {
         var files = new List<ImportFile>();
         var problems = new List<string>();
+        var profiles = new Dictionary<string, IReadOnlyList<ColumnProfile>>(StringComparer.Ordinal);
+        ColumnProfile? ProfileFor(string file) => FolderProfiles(Path.GetDirectoryName(Path.GetFullPath(file))!, profiles, problems)
+            .FirstOrDefault(p => p.AppliesTo(Path.GetFileName(file)));
         foreach (var path in paths)
         {
             if (File.Exists(path))
             {
-                files.Add(new ImportFile(path, baseOptions.Profile is null ? baseOptions with { Profile = ProfileFor(path, problems) } : baseOptions));
+                files.Add(new ImportFile(path, baseOptions.Profile is null ? baseOptions with { Profile = ProfileFor(path) } : baseOptions));
             }
             else if (Directory.Exists(path))
             {
@@ -36,7 +39,7 @@ internal sealed class ImportRunner(RecordStore store, ILogger log, CliContext cl
                              .Where(f => !f.EndsWith(RejectsFile.Suffix, StringComparison.OrdinalIgnoreCase))
                              .Order(StringComparer.Ordinal))
                 {
-                    files.Add(new ImportFile(file, baseOptions.Profile is null ? baseOptions with { Profile = ProfileFor(file, problems) } : baseOptions));
+                    files.Add(new ImportFile(file, baseOptions.Profile is null ? baseOptions with { Profile = ProfileFor(file) } : baseOptions));
                 }
             }
             else
@@ -87,25 +90,30 @@ internal sealed class ImportRunner(RecordStore store, ILogger log, CliContext cl
         _ => 2,
     };
 
-    private static ColumnProfile? ProfileFor(string file, List<string> problems)
+    // Each folder's profiles are read once per import, not once per file.
+    private static IReadOnlyList<ColumnProfile> FolderProfiles(string folder, Dictionary<string, IReadOnlyList<ColumnProfile>> cache, List<string> problems)
     {
-        var folder = Path.GetDirectoryName(Path.GetFullPath(file))!;
+        if (cache.TryGetValue(folder, out var known))
+        {
+            return known;
+        }
+
+        var loaded = new List<ColumnProfile>();
         foreach (var candidate in Directory.EnumerateFiles(folder, "*.profile.json").Order(StringComparer.Ordinal))
         {
             var (profile, problem) = ColumnProfile.Load(candidate);
             if (problem is not null)
             {
                 problems.Add(problem);
-                continue;
             }
-
-            if (profile!.AppliesTo(Path.GetFileName(file)))
+            else
             {
-                return profile;
+                loaded.Add(profile!);
             }
         }
 
-        return null;
+        cache[folder] = loaded;
+        return loaded;
     }
 
     private void Log(ImportOutcome o, string sha)

@@ -30,14 +30,7 @@ public sealed class ElectronicTripEnvelope : ITripEnvelope
         _s = settings;
         _thermalFactor = Guard.InRange(thermalFactor, 0.5, 1.5, nameof(thermalFactor), "(factor)");
         _conventional = Iec60947Conventions.ConventionalTime(rated);
-        var h = Iec60947Conventions.Hours(_conventional);
-        _points =
-        [
-            new("1.05Ir", CurrentMultiple.Of(Iec60947Conventions.NonTrippingMultiple * thermalFactor), StartCondition.Cold, _conventional, null,
-                $"IEC 60947-2 8.3.3: 1.05 Ir from cold, no trip within {h}"),
-            new("1.30Ir", CurrentMultiple.Of(Iec60947Conventions.TrippingMultiple * thermalFactor), StartCondition.Warm, null, _conventional,
-                $"IEC 60947-2 8.3.3: 1.30 Ir straight after the 1.05 Ir test, trip within {h}"),
-        ];
+        _points = Iec60947Conventions.Points(_conventional, thermalFactor);
     }
 
     /// <inheritdoc />

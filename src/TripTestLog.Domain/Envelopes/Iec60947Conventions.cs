@@ -1,3 +1,4 @@
+using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Quantities;
 
 namespace TripTestLog.Domain.Envelopes;
@@ -20,4 +21,17 @@ internal static class Iec60947Conventions
     public static Seconds ConventionalTime(Amperes rated) => Seconds.FromHours(rated.Value <= 63.0 ? 1.0 : 2.0);
 
     public static string Hours(Seconds conventional) => $"{conventional.Value / 3600.0:0} h";
+
+    /// <summary>The two conventional points as multiples of Ir, scaled by the ambient factor on the thermal release.</summary>
+    public static IReadOnlyList<NormativePoint> Points(Seconds conventional, double thermalFactor)
+    {
+        var h = Hours(conventional);
+        return
+        [
+            new("1.05Ir", CurrentMultiple.Of(NonTrippingMultiple * thermalFactor), StartCondition.Cold, conventional, null,
+                $"IEC 60947-2 8.3.3: 1.05 Ir from cold, no trip within {h}"),
+            new("1.30Ir", CurrentMultiple.Of(TrippingMultiple * thermalFactor), StartCondition.Warm, null, conventional,
+                $"IEC 60947-2 8.3.3: 1.30 Ir straight after the 1.05 Ir test, trip within {h}"),
+        ];
+    }
 }
