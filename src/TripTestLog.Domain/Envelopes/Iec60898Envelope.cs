@@ -82,6 +82,19 @@ public sealed class Iec60898Envelope : ITripEnvelope
     private BandEdge Minimum(double i)
     {
         var t = _t;
+
+        // The instantaneous range is checked first: a large ambient factor can move row c above row d, and above d the
+        // magnetic release may act whatever the thermal one does.
+        if (i > t.D)
+        {
+            return BandEdge.NoMinimum($"above {t.InstantaneousLow:0} In the instantaneous release of curve {t.Curve} may act at once");
+        }
+
+        if (i == t.D)
+        {
+            return new BandEdge(Seconds.Of(Iec60898Table.InstantaneousSeconds), EdgeSource.NormativePoint, _points[3].Requirement, StartCondition.Cold);
+        }
+
         if (i == t.A)
         {
             return new BandEdge(t.ConventionalTime, EdgeSource.NormativePoint, _points[0].Requirement, StartCondition.Cold);
@@ -98,18 +111,8 @@ public sealed class Iec60898Envelope : ITripEnvelope
             return new BandEdge(Seconds.Of(Iec60898Table.ThermalMinimumSeconds), EdgeSource.NormativePoint, _points[2].Requirement, StartCondition.Cold);
         }
 
-        if (i < t.D)
-        {
-            var s = LogLog.Interpolate(i, t.C, Iec60898Table.ThermalMinimumSeconds, t.D, Iec60898Table.InstantaneousSeconds);
-            return new BandEdge(Seconds.Of(s), EdgeSource.Interpolated, "log-log line between IEC 60898-1 Table 7 c and d", StartCondition.Cold);
-        }
-
-        if (i == t.D)
-        {
-            return new BandEdge(Seconds.Of(Iec60898Table.InstantaneousSeconds), EdgeSource.NormativePoint, _points[3].Requirement, StartCondition.Cold);
-        }
-
-        return BandEdge.NoMinimum($"above {t.InstantaneousLow:0} In the instantaneous release of curve {t.Curve} may act at once");
+        var between = LogLog.Interpolate(i, t.C, Iec60898Table.ThermalMinimumSeconds, t.D, Iec60898Table.InstantaneousSeconds);
+        return new BandEdge(Seconds.Of(between), EdgeSource.Interpolated, "log-log line between IEC 60898-1 Table 7 c and d", StartCondition.Cold);
     }
 
     private BandEdge Maximum(double i)

@@ -30,7 +30,7 @@ public sealed class AllFamiliesPropertyTests
                 t.Item5 ? Seconds.Of(0.05) : null, LabPolicy.RelayTimeTolerance, LabPolicy.RelayPickupTolerance, Seconds.Of(0.05))));
 
     private static readonly Gen<ITripEnvelope> Miniature =
-        Gen.Select(Gen.Int[0, 2], Gen.Double[0.5, 125], Gen.Double[0.85, 1.15])
+        Gen.Select(Gen.Int[0, 2], Gen.Double[0.5, 125], Gen.Double[0.5, 1.5])
             .Select(t => (ITripEnvelope)new Iec60898Envelope((Devices.TripCurve)t.Item1, Amperes.Of(t.Item2), t.Item3));
 
     private static readonly Gen<ITripEnvelope> Any = Gen.OneOf(Electronic, ThermalMagnetic, Relay, Miniature);
