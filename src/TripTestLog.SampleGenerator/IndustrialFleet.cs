@@ -38,6 +38,10 @@ internal static class IndustrialFleet
             + ",,,,,,,,600,2,,,0.05,,";
         yield return "ARW-DB3-Q01,Alder Ridge Works,Board DB3 way 1,curve-table,,32,1,230,2018-01-15,3200,Corvane,CV-M32S,C18022514"
             + ",,,,,,,,,,,,,CV-M32-SPECIAL,";
+        yield return "BPS-MSB-Q02,Brackenford Pumping Station,Main switchboard bus coupler,iec60947-electronic,,1000,3,400,2017-04-12,80,Halbrook,HE1000,H17300452"
+            + ",,800,12,6400,0.3,,,,,,,,,";
+        yield return "ARW-MCC-Q01,Alder Ridge Works,Motor control centre feeder 2,iec60947-thermal-magnetic,,100,3,400,2016-08-30,500,Corvane,CT100,C16290011"
+            + ",,80,,,,,800,,,,,,,";
     }
 
     public static string CurveTables() =>
@@ -84,6 +88,10 @@ internal static class IndustrialFleet
 
             Row("ARW-MSB-F01", day.AddMinutes(90), 1.3 * 8000, (0.05 + 0.045) * J(0.05), "high-set stage");
 
+            // Thermal-magnetic feeder with no curve table: only its magnetic test can be judged.
+            Row("ARW-MCC-Q01", day.AddMinutes(100), 3 * 80, 35 * J(0.1), "no maker curve on file");
+            Row("ARW-MCC-Q01", day.AddMinutes(110), 1.3 * 800, 0.012 * J(0.2));
+
             // Curve-table device.
             Row("ARW-DB3-Q01", day.AddMinutes(120), 2 * 32, 90 * J(0.2));
             Row("ARW-DB3-Q01", day.AddMinutes(130), 3 * 32, 25 * J(0.2));
@@ -94,6 +102,10 @@ internal static class IndustrialFleet
             // Thermal-magnetic feeder: 3 Ir is judged by the maker's curve, corrected for the pump hall's ambient.
             Row("BPS-MCC-Q01", day, 3 * 125, 45 * J(0.1));
             Row("BPS-MCC-Q01", day.AddMinutes(20), 1.3 * 1250, 0.015 * J(0.2));
+
+            // Bus coupler: electronic unit, long time and short time only (no instantaneous), tsd 0.3 s.
+            Row("BPS-MSB-Q02", day.AddMinutes(40), 4 * 800, 12 * Math.Pow(6.0 / 4, 2) * J(0.06));
+            Row("BPS-MSB-Q02", day.AddMinutes(50), 1.3 * 6400, 0.3 * J(0.05));
 
             // IEEE very inverse relay, time dial 2.
             foreach (var (m, minutes) in new[] { (2.0, 60), (5.0, 70), (10.0, 80) })
