@@ -143,24 +143,4 @@ public sealed partial class RecordStore
     }
 
     private static Amperes? A(System.Data.Common.DbDataReader r, int i) => r.IsDBNull(i) ? null : Amperes.Of(r.GetDouble(i));
-
-    /// <summary>The contact resistance readings of one device, oldest first.</summary>
-    public IReadOnlyList<ContactMeasurement> Contacts(AssetTag tag) =>
-        (from c in _context.ContactTests.AsNoTracking()
-         join d in _context.Devices on c.DeviceId equals d.Id
-         where d.AssetTag == tag.Value
-         orderby c.TestedAt, c.Pole
-         select c).AsEnumerable()
-        .Select(c => new ContactMeasurement(
-            tag, TestedAt.Parse(c.TestedAt), Codes.Stage(c.Stage), Pole.Parse(c.Pole), MicroOhms.Of(c.ResistanceUohm),
-            Amperes.Of(c.TestCurrentA), c.TemperatureC is { } t ? Celsius.Of(t) : null, c.Instrument, c.Technician))
-        .ToList();
-
-    /// <summary>The number of insulation readings stored for one device.</summary>
-    public int InsulationCount(AssetTag tag) =>
-        (from i in _context.InsulationTests
-         join d in _context.Devices on i.DeviceId equals d.Id
-         where d.AssetTag == tag.Value
-         select i.Id).Count();
-
 }

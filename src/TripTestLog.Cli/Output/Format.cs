@@ -48,6 +48,4 @@ internal static class Format
     /// <summary>The test current as a multiple of the envelope's reference, e.g. "2.56 In" or "6.02 Ir".</summary>
     public static string Multiple(Services.CheckedTrip r) =>
         $"{Number(r.Trip.Measurement.Current.Value / r.Envelope.Reference.Value, "0.00")} {r.Envelope.ReferenceName}";
-
-    public static string Seconds(Seconds? value) => value is { } s ? s.ToString() : "-";
 }
