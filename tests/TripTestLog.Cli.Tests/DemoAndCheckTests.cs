@@ -148,6 +148,17 @@ public sealed class DemoAndCheckTests : IDisposable
     }
 
     [Fact]
+    public void Check_ForAnAssetNotInTheRegister_SaysSo()
+    {
+        CliRun.Run("demo", "--records", SampleRecords, "--out", _folder);
+
+        var (exit, _, error) = CliRun.Run("check", "--db", Path.Combine(_folder, "triptestlog.db"), "--asset", "NO-SUCH-TAG");
+
+        Assert.Equal(2, exit);
+        Assert.Contains("'NO-SUCH-TAG' is not in the device register", error);
+    }
+
+    [Fact]
     public void Check_WithoutADatabase_SaysToImportFirst()
     {
         var (exit, _, error) = CliRun.Run("check", "--db", Path.Combine(_folder, "none.db"));

@@ -46,6 +46,12 @@ internal static class CheckCommand
         }
 
         using var store = RecordStore.Open(db.FullName);
+        if (only is { } tag && !store.Histories().ContainsKey(tag.Value))
+        {
+            cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {db.FullName}");
+            return ExitCodes.BadInput;
+        }
+
         var results = CheckRunner.Run(store, only, requireRegistered);
         if (json)
         {
