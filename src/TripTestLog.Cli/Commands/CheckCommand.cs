@@ -46,13 +46,14 @@ internal static class CheckCommand
         }
 
         using var store = RecordStore.Open(db.FullName);
-        if (only is { } tag && !store.Histories().ContainsKey(tag.Value))
+        var histories = store.Histories();
+        if (only is { } tag && !histories.ContainsKey(tag.Value))
         {
             cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {db.FullName}");
             return ExitCodes.BadInput;
         }
 
-        var results = CheckRunner.Run(store, only, requireRegistered);
+        var results = CheckRunner.Run(store, histories, only, requireRegistered);
         if (json)
         {
             VerdictJson.Write(cli.Out, results);

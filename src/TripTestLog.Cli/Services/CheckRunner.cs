@@ -18,9 +18,12 @@ internal sealed record CheckedTrip(StoredTrip Trip, Device Device, ITripEnvelope
 internal static class CheckRunner
 {
     /// <summary>Every stored trip test judged; <paramref name="requireRegisteredInstruments"/> makes an unregistered instrument a finding.</summary>
-    public static IReadOnlyList<CheckedTrip> Run(RecordStore store, AssetTag? only, bool requireRegisteredInstruments = false)
+    public static IReadOnlyList<CheckedTrip> Run(RecordStore store, AssetTag? only, bool requireRegisteredInstruments = false) =>
+        Run(store, store.Histories(), only, requireRegisteredInstruments);
+
+    /// <summary>As <see cref="Run(RecordStore, AssetTag?, bool)"/>, with the register histories already read.</summary>
+    public static IReadOnlyList<CheckedTrip> Run(RecordStore store, IReadOnlyDictionary<string, DeviceHistory> histories, AssetTag? only, bool requireRegisteredInstruments)
     {
-        var histories = store.Histories();
         var assessor = new TripAssessor(store.CurveTables(), store.AmbientTables());
         var instruments = store.Instruments();
         return store.Trips(only)

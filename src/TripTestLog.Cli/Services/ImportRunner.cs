@@ -56,19 +56,14 @@ internal sealed class ImportRunner(RecordStore store, ILogger log, CliContext cl
     {
         using var progress = Progress.For(cli, files.Count);
 
-        // Parse everything first: cheap, and it lets the register go in before the tests that need it.
-        var parsed = new List<(ParsedFile File, ReadOptions Read)>(files.Count);
-        foreach (var file in files)
-        {
-            progress.Step("reading " + Path.GetFileName(file.Path));
-            parsed.Add((RecordFileReader.Read(file.Path, cli.Today, file.Read), file.Read));
-        }
-
+        // Order by the kind read off each header, then read and store one file at a time, so that registers go in
+        // before the tests that need them and only one file is held in memory.
+        var ordered = files.OrderBy(f => Order(RecordFileReader.KindOf(f.Path, f.Read))).ToList();
         var outcomes = new List<ImportOutcome>(files.Count);
-        progress.Restart(files.Count);
-        foreach (var (file, read) in parsed.OrderBy(p => Order(p.File.Kind)))
+        foreach (var (path, read) in ordered)
         {
-            progress.Step("storing " + Path.GetFileName(file.Path));
+            progress.Step(Path.GetFileName(path));
+            var file = RecordFileReader.Read(path, cli.Today, read);
             var outcome = store.Import(file, cli.Clock.GetUtcNow(), options);
             if (options.AcceptValid && outcome.Status == ImportStatus.Imported && outcome.RefusedRows > 0)
             {
@@ -82,11 +77,12 @@ internal sealed class ImportRunner(RecordStore store, ILogger log, CliContext cl
         return outcomes;
     }
 
-    // Registers and tables first: measurement files need their devices, and checks need the tables.
+    // Registers and tables first: measurement files need their devices, and checks need the tables. Unrecognised last.
     private static int Order(RecordKind? kind) => kind switch
     {
         RecordKind.DeviceRegister => 0,
         RecordKind.InstrumentRegister or RecordKind.CurveTable or RecordKind.AmbientTable => 1,
+        null => 3,
         _ => 2,
     };
 

@@ -10,7 +10,7 @@ internal sealed class Progress : IDisposable
     private const int MinimumFiles = 4;
 
     private readonly TextWriter? _writer;
-    private int _total;
+    private readonly int _total;
     private int _done;
     private string _phase = "";
 
@@ -22,12 +22,6 @@ internal sealed class Progress : IDisposable
 
     public static Progress For(CliContext cli, int total) =>
         new(cli.ErrorIsTerminal && total >= MinimumFiles ? cli.Error : null, total);
-
-    public void Restart(int total)
-    {
-        _total = total;
-        _done = 0;
-    }
 
     public void Step(string what)
     {
