@@ -20,12 +20,12 @@ internal static class SettingsCodec
 
     public static string Write(DeviceSettings settings) => JsonSerializer.Serialize(settings switch
     {
-        Iec60898Settings s => new Dto { Kind = "iec60898", Curve = s.Curve.ToString() },
+        Iec60898Settings s => new Dto { Kind = "iec60898", Curve = s.Curve.ToString(), Supply = s.Supply == Supply.Dc ? "dc" : null },
         ElectronicTripSettings s => new Dto
         {
             Kind = "iec60947-electronic", IrA = s.Ir.Value, TrS = s.Tr.Value, TrRefMultiple = s.TrReferenceMultiple, IsdA = s.Isd?.Value,
             TsdS = s.Tsd?.Value, TsdI2t = s.TsdI2t, IiA = s.Ii?.Value, TimeTolerancePct = s.TimeTolerance.Fraction * 100,
-            TimeToleranceMinS = s.TimeTolerance.Floor.Value, InstMaxS = s.InstantaneousMax.Value,
+            TimeToleranceMinS = s.TimeTolerance.Floor.Value, InstMaxS = s.InstantaneousMax.Value, ThermalMemory = s.ThermalMemory ? true : null,
         },
         ThermalMagneticSettings s => new Dto { Kind = "iec60947-thermal-magnetic", IrA = s.Ir.Value, ImA = s.Im.Value, InstMaxS = s.InstantaneousMax.Value },
         RelaySettings s => new Dto
@@ -43,10 +43,21 @@ internal static class SettingsCodec
         var d = JsonSerializer.Deserialize<Dto>(json, Options) ?? throw new InvalidDataException("empty settings_json");
         return d.Kind switch
         {
-            "iec60898" => new Iec60898Settings(Enum.Parse<TripCurve>(d.Curve!)),
+            "iec60898" => new Iec60898Settings(Enum.Parse<TripCurve>(d.Curve!))
+            {
+                Supply = d.Supply switch
+                {
+                    null => Supply.Ac,
+                    "dc" => Supply.Dc,
+                    _ => throw new InvalidDataException($"unknown supply '{d.Supply}' in settings_json"),
+                },
+            },
             "iec60947-electronic" => new ElectronicTripSettings(
                 Amperes.Of(d.IrA!.Value), Seconds.Of(d.TrS!.Value), d.TrRefMultiple!.Value, A(d.IsdA), S(d.TsdS), d.TsdI2t ?? false, A(d.IiA),
-                TimeTolerance.Of(d.TimeTolerancePct!.Value / 100, Seconds.Of(d.TimeToleranceMinS!.Value)), Seconds.Of(d.InstMaxS!.Value)),
+                TimeTolerance.Of(d.TimeTolerancePct!.Value / 100, Seconds.Of(d.TimeToleranceMinS!.Value)), Seconds.Of(d.InstMaxS!.Value))
+            {
+                ThermalMemory = d.ThermalMemory ?? false,
+            },
             "iec60947-thermal-magnetic" => new ThermalMagneticSettings(Amperes.Of(d.IrA!.Value), Amperes.Of(d.ImA!.Value), Seconds.Of(d.InstMaxS!.Value)),
             "relay-idmt" => new RelaySettings(
                 CurveCodes.TryParse(d.Curve!, out var c) ? c : throw new InvalidDataException($"unknown relay curve '{d.Curve}' in settings_json"),
@@ -103,5 +114,10 @@ internal static class SettingsCodec
         public double? InstMaxS { get; set; }
 
         public string? CurveTable { get; set; }
+
+        // Written only when not the default, so settings stored before these fields existed compare equal.
+        public string? Supply { get; set; }
+
+        public bool? ThermalMemory { get; set; }
     }
 }

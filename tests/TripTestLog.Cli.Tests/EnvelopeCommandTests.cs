@@ -18,14 +18,18 @@ public sealed class EnvelopeCommandTests
     public void Csv_HasTheTablePointsOfIec60898Table7()
     {
         // IEC 60898-1:2015 Table 7 for curve B, In = 40 A (> 32 A: 120 s at 2.55 In; <= 63 A: 1 h at 1.13 and 1.45 In).
+        // Row b starts warm, so its 1 h limit shows in the band for a warm test.
         var (exit, output, _) = CliRun.Run("envelope", "--curve", "B", "--rated", "40", "--csv");
+        var (_, warm, _) = CliRun.Run("envelope", "--curve", "B", "--rated", "40", "--csv", "--start", "warm");
 
         Assert.Equal(0, exit);
         var rows = output.Split('\n', StringSplitOptions.RemoveEmptyEntries).Select(l => l.Split(',')).ToList();
-        Assert.Equal("multiple,current_a,min_s,max_s,min_source,max_source,point", string.Join(',', rows[0]));
+        Assert.Equal("multiple,current_a,min_s,max_s,min_source,max_source,point,typical_min_s,typical_max_s", string.Join(',', rows[0]));
         var byPoint = rows.Skip(1).Where(r => r[6].Length > 0).ToDictionary(r => r[6]);
+        var warmB = warm.Split('\n').Select(l => l.Split(',')).Single(r => r.Length > 6 && r[6] == "b");
         Assert.Equal("3600", byPoint["a"][2]);
-        Assert.Equal("3600", byPoint["b"][3]);
+        Assert.Equal("", byPoint["b"][3]);
+        Assert.Equal("3600", warmB[3]);
         Assert.Equal(("1", "120"), (byPoint["c"][2], byPoint["c"][3]));
         Assert.Equal(("3", "0.1"), (byPoint["d"][0], byPoint["d"][2]));
         Assert.Equal(("5", "0.1"), (byPoint["e"][0], byPoint["e"][3]));
@@ -54,13 +58,17 @@ public sealed class EnvelopeCommandTests
     }
 
     [Fact]
-    public void ThermalMagnetic_ShowsNoBandBetweenTheConventionalPointsAndTheMagneticRange()
+    public void ThermalMagnetic_CarriesThe130IrLimitUpward_ForAWarmStartOnly()
     {
-        var (exit, output, _) = CliRun.Run("envelope", "--family", "iec60947-thermal-magnetic", "--rated", "160", "--ir", "125", "--im", "1250", "--csv");
+        // IEC 60947-2 (from memory): 1.30 Ir, straight after the 1.05 Ir test, trip within 2 h (In > 63 A).
+        var (exit, cold, _) = CliRun.Run("envelope", "--family", "iec60947-thermal-magnetic", "--rated", "160", "--ir", "125", "--im", "1250", "--csv");
+        var (_, warm, _) = CliRun.Run("envelope", "--family", "iec60947-thermal-magnetic", "--rated", "160", "--ir", "125", "--im", "1250", "--csv", "--start", "warm");
 
         Assert.Equal(0, exit);
-        var row = output.Split('\n').Select(l => l.Split(',')).Single(r => r[0] == "3");
-        Assert.Equal(("", "none"), (row[2], row[4]));
+        var coldRow = cold.Split('\n').Select(l => l.Split(',')).Single(r => r[0] == "3");
+        var warmRow = warm.Split('\n').Select(l => l.Split(',')).Single(r => r[0] == "3");
+        Assert.Equal(("0", "", "none"), (coldRow[2], coldRow[3], coldRow[5]));
+        Assert.Equal(("7200", "normative"), (warmRow[3], warmRow[5]));
     }
 
     [Fact]
@@ -82,6 +90,9 @@ public sealed class EnvelopeCommandTests
     [InlineData("--curve", "C", "--rated", "-3")]
     [InlineData("--curve", "C")]
     [InlineData("--family", "unknown", "--curve", "C", "--rated", "16")]
+    [InlineData("--curve", "D", "--rated", "16", "--supply", "dc")]
+    [InlineData("--curve", "C", "--rated", "16", "--start", "tepid")]
+    [InlineData("--curve", "C", "--rated", "16", "--poles", "5")]
     public void BadSettings_AreRefusedWithExitCode2(params string[] args)
     {
         var (exit, _, error) = CliRun.Run(["envelope", .. args]);

@@ -77,6 +77,47 @@ public sealed class FamiliesImportTests
         Assert.Empty(parsed.Devices);
     }
 
+    private const string MiniatureFamilies = """
+        asset_tag,site,location,family,curve,rated_current_a,poles,rated_voltage_v,supply,ir_a,tr_s,thermal_memory
+        D-1,S,L,iec60898,C,16,2,230,dc,,,
+        Q-1,S,L,iec61009,B,20,2,230,,,,
+        E-3,S,L,iec60947-electronic,,630,3,400,,400,10,yes
+        """;
+
+    [Fact]
+    public void DcBreakers_Rcbos_AndThermalMemory_AreRegistered_AndStoredAsRead()
+    {
+        // IEC 60898-2 (d.c.), IEC 61009-1 (RCBO) and an electronic unit with a thermal image, read back from the database.
+        using var temp = new TempFolder();
+        using var store = RecordStore.Open(temp.Database);
+
+        var outcome = Import(store, temp.Write("register.csv", MiniatureFamilies));
+        var again = Import(store, temp.Write("register-again.csv", MiniatureFamilies + "\n"));
+        var histories = store.Histories();
+
+        Assert.Equal((ImportStatus.Imported, 3L), (outcome.Status, outcome.Added));
+        Assert.Equal((0L, 3L), (again.Updated, again.Unchanged));
+        Assert.Equal(Supply.Dc, Assert.IsType<Iec60898Settings>(histories["D-1"].Latest.Settings).Supply);
+        Assert.Equal((DeviceFamily.Iec61009, Supply.Ac), (histories["Q-1"].Latest.Family, ((Iec60898Settings)histories["Q-1"].Latest.Settings).Supply));
+        Assert.True(Assert.IsType<ElectronicTripSettings>(histories["E-3"].Latest.Settings).ThermalMemory);
+    }
+
+    [Theory]
+    [InlineData("D-2,S,L,iec60898,D,16,2,230,dc,,,", "curve", "only curves B and C")]
+    [InlineData("D-2,S,L,iec60898,C,16,2,230,hvdc,,,", "supply", "write ac or dc")]
+    [InlineData("Q-2,S,L,iec61009,C,16,2,230,dc,,,", "supply", "ac only")]
+    [InlineData("E-4,S,L,iec60947-electronic,,630,3,400,,400,10,maybe", "thermal_memory", "not yes or no")]
+    public void BadSupplyOrThermalMemory_IsReportedByColumn(string row, string column, string phrase)
+    {
+        using var temp = new TempFolder();
+        var header = MiniatureFamilies.ReplaceLineEndings("\n").Split('\n')[0];
+
+        var parsed = RecordFileReader.Read(temp.Write("bad.csv", header + "\n" + row + "\n"), Records.Today);
+
+        Assert.Contains(parsed.Problems, p => p.Column == column && p.Reason.Contains(phrase, StringComparison.Ordinal) && p.Line == 2);
+        Assert.Empty(parsed.Devices);
+    }
+
     [Fact]
     public void TwoEntriesForOneDeviceWithTheSameDate_RefuseTheFile()
     {

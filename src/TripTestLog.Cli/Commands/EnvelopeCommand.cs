@@ -2,6 +2,7 @@ using System.CommandLine;
 using TripTestLog.Cli.Output;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Envelopes;
+using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Quantities;
 using TripTestLog.Domain.Records;
 using TripTestLog.Domain.Settings;
@@ -33,6 +34,20 @@ internal static class EnvelopeCommand
             return Usage(cli, $"--family: '{request.FamilyText}' is not a known family; use one of {string.Join(", ", FamilyCodes.All)}");
         }
 
+        StartCondition start;
+        switch (request.Start.Trim().ToLowerInvariant())
+        {
+            case "cold":
+                start = StartCondition.Cold;
+                break;
+            case "warm":
+                start = StartCondition.Warm;
+                break;
+            default:
+                return Usage(cli, $"--start: '{request.Start}' is not a start condition; use cold or warm");
+        }
+
+        var conditions = new TestConditions(start, request.OnePole ? PoleLoading.OnePole : PoleLoading.AllPoles);
         ITripEnvelope envelope;
         string title;
         if (request.Asset is { } asset)
@@ -61,18 +76,23 @@ internal static class EnvelopeCommand
             }
 
             var rated = Amperes.Of(request.Rated!.Value);
-            var device = new Device(AssetTag.Of("envelope"), "", "", family, rated, 1, Volts.Of(400), null, null, "", "", "", settings.Value.Settings);
+            if (request.Poles is { } n && n is < 1 or > 4)
+            {
+                return Usage(cli, "--poles: give 1 to 4");
+            }
+
+            var device = new Device(AssetTag.Of("envelope"), "", "", family, rated, request.Poles ?? 1, Volts.Of(400), null, null, "", "", "", settings.Value.Settings);
             envelope = EnvelopeFactory.For(device, device.Settings, 1.0, settings.Value.Tables);
             title = $"{FamilyCodes.Of(family)}, In = {rated}, {device.Settings.Summary} ({envelope.Standard})";
         }
 
         if (request.Csv)
         {
-            EnvelopeWriter.WriteCsv(cli.Out, envelope);
+            EnvelopeWriter.WriteCsv(cli.Out, envelope, conditions);
         }
         else
         {
-            EnvelopeWriter.WriteTable(cli.Out, envelope, title);
+            EnvelopeWriter.WriteTable(cli.Out, envelope, title, conditions);
         }
 
         return ExitCodes.Ok;
@@ -88,9 +108,20 @@ internal static class EnvelopeCommand
         var noTables = new Dictionary<string, CurveTable>();
         switch (r.Family!.Value)
         {
-            case DeviceFamily.Iec60898:
+            case DeviceFamily.Iec60898 or DeviceFamily.Iec61009:
                 TripCurve? curve = r.Curve?.Trim().ToUpperInvariant() switch { "B" => TripCurve.B, "C" => TripCurve.C, "D" => TripCurve.D, _ => null };
-                return curve is { } c ? ((new Iec60898Settings(c), noTables), null) : (null, "--curve: give B, C or D");
+                Supply? supply = r.Supply?.Trim().ToLowerInvariant() switch { null or "ac" => Supply.Ac, "dc" => Supply.Dc, _ => null };
+                if (supply is null || (supply == Supply.Dc && r.Family == DeviceFamily.Iec61009))
+                {
+                    return (null, "--supply: give ac or dc (dc for iec60898 only)");
+                }
+
+                if (supply == Supply.Dc && curve == TripCurve.D)
+                {
+                    return (null, "--curve: IEC 60898-2 admits only curves B and C for d.c.");
+                }
+
+                return curve is { } c ? ((new Iec60898Settings(c) { Supply = supply.Value }, noTables), null) : (null, "--curve: give B, C or D");
 
             case DeviceFamily.Iec60947Electronic:
                 if (Positive(r.Ir) is not { } ir || Positive(r.Tr) is not { } tr)
@@ -104,7 +135,7 @@ internal static class EnvelopeCommand
                 }
 
                 return ((new ElectronicTripSettings(Amperes.Of(ir), Seconds.Of(tr), Positive(r.TrReference) ?? LabPolicy.TrReferenceMultiple,
-                    A(r.Isd), S(r.Tsd), r.I2t, A(r.Ii), LabPolicy.ElectronicTimeTolerance, LabPolicy.InstantaneousMax), noTables), null);
+                    A(r.Isd), S(r.Tsd), r.I2t, A(r.Ii), LabPolicy.ElectronicTimeTolerance, LabPolicy.InstantaneousMax) { ThermalMemory = r.ThermalMemory }, noTables), null);
 
             case DeviceFamily.Iec60947ThermalMagnetic:
                 return Positive(r.Ir) is { } tir && Positive(r.Im) is { } im && im > tir

@@ -7,7 +7,7 @@ namespace TripTestLog.Cli.Commands;
 internal sealed record EnvelopeRequest(
     DeviceFamily? Family, string FamilyText, string? Curve, double? Rated, double? Ir, double? Tr, double? TrReference, double? Isd, double? Tsd, bool I2t,
     double? Ii, double? Im, double? Pickup, double? Tms, double? HighSet, double? HighSetDelay, double? OpeningTime, FileInfo? Table,
-    string? Asset, FileInfo Database, bool Csv);
+    string? Asset, FileInfo Database, bool Csv, string Start, bool OnePole, int? Poles, string? Supply, bool ThermalMemory);
 
 /// <summary>The options of `envelope`, declared once and read into an <see cref="EnvelopeRequest"/>.</summary>
 internal sealed class EnvelopeOptions
@@ -37,15 +37,29 @@ internal sealed class EnvelopeOptions
     private readonly Option<FileInfo?> _table = new("--table") { Description = "curve-table: a curve table CSV file", HelpName = "FILE" };
     private readonly Option<string?> _asset = new("--asset") { Description = "Draw a registered device's band instead, from --db", HelpName = "TAG" };
     private readonly Option<FileInfo> _db = CommonOptions.Database();
-    private readonly Option<bool> _csv = new("--csv") { Description = "Write CSV: multiple,current_a,min_s,max_s,min_source,max_source,point" };
+    private readonly Option<bool> _csv = new("--csv") { Description = "Write CSV: multiple,current_a,min_s,max_s,min_source,max_source,point,typical_min_s,typical_max_s" };
 
-    public IEnumerable<Option> All => [_family, _curve, _rated, _ir, _tr, _trRef, _isd, _tsd, _i2t, _ii, _im, _pickup, _tms, _highSet, _highSetDelay, _opening, _table, _asset, _db, _csv];
+    private readonly Option<string> _start = new("--start")
+    {
+        Description = "Draw the band for a test from cold or warm (the band check uses for that start)",
+        DefaultValueFactory = _ => "cold",
+        HelpName = "cold|warm",
+    };
+
+    private readonly Option<bool> _onePole = new("--one-pole") { Description = "Draw the band for a test with one pole of a multipole breaker loaded" };
+    private readonly Option<int?> _poles = new("--poles") { Description = "iec60898, iec61009: protected poles, 1 to 4 (default 1)", HelpName = "N" };
+    private readonly Option<string?> _supply = new("--supply") { Description = "iec60898: ac or dc (IEC 60898-2; curves B and C)", HelpName = "ac|dc" };
+    private readonly Option<bool> _thermalMemory = new("--thermal-memory") { Description = "iec60947-electronic: the unit keeps a thermal image" };
+
+    public IEnumerable<Option> All => [_family, _curve, _rated, _ir, _tr, _trRef, _isd, _tsd, _i2t, _ii, _im, _pickup, _tms, _highSet, _highSetDelay, _opening, _table,
+        _poles, _supply, _thermalMemory, _start, _onePole, _asset, _db, _csv];
 
     public EnvelopeRequest Read(ParseResult p)
     {
         var text = p.GetValue(_family)!;
         return new EnvelopeRequest(FamilyCodes.TryParse(text, out var family) ? family : null, text, p.GetValue(_curve), p.GetValue(_rated), p.GetValue(_ir), p.GetValue(_tr), p.GetValue(_trRef),
             p.GetValue(_isd), p.GetValue(_tsd), p.GetValue(_i2t), p.GetValue(_ii), p.GetValue(_im), p.GetValue(_pickup), p.GetValue(_tms),
-            p.GetValue(_highSet), p.GetValue(_highSetDelay), p.GetValue(_opening), p.GetValue(_table), p.GetValue(_asset), p.GetValue(_db)!, p.GetValue(_csv));
+            p.GetValue(_highSet), p.GetValue(_highSetDelay), p.GetValue(_opening), p.GetValue(_table), p.GetValue(_asset), p.GetValue(_db)!, p.GetValue(_csv),
+            p.GetValue(_start)!, p.GetValue(_onePole), p.GetValue(_poles), p.GetValue(_supply), p.GetValue(_thermalMemory));
     }
 }

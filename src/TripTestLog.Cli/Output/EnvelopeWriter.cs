@@ -1,5 +1,6 @@
 using System.Globalization;
 using TripTestLog.Domain.Envelopes;
+using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Quantities;
 
 namespace TripTestLog.Cli.Output;
@@ -15,20 +16,27 @@ internal static class EnvelopeWriter
             .Order()
             .ToList();
 
-    public static void WriteTable(TextWriter writer, ITripEnvelope envelope, string title)
+    /// <summary>The band at <paramref name="multiple"/> for <paramref name="conditions"/>: the very reduction <c>check</c> judges by.</summary>
+    public static AppliedBand BandAt(ITripEnvelope envelope, double multiple, TestConditions conditions) =>
+        envelope.At(CurrentMultiple.Of(multiple) * envelope.Reference).For(conditions);
+
+    public static void WriteTable(TextWriter writer, ITripEnvelope envelope, string title, TestConditions conditions)
     {
         writer.WriteLine(title);
+        writer.WriteLine($"Band for a test {Format.Conditions(conditions)}.");
         writer.WriteLine();
-        var table = new TextTable($"x {envelope.ReferenceName}>", "Current>", "Min>", "Max>", "Min from", "Max from", "Point");
+        var table = new TextTable($"x {envelope.ReferenceName}>", "Current>", "Min>", "Max>", "Typical min>", "Typical max>", "Min from", "Max from", "Point");
         foreach (var m in Multiples(envelope))
         {
-            var band = envelope.At(CurrentMultiple.Of(m) * envelope.Reference);
+            var band = BandAt(envelope, m, conditions);
             var point = envelope.Points.FirstOrDefault(p => p.Multiple.Value == m);
             table.Add(
                 Format.Number(m, "0.00"),
                 band.Current.ToString(),
                 band.HasRequirement ? Format.Minimum(band.Minimum) : "no band",
                 band.HasRequirement ? Format.Maximum(band.Maximum) : "no band",
+                band.TypicalMinimum is { } tn ? Format.Minimum(tn) : "",
+                band.TypicalMaximum is { } tx ? Format.Maximum(tx) : "",
                 band.HasRequirement ? Format.Source(band.Minimum.Source) : "-",
                 band.HasRequirement ? Format.Source(band.Maximum.Source) : "-",
                 point?.Label ?? "");
@@ -47,26 +55,31 @@ internal static class EnvelopeWriter
             writer.WriteLine();
         }
 
-        writer.WriteLine("Edge sources: normative = the standard's own point; characteristic = the standard's formula; setting = the device's");
-        writer.WriteLine("settings with their tolerances; interpolated = log-log line between points; extrapolated = beyond the last point");
-        writer.WriteLine("(I²t = constant for a thermal release, the formula outside its accuracy range for a relay); curve-table = the lab's");
-        writer.WriteLine("table from the maker's curve. Min \"never\": must not trip at all; max \"none\": no trip required.");
+        writer.WriteLine("Min and Max are guaranteed edges: a trip outside them fails. Typical edges are drawn lines; a trip outside them");
+        writer.WriteLine("only raises an advisory. Edge sources: normative = the standard's own point, at its current or carried in the");
+        writer.WriteLine("direction physics gives it; derived = from a point by I²t; characteristic = the standard's formula; setting = the");
+        writer.WriteLine("device's settings with their tolerances; curve-table = the lab's table from the maker's curve. Min \"never\": must");
+        writer.WriteLine("not trip at all; max \"none\": no trip required.");
         writer.WriteLine(Safety.Caution);
     }
 
-    /// <summary>CSV: multiple,current_a,min_s,max_s,min_source,max_source,point. An empty max_s means unbounded; a row with empty min_s and max_s has no band.</summary>
-    public static void WriteCsv(TextWriter writer, ITripEnvelope envelope)
+    /// <summary>
+    /// CSV: multiple,current_a,min_s,max_s,min_source,max_source,point,typical_min_s,typical_max_s. An empty max_s means
+    /// unbounded; a row with empty min_s and max_s has no band; empty typical columns mean no drawn edge inside the band.
+    /// </summary>
+    public static void WriteCsv(TextWriter writer, ITripEnvelope envelope, TestConditions conditions)
     {
-        writer.WriteLine("multiple,current_a,min_s,max_s,min_source,max_source,point");
+        writer.WriteLine("multiple,current_a,min_s,max_s,min_source,max_source,point,typical_min_s,typical_max_s");
         foreach (var m in Multiples(envelope))
         {
-            var band = envelope.At(CurrentMultiple.Of(m) * envelope.Reference);
+            var band = BandAt(envelope, m, conditions);
             var point = envelope.Points.FirstOrDefault(p => p.Multiple.Value == m)?.Label ?? "";
             var min = band.HasRequirement ? R(band.Minimum.Limit?.Value) : "";
             var max = band.HasRequirement ? R(band.Maximum.Limit?.Value) : "";
             writer.WriteLine(string.Join(',', R(m), R(band.Current.Value), min, max,
                 band.HasRequirement ? Format.Source(band.Minimum.Source) : "none",
-                band.HasRequirement ? Format.Source(band.Maximum.Source) : "none", point));
+                band.HasRequirement ? Format.Source(band.Maximum.Source) : "none", point,
+                R(band.TypicalMinimum?.Limit?.Value), R(band.TypicalMaximum?.Limit?.Value)));
         }
     }
 

@@ -23,6 +23,10 @@ internal static class Format
 
     public static string Start(StartCondition start) => start == StartCondition.Cold ? "cold" : "warm";
 
+    /// <summary>Test conditions in words, e.g. "from cold, all poles loaded".</summary>
+    public static string Conditions(TestConditions c) =>
+        $"{(c.Start == StartCondition.Cold ? "from cold" : "from warm")}, {(c.Loading == PoleLoading.AllPoles ? "all poles loaded" : "one pole loaded")}";
+
     public static string Verdict(Verdict verdict) => verdict switch
     {
         Domain.Verdicts.Verdict.Pass => "pass",
@@ -42,6 +46,7 @@ internal static class Format
         EdgeSource.Characteristic => "characteristic",
         EdgeSource.Setting => "setting",
         EdgeSource.CurveTable => "curve-table",
+        EdgeSource.Derived => "derived",
         _ => "none",
     };
 

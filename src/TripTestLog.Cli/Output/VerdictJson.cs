@@ -58,7 +58,10 @@ internal static class VerdictJson
             r.Device.Settings.Summary,
             a.Notes,
             band.HasRequirement && band.Minimum.Limit is null,
-            r.InstrumentFinding);
+            r.InstrumentFinding,
+            band.TypicalMinimum?.Limit?.Value,
+            band.TypicalMaximum?.Limit?.Value,
+            a.Advisories.Select(x => x.Message).ToList());
     }
 
     private sealed record VerdictRow(
@@ -92,5 +95,8 @@ internal static class VerdictJson
         string Settings,
         IReadOnlyList<string> Notes,
         bool MustNotTrip,
-        string? InstrumentFinding);
+        string? InstrumentFinding,
+        double? TypicalMinS,
+        double? TypicalMaxS,
+        IReadOnlyList<string> Advisories);
 }

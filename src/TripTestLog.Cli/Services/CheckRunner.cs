@@ -26,13 +26,18 @@ internal static class CheckRunner
     {
         var assessor = new TripAssessor(store.CurveTables(), store.AmbientTables());
         var instruments = store.Instruments();
-        return store.Trips(only)
-            .Select(trip =>
-            {
-                var result = assessor.Assess(histories[trip.Tag.Value], trip.Measurement);
-                var finding = instruments.Check(trip.Measurement.Instrument, trip.Measurement.TestedAt.Date, requireRegisteredInstruments);
-                return new CheckedTrip(trip, result.Device, result.Envelope, result.Assessment, finding);
-            })
-            .ToList();
+        var results = new List<CheckedTrip>();
+        Domain.Measurements.TripMeasurement? previous = null;
+
+        // Trips come in device and date order, so the test before each one, which checks its start claim, is the last one seen.
+        foreach (var trip in store.Trips(only))
+        {
+            var result = assessor.Assess(histories[trip.Tag.Value], trip.Measurement, previous);
+            var finding = instruments.Check(trip.Measurement.Instrument, trip.Measurement.TestedAt.Date, requireRegisteredInstruments);
+            results.Add(new CheckedTrip(trip, result.Device, result.Envelope, result.Assessment, finding));
+            previous = trip.Measurement;
+        }
+
+        return results;
     }
 }

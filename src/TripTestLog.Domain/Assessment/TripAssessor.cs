@@ -9,18 +9,13 @@ namespace TripTestLog.Domain.Assessment;
 
 /// <summary>
 /// Judges a trip test the way a lab would: with the register entry in force on the test date, the settings found on
-/// the device when the record carries them (they win), the ambient correction when the device has one, and a note on
-/// thermal verdicts taken far from the reference ambient without one.
+/// the device when the record carries them (they win), the poles loaded, the ambient correction when the device has
+/// one, and three checks that a failure is not the test's own doing. A verdict that would change under a start the
+/// records leave in doubt, under the ambient shift a thermal release may have without a derating table, or (on an RCBO
+/// loaded on one pole) by the residual-current release, is not assessable, and the reason says why.
 /// </summary>
-public sealed class TripAssessor(IReadOnlyDictionary<string, CurveTable> curveTables, IReadOnlyDictionary<string, AmbientTable> ambientTables)
+public sealed partial class TripAssessor(IReadOnlyDictionary<string, CurveTable> curveTables, IReadOnlyDictionary<string, AmbientTable> ambientTables)
 {
-    /// <summary>
-    /// How far, in kelvin, the test ambient may lie from the reference ambient before an uncorrected thermal verdict is
-    /// marked: 15 K. A lab policy chosen for this tool, so that tests in an ordinary indoor 15 °C to 45 °C pass unmarked
-    /// against a 30 °C reference (thermal releases shift a few per cent in current per 10 K); not a figure from a standard.
-    /// </summary>
-    public const double AmbientFlagKelvin = 15.0;
-
     private readonly Dictionary<(Device, DeviceSettings, double), ITripEnvelope> _envelopes = [];
 
     /// <summary>The result of judging one test: the envelope used and the assessment.</summary>
@@ -29,8 +24,11 @@ public sealed class TripAssessor(IReadOnlyDictionary<string, CurveTable> curveTa
     /// <param name="Assessment">Verdict, basis, margin, reason and notes.</param>
     public sealed record Result(Device Device, ITripEnvelope Envelope, TripAssessment Assessment);
 
-    /// <summary>Judges <paramref name="measurement"/> for the device whose entries are <paramref name="history"/>.</summary>
-    public Result Assess(DeviceHistory history, TripMeasurement measurement)
+    /// <summary>
+    /// Judges <paramref name="measurement"/> for the device whose entries are <paramref name="history"/>;
+    /// <paramref name="previous"/> is the device's test just before it, which checks the test's start claim.
+    /// </summary>
+    public Result Assess(DeviceHistory history, TripMeasurement measurement, TripMeasurement? previous = null)
     {
         ArgumentNullException.ThrowIfNull(history);
         ArgumentNullException.ThrowIfNull(measurement);
@@ -45,45 +43,34 @@ public sealed class TripAssessor(IReadOnlyDictionary<string, CurveTable> curveTa
 
         var uncorrected = Envelope(device, settings, 1.0);
         var factor = 1.0;
-        if (uncorrected.IsThermal(measurement.Current) && measurement.Ambient is { } ambient)
+        var thermal = uncorrected.IsThermal(measurement.Current);
+        if (thermal && measurement.Ambient is { } ambient && device.AmbientTable is not null)
         {
-            (factor, var ambientNote) = Ambient(device, ambient);
-            if (ambientNote is not null)
-            {
-                notes.Add(ambientNote);
-            }
+            (factor, var ambientNote) = TableFactor(device, ambient);
+            notes.Add(ambientNote);
         }
 
         var envelope = factor == 1.0 ? uncorrected : Envelope(device, settings, factor);
-        var assessment = TripJudge.Assess(envelope, measurement) with { Notes = notes };
-        return new Result(device, envelope, assessment);
+        var conditions = TestConditions.Of(measurement, device.Poles);
+        var assessment = TripJudge.Assess(envelope, measurement, conditions);
+        assessment = CheckStart(assessment, envelope, previous, conditions)
+            ?? CheckAmbient(assessment, device, settings, thermal, conditions)
+            ?? CheckResidual(assessment, device, conditions)
+            ?? assessment;
+        return new Result(device, envelope, assessment with { Notes = [.. notes, .. assessment.Notes] });
     }
 
-    private (double Factor, string? Note) Ambient(Device device, Quantities.Celsius ambient)
+    private (double Factor, string Note) TableFactor(Device device, Quantities.Celsius ambient)
     {
-        var reference = device.ReferenceAmbient ?? EnvelopeFactory.DefaultReferenceAmbient(device.Family);
-        if (device.AmbientTable is { } name)
+        var name = device.AmbientTable!;
+        if (!ambientTables.TryGetValue(name, out var table))
         {
-            if (!ambientTables.TryGetValue(name, out var table))
-            {
-                return (1.0, $"ambient table '{name}' has not been imported; no ambient correction applied");
-            }
-
-            if (table.FactorAt(ambient) is { } f)
-            {
-                return (f, $"ambient {ambient}: thermal limits corrected by x{f.ToString("0.###", CultureInfo.InvariantCulture)} from ambient table {name}");
-            }
-
-            return (1.0, $"ambient {ambient} is outside ambient table {name}; no correction applied");
+            return (1.0, $"ambient table '{name}' has not been imported; no ambient correction applied");
         }
 
-        if (reference is { } r && Math.Abs(ambient.Value - r.Value) > AmbientFlagKelvin)
-        {
-            return (1.0, $"ambient {ambient} is {Math.Abs(ambient.Value - r.Value):0.#} K from the {r} reference and the device has no ambient table; "
-                + "a thermal trip time may be shifted by that alone");
-        }
-
-        return (1.0, null);
+        return table.FactorAt(ambient) is { } f
+            ? (f, $"ambient {ambient}: thermal limits corrected by x{f.ToString("0.###", CultureInfo.InvariantCulture)} from ambient table {name}")
+            : (1.0, $"ambient {ambient} is outside ambient table {name}; no correction applied");
     }
 
     private ITripEnvelope Envelope(Device device, DeviceSettings settings, double factor)
@@ -96,4 +83,16 @@ public sealed class TripAssessor(IReadOnlyDictionary<string, CurveTable> curveTa
 
         return envelope;
     }
+
+    // A verdict changes in kind when it turns into, or out of, a failure, or from one failure into the other.
+    private static bool Changes(Verdict a, Verdict b) =>
+        a != b && (a is Verdict.TooEarly or Verdict.TooLate || b is Verdict.TooEarly or Verdict.TooLate);
+
+    private static string Word(Verdict v) => v switch
+    {
+        Verdict.Pass => "pass",
+        Verdict.TooEarly => "too early",
+        Verdict.TooLate => "too late",
+        _ => "not assessable",
+    };
 }

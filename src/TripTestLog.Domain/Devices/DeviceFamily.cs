@@ -17,4 +17,7 @@ public enum DeviceFamily
 
     /// <summary>A breaker judged by a band the lab entered from the maker's published curve.</summary>
     CurveTable,
+
+    /// <summary>A residual-current breaker with integral overcurrent protection (RCBO), IEC 61009-1, curve B, C or D.</summary>
+    Iec61009,
 }

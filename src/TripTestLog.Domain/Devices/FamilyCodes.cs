@@ -10,6 +10,7 @@ public static class FamilyCodes
         [DeviceFamily.Iec60947ThermalMagnetic] = "iec60947-thermal-magnetic",
         [DeviceFamily.RelayIdmt] = "relay-idmt",
         [DeviceFamily.CurveTable] = "curve-table",
+        [DeviceFamily.Iec61009] = "iec61009",
     };
 
     /// <summary>Every code, in declaration order.</summary>

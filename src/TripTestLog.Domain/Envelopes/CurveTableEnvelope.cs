@@ -4,8 +4,11 @@ using TripTestLog.Domain.Quantities;
 namespace TripTestLog.Domain.Envelopes;
 
 /// <summary>
-/// The band of a lab-entered curve table, as multiples of the device's rated current: straight log-log lines between
-/// rows (linear in current where a minimum reaches zero); outside the table's range the band is not defined.
+/// The band of a lab-entered curve table, as multiples of the device's rated current. Each row is a requirement the lab
+/// registered from the maker's data, carried in the direction physics gives it: a row's minimum holds at every lower
+/// current, its maximum at every higher one (guaranteed edges). The straight log-log lines between rows (linear in time
+/// where a minimum reaches zero) are typical edges, for advisories only. Makers draw these curves from cold with every
+/// pole loaded, so the rows assume that.
 /// </summary>
 public sealed class CurveTableEnvelope : ITripEnvelope
 {
@@ -37,44 +40,55 @@ public sealed class CurveTableEnvelope : ITripEnvelope
     /// <inheritdoc />
     public bool IsThermal(Amperes current) => true;
 
-    /// <summary>Whether the table covers <paramref name="current"/>.</summary>
-    public bool Covers(Amperes current)
-    {
-        var x = current.Value / (_reference.Value * _thermalFactor);
-        return x >= _table.Points[0].Multiple.Value * (1 - 1e-9) && x <= _table.Points[^1].Multiple.Value * (1 + 1e-9);
-    }
-
     /// <inheritdoc />
     public TripBand At(Amperes current)
     {
         var m = current / Reference;
         var x = current.Value / (_reference.Value * _thermalFactor);
         var rows = _table.Points;
-        if (!Covers(current))
+        var minimums = new List<BandEdge>();
+        var maximums = new List<BandEdge>();
+
+        // The nearest row at or above the current bounds the minimum; the nearest at or below bounds the maximum.
+        var above = rows.Select((r, k) => (r, k)).FirstOrDefault(p => p.r.Multiple.Value >= x * (1 - 1e-9));
+        var below = rows.Select((r, k) => (r, k)).LastOrDefault(p => p.r.Multiple.Value <= x * (1 + 1e-9));
+        if (above.r is { } up && up.Minimum.Value > 0)
         {
-            var none = $"outside curve table {_table.Name} ({rows[0].Multiple} to {rows[^1].Multiple} In)";
-            return new TripBand(current, m, BandEdge.NoMinimum(none), BandEdge.NoMaximum(none), none);
+            minimums.Add(Row(up.Minimum, up, carried: up.Multiple.Value > x * (1 + 1e-9), "minimum", "lower"));
         }
 
-        var hi = 1;
-        while (hi < rows.Count - 1 && rows[hi].Multiple.Value < x)
+        if (below.r is { Maximum: { } max } lo)
         {
-            hi++;
+            maximums.Add(Row(max, lo, carried: lo.Multiple.Value < x * (1 - 1e-9), "maximum", "higher"));
         }
 
-        var lo = rows[hi - 1];
-        var up = rows[hi];
-        var why = $"curve table {_table.Name}, rows {lo.Multiple} to {up.Multiple} In";
-        var min = Between(x, lo.Multiple.Value, lo.Minimum.Value, up.Multiple.Value, up.Minimum.Value);
-        var minimum = min <= 0 ? BandEdge.NoMinimum(why) : new BandEdge(Seconds.Of(min), EdgeSource.CurveTable, why, StartCondition.Cold);
-        BandEdge maximum = (lo.Maximum, up.Maximum) switch
+        if (above.r is { } u && below.r is { } l && u != l)
         {
-            ({ } a, { } b) => new BandEdge(Seconds.Of(Between(x, lo.Multiple.Value, a.Value, up.Multiple.Value, b.Value)), EdgeSource.CurveTable, why, StartCondition.Cold),
-            (null, { } b) when x >= up.Multiple.Value => new BandEdge(b, EdgeSource.CurveTable, why, StartCondition.Cold),
-            _ => BandEdge.NoMaximum(why + ": no trip required"),
-        };
-        return new TripBand(current, m, minimum, maximum, null);
+            var why = $"curve table {_table.Name}, line between rows {l.Multiple} and {u.Multiple} In";
+            var min = Between(x, l.Multiple.Value, l.Minimum.Value, u.Multiple.Value, u.Minimum.Value);
+            if (min > 0)
+            {
+                minimums.Add(Typical(min, why));
+            }
+
+            if ((l.Maximum, u.Maximum) is ({ } a, { } b))
+            {
+                maximums.Add(Typical(Between(x, l.Multiple.Value, a.Value, u.Multiple.Value, b.Value), why));
+            }
+        }
+
+        return TripBand.Of(current, m, minimums, maximums, $"curve table {_table.Name} sets no limit at {x:0.###} In");
     }
+
+    private BandEdge Row(Seconds limit, CurveTablePoint row, bool carried, string side, string direction) =>
+        new(limit, EdgeSource.CurveTable,
+            $"curve table {_table.Name}, row {row.Multiple} In {side}{(carried ? $", carried to {direction} currents" : "")}", StartCondition.Cold)
+        {
+            Loading = PoleLoading.AllPoles,
+        };
+
+    private static BandEdge Typical(double seconds, string why) =>
+        new(Seconds.Of(seconds), EdgeSource.Interpolated, why, StartCondition.Cold) { Strength = EdgeStrength.Typical, Loading = PoleLoading.AllPoles };
 
     private static double Between(double x, double x0, double t0, double x1, double t1) =>
         t0 > 0 && t1 > 0 ? LogLog.Interpolate(x, x0, t0, x1, t1) : t0 + (t1 - t0) * (x - x0) / (x1 - x0);

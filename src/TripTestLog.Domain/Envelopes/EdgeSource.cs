@@ -6,13 +6,13 @@ public enum EdgeSource
     /// <summary>No limit on this side: zero for a minimum (may trip at once), unbounded for a maximum.</summary>
     None,
 
-    /// <summary>A limit the standard states at this current.</summary>
+    /// <summary>A limit the standard states at a point, at its current or carried in the direction physics gives it.</summary>
     NormativePoint,
 
-    /// <summary>A straight line on log-log axes between two normative points.</summary>
+    /// <summary>A straight line on log-log axes between two points (typical: never fails a breaker alone).</summary>
     Interpolated,
 
-    /// <summary>Extended beyond the last thermal point with I²t = constant.</summary>
+    /// <summary>Extended beyond a point by I²t = constant, or a formula outside its declared range (typical).</summary>
     Extrapolated,
 
     /// <summary>The instantaneous (magnetic) release requirement.</summary>
@@ -26,4 +26,7 @@ public enum EdgeSource
 
     /// <summary>A band the lab entered from the maker's published curve.</summary>
     CurveTable,
+
+    /// <summary>Derived from a point by physics: a thermal release needs at least the same I²t at a lower current.</summary>
+    Derived,
 }

@@ -19,7 +19,7 @@ public static class EnvelopeFactory
         ArgumentNullException.ThrowIfNull(curveTables);
         ITripEnvelope family = settings switch
         {
-            Iec60898Settings s => new Iec60898Envelope(s.Curve, device.RatedCurrent, thermalFactor),
+            Iec60898Settings s => new Iec60898Envelope(s.Curve, device.RatedCurrent, thermalFactor, device.Poles, s.Supply, device.Family == DeviceFamily.Iec61009),
             ElectronicTripSettings s => new ElectronicTripEnvelope(device.RatedCurrent, s, thermalFactor),
             ThermalMagneticSettings s => new ThermalMagneticEnvelope(device.RatedCurrent, s, thermalFactor),
             RelaySettings s => new RelayEnvelope(s),
@@ -50,7 +50,7 @@ public static class EnvelopeFactory
     /// <summary>The ambient the family's thermal release is calibrated at when the register gives none.</summary>
     public static Celsius? DefaultReferenceAmbient(DeviceFamily family) => family switch
     {
-        DeviceFamily.Iec60898 => Iec60898Envelope.ReferenceAmbient,
+        DeviceFamily.Iec60898 or DeviceFamily.Iec61009 => Iec60898Envelope.ReferenceAmbient,
 
         // IEC 60947-2 leaves the reference to the maker; 40 °C is the value most makers state (common practice).
         DeviceFamily.Iec60947Electronic or DeviceFamily.Iec60947ThermalMagnetic => Celsius.Of(40),

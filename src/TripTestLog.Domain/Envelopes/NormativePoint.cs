@@ -3,7 +3,11 @@ using TripTestLog.Domain.Quantities;
 
 namespace TripTestLog.Domain.Envelopes;
 
-/// <summary>A test point a standard defines: a current multiple, a start condition and the time limits at it.</summary>
+/// <summary>
+/// A test point a standard defines: a current multiple, a start condition and the time limits at it. Trip times fall
+/// as current rises, so a no-trip limit also holds at every lower current and a trip-by limit at every higher one; the
+/// envelopes carry each limit that way and no further.
+/// </summary>
 /// <param name="Label">Short name of the point within its standard, e.g. "a" for IEC 60898-1 Table 7 row a.</param>
 /// <param name="Multiple">The test current as a multiple of the reference current.</param>
 /// <param name="Start">The start condition the standard prescribes.</param>
@@ -18,18 +22,32 @@ public sealed record NormativePoint(
     Seconds? MustTripWithin,
     string Requirement)
 {
-    /// <summary>
-    /// The band this point alone sets, for a test matched to it: its hold time as the minimum, its trip time as the
-    /// maximum, and no limit where the point sets none.
-    /// </summary>
-    public TripBand BandAt(Amperes current, CurrentMultiple multiple)
+    /// <summary>True when a trip at exactly <see cref="MustHoldFor"/> is too early ("no tripping at t ≤ T", "T &lt; t").</summary>
+    public bool HoldStrict { get; init; }
+
+    /// <summary>True when a trip at exactly <see cref="MustTripWithin"/> is too late ("tripping at t &lt; T").</summary>
+    public bool TripStrict { get; init; }
+
+    /// <summary>True when the requirement holds whatever the thermal start (e.g. a magnetic release).</summary>
+    public bool AnyStart { get; init; }
+
+    /// <summary>The poles the point assumes loaded; null when any.</summary>
+    public PoleLoading? Loading { get; init; }
+
+    /// <summary>True when the point only forbids a trip: a hold long enough at or above its current proves it.</summary>
+    public bool IsNoTripPoint => MustHoldFor is not null && MustTripWithin is null;
+
+    /// <summary>The point's no-trip limit as a minimum edge; <paramref name="carried"/> when used below the point's current.</summary>
+    public BandEdge HoldEdge(bool carried) => new(MustHoldFor, EdgeSource.NormativePoint,
+        carried ? $"{Requirement}, carried to lower currents" : Requirement, Start)
     {
-        var min = MustHoldFor is { } hold
-            ? new BandEdge(hold, EdgeSource.NormativePoint, Requirement, Start)
-            : BandEdge.NoMinimum($"{Requirement}: sets no minimum");
-        var max = MustTripWithin is { } trip
-            ? new BandEdge(trip, EdgeSource.NormativePoint, Requirement, Start)
-            : BandEdge.NoMaximum($"{Requirement}: requires no trip");
-        return new TripBand(current, multiple, min, max, null);
-    }
+        Strict = HoldStrict, AnyStart = AnyStart, Loading = Loading, PointLabel = Label,
+    };
+
+    /// <summary>The point's trip-by limit as a maximum edge; <paramref name="carried"/> when used above the point's current.</summary>
+    public BandEdge TripEdge(bool carried) => new(MustTripWithin, EdgeSource.NormativePoint,
+        carried ? $"{Requirement}, carried to higher currents" : Requirement, Start)
+    {
+        Strict = TripStrict, AnyStart = AnyStart, Loading = Loading, PointLabel = Label,
+    };
 }

@@ -3,8 +3,9 @@ using TripTestLog.Domain.Quantities;
 namespace TripTestLog.Domain.Envelopes;
 
 /// <summary>
-/// A curve table laid over a family's envelope: where the table covers the current its band is used, elsewhere the
-/// family's. The family's normative points still decide a normative basis.
+/// A curve table laid over a family's envelope: every requirement of both holds, so the band at a current is the union
+/// of their edges and the tightest applicable edge decides. The maker's curve can narrow the standard's band, never
+/// widen it. The family's points and thermal split stay the family's.
 /// </summary>
 public sealed class OverlayEnvelope(CurveTableEnvelope table, ITripEnvelope family) : ITripEnvelope
 {
@@ -26,12 +27,9 @@ public sealed class OverlayEnvelope(CurveTableEnvelope table, ITripEnvelope fami
     /// <inheritdoc />
     public TripBand At(Amperes current)
     {
-        if (!table.Covers(current))
-        {
-            return family.At(current);
-        }
-
-        var band = table.At(current);
-        return band with { Multiple = current / family.Reference };
+        var own = family.At(current);
+        var drawn = table.At(current);
+        return TripBand.Of(current, own.Multiple, [.. own.Minimums, .. drawn.Minimums], [.. own.Maximums, .. drawn.Maximums],
+            own.NoRequirement ?? drawn.NoRequirement ?? "no requirement here");
     }
 }

@@ -8,12 +8,21 @@ namespace TripTestLog.Domain.Envelopes;
 /// <summary>
 /// The band of a breaker tripped by an inverse-time overcurrent relay. The IDMT stage operates at
 /// t = TMS (k / (M^alpha - 1) + c) (IEC 60255-151 Table 1; IEEE C37.112 Table 1), M = I / Is, within the time
-/// tolerance (a percentage with a floor, the IEC 60255-151 form). The pickup tolerance p decides only whether it
-/// operates: below Is (1 - p) it must not operate at all; from Is (1 + p) it must. In between it may, and then no
-/// sooner than the characteristic allows at Is (1 + p), the shortest time it could have there. An optional
-/// definite-time high-set stage is composed with it (<see cref="EdgeCandidates"/>). The breaker's opening time is added
-/// to the latest time only. Within 2 to 20 x Is, the range over which IEC 60255-151 has accuracy declared (from memory),
-/// edges are the standard's characteristic; outside it they are the same formula, marked extrapolated.
+/// tolerance (a percentage with a floor, the IEC 60255-151 form).
+/// <list type="bullet">
+/// <item>Start: below Is (1 - p) it must not operate at all (p = the declared start accuracy). It must operate from
+/// <see cref="LabPolicy.RelayOperateThreshold"/> x Is (1 + p): many relays start their dependent characteristic at about
+/// 1.1 x setting, not at the setting (IEC 60255-151, from memory), so requiring operation at the setting plus its
+/// tolerance would fail sound relays. In between it may operate, no sooner than the characteristic allows at Is (1 + p).</item>
+/// <item>Within 2 to 20 x Is, the range over which IEC 60255-151 has accuracy declared (from memory), both edges are the
+/// standard's characteristic and guaranteed. Outside it the formula gives typical edges only, and the range's ends are
+/// carried in the direction physics gives them (operate time never rises with current): the minimum at 2 x Is holds
+/// below, the maximum at 20 x Is holds above.</item>
+/// <item>An optional definite-time high-set stage is composed with it (<see cref="EdgeCandidates"/>).</item>
+/// <item>The breaker's opening time is added to the latest time only: timed at the main contacts a trip includes it,
+/// but a breaker that opens faster than its nominal time must not make the relay look early.</item>
+/// </list>
+/// A relay times from current, not heat, and measures each phase: every edge holds whatever the start and the poles.
 /// </summary>
 public sealed class RelayEnvelope : ITripEnvelope
 {
@@ -49,42 +58,101 @@ public sealed class RelayEnvelope : ITripEnvelope
     /// <inheritdoc />
     public bool IsThermal(Amperes current) => false;
 
+    /// <summary>The multiple of Is from which the relay must operate: the operate threshold times (1 + start accuracy).</summary>
+    public double MustOperateFrom => LabPolicy.RelayOperateThreshold * (1 + _s.PickupTolerance);
+
     /// <inheritdoc />
     public TripBand At(Amperes current)
     {
-        var m = current / Reference;
+        var m = (current / Reference).Value;
         var p = _s.PickupTolerance;
-        var edges = new EdgeCandidates();
-        var inRange = m.Value is >= AccuracyFrom and <= AccuracyTo;
-        var source = inRange ? EdgeSource.Characteristic : EdgeSource.Extrapolated;
-        var why = $"{_k.Source}: {CurveCodes.Of(_s.Curve)}, TMS {_s.Tms.ToString("0.###", CultureInfo.InvariantCulture)}, pickup ±{p * 100:0.#} %, {_s.TimeTolerance}"
-            + (inRange ? "" : $" (outside {AccuracyFrom:0}-{AccuracyTo:0} x Is)");
+        var why = $"{_k.Source}: {CurveCodes.Of(_s.Curve)}, TMS {_s.Tms.ToString("0.###", CultureInfo.InvariantCulture)}, start ±{p * 100:0.#} %, {_s.TimeTolerance}";
+        var guaranteed = new EdgeCandidates();
+        var typical = new EdgeCandidates();
 
-        if (m.Value >= 1 - p && _k.OperateSeconds(Math.Max(m.Value, 1 + p), _s.Tms) is { } earliest)
+        if (m >= 1 - p && Math.Max(m, 1 + p) > 1)
         {
-            edges.CouldAct(new BandEdge(_s.TimeTolerance.Earliest(earliest), source, why, StartCondition.Cold));
+            var earliest = Earliest(Math.Max(m, 1 + p));
+            if (m < AccuracyFrom)
+            {
+                guaranteed.CouldAct(Edge(Earliest(AccuracyFrom), EdgeSource.Characteristic, $"{why}; the minimum at {AccuracyFrom:0} x Is, carried to lower currents"));
+                typical.CouldAct(Edge(earliest, EdgeSource.Extrapolated, $"{why} (formula below {AccuracyFrom:0} x Is)"));
+            }
+            else if (m <= AccuracyTo)
+            {
+                guaranteed.CouldAct(Edge(earliest, EdgeSource.Characteristic, why));
+                typical.CouldAct(Edge(earliest, EdgeSource.Characteristic, why));
+            }
+            else
+            {
+                guaranteed.CouldAct(BandEdge.NoMinimum($"{why}: no declared accuracy above {AccuracyTo:0} x Is"));
+                typical.CouldAct(Edge(earliest, EdgeSource.Extrapolated, $"{why} (formula above {AccuracyTo:0} x Is)"));
+            }
         }
 
-        if (m.Value >= 1 + p && _k.OperateSeconds(m.Value, _s.Tms) is { } latest)
+        if (m >= MustOperateFrom)
         {
-            edges.MustAct(new BandEdge(Seconds.Of(_s.TimeTolerance.Latest(latest).Value + _s.OpeningTime.Value), source, why, StartCondition.Cold));
+            var latest = Latest(m);
+            if (m > AccuracyTo)
+            {
+                guaranteed.MustAct(Edge(Latest(AccuracyTo), EdgeSource.Characteristic, $"{why}; the maximum at {AccuracyTo:0} x Is, carried to higher currents"));
+                typical.MustAct(Edge(latest, EdgeSource.Extrapolated, $"{why} (formula above {AccuracyTo:0} x Is)"));
+            }
+            else if (m >= AccuracyFrom)
+            {
+                guaranteed.MustAct(Edge(latest, EdgeSource.Characteristic, why));
+                typical.MustAct(Edge(latest, EdgeSource.Characteristic, why));
+            }
+            else
+            {
+                typical.MustAct(Edge(latest, EdgeSource.Extrapolated, $"{why} (formula below {AccuracyFrom:0} x Is)"));
+            }
         }
 
         if (_s.HighSet is { } hs && _s.HighSetDelay is { } delay)
         {
             var hsWhy = $"high-set {hs} ±{p * 100:0.#} %, delay {delay}, {_s.TimeTolerance}";
-            if (current.Value >= hs.Value * (1 - p))
+            foreach (var set in new[] { guaranteed, typical })
             {
-                edges.CouldAct(new BandEdge(_s.TimeTolerance.Earliest(delay.Value), EdgeSource.Setting, hsWhy, StartCondition.Cold));
-            }
+                if (current.Value >= hs.Value * (1 - p))
+                {
+                    set.CouldAct(Edge(_s.TimeTolerance.Earliest(delay.Value), EdgeSource.Setting, hsWhy));
+                }
 
-            if (current.Value >= hs.Value * (1 + p))
-            {
-                edges.MustAct(new BandEdge(Seconds.Of(_s.TimeTolerance.Latest(delay.Value).Value + _s.OpeningTime.Value), EdgeSource.Setting, hsWhy, StartCondition.Cold));
+                if (current.Value >= hs.Value * (1 + p))
+                {
+                    set.MustAct(Edge(Seconds.Of(_s.TimeTolerance.Latest(delay.Value).Value + _s.OpeningTime.Value), EdgeSource.Setting, hsWhy));
+                }
             }
         }
 
-        var never = BandEdge.NeverTrip($"below the pickup {_s.Pickup} less its {p * 100:0.#} % tolerance the relay must not operate");
-        return new TripBand(current, m, edges.Minimum(never), edges.Maximum("at or below the pickup plus its tolerance no operation is required"), null);
+        var minimums = new List<BandEdge>();
+        var maximums = new List<BandEdge>();
+        if (m < 1 - p)
+        {
+            minimums.Add(BandEdge.NeverTrip($"below the pickup {_s.Pickup} less its {p * 100:0.#} % start accuracy the relay must not operate"));
+        }
+
+        Add(minimums, guaranteed.Minimum(), EdgeStrength.Guaranteed);
+        Add(minimums, typical.Minimum(), EdgeStrength.Typical);
+        Add(maximums, guaranteed.Maximum(), EdgeStrength.Guaranteed);
+        Add(maximums, typical.Maximum(), EdgeStrength.Typical);
+        return TripBand.Of(current, current / Reference, minimums, maximums, "no requirement on the relay at this current");
     }
+
+    private static void Add(List<BandEdge> edges, BandEdge? edge, EdgeStrength strength)
+    {
+        if (edge is { } e)
+        {
+            edges.Add(e with { Strength = strength });
+        }
+    }
+
+    private static BandEdge Edge(Seconds limit, EdgeSource source, string why) =>
+        new(limit, source, why, StartCondition.Cold) { AnyStart = true };
+
+    private Seconds Earliest(double multiple) => _s.TimeTolerance.Earliest(_k.OperateSeconds(multiple, _s.Tms)!.Value);
+
+    private Seconds Latest(double multiple) =>
+        Seconds.Of(_s.TimeTolerance.Latest(_k.OperateSeconds(multiple, _s.Tms)!.Value).Value + _s.OpeningTime.Value);
 }

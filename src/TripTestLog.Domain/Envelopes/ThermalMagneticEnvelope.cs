@@ -6,10 +6,12 @@ namespace TripTestLog.Domain.Envelopes;
 
 /// <summary>
 /// The band of an IEC 60947-2 breaker with a thermal-magnetic release. The standard fixes only the conventional points
-/// (1.05 Ir: no trip within the conventional time; 1.30 Ir: trip within it) and the magnetic pickup tolerance (±20 % of
-/// Im). Between 1.05 Ir and the magnetic range it sets no band, so tests there are not assessable unless the device
-/// has a curve table. Above 1.30 Ir the trip-by limit of the 1.30 Ir point is carried upward, because a thermal
-/// release trips no later at a higher current; from 1.2 Im the magnetic release must clear within the lab's limit.
+/// and the magnetic pickup: no trip within the conventional time at and below 1.05 Ir (from cold); a trip within it at
+/// and above 1.30 Ir (straight after the 1.05 Ir test, so from warm: a thermal release trips no later at a higher
+/// current, so the limit is carried upward); no magnetic operation at or below 0.8 Im, operation from 1.2 Im within the
+/// lab's clearing limit. Between 1.05 Ir and the magnetic range it sets no minimum, so only a curve table can judge an
+/// early trip there; a cold trip within the conventional time above 1.30 Ir meets the carried limit a fortiori, while a
+/// cold trip or hold past it proves nothing (a warm release would have tripped sooner).
 /// </summary>
 public sealed class ThermalMagneticEnvelope : ITripEnvelope
 {
@@ -25,7 +27,7 @@ public sealed class ThermalMagneticEnvelope : ITripEnvelope
         _s = settings;
         _thermalFactor = Guard.InRange(thermalFactor, 0.5, 1.5, nameof(thermalFactor), "(factor)");
         _conventional = Iec60947Conventions.ConventionalTime(rated);
-        _points = Iec60947Conventions.Points(_conventional, thermalFactor);
+        _points = Iec60947Conventions.Points(_conventional, thermalFactor, anyStart: false, PoleLoading.AllPoles);
     }
 
     /// <inheritdoc />
@@ -41,7 +43,7 @@ public sealed class ThermalMagneticEnvelope : ITripEnvelope
     public IReadOnlyList<NormativePoint> Points => _points;
 
     /// <inheritdoc />
-    public bool IsThermal(Amperes current) => current.Value < (1 - Iec60947Conventions.PickupTolerance) * _s.Im.Value;
+    public bool IsThermal(Amperes current) => !Iec60947Conventions.MayOperate(current.Value, _s.Im.Value);
 
     /// <inheritdoc />
     public TripBand At(Amperes current)
@@ -51,40 +53,30 @@ public sealed class ThermalMagneticEnvelope : ITripEnvelope
         var ir = _s.Ir.Value * _thermalFactor;
         var a = Iec60947Conventions.NonTrippingMultiple * ir;
         var b = Iec60947Conventions.TrippingMultiple * ir;
-        var magneticLow = (1 - Iec60947Conventions.PickupTolerance) * _s.Im.Value;
-        var magneticHigh = (1 + Iec60947Conventions.PickupTolerance) * _s.Im.Value;
-        var carried = new BandEdge(_conventional, EdgeSource.NormativePoint, _points[1].Requirement + ", carried to higher currents", StartCondition.Warm);
+        var atA = Math.Abs(i - a) <= 1e-9 * a;
+        var atB = Math.Abs(i - b) <= 1e-9 * b;
+        var magneticMay = Iec60947Conventions.MayOperate(i, _s.Im.Value);
+        var minimums = new List<BandEdge>();
+        var maximums = new List<BandEdge>();
 
-        if (i < a * (1 - 1e-9))
+        // The magnetic release may act at once above 0.8 Im, whatever the thermal one does.
+        if (!magneticMay && (i <= a || atA))
         {
-            var none = "IEC 60947-2 sets no trip band below 1.05 Ir";
-            return new TripBand(current, m, BandEdge.NoMinimum(none), BandEdge.NoMaximum(none), none + "; test at 1.05 Ir or above");
+            minimums.Add(_points[0].HoldEdge(carried: !atA));
         }
 
-        var why = $"magnetic: Im {_s.Im} ±20 % (IEC 60947-2), clearing within {_s.InstantaneousMax} (lab policy)";
-        if (i >= magneticHigh)
+        if (i >= b || atB)
         {
-            return new TripBand(current, m, BandEdge.NoMinimum(why), new BandEdge(_s.InstantaneousMax, EdgeSource.Setting, why, StartCondition.Cold), null);
+            maximums.Add(_points[1].TripEdge(carried: !atB));
         }
 
-        if (i >= magneticLow)
+        if (Iec60947Conventions.MustOperate(i, _s.Im.Value))
         {
-            return new TripBand(current, m, BandEdge.NoMinimum(why), i >= b ? carried : BandEdge.NoMaximum("below 1.30 Ir no trip is required"), null);
+            var why = $"magnetic: Im {_s.Im}, no operation at 0.8 Im, operation at 1.2 Im (IEC 60947-2), clearing within {_s.InstantaneousMax} (lab policy)";
+            maximums.Add(new BandEdge(_s.InstantaneousMax, EdgeSource.Setting, why, StartCondition.Cold) { AnyStart = true });
         }
 
-        if (Math.Abs(i - a) <= 1e-9 * a)
-        {
-            return new TripBand(current, m, new BandEdge(_conventional, EdgeSource.NormativePoint, _points[0].Requirement, StartCondition.Cold),
-                BandEdge.NoMaximum("1.05 Ir requires no trip"), null);
-        }
-
-        if (Math.Abs(i - b) <= 1e-9 * b)
-        {
-            return new TripBand(current, m, BandEdge.NoMinimum("1.30 Ir sets no minimum"), carried with { Requirement = _points[1].Requirement }, null);
-        }
-
-        var gap = "IEC 60947-2 sets no band between its conventional currents and the magnetic range";
-        return new TripBand(current, m, BandEdge.NoMinimum(gap), i >= b ? carried : BandEdge.NoMaximum(gap),
-            gap + "; enter the maker's curve as a curve table to judge tests here");
+        return TripBand.Of(current, m, minimums, maximums,
+            "IEC 60947-2 sets no band between 1.05 and 1.30 Ir below the magnetic range; enter the maker's curve as a curve table to judge tests here");
     }
 }

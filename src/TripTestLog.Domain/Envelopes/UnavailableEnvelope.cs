@@ -22,5 +22,5 @@ public sealed class UnavailableEnvelope(string standard, Amperes reference, stri
 
     /// <inheritdoc />
     public TripBand At(Amperes current) =>
-        new(current, current / reference, BandEdge.NoMinimum(reason), BandEdge.NoMaximum(reason), reason);
+        TripBand.None(current, current / reference, reason);
 }

@@ -30,6 +30,12 @@ public sealed record ElectronicTripSettings(
     /// </summary>
     public const double TsdI2tReferenceMultiple = 10.0;
 
+    /// <summary>
+    /// Whether the unit keeps a thermal image between overloads (the register says so). Without it the unit computes its
+    /// time from the current alone, so a warm start trips no sooner than a cold one.
+    /// </summary>
+    public bool ThermalMemory { get; init; }
+
     /// <inheritdoc />
     public override string Summary
     {
@@ -44,6 +50,11 @@ public sealed record ElectronicTripSettings(
             if (Ii is { } ii)
             {
                 parts.Add($"Ii {ii}");
+            }
+
+            if (ThermalMemory)
+            {
+                parts.Add("thermal memory");
             }
 
             return string.Join(", ", parts);

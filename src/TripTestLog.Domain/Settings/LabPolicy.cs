@@ -29,6 +29,54 @@ public static class LabPolicy
     /// <summary>Pickup (start) tolerance of an IDMT relay: ±5 %, a common declared start accuracy under IEC 60255-151 (from memory).</summary>
     public const double RelayPickupTolerance = 0.05;
 
+    /// <summary>
+    /// The multiple of the relay setting from which the dependent-time stage must operate, before the start accuracy:
+    /// 1.1. IEC 60255-151 starts the dependent characteristic at about 1.1 x the setting (from memory), and many relays
+    /// of both curve families start there rather than at the setting.
+    /// </summary>
+    public const double RelayOperateThreshold = 1.1;
+
+    /// <summary>
+    /// How far, in kelvin, the test ambient may lie from the reference ambient before a thermal verdict is checked for
+    /// robustness against it: 5 K. A lab policy: a miniature breaker's thermal release shifts by roughly 0.5 % to 1 % of
+    /// current per kelvin (from memory), so within 5 K the shift stays within a few per cent, the order of a test set's
+    /// current accuracy.
+    /// </summary>
+    public const double AmbientCheckKelvin = 5.0;
+
+    /// <summary>
+    /// The largest shift of a thermal release's current thresholds per kelvin of ambient, used to test whether a verdict
+    /// could be the ambient's doing when the device has no derating table: 1 % per K (the upper end of 0.5 % to 1 %, from memory).
+    /// </summary>
+    public const double AmbientShiftPerKelvin = 0.01;
+
+    /// <summary>
+    /// How far, in kelvin, the ambient must lie from the reference before a verdict that survived the shift check still
+    /// carries a note: 15 K, so tests in an ordinary 15 °C to 45 °C room against a 30 °C reference pass unmarked. Lab policy.
+    /// </summary>
+    public const double AmbientNoteKelvin = 15.0;
+
+    /// <summary>
+    /// The shortest rest after a test that carried current for <see cref="HeatingTestSeconds"/> or more before the next
+    /// test on the same device counts as a cold start: 30 minutes. A lab policy, not a figure from a standard.
+    /// </summary>
+    public static TimeSpan ColdRest => TimeSpan.FromMinutes(30);
+
+    /// <summary>A test that carried current this long or longer warms a thermal release; shorter (magnetic) shots do not: 1 s. Lab policy.</summary>
+    public const double HeatingTestSeconds = 1.0;
+
+    /// <summary>
+    /// The longest gap between the end of a completed no-trip hold (1.13 In or 1.05 Ir) and the start of a test marked
+    /// warm for it to count as "immediately after": 10 minutes. A lab policy, not a figure from a standard.
+    /// </summary>
+    public static TimeSpan WarmGap => TimeSpan.FromMinutes(10);
+
+    /// <summary>
+    /// The longest break time of an RCBO's residual-current release at its rated residual current: 0.3 s (IEC 61009-1,
+    /// general type, from memory). A one-pole trip this fast may be the residual-current release's.
+    /// </summary>
+    public static Seconds ResidualBreakTime => Seconds.Of(0.3);
+
     /// <summary>The multiple of Ir at which the long-time delay tr is stated when the entry does not say: 6 (common maker practice).</summary>
     public const double TrReferenceMultiple = 6.0;
 }

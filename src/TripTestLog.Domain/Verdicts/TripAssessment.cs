@@ -5,15 +5,15 @@ namespace TripTestLog.Domain.Verdicts;
 
 /// <summary>The judgement of one trip test: verdict, basis, the band used, the margin and the reason in words.</summary>
 /// <param name="Measurement">The test judged.</param>
-/// <param name="Band">The band at the measured current.</param>
+/// <param name="Band">The band at the measured current for the test's conditions: the guaranteed edges it was held to.</param>
 /// <param name="Verdict">Pass, too early, too late or not assessable.</param>
-/// <param name="Basis">Normative point or interpolated band.</param>
-/// <param name="Point">The standard's point the test matches, when the basis is normative.</param>
+/// <param name="Basis">Normative (a standard's point or formula) or band (derived, setting or curve-table edges).</param>
+/// <param name="Point">The standard's point the verdict rests on, or the one the test was aimed at.</param>
 /// <param name="Margin">Where the measured time lies in the band.</param>
 /// <param name="Reason">Plain words a technician can act on.</param>
 public sealed record TripAssessment(
     TripMeasurement Measurement,
-    TripBand Band,
+    AppliedBand Band,
     Verdict Verdict,
     VerdictBasis Basis,
     NormativePoint? Point,
@@ -22,4 +22,10 @@ public sealed record TripAssessment(
 {
     /// <summary>Remarks beside the verdict: settings found at the test, ambient corrections or warnings.</summary>
     public IReadOnlyList<string> Notes { get; init; } = [];
+
+    /// <summary>Results outside a typical edge: never a failure, but worth a look.</summary>
+    public IReadOnlyList<Advisory> Advisories { get; init; } = [];
+
+    /// <summary>Whether the verdict is a failure: too early or too late.</summary>
+    public bool IsFailure => Verdict is Verdict.TooEarly or Verdict.TooLate;
 }

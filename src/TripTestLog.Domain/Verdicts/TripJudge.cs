@@ -5,129 +5,98 @@ using TripTestLog.Domain.Quantities;
 namespace TripTestLog.Domain.Verdicts;
 
 /// <summary>
-/// Judges a trip test against a device's envelope at the measured test current.
-/// A cold release trips later than a warm one, which decides two cases: a warm test that trips before a minimum
-/// set from cold proves nothing, and a cold test that runs past a maximum leaning on a warm requirement proves nothing.
+/// Judges a trip test against the requirements at its measured current. A failure rests only on a guaranteed edge that
+/// the test can speak to: a minimum it ran no hotter than (a warm start, or every pole loaded, trips sooner), or a
+/// maximum it ran at least as hot as. A guaranteed edge broken by a test run under other conditions makes the verdict
+/// not assessable, with the reason; a typical (drawn) edge broken raises an advisory and never a failure.
 /// </summary>
-public static class TripJudge
+public static partial class TripJudge
 {
     /// <summary>
-    /// How close, relative, the measured multiple must be to one of the standard's points (with the same start condition)
-    /// for the test to be judged by that point's own limits, basis normative: ±3 %. A lab policy chosen for this tool
-    /// (primary-injection sets commonly hold the current to a few per cent); it is not a figure from IEC 60898-1.
-    /// Outside it, the band is evaluated at the measured current, basis band.
+    /// How close, relative, the measured multiple must be to one of the standard's points for the test to be named as
+    /// aimed at it: ±3 %. It only names the point (for findings and reports); it never decides a verdict, which follows
+    /// each point's limit in the direction physics gives it. A lab policy of this tool, not a figure from a standard.
     /// </summary>
     public const double PointTolerance = 0.03;
 
-    /// <summary>Judges <paramref name="measurement"/> against <paramref name="envelope"/>.</summary>
+    /// <summary>Judges <paramref name="measurement"/> with all poles loaded unless its pole says one.</summary>
     public static TripAssessment Assess(ITripEnvelope envelope, TripMeasurement measurement)
+    {
+        ArgumentNullException.ThrowIfNull(measurement);
+        return Assess(envelope, measurement, new TestConditions(measurement.Start, measurement.Pole == Pole.All ? PoleLoading.AllPoles : PoleLoading.OnePole));
+    }
+
+    /// <summary>Judges <paramref name="measurement"/> against <paramref name="envelope"/> as run under <paramref name="conditions"/>.</summary>
+    public static TripAssessment Assess(ITripEnvelope envelope, TripMeasurement measurement, TestConditions conditions)
     {
         ArgumentNullException.ThrowIfNull(envelope);
         ArgumentNullException.ThrowIfNull(measurement);
 
-        var measured = envelope.At(measurement.Current);
-        var point = MatchingPoint(envelope, measured.Multiple, measurement.Start);
+        var band = envelope.At(measurement.Current);
+        var applied = band.For(conditions);
+        var outcome = measurement.Outcome;
+        var margin = MarginOf(applied, outcome.Time);
+        var advisories = Advisories(applied, outcome);
+        var aimedAt = AimedAt(envelope, applied.Multiple, conditions);
+        var judged = band.HasRequirement
+            ? Decide(band, applied, outcome, conditions, envelope, measurement.Current)
+            : new Judged(Verdict.NotAssessable, band.NoRequirement!, null, []);
 
-        // Within the tolerance of one of the standard's points, the point's own limits are the requirement; elsewhere the
-        // band drawn between the points is evaluated at the measured current.
-        var band = point?.BandAt(measurement.Current, measured.Multiple) ?? measured;
-        var basis = point is not null || IsCharacteristic(band) ? VerdictBasis.Normative : VerdictBasis.Band;
-        var time = measurement.Outcome.Time;
-        var margin = MarginOf(band, time);
-
-        if (band.NoRequirement is { } why)
+        // A failure names the point it broke; otherwise the point the test was aimed at names it, for findings and reports.
+        var edgePoint = judged.Edge?.PointLabel is { } label ? envelope.Points.FirstOrDefault(p => p.Label == label) : null;
+        var point = judged.Verdict is Verdict.TooEarly or Verdict.TooLate ? edgePoint ?? aimedAt : aimedAt ?? edgePoint;
+        return new TripAssessment(measurement, applied, judged.Verdict, BasisOf(judged, applied), point, margin, judged.Reason)
         {
-            return new(measurement, band, Verdict.NotAssessable, basis, point, margin, why);
-        }
+            Notes = judged.Notes,
 
-        var (verdict, reason) = measurement.Outcome.Tripped
-            ? JudgeTrip(band, time, measurement.Start)
-            : JudgeHold(band, time, measurement.Start, point);
-        return new(measurement, band, verdict, basis, point, margin, reason);
+            // An advisory qualifies a pass; on a failure or an open question it would only repeat the reason.
+            Advisories = judged.Verdict == Verdict.Pass ? advisories : [],
+        };
     }
 
-    private static (Verdict, string) JudgeTrip(TripBand band, Seconds time, StartCondition start)
+    // Normative when what decided rests on the standard's points or formula: the broken edge for a failure, every closed
+    // edge of the band for a pass (or the edge it met where the band is open on both sides).
+    private static VerdictBasis BasisOf(Judged judged, AppliedBand applied)
     {
-        var min = band.Minimum;
-        var max = band.Maximum;
-        if (min.Limit is null)
+        static bool Normative(BandEdge e) => e.Source is EdgeSource.NormativePoint or EdgeSource.Characteristic;
+        if (judged.Verdict == Verdict.Pass)
         {
-            return (Verdict.TooEarly, $"tripped after {time} where it must not operate at all ({min.Requirement})");
+            var closed = new[] { applied.Minimum, applied.Maximum }.Where(e => !e.IsOpen && e.Source != EdgeSource.None).ToList();
+            if (closed.Count > 0)
+            {
+                return closed.All(Normative) ? VerdictBasis.Normative : VerdictBasis.Band;
+            }
         }
 
-        if (time < min.Limit.Value)
-        {
-            return start == StartCondition.Warm && min.Start == StartCondition.Cold
-                ? (Verdict.NotAssessable, $"warm start: tripped after {time}, before the {min.Limit} minimum, but that limit applies from cold; repeat from cold")
-                : (Verdict.TooEarly, $"tripped after {time}, before the {min.Limit} minimum ({min.Requirement})");
-        }
-
-        if (max.Limit is { } latest && time > latest)
-        {
-            return ColdPastWarmLimit(start, max)
-                ? (Verdict.NotAssessable, $"cold start: tripped after {time}, past the {latest} maximum, but that limit assumes a warm start ({max.Requirement}); repeat straight after the 1.13 In hold")
-                : (Verdict.TooLate, $"tripped after {time}, past the {latest} maximum ({max.Requirement})");
-        }
-
-        return (Verdict.Pass, $"tripped after {time}, inside {Describe(band)}");
+        return judged.Edge is { } edge && Normative(edge) ? VerdictBasis.Normative : VerdictBasis.Band;
     }
 
-    private static (Verdict, string) JudgeHold(TripBand band, Seconds held, StartCondition start, NormativePoint? point)
+    private static NormativePoint? AimedAt(ITripEnvelope envelope, CurrentMultiple multiple, TestConditions conditions) =>
+        envelope.Points
+            .Where(p => p.Start == conditions.Start && (p.Loading is null || p.Loading == conditions.Loading))
+            .Where(p => Math.Abs(multiple.Value / p.Multiple.Value - 1.0) <= PointTolerance)
+            .OrderBy(p => Math.Abs(multiple.Value / p.Multiple.Value - 1.0))
+            .FirstOrDefault();
+
+    private static IReadOnlyList<Advisory> Advisories(AppliedBand band, TripOutcome outcome)
     {
-        var min = band.Minimum;
-        var max = band.Maximum;
-        if (max.Limit is { } latest && held >= latest)
+        var list = new List<Advisory>();
+        var t = outcome.Time;
+        if (outcome.Tripped && band.TypicalMinimum is { } lo && lo.TripIsBefore(t))
         {
-            return ColdPastWarmLimit(start, max)
-                ? (Verdict.NotAssessable, $"cold start: held {held} without tripping, past the {latest} maximum, but that limit assumes a warm start ({max.Requirement}); repeat straight after the 1.13 In hold")
-                : (Verdict.TooLate, $"held {held} without tripping; it must trip within {latest} ({max.Requirement})");
+            list.Add(new Advisory(BandSide.Minimum, lo, $"tripped after {t}, earlier than the typical {lo.Limit} ({lo.Requirement}); a drawn line, not a requirement: compare with the maker's curve"));
         }
 
-        // A hold at a current proves no trip at that current or below for that long. At one of the standard's no-trip
-        // points (IEC 60898-1 Table 7 a and d) that is the whole requirement.
-        if (point is { MustTripWithin: null, MustHoldFor: { } required })
+        if (band.TypicalMaximum is { Limit: { } hi } up && (outcome.Tripped ? up.TripIsAfter(t) : t >= hi))
         {
-            return held >= required
-                ? (Verdict.Pass, $"held {held} without tripping, as required ({point.Requirement})")
-                : (Verdict.NotAssessable, $"held only {held}; the no-trip requirement runs to {required} ({point.Requirement})");
+            var what = outcome.Tripped ? $"tripped after {t}" : $"held {t}";
+            list.Add(new Advisory(BandSide.Maximum, up, $"{what}, later than the typical {hi} ({up.Requirement}); a drawn line, not a requirement: compare with the maker's curve"));
         }
 
-        if (min.IsOpen)
-        {
-            return (Verdict.NotAssessable, $"held {held} and stopped before the {max.Limit} maximum; a hold proves nothing where the release may act at once");
-        }
-
-        if (min.Limit is null)
-        {
-            return (Verdict.Pass, $"held {held} without operating, as required ({min.Requirement})");
-        }
-
-        var earliest = min.Limit.Value;
-        if (held < earliest)
-        {
-            return (Verdict.NotAssessable, $"held only {held}; the no-trip requirement runs to {earliest} ({min.Requirement})");
-        }
-
-        return max.Limit is null
-            ? (Verdict.Pass, $"held {held} without tripping, as required ({min.Requirement})")
-            : (Verdict.NotAssessable, $"held {held} and stopped before the {max.Limit} maximum; the test shows no trip");
+        return list;
     }
 
-    // A band drawn by the standard's own formula (IEC 60255-151 and IEEE C37.112 curves) is normative everywhere it is defined.
-    private static bool IsCharacteristic(TripBand band) =>
-        band.HasRequirement
-        && (band.Minimum.Source == EdgeSource.Characteristic || band.Maximum.Source == EdgeSource.Characteristic)
-        && band.Minimum.Source is EdgeSource.Characteristic or EdgeSource.None
-        && band.Maximum.Source is EdgeSource.Characteristic or EdgeSource.None;
-
-    private static bool ColdPastWarmLimit(StartCondition start, BandEdge max) =>
-        start == StartCondition.Cold && max.Start == StartCondition.Warm;
-
-    private static NormativePoint? MatchingPoint(ITripEnvelope envelope, CurrentMultiple multiple, StartCondition start) =>
-        envelope.Points.FirstOrDefault(p =>
-            p.Start == start && Math.Abs(multiple.Value / p.Multiple.Value - 1.0) <= PointTolerance);
-
-    private static Margin MarginOf(TripBand band, Seconds time)
+    private static Margin MarginOf(AppliedBand band, Seconds time)
     {
         if (!band.HasRequirement || time.Value <= 0)
         {
@@ -147,7 +116,4 @@ public static class TripJudge
             _ => new Margin(null, null, null),
         };
     }
-
-    private static string Describe(TripBand band) =>
-        $"{band.Minimum.Limit} to {(band.Maximum.Limit is { } max ? max.ToString() : "no limit")}";
 }

@@ -1,11 +1,12 @@
 namespace TripTestLog.Domain.Verdicts;
 
-/// <summary>Whether a verdict rests on one of the standard's own test points or on the band drawn between them.</summary>
+/// <summary>What kind of requirement a verdict rests on.</summary>
 public enum VerdictBasis
 {
-    /// <summary>The test current and start condition match a point the standard defines, within <see cref="TripJudge.PointTolerance"/>.</summary>
+    /// <summary>A point the standard defines (at its current, or carried in the direction physics gives it), or the
+    /// standard's own time-current formula within its declared range.</summary>
     Normative,
 
-    /// <summary>The test lies between the standard's points; the edge is interpolated or extrapolated.</summary>
+    /// <summary>Another guaranteed edge: derived from a point by physics, the device's settings, or the lab's curve table.</summary>
     Band,
 }

@@ -19,7 +19,7 @@ internal sealed record RecordSchema(RecordKind Kind, IReadOnlyList<ColumnSpec> C
             Opt("pickup", Quantity.Current), Opt("tms"), Opt("highset", Quantity.Current), Opt("highset_delay", Quantity.Time),
             Opt("opening_time", Quantity.Time), Opt("time_tolerance_pct"), Opt("time_tolerance_min", Quantity.Time),
             Opt("pickup_tolerance_pct"), Opt("inst_max", Quantity.Time), Opt("curve_table"),
-            Opt("reference_ambient", Quantity.Temperature), Opt("ambient_table"),
+            Opt("reference_ambient", Quantity.Temperature), Opt("ambient_table"), Opt("supply"), Opt("thermal_memory"),
         ],
         ["family", "rated_current", "rated_voltage", "commissioned_on"]);
 

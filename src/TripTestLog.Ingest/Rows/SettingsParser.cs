@@ -9,16 +9,17 @@ internal static class SettingsParser
 {
     public static DeviceSettings? Parse(RowFields f, DeviceFamily family, Amperes rated) => family switch
     {
-        DeviceFamily.Iec60898 => Miniature(f),
+        DeviceFamily.Iec60898 => Miniature(f, allowDc: true),
+        DeviceFamily.Iec61009 => Miniature(f, allowDc: false),
         DeviceFamily.Iec60947Electronic => Electronic(f, rated),
         DeviceFamily.Iec60947ThermalMagnetic => ThermalMagnetic(f, rated),
         DeviceFamily.RelayIdmt => Relay(f),
         _ => f.RequiredText("curve_table", "the curve table a curve-table device is judged by") is { } t ? new CurveTableSettings(t) : null,
     };
 
-    private static Iec60898Settings? Miniature(RowFields f)
+    private static Iec60898Settings? Miniature(RowFields f, bool allowDc)
     {
-        var text = f.RequiredText("curve", "the trip curve (B, C or D) of an iec60898 device");
+        var text = f.RequiredText("curve", "the trip curve (B, C or D) of a miniature breaker or RCBO");
         TripCurve? curve = text?.ToUpperInvariant() switch
         {
             null => null,
@@ -32,7 +33,23 @@ internal static class SettingsParser
             f.Fail("curve", $"'{text}' is not an IEC 60898-1 curve; write B, C or D");
         }
 
-        return curve is { } c ? new Iec60898Settings(c) : null;
+        var supplyText = f.OptionalText("supply");
+        Supply? supply = supplyText?.ToLowerInvariant() switch
+        {
+            null or "ac" => Supply.Ac,
+            "dc" when allowDc => Supply.Dc,
+            _ => null,
+        };
+        if (supply is null)
+        {
+            f.Fail("supply", allowDc ? $"'{supplyText}' is not a supply; write ac or dc" : $"'{supplyText}': an iec61009 RCBO is judged on ac only; write ac or leave it blank");
+        }
+        else if (supply == Supply.Dc && curve == TripCurve.D)
+        {
+            f.Fail("curve", "IEC 60898-2 admits only curves B and C for d.c.; write B or C, or supply ac");
+        }
+
+        return f.Ok && curve is { } c && supply is { } s ? new Iec60898Settings(c) { Supply = s } : null;
     }
 
     private static ElectronicTripSettings? Electronic(RowFields f, Amperes rated)
@@ -43,6 +60,7 @@ internal static class SettingsParser
         var isd = f.Number("isd", false, 0.1, PlausibleRange.MaxCurrentA, "A");
         var tsd = Time(f, "tsd", false, "the short-time delay tsd");
         var i2t = f.Flag("tsd_i2t", false);
+        var memory = f.Flag("thermal_memory", false);
         var ii = f.Number("ii", false, 0.1, PlausibleRange.MaxCurrentA, "A");
         var tolerance = Tolerance(f, LabPolicy.ElectronicTimeTolerance);
         var inst = Time(f, "inst_max", false, "the instantaneous clearing limit") ?? LabPolicy.InstantaneousMax.Value;
@@ -62,7 +80,10 @@ internal static class SettingsParser
 
         return new ElectronicTripSettings(Amperes.Of(ir.Value), Seconds.Of(tr.Value), reference,
             isd is { } s ? Amperes.Of(s) : null, tsd is { } d ? Seconds.Of(d) : null, i2t,
-            ii is { } i ? Amperes.Of(i) : null, tolerance.Value, Seconds.Of(inst));
+            ii is { } i ? Amperes.Of(i) : null, tolerance.Value, Seconds.Of(inst))
+        {
+            ThermalMemory = memory,
+        };
     }
 
     private static ThermalMagneticSettings? ThermalMagnetic(RowFields f, Amperes rated)

@@ -51,15 +51,37 @@ public sealed class TripAssessorTests
         Assert.Contains(result.Assessment.Notes, n => n.Contains("Ir 420 A found", StringComparison.Ordinal) && n.Contains("500 A", StringComparison.Ordinal));
     }
 
-    [Fact]
-    public void FarFromTheReferenceAmbient_WithoutATable_AThermalVerdictIsMarked()
-    {
-        // The default reference for IEC 60947-2 breakers is 40 °C (common practice); 20 °C is 20 K away, past the 15 K policy.
-        var marked = Assessor().Assess(History, Trip(new DateOnly(2024, 3, 1), 1500, 40, ambient: 20));
-        var unmarked = Assessor().Assess(History, Trip(new DateOnly(2024, 3, 1), 1500, 40, ambient: 35));
+    private static TripMeasurement MiniatureTrip(double amps, double seconds, double ambient) =>
+        new(AssetTag.Of("M-1"), TestedAt.OnDate(new DateOnly(2024, 3, 1)), TestStage.AsFound, Pole.All, Amperes.Of(amps),
+            TripOutcome.TrippedAfter(Seconds.Of(seconds)), StartCondition.Cold, Celsius.Of(ambient), "", "", "");
 
-        Assert.Contains(marked.Assessment.Notes, n => n.Contains("20 K", StringComparison.Ordinal));
-        Assert.Empty(unmarked.Assessment.Notes);
+    private static readonly DeviceHistory Miniature = new([new Device(AssetTag.Of("M-1"), "S", "L", DeviceFamily.Iec60898, Amperes.Of(16), 1,
+        Volts.Of(230), null, null, "", "", "", new Iec60898Settings(TripCurve.C))]);
+
+    [Fact]
+    public void AFailureTheAmbientCouldExplain_IsNotAssessable()
+    {
+        // C16 at 1.12 In tripping after 3000 s: too early against row a carried down (IEC 60898-1 Table 7). At 45 °C, 15 K
+        // above the 30 °C reference, a thermal release may act at up to 15 % less current (1 %/K, from memory): row a
+        // moves to 0.96 In and the trip would pass. At 20 °C the shift goes the other way and the failure stands.
+        var hot = Assessor().Assess(Miniature, MiniatureTrip(17.92, 3000, ambient: 45));
+        var cool = Assessor().Assess(Miniature, MiniatureTrip(17.92, 3000, ambient: 20));
+        var near = Assessor().Assess(Miniature, MiniatureTrip(17.92, 3000, ambient: 34));
+
+        Assert.Equal(Verdict.NotAssessable, hot.Assessment.Verdict);
+        Assert.Contains("15 K above", hot.Assessment.Reason);
+        Assert.Equal(Verdict.TooEarly, cool.Assessment.Verdict);
+        Assert.Equal(Verdict.TooEarly, near.Assessment.Verdict);
+    }
+
+    [Fact]
+    public void AnElectronicUnit_IsNotShiftedByTheAmbient()
+    {
+        // An electronic unit computes its time from the measured current; 20 °C against its 40 °C reference changes nothing.
+        var result = Assessor().Assess(History, Trip(new DateOnly(2024, 3, 1), 1500, 31, ambient: 20));
+
+        Assert.Equal(Verdict.TooEarly, result.Assessment.Verdict);
+        Assert.Empty(result.Assessment.Notes);
     }
 
     [Fact]

@@ -1,5 +1,7 @@
 using TripTestLog.Domain.Envelopes;
+using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Tests.Support;
 
 namespace TripTestLog.Domain.Tests.Envelopes;
 
@@ -12,29 +14,39 @@ public sealed class CurveTableEnvelopeTests
     private static readonly CurveTable Table = CurveTable.Create("T", [Row(1.2, 600, null), Row(2, 15, 600), Row(3, 4, 120), Row(10, 0, 0.1)]);
 
     [Fact]
-    public void BetweenRows_TheEdgesAreLogLogLines()
+    public void BetweenRows_TheRowsAreGuaranteed_AndTheLogLogLinesTypical()
     {
-        // Between (2, 15 s) and (3, 4 s): at 2.5, 15 (2.5 / 2)^(ln(4/15) / ln(3/2)) = 15 x 1.25^-3.2599 = 7.25 s by hand.
-        var band = new CurveTableEnvelope(Table, Amperes.Of(32)).At(Amperes.Of(80));
+        // Between (2, 15 s, 600 s) and (3, 4 s, 120 s) at 2.5: the upper row's minimum (4 s) holds at lower currents and the
+        // lower row's maximum (600 s) at higher ones. The drawn minimum is 15 (2.5 / 2)^(ln(4/15) / ln(3/2)) = 7.25 s by hand.
+        var band = new CurveTableEnvelope(Table, Amperes.Of(32)).At(Amperes.Of(80)).For(TestConditions.Reference);
 
-        Assert.Equal(15 * Math.Pow(1.25, Math.Log(4.0 / 15) / Math.Log(1.5)), band.Minimum.Limit!.Value.Value, 9);
-        Assert.Equal(7.25, band.Minimum.Limit!.Value.Value, 2);
+        Assert.Equal(4, band.Minimum.Limit!.Value.Value, 9);
+        Assert.Equal(600, band.Maximum.Limit!.Value.Value, 9);
+        Assert.Equal(15 * Math.Pow(1.25, Math.Log(4.0 / 15) / Math.Log(1.5)), band.TypicalMinimum!.Value.Limit!.Value.Value, 9);
+        Assert.Equal(7.25, band.TypicalMinimum!.Value.Limit!.Value.Value, 2);
     }
 
     [Fact]
-    public void OutsideTheTable_ThereIsNoBand()
+    public void OutsideTheTable_TheEndRowsCarryInTheirOwnDirection()
     {
         var envelope = new CurveTableEnvelope(Table, Amperes.Of(32));
+        var below = envelope.At(Amperes.Of(32)).For(TestConditions.Reference);
+        var above = envelope.At(Amperes.Of(400)).For(TestConditions.Reference);
 
-        Assert.False(envelope.At(Amperes.Of(32)).HasRequirement);
-        Assert.False(envelope.At(Amperes.Of(400)).HasRequirement);
+        Assert.Equal(600, below.Minimum.Limit!.Value.Value, 9);
+        Assert.Null(below.Maximum.Limit);
+        Assert.Equal(0.1, above.Maximum.Limit!.Value.Value, 9);
+        Assert.True(above.Minimum.IsOpen);
     }
 
     [Fact]
-    public void WhereTheMinimumReachesZero_ItFallsLinearly()
+    public void WhereTheMinimumReachesZero_TheDrawnLineFallsLinearly()
     {
         // Between (3, 4 s) and (10, 0 s): at 6.5, 4 + (0 - 4) x 3.5 / 7 = 2 s.
-        Assert.Equal(2.0, new CurveTableEnvelope(Table, Amperes.Of(32)).At(Amperes.Of(208)).Minimum.Limit!.Value.Value, 9);
+        var band = new CurveTableEnvelope(Table, Amperes.Of(32)).At(Amperes.Of(208)).For(TestConditions.Reference);
+
+        Assert.Equal(2.0, band.TypicalMinimum!.Value.Limit!.Value.Value, 9);
+        Assert.True(band.Minimum.IsOpen);
     }
 
     public static TheoryData<CurveTablePoint, CurveTablePoint, string> Broken => new()

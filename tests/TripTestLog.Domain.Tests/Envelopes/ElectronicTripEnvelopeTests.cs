@@ -1,6 +1,7 @@
 using TripTestLog.Domain.Envelopes;
 using TripTestLog.Domain.Quantities;
 using TripTestLog.Domain.Settings;
+using TripTestLog.Domain.Tests.Support;
 
 namespace TripTestLog.Domain.Tests.Envelopes;
 
@@ -68,9 +69,13 @@ public sealed class ElectronicTripEnvelopeTests
     }
 
     [Fact]
-    public void Below105Ir_ThereIsNoBand()
+    public void Below105Ir_TheConventionalNoTripTimeCarriesDownward()
     {
-        Assert.False(At(1.0).HasRequirement);
+        var band = At(1.0);
+
+        Assert.True(band.HasRequirement);
+        Assert.Equal(7200, band.Minimum.Limit!.Value.Value, 6);
+        Assert.Null(band.Maximum.Limit);
     }
 
     [Fact]

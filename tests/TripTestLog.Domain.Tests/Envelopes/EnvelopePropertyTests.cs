@@ -2,6 +2,7 @@ using CsCheck;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Envelopes;
 using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Tests.Support;
 
 namespace TripTestLog.Domain.Tests.Envelopes;
 

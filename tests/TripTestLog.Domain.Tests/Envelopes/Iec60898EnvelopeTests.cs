@@ -1,6 +1,8 @@
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Envelopes;
+using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Tests.Support;
 
 namespace TripTestLog.Domain.Tests.Envelopes;
 
@@ -39,10 +41,15 @@ public sealed class Iec60898EnvelopeTests
     [InlineData(TripCurve.D, 100, 7200)]
     public void RowB_TripByTimeAt145In_IsOneHourUpTo63AAndTwoHoursAbove(TripCurve curve, double rated, double expectedMax)
     {
-        var band = BandAt(curve, rated, 1.45);
+        // Row b starts warm, so it binds a warm test; a cold one trips later and is not held to it.
+        var raw = new Iec60898Envelope(curve, Amperes.Of(rated)).At(Amperes.Of(rated * 1.45));
+        var warm = raw.For(new TestConditions(StartCondition.Warm, PoleLoading.AllPoles));
+        var cold = raw.For(TestConditions.Reference);
 
-        Assert.Equal(expectedMax, band.Maximum.Limit!.Value.Value, Tolerance);
-        Assert.Equal(EdgeSource.NormativePoint, band.Maximum.Source);
+        Assert.Equal(expectedMax, warm.Maximum.Limit!.Value.Value, Tolerance);
+        Assert.Equal(EdgeSource.NormativePoint, warm.Maximum.Source);
+        Assert.True(warm.Maximum.Strict);
+        Assert.Null(cold.Maximum.Limit);
     }
 
     [Theory]
@@ -97,37 +104,44 @@ public sealed class Iec60898EnvelopeTests
     }
 
     [Fact]
-    public void Below113In_TheStandardSetsNoBand()
+    public void Below113In_RowACarriesDownward()
     {
-        // Table 7 starts at 1.13 In; below it there is no requirement to test against.
+        // Row a's "no tripping within 1 h at 1.13 In" holds at every lower current; nothing requires a trip there.
         var band = BandAt(TripCurve.C, 16, 1.10);
 
-        Assert.False(band.HasRequirement);
-        Assert.Contains("1.13 In", band.NoRequirement);
+        Assert.True(band.HasRequirement);
+        Assert.Equal(3600, band.Minimum.Limit!.Value.Value, Tolerance);
+        Assert.Contains("carried to lower currents", band.Minimum.Requirement);
+        Assert.Null(band.Maximum.Limit);
     }
 
     [Fact]
-    public void Between113And255In_TheMinimumIsTheLogLogLineThroughRowsAAndC()
+    public void Between113And255In_TheLogLogLineThroughRowsAAndC_IsTypicalOnly()
     {
-        // The documented choice of this tool (not a value from the standard): a straight line on log-log axes through
-        // (1.13, 3600 s) and (2.55, 1 s). Worked by hand: n = ln(3600) / ln(2.55 / 1.13) = 10.0612; t(2) = 3600 (2 / 1.13)^-n.
+        // The drawn line (a documented choice, not a requirement) through (1.13, 3600 s) and (2.55, 1 s). Worked by hand:
+        // n = ln(3600) / ln(2.55 / 1.13) = 10.0612; t(2) = 3600 (2 / 1.13)^-n = 11.52 s. The guaranteed minimum is row c's
+        // I²t carried down: 1 s x (2.55 / 2)² = 1.6256 s.
         var expected = 3600 * Math.Pow(2.0 / 1.13, -Math.Log(3600) / Math.Log(2.55 / 1.13));
 
-        var band = BandAt(TripCurve.C, 16, 2.0);
+        var band = new Iec60898Envelope(TripCurve.C, Amperes.Of(16)).At(Amperes.Of(32)).For(TestConditions.Reference);
 
-        Assert.Equal(expected, band.Minimum.Limit!.Value.Value, 1e-6);
-        Assert.Equal(11.52, band.Minimum.Limit!.Value.Value, 0.01);
-        Assert.Equal(EdgeSource.Interpolated, band.Minimum.Source);
+        Assert.Equal(expected, band.TypicalMinimum!.Value.Limit!.Value.Value, 1e-6);
+        Assert.Equal(11.52, band.TypicalMinimum!.Value.Limit!.Value.Value, 0.01);
+        Assert.Equal(EdgeStrength.Typical, band.TypicalMinimum!.Value.Strength);
+        Assert.Equal(1.625625, band.Minimum.Limit!.Value.Value, 1e-9);
+        Assert.Equal(EdgeSource.Derived, band.Minimum.Source);
     }
 
     [Fact]
-    public void Beyond255In_TheMaximumFollowsConstantI2T()
+    public void Beyond255In_ConstantI2TIsTypical_AndRowCCarriesUpward()
     {
-        // Documented choice: I²t = constant from row c. By hand for C 16 A at 5 In: 60 s x (2.55 / 5)² = 15.606 s.
-        var band = BandAt(TripCurve.C, 16, 5.0);
+        // Drawn: I²t = constant from row c; by hand for C 16 A at 4 In: 60 s x (2.55 / 4)² = 24.384 s. Guaranteed: 60 s.
+        var band = new Iec60898Envelope(TripCurve.C, Amperes.Of(16)).At(Amperes.Of(64)).For(TestConditions.Reference);
 
-        Assert.Equal(15.606, band.Maximum.Limit!.Value.Value, 0.001);
-        Assert.Equal(EdgeSource.Extrapolated, band.Maximum.Source);
+        Assert.Equal(24.384, band.TypicalMaximum!.Value.Limit!.Value.Value, 0.001);
+        Assert.Equal(EdgeSource.Extrapolated, band.TypicalMaximum!.Value.Source);
+        Assert.Equal(60, band.Maximum.Limit!.Value.Value, Tolerance);
+        Assert.Contains("carried to higher currents", band.Maximum.Requirement);
     }
 
     [Fact]
@@ -137,5 +151,19 @@ public sealed class Iec60898EnvelopeTests
 
         Assert.Equal(["a", "b", "c", "d", "e"], points.Select(p => p.Label));
         Assert.Equal([1.13, 1.45, 2.55, 5.0, 10.0], points.Select(p => p.Multiple.Value));
+    }
+
+    [Theory]
+    // IEC 60898-1 9.10.3 (from memory): 1.1 x 1.45 In for two poles, 1.2 x 1.45 In for three and four.
+    [InlineData(2, 1.595)]
+    [InlineData(3, 1.74)]
+    [InlineData(4, 1.74)]
+    public void AMultipoleBreaker_HasTheSinglePolePoint(int poles, double multiple)
+    {
+        var point = new Iec60898Envelope(TripCurve.C, Amperes.Of(16), poles: poles).Points.Single(p => p.Label == "1-pole");
+
+        Assert.Equal(multiple, point.Multiple.Value, 1e-9);
+        Assert.Equal(PoleLoading.OnePole, point.Loading);
+        Assert.Equal(3600, point.MustTripWithin!.Value.Value);
     }
 }

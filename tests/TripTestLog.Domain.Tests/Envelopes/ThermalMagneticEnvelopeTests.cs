@@ -1,6 +1,8 @@
 using TripTestLog.Domain.Envelopes;
+using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Quantities;
 using TripTestLog.Domain.Settings;
+using TripTestLog.Domain.Tests.Support;
 
 namespace TripTestLog.Domain.Tests.Envelopes;
 
@@ -18,34 +20,45 @@ public sealed class ThermalMagneticEnvelopeTests
     public void TheConventionalPoints_HaveTheirLimits()
     {
         Assert.Equal(7200, Envelope.At(Amperes.Of(131.25)).Minimum.Limit!.Value.Value, 6);
-        Assert.Equal(7200, Envelope.At(Amperes.Of(162.5)).Maximum.Limit!.Value.Value, 6);
+        Assert.Equal(7200, Envelope.At(Amperes.Of(162.5)).For(Warm).Maximum.Limit!.Value.Value, 6);
     }
 
     [Fact]
-    public void BetweenTheConventionalPointsAndTheMagneticRange_ThereIsNoBand()
+    public void BetweenTheConventionalCurrents_ThereIsNoBand()
     {
-        var band = Envelope.At(Amperes.Of(375));
+        var band = Envelope.At(Amperes.Of(150));
 
         Assert.False(band.HasRequirement);
         Assert.Contains("curve table", band.NoRequirement);
     }
 
-    [Theory]
-    [InlineData(999, false, null)]
-    [InlineData(1001, true, 7200.0)]
-    [InlineData(1499, true, 7200.0)]
-    [InlineData(1501, true, 0.05)]
-    public void TheMagneticTolerance_DecidesTheBand(double amps, bool hasBand, double? max)
+    [Fact]
+    public void AboveThirtyPercentOverIr_TheConventionalTripTimeCarriesUpward_ForAWarmStart()
     {
-        var band = Envelope.At(Amperes.Of(amps));
+        // 3 Ir: the 1.30 Ir trip-by limit (from warm) holds at every higher current; no minimum is set here.
+        var band = Envelope.At(Amperes.Of(375));
 
-        Assert.Equal(hasBand, band.HasRequirement);
-        if (hasBand)
-        {
-            Assert.Equal(max!.Value, band.Maximum.Limit!.Value.Value, 6);
-            Assert.True(band.Minimum.IsOpen);
-        }
+        Assert.True(band.HasRequirement);
+        Assert.Equal(7200, band.For(Warm).Maximum.Limit!.Value.Value, 6);
+        Assert.Null(band.For(TestConditions.Reference).Maximum.Limit);
+        Assert.True(band.For(Warm).Minimum.IsOpen);
     }
+
+    [Theory]
+    // Magnetic 1250 A: no operation at or below 0.8 Im = 1000 A, operation from 1.2 Im = 1500 A (IEC 60947-2).
+    [InlineData(999, 7200.0)]
+    [InlineData(1001, 7200.0)]
+    [InlineData(1499, 7200.0)]
+    [InlineData(1500, 0.05)]
+    public void TheMagneticTolerance_DecidesTheBand(double amps, double max)
+    {
+        var band = Envelope.At(Amperes.Of(amps)).For(Warm);
+
+        Assert.Equal(max, band.Maximum.Limit!.Value.Value, 6);
+        Assert.True(band.Minimum.IsOpen);
+    }
+
+    private static readonly TestConditions Warm = new(StartCondition.Warm, PoleLoading.AllPoles);
 
     [Fact]
     public void ACurveTable_BandsTheGap()
@@ -56,10 +69,13 @@ public sealed class ThermalMagneticEnvelopeTests
         ]);
         var overlay = new OverlayEnvelope(new CurveTableEnvelope(table, Amperes.Of(125)), Envelope);
 
-        var band = overlay.At(Amperes.Of(375));
+        var band = overlay.At(Amperes.Of(375)).For(TestConditions.Reference);
 
+        // At 3 Ir the table's row at 2 Ir (max 400 s) carries upward and its row at 5 Ir (min 4 s) downward.
         Assert.True(band.HasRequirement);
         Assert.Equal(EdgeSource.CurveTable, band.Maximum.Source);
+        Assert.Equal(400, band.Maximum.Limit!.Value.Value, 9);
+        Assert.Equal(4, band.Minimum.Limit!.Value.Value, 9);
         Assert.Equal(3.0, band.Multiple.Value, 9);
     }
 }

@@ -1,0 +1,104 @@
+using CsCheck;
+using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Envelopes;
+using TripTestLog.Domain.Measurements;
+using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Tests.Envelopes;
+using TripTestLog.Domain.Verdicts;
+
+namespace TripTestLog.Domain.Tests.Verdicts;
+
+/// <summary>What must hold for every family, every current, start, loading and result.</summary>
+public sealed class VerdictPropertyTests
+{
+    private static readonly Gen<TripOutcome> Outcomes =
+        Gen.Select(Gen.Bool, Gen.Double[-2.5, 4.2]).Select(t => t.Item1
+            ? TripOutcome.HeldFor(Seconds.Of(Math.Pow(10, t.Item2)))
+            : TripOutcome.TrippedAfter(Seconds.Of(Math.Pow(10, t.Item2))));
+
+    private static TripMeasurement Test(ITripEnvelope envelope, double multiple, TripOutcome outcome, TestConditions c) =>
+        new(AssetTag.Of("P-1"), TestedAt.OnDate(new DateOnly(2025, 1, 1)), TestStage.AsFound,
+            c.Loading == PoleLoading.AllPoles ? Pole.All : Pole.Parse("1"), CurrentMultiple.Of(multiple) * envelope.Reference, outcome,
+            c.Start, null, "", "", "");
+
+    [Fact]
+    public void TheBandCheckUses_IsTheBandEnvelopePrints()
+    {
+        // `envelope` prints envelope.At(current).For(conditions) (EnvelopeWriter.BandAt); check must judge by exactly that.
+        Gen.Select(AllFamiliesPropertyTests.Any, Gen.Double[0.5, 60], AllFamiliesPropertyTests.Conditions, Outcomes).Sample(t =>
+        {
+            var (envelope, m, conditions, outcome) = t;
+            var test = Test(envelope, m, outcome, conditions);
+
+            var judged = TripJudge.Assess(envelope, test, conditions).Band;
+            var printed = envelope.At(test.Current).For(conditions);
+
+            Assert.Equal(printed, judged);
+        }, iter: 5_000);
+    }
+
+    [Fact]
+    public void NoResultFailsOnATypicalEdgeAlone()
+    {
+        // The same test judged with every typical edge removed gets the same verdict: typical edges only advise.
+        Gen.Select(AllFamiliesPropertyTests.Any, Gen.Double[0.5, 60], AllFamiliesPropertyTests.Conditions, Outcomes).Sample(t =>
+        {
+            var (envelope, m, conditions, outcome) = t;
+            var test = Test(envelope, m, outcome, conditions);
+
+            var full = TripJudge.Assess(envelope, test, conditions);
+            var guaranteedOnly = TripJudge.Assess(new GuaranteedOnly(envelope), test, conditions);
+
+            Assert.Equal(guaranteedOnly.Verdict, full.Verdict);
+            if (full.IsFailure)
+            {
+                var edge = full.Verdict == Verdict.TooEarly ? full.Band.Minimum : full.Band.Maximum;
+                Assert.Equal(EdgeStrength.Guaranteed, edge.Strength);
+            }
+        }, iter: 5_000);
+    }
+
+    [Fact]
+    public void AFailureNeedsConditionsAtLeastAsSevereAsTheRequirementAssumes()
+    {
+        // A too-early needs a test no hotter than the broken minimum assumes; a too-late one at least as hot.
+        Gen.Select(AllFamiliesPropertyTests.Any, Gen.Double[0.5, 60], AllFamiliesPropertyTests.Conditions, Outcomes).Sample(t =>
+        {
+            var (envelope, m, conditions, outcome) = t;
+            var a = TripJudge.Assess(envelope, Test(envelope, m, outcome, conditions), conditions);
+
+            if (a.Verdict == Verdict.TooEarly)
+            {
+                Assert.True(a.Band.Minimum.TestAtMostAsHot(conditions));
+            }
+
+            if (a.Verdict == Verdict.TooLate)
+            {
+                Assert.True(a.Band.Maximum.TestAtLeastAsHot(conditions));
+            }
+        }, iter: 5_000);
+    }
+
+    private sealed class GuaranteedOnly(ITripEnvelope inner) : ITripEnvelope
+    {
+        public string Standard => inner.Standard;
+
+        public string ReferenceName => inner.ReferenceName;
+
+        public Amperes Reference => inner.Reference;
+
+        public IReadOnlyList<NormativePoint> Points => inner.Points;
+
+        public bool IsThermal(Amperes current) => inner.IsThermal(current);
+
+        public TripBand At(Amperes current)
+        {
+            var band = inner.At(current);
+            return band with
+            {
+                Minimums = band.Minimums.Where(e => e.Strength == EdgeStrength.Guaranteed).ToList(),
+                Maximums = band.Maximums.Where(e => e.Strength == EdgeStrength.Guaranteed).ToList(),
+            };
+        }
+    }
+}
