@@ -92,6 +92,22 @@ public sealed class IndustrialVerdictTests
         Assert.Equal(expected, Judge(envelope, amps, held ? Held(seconds) : Tripped(seconds), start).Verdict);
     }
 
+    [Theory]
+    // Both sides of the conventional points (Ir 125 A: 1.05 Ir = 131.25 A, 1.30 Ir = 162.5 A; 2 h above 63 A).
+    [InlineData(130.0, false, 7000, StartCondition.Cold, Verdict.TooEarly)]       // just below 1.05 Ir: no trip within 2 h
+    [InlineData(132.5, false, 7000, StartCondition.Cold, Verdict.NotAssessable)]  // just above: 1.05 Ir says nothing of a trip
+    [InlineData(131.25, false, 7200, StartCondition.Cold, Verdict.TooEarly)]      // exactly the conventional time: within it
+    [InlineData(131.25, true, 7200, StartCondition.Cold, Verdict.Pass)]           // a full hold proves the point
+    [InlineData(161.0, true, 7300, StartCondition.Warm, Verdict.NotAssessable)]   // just below 1.30 Ir: no trip is required
+    [InlineData(164.0, true, 7300, StartCondition.Warm, Verdict.TooLate)]         // just above: the trip-by limit holds
+    [InlineData(162.5, false, 7200, StartCondition.Warm, Verdict.Pass)]           // "within the conventional time" includes it
+    public void TheConventionalPoints_HoldOnTheirOwnSide(double amps, bool held, double seconds, StartCondition start, Verdict expected)
+    {
+        var envelope = new ThermalMagneticEnvelope(Amperes.Of(160), Tm);
+
+        Assert.Equal(expected, Judge(envelope, amps, held ? Held(seconds) : Tripped(seconds), start).Verdict);
+    }
+
     [Fact]
     public void AColdTripInTheThermalMagneticGap_SaysWhatWasNotChecked()
     {

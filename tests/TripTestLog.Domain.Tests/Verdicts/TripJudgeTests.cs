@@ -101,6 +101,18 @@ public sealed class TripJudgeTests
     }
 
     [Theory]
+    // Row c on both sides of 2.55 In (C16, from cold): its "1 s < t" carries down only (as I²t: at 2.50 In, 1 s x
+    // (2.55 / 2.5)² = 1.0404 s), its "t < 60 s" up only; at 2.60 In the minimum left is row d's 0.1 s.
+    [InlineData(2.50, 1.03, Verdict.TooEarly)]
+    [InlineData(2.50, 70, Verdict.Pass)]
+    [InlineData(2.60, 0.5, Verdict.Pass)]
+    [InlineData(2.60, 61, Verdict.TooLate)]
+    public void RowC_HoldsEachLimitOnItsOwnSide(double multiple, double tripSeconds, Verdict expected)
+    {
+        Assert.Equal(expected, Judge(TripCurve.C, 16, 16 * multiple, Tripped(tripSeconds), StartCondition.Cold).Verdict);
+    }
+
+    [Theory]
     // Row a: 1.13 In from cold, no trip within 1 h (In <= 63 A) or 2 h (In > 63 A).
     [InlineData(16, 3600, Verdict.Pass)]
     [InlineData(16, 1800, Verdict.NotAssessable)]
