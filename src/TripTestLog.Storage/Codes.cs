@@ -1,21 +1,21 @@
+using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Measurements;
 
 namespace TripTestLog.Storage;
 
-/// <summary>The text codes enums are stored as: the same words the record files use.</summary>
+/// <summary>The text codes enums are stored as, from <see cref="TextCodes"/>; decoding a stored value is strict.</summary>
 internal static class Codes
 {
-    public static string Of(TestStage stage) => stage == TestStage.AsFound ? "as-found" : "as-left";
+    public static string Of(TestStage stage) => TextCodes.Stage.Of(stage);
 
-    public static TestStage Stage(string code) => code == "as-found" ? TestStage.AsFound : TestStage.AsLeft;
+    public static TestStage Stage(string code) => TextCodes.Stage.Decode(code);
 
-    public static string Of(StartCondition start) => start == StartCondition.Cold ? "cold" : "warm";
+    public static string Of(StartCondition start) => TextCodes.Start.Of(start);
 
-    public static StartCondition Start(string code) => code == "cold" ? StartCondition.Cold : StartCondition.Warm;
+    public static StartCondition Start(string code) => TextCodes.Start.Decode(code);
 
-    public static string Of(DeviceFamily family) => FamilyCodes.Of(family);
+    public static string Of(DeviceFamily family) => TextCodes.Family.Of(family);
 
-    public static DeviceFamily Family(string code) =>
-        FamilyCodes.TryParse(code, out var family) ? family : throw new InvalidDataException($"the store holds an unknown device family '{code}'");
+    public static DeviceFamily Family(string code) => TextCodes.Family.Decode(code);
 }

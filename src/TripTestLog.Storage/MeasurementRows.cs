@@ -40,6 +40,9 @@ internal sealed record MeasurementTable(string Table, string[] Columns)
         };
     }
 
+    /// <summary>One trip test as a stored row of <see cref="Trips"/>.</summary>
+    public static MeasurementRow Of(TripMeasurement trip, long deviceId, long line) => Trip(trip, deviceId, line);
+
     /// <summary>A value as text for comparing a stored row with a new one and for the audit table.</summary>
     public static string Text(object? value) => value switch
     {
@@ -58,7 +61,7 @@ internal sealed record MeasurementTable(string Table, string[] Columns)
             Codes.Of(m.Start), Db(m.Ambient?.Value), m.Instrument, m.Technician, m.Note,
             Db(f?.Ir?.Value), Db(f?.Isd?.Value), Db(f?.Ii?.Value), Db(f?.Im?.Value), Db(f?.Pickup?.Value), Db(f?.Tms),
         ];
-        return new MeasurementRow(values, Fingerprint.Of(m, device), line);
+        return new MeasurementRow(values, Fingerprint.Of(Trips, values), line);
     }
 
     private static MeasurementRow Contact(ContactMeasurement m, long device, long line)
@@ -68,7 +71,7 @@ internal sealed record MeasurementTable(string Table, string[] Columns)
             device, m.TestedAt.ToString(), Codes.Of(m.Stage), m.Pole.Code, m.Resistance.Value, m.TestCurrent.Value,
             Db(m.Temperature?.Value), m.Instrument, m.Technician,
         ];
-        return new MeasurementRow(values, Fingerprint.Of(m, device), line);
+        return new MeasurementRow(values, Fingerprint.Of(Contacts, values), line);
     }
 
     private static MeasurementRow Insulation(InsulationMeasurement m, long device, long line)
@@ -78,7 +81,7 @@ internal sealed record MeasurementTable(string Table, string[] Columns)
             device, m.TestedAt.ToString(), Codes.Of(m.Stage), m.Path, m.TestVoltage.Value, m.Resistance.Value.Value, m.Resistance.OverRange,
             Db(m.Temperature?.Value), Db(m.Duration?.Value),
         ];
-        return new MeasurementRow(values, Fingerprint.Of(m, device), line);
+        return new MeasurementRow(values, Fingerprint.Of(Insulations, values), line);
     }
 
     private static object Db(double? value) => value is { } v ? v : DBNull.Value;

@@ -33,6 +33,7 @@ public sealed partial class RecordStore : IDisposable
         Execute(connection, "PRAGMA busy_timeout=10000;");
         var context = new TripTestLogContext(StoreOptions.For(connection));
         context.Database.Migrate();
+        FingerprintScheme.Upgrade(connection);
         return new RecordStore(path, connection, context);
     }
 

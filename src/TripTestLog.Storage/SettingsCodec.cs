@@ -1,3 +1,4 @@
+using TripTestLog.Domain.Codes;
 using System.Text.Json;
 using System.Text.Json.Serialization;
 using TripTestLog.Domain.Devices;
@@ -20,7 +21,7 @@ internal static class SettingsCodec
 
     public static string Write(DeviceSettings settings) => JsonSerializer.Serialize(settings switch
     {
-        Iec60898Settings s => new Dto { Kind = "iec60898", Curve = s.Curve.ToString(), Supply = s.Supply == Supply.Dc ? "dc" : null },
+        Iec60898Settings s => new Dto { Kind = "iec60898", Curve = TextCodes.TripCurve.Of(s.Curve), Supply = s.Supply == Supply.Dc ? TextCodes.Supply.Of(s.Supply) : null },
         ElectronicTripSettings s => new Dto
         {
             Kind = "iec60947-electronic", IrA = s.Ir.Value, TrS = s.Tr.Value, TrRefMultiple = s.TrReferenceMultiple, IsdA = s.Isd?.Value,
@@ -43,14 +44,9 @@ internal static class SettingsCodec
         var d = JsonSerializer.Deserialize<Dto>(json, Options) ?? throw new InvalidDataException("empty settings_json");
         return d.Kind switch
         {
-            "iec60898" => new Iec60898Settings(Enum.Parse<TripCurve>(d.Curve!))
+            "iec60898" => new Iec60898Settings(TextCodes.TripCurve.Decode(d.Curve!))
             {
-                Supply = d.Supply switch
-                {
-                    null => Supply.Ac,
-                    "dc" => Supply.Dc,
-                    _ => throw new InvalidDataException($"unknown supply '{d.Supply}' in settings_json"),
-                },
+                Supply = d.Supply is null ? Supply.Ac : TextCodes.Supply.Decode(d.Supply),
             },
             "iec60947-electronic" => new ElectronicTripSettings(
                 Amperes.Of(d.IrA!.Value), Seconds.Of(d.TrS!.Value), d.TrRefMultiple!.Value, A(d.IsdA), S(d.TsdS), d.TsdI2t ?? false, A(d.IiA),
@@ -60,7 +56,7 @@ internal static class SettingsCodec
             },
             "iec60947-thermal-magnetic" => new ThermalMagneticSettings(Amperes.Of(d.IrA!.Value), Amperes.Of(d.ImA!.Value), Seconds.Of(d.InstMaxS!.Value)),
             "relay-idmt" => new RelaySettings(
-                CurveCodes.TryParse(d.Curve!, out var c) ? c : throw new InvalidDataException($"unknown relay curve '{d.Curve}' in settings_json"),
+                TextCodes.IdmtCurve.Decode(d.Curve!),
                 Amperes.Of(d.PickupA!.Value), d.Tms!.Value, A(d.HighsetA), S(d.HighsetDelayS),
                 TimeTolerance.Of(d.TimeTolerancePct!.Value / 100, Seconds.Of(d.TimeToleranceMinS!.Value)), d.PickupTolerancePct!.Value / 100,
                 Seconds.Of(d.OpeningTimeS!.Value)),

@@ -1,3 +1,4 @@
+using TripTestLog.Domain.Codes;
 using System.CommandLine;
 using TripTestLog.Cli.Output;
 using TripTestLog.Domain.Devices;
@@ -34,17 +35,9 @@ internal static class EnvelopeCommand
             return Usage(cli, $"--family: '{request.FamilyText}' is not a known family; use one of {string.Join(", ", FamilyCodes.All)}");
         }
 
-        StartCondition start;
-        switch (request.Start.Trim().ToLowerInvariant())
+        if (!TextCodes.Start.TryParse(request.Start, out var start))
         {
-            case "cold":
-                start = StartCondition.Cold;
-                break;
-            case "warm":
-                start = StartCondition.Warm;
-                break;
-            default:
-                return Usage(cli, $"--start: '{request.Start}' is not a start condition; use cold or warm");
+            return Usage(cli, $"--start: '{request.Start}' is not a start condition; use {TextCodes.Start.Choices}");
         }
 
         var conditions = new TestConditions(start, request.OnePole ? PoleLoading.OnePole : PoleLoading.AllPoles);
@@ -109,8 +102,8 @@ internal static class EnvelopeCommand
         switch (r.Family!.Value)
         {
             case DeviceFamily.Iec60898 or DeviceFamily.Iec61009:
-                TripCurve? curve = r.Curve?.Trim().ToUpperInvariant() switch { "B" => TripCurve.B, "C" => TripCurve.C, "D" => TripCurve.D, _ => null };
-                Supply? supply = r.Supply?.Trim().ToLowerInvariant() switch { null or "ac" => Supply.Ac, "dc" => Supply.Dc, _ => null };
+                TripCurve? curve = r.Curve is { } ct && TextCodes.TripCurve.TryParse(ct, out var tc) ? tc : null;
+                Supply? supply = r.Supply is null ? Supply.Ac : TextCodes.Supply.TryParse(r.Supply, out var sp) ? sp : null;
                 if (supply is null || (supply == Supply.Dc && r.Family == DeviceFamily.Iec61009))
                 {
                     return (null, "--supply: give ac or dc (dc for iec60898 only)");

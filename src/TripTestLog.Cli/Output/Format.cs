@@ -1,3 +1,4 @@
+using TripTestLog.Domain.Codes;
 using System.Globalization;
 using TripTestLog.Domain.Envelopes;
 using TripTestLog.Domain.Measurements;
@@ -19,9 +20,9 @@ internal static class Format
 
     public static string Outcome(TripOutcome outcome) => outcome.Tripped ? $"tripped {outcome.Time}" : $"held {outcome.Time}";
 
-    public static string Stage(TestStage stage) => stage == TestStage.AsFound ? "as-found" : "as-left";
+    public static string Stage(TestStage stage) => TextCodes.Stage.Of(stage);
 
-    public static string Start(StartCondition start) => start == StartCondition.Cold ? "cold" : "warm";
+    public static string Start(StartCondition start) => TextCodes.Start.Of(start);
 
     /// <summary>Test conditions in words, e.g. "from cold, all poles loaded".</summary>
     public static string Conditions(TestConditions c) =>

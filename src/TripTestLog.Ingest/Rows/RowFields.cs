@@ -1,3 +1,4 @@
+using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Records;
 using System.Globalization;
 using TripTestLog.Domain.Devices;
@@ -232,18 +233,18 @@ internal sealed class RowFields
     public TestStage? Stage()
     {
         var text = RequiredText("stage", "the stage");
-        switch (text?.ToLowerInvariant())
+        if (text is null)
         {
-            case null:
-                return null;
-            case "as-found":
-                return TestStage.AsFound;
-            case "as-left":
-                return TestStage.AsLeft;
-            default:
-                Fail("stage", $"'{text}' is not a stage; write as-found or as-left");
-                return null;
+            return null;
         }
+
+        if (TextCodes.Stage.TryParse(text, out var stage))
+        {
+            return stage;
+        }
+
+        Fail("stage", $"'{text}' is not a stage; write {TextCodes.Stage.Choices}");
+        return null;
     }
 
     public Pole? Pole()

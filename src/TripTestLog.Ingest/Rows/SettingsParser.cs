@@ -1,3 +1,4 @@
+using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Quantities;
 using TripTestLog.Domain.Settings;
@@ -20,26 +21,15 @@ internal static class SettingsParser
     private static Iec60898Settings? Miniature(RowFields f, bool allowDc)
     {
         var text = f.RequiredText("curve", "the trip curve (B, C or D) of a miniature breaker or RCBO");
-        TripCurve? curve = text?.ToUpperInvariant() switch
-        {
-            null => null,
-            "B" => TripCurve.B,
-            "C" => TripCurve.C,
-            "D" => TripCurve.D,
-            _ => null,
-        };
+        TripCurve? curve = text is not null && TextCodes.TripCurve.TryParse(text, out var parsed) ? parsed : null;
         if (text is not null && curve is null)
         {
             f.Fail("curve", $"'{text}' is not an IEC 60898-1 curve; write B, C or D");
         }
 
         var supplyText = f.OptionalText("supply");
-        Supply? supply = supplyText?.ToLowerInvariant() switch
-        {
-            null or "ac" => Supply.Ac,
-            "dc" when allowDc => Supply.Dc,
-            _ => null,
-        };
+        Supply? supply = supplyText is null ? Supply.Ac
+            : TextCodes.Supply.TryParse(supplyText, out var s) && (allowDc || s == Supply.Ac) ? s : null;
         if (supply is null)
         {
             f.Fail("supply", allowDc ? $"'{supplyText}' is not a supply; write ac or dc" : $"'{supplyText}': an iec61009 RCBO is judged on ac only; write ac or leave it blank");
@@ -49,7 +39,7 @@ internal static class SettingsParser
             f.Fail("curve", "IEC 60898-2 admits only curves B and C for d.c.; write B or C, or supply ac");
         }
 
-        return f.Ok && curve is { } c && supply is { } s ? new Iec60898Settings(c) { Supply = s } : null;
+        return f.Ok && curve is { } c && supply is { } chosen ? new Iec60898Settings(c) { Supply = chosen } : null;
     }
 
     private static ElectronicTripSettings? Electronic(RowFields f, Amperes rated)

@@ -1,3 +1,4 @@
+using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Records;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Quantities;
@@ -70,17 +71,17 @@ internal static class TripRowParser
     private static StartCondition? Start(RowFields f)
     {
         var text = f.RequiredText("start", "the start condition");
-        switch (text?.ToLowerInvariant())
+        if (text is null)
         {
-            case null:
-                return null;
-            case "cold":
-                return StartCondition.Cold;
-            case "warm":
-                return StartCondition.Warm;
-            default:
-                f.Fail("start", $"'{text}' is not a start condition; write cold or warm");
-                return null;
+            return null;
         }
+
+        if (TextCodes.Start.TryParse(text, out var start))
+        {
+            return start;
+        }
+
+        f.Fail("start", $"'{text}' is not a start condition; write {TextCodes.Start.Choices}");
+        return null;
     }
 }

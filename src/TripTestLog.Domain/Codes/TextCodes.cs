@@ -1,0 +1,43 @@
+using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Measurements;
+using TripTestLog.Domain.Settings;
+
+namespace TripTestLog.Domain.Codes;
+
+/// <summary>Every text code the tool reads and writes, each spelled once.</summary>
+public static class TextCodes
+{
+    /// <summary>Test stages: as-found, as-left.</summary>
+    public static CodeBook<TestStage> Stage { get; } = new("stage", (TestStage.AsFound, "as-found"), (TestStage.AsLeft, "as-left"));
+
+    /// <summary>Start conditions: cold, warm.</summary>
+    public static CodeBook<StartCondition> Start { get; } = new("start condition", (StartCondition.Cold, "cold"), (StartCondition.Warm, "warm"));
+
+    /// <summary>Pole loadings: all-poles, one-pole.</summary>
+    public static CodeBook<PoleLoading> Loading { get; } = new("pole loading", (PoleLoading.AllPoles, "all-poles"), (PoleLoading.OnePole, "one-pole"));
+
+    /// <summary>Device families.</summary>
+    public static CodeBook<DeviceFamily> Family { get; } = new("device family",
+        (DeviceFamily.Iec60898, "iec60898"),
+        (DeviceFamily.Iec60947Electronic, "iec60947-electronic"),
+        (DeviceFamily.Iec60947ThermalMagnetic, "iec60947-thermal-magnetic"),
+        (DeviceFamily.RelayIdmt, "relay-idmt"),
+        (DeviceFamily.CurveTable, "curve-table"),
+        (DeviceFamily.Iec61009, "iec61009"));
+
+    /// <summary>Miniature breaker curves: B, C, D.</summary>
+    public static CodeBook<TripCurve> TripCurve { get; } = new("trip curve", (Devices.TripCurve.B, "B"), (Devices.TripCurve.C, "C"), (Devices.TripCurve.D, "D"));
+
+    /// <summary>Supplies: ac, dc.</summary>
+    public static CodeBook<Supply> Supply { get; } = new("supply", (Settings.Supply.Ac, "ac"), (Settings.Supply.Dc, "dc"));
+
+    /// <summary>IDMT relay curves.</summary>
+    public static CodeBook<IdmtCurve> IdmtCurve { get; } = new("relay curve",
+        (Settings.IdmtCurve.StandardInverse, "standard-inverse"),
+        (Settings.IdmtCurve.VeryInverse, "very-inverse"),
+        (Settings.IdmtCurve.ExtremelyInverse, "extremely-inverse"),
+        (Settings.IdmtCurve.LongTimeInverse, "long-time-inverse"),
+        (Settings.IdmtCurve.IeeeModeratelyInverse, "ieee-moderately-inverse"),
+        (Settings.IdmtCurve.IeeeVeryInverse, "ieee-very-inverse"),
+        (Settings.IdmtCurve.IeeeExtremelyInverse, "ieee-extremely-inverse"));
+}
