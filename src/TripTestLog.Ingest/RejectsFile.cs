@@ -1,6 +1,6 @@
 using System.Text;
 using CsvHelper;
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 
 namespace TripTestLog.Ingest;
 

@@ -1,4 +1,4 @@
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Envelopes;
 using TripTestLog.Domain.Instruments;

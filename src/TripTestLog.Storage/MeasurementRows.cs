@@ -1,6 +1,6 @@
 using System.Globalization;
 using TripTestLog.Domain.Measurements;
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 
 namespace TripTestLog.Storage;
 

@@ -1,5 +1,5 @@
 using Microsoft.Data.Sqlite;
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 
 namespace TripTestLog.Storage;
 

@@ -1,7 +1,9 @@
+using TripTestLog.Application.Import;
+using TripTestLog.Application.Check;
 using System.Globalization;
 using Microsoft.Data.Sqlite;
 using TripTestLog.Domain.Devices;
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 
 namespace TripTestLog.Storage;
 

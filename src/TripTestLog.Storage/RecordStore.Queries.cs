@@ -1,3 +1,5 @@
+using TripTestLog.Application.Import;
+using TripTestLog.Application.Check;
 using Microsoft.EntityFrameworkCore;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Envelopes;

@@ -1,6 +1,6 @@
 using Microsoft.Data.Sqlite;
 using TripTestLog.Domain.Devices;
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 
 namespace TripTestLog.Storage;
 

@@ -1,6 +1,8 @@
+using TripTestLog.Application.Import;
+using TripTestLog.Application.Check;
 using Microsoft.Data.Sqlite;
 using TripTestLog.Domain.Devices;
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 using TripTestLog.Storage;
 
 namespace TripTestLog.Ingest.Tests;

@@ -1,5 +1,7 @@
+using TripTestLog.Application.Import;
+using TripTestLog.Application.Check;
 using Microsoft.Data.Sqlite;
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 using TripTestLog.Storage;
 
 namespace TripTestLog.Ingest.Tests;

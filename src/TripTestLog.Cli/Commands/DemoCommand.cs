@@ -1,3 +1,5 @@
+using TripTestLog.Application.Import;
+using TripTestLog.Application.Check;
 using System.CommandLine;
 using TripTestLog.Cli.Output;
 using TripTestLog.Cli.Services;

@@ -5,7 +5,7 @@ using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Envelopes;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Quantities;
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 using TripTestLog.Domain.Settings;
 using TripTestLog.Ingest;
 using TripTestLog.Storage;

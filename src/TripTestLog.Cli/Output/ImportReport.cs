@@ -1,4 +1,6 @@
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Import;
+using TripTestLog.Application.Check;
+using TripTestLog.Application.Records;
 using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Output;

@@ -1,5 +1,7 @@
+using TripTestLog.Application.Import;
+using TripTestLog.Application.Check;
 using Serilog;
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 using TripTestLog.Ingest;
 using TripTestLog.Storage;
 

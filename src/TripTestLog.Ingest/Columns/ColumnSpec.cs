@@ -1,4 +1,4 @@
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 namespace TripTestLog.Ingest.Columns;
 
 /// <summary>One column of a record format: its name without the unit suffix, what it measures, and whether it is required.</summary>

@@ -1,4 +1,4 @@
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 namespace TripTestLog.Ingest.Columns;
 
 /// <summary>

@@ -1,4 +1,4 @@
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 namespace TripTestLog.Ingest.Columns;
 
 /// <summary>A column of the format found in a file's header: where it is, how it was written, its unit factor.</summary>

@@ -1,4 +1,4 @@
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 namespace TripTestLog.Ingest.Columns;
 
 /// <summary>What a numeric column measures, which decides the unit suffixes it accepts.</summary>

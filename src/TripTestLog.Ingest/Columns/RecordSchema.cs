@@ -1,4 +1,4 @@
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 namespace TripTestLog.Ingest.Columns;
 
 /// <summary>The columns of one record kind, version 1 of the formats. The README documents the same lists.</summary>

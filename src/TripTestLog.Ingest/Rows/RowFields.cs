@@ -1,5 +1,5 @@
 using TripTestLog.Domain.Codes;
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 using System.Globalization;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Measurements;

@@ -1,7 +1,7 @@
 using TripTestLog.Domain.Envelopes;
 using TripTestLog.Domain.Instruments;
 using TripTestLog.Domain.Quantities;
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 using TripTestLog.Domain.Settings;
 
 namespace TripTestLog.Ingest.Rows;

@@ -1,5 +1,5 @@
 using TripTestLog.Domain.Codes;
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Records;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Quantities;
 using TripTestLog.Domain.Settings;

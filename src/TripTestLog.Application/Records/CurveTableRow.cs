@@ -1,6 +1,6 @@
 using TripTestLog.Domain.Envelopes;
 
-namespace TripTestLog.Domain.Records;
+namespace TripTestLog.Application.Records;
 
 /// <summary>One row of a curve table file: which table, and the point.</summary>
 /// <param name="Table">The table's name.</param>

@@ -1,4 +1,4 @@
-namespace TripTestLog.Domain.Records;
+namespace TripTestLog.Application.Records;
 
 /// <summary>A record with the line of its file it was read from.</summary>
 /// <param name="Record">The parsed record.</param>

@@ -1,4 +1,4 @@
-namespace TripTestLog.Storage;
+namespace TripTestLog.Application.Import;
 
 /// <summary>How an import treats bad rows and corrected files.</summary>
 /// <param name="AcceptValid">Store the good rows of a file with bad rows (the bad ones are reported as refused) instead of refusing the whole file.</param>

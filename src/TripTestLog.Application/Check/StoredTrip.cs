@@ -1,7 +1,9 @@
+using TripTestLog.Application.Import;
+using TripTestLog.Application.Check;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Measurements;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Application.Check;
 
 /// <summary>A stored trip test and where it was imported from.</summary>
 /// <param name="Tag">The device tested.</param>

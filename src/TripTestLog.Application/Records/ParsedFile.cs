@@ -4,7 +4,7 @@ using TripTestLog.Domain.Instruments;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Settings;
 
-namespace TripTestLog.Domain.Records;
+namespace TripTestLog.Application.Records;
 
 /// <summary>
 /// Everything read from one record file: its kind, the records that parsed, and every problem found.

@@ -1,6 +1,8 @@
-using TripTestLog.Domain.Records;
+using TripTestLog.Application.Import;
+using TripTestLog.Application.Check;
+using TripTestLog.Application.Records;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Application.Import;
 
 /// <summary>The result of importing one file. Every data row read is accounted for.</summary>
 /// <param name="File">The file's path as given.</param>

@@ -1,4 +1,4 @@
-namespace TripTestLog.Domain.Records;
+namespace TripTestLog.Application.Records;
 
 /// <summary>Why a row, or a whole file, was refused: where, and what to fix.</summary>
 /// <param name="File">The file's path as given.</param>

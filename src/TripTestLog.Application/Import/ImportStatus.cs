@@ -1,4 +1,4 @@
-namespace TripTestLog.Storage;
+namespace TripTestLog.Application.Import;
 
 /// <summary>What happened to one file on import.</summary>
 public enum ImportStatus

@@ -1,4 +1,4 @@
-namespace TripTestLog.Domain.Records;
+namespace TripTestLog.Application.Records;
 
 /// <summary>The kinds of record file, recognised from the header row, never from the file name.</summary>
 public enum RecordKind
