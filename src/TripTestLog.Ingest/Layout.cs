@@ -12,18 +12,24 @@ internal sealed record Layout(char Separator, bool DecimalComma, ColumnProfile? 
 {
     public static Layout Recognise(string path, ReadOptions options)
     {
+        string header;
+        using (var reader = new StreamReader(path, detectEncodingFromByteOrderMarks: true))
+        {
+            header = reader.ReadLine() ?? "";
+        }
+
+        return FromHeader(header, options);
+    }
+
+    /// <summary>The layout of a file whose first line is <paramref name="header"/>.</summary>
+    public static Layout FromHeader(string header, ReadOptions options)
+    {
         var profile = options.Profile;
         var declared = options.Separator ?? profile?.Delimiter;
         var decimalMark = options.Decimal ?? profile?.Decimal;
         if (declared is { } sep)
         {
             return new Layout(sep, decimalMark is ',' || (decimalMark is null && sep == ';'), profile, null);
-        }
-
-        string header;
-        using (var reader = new StreamReader(path, detectEncodingFromByteOrderMarks: true))
-        {
-            header = reader.ReadLine() ?? "";
         }
 
         bool Recognised(char separator) => HeaderMap.Resolve(Mapped(header.Split(separator).Select(h => h.Trim('"', ' ')).ToList(), profile).Names).Map is not null;

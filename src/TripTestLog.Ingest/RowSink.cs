@@ -18,30 +18,43 @@ internal sealed class RowSink(RecordKind kind)
     private readonly List<Located<AmbientTableRow>> _ambientRows = [];
     private readonly List<Located<InstrumentCalibration>> _instruments = [];
 
-    public void Add(RowFields fields)
+    /// <summary>Parses one row of a file of <paramref name="kind"/>: the record, or null when the row has problems.</summary>
+    public static object? Parse(RecordKind kind, RowFields fields) => kind switch
     {
-        switch (kind)
+        RecordKind.DeviceRegister => DeviceRowParser.Parse(fields),
+        RecordKind.TripTests => TripRowParser.Parse(fields),
+        RecordKind.ContactResistance => ContactRowParser.Parse(fields),
+        RecordKind.InsulationResistance => InsulationRowParser.Parse(fields),
+        RecordKind.CurveTable => TableRowParser.Curve(fields),
+        RecordKind.AmbientTable => TableRowParser.Ambient(fields),
+        _ => TableRowParser.Instrument(fields),
+    };
+
+    /// <summary>Keeps a parsed record with its line.</summary>
+    public void Add(object record, long line)
+    {
+        switch (record)
         {
-            case RecordKind.DeviceRegister:
-                Keep(_devices, DeviceRowParser.Parse(fields), fields.Line);
+            case Device d:
+                _devices.Add(new(d, line));
                 break;
-            case RecordKind.TripTests:
-                Keep(_trips, TripRowParser.Parse(fields), fields.Line);
+            case TripMeasurement t:
+                _trips.Add(new(t, line));
                 break;
-            case RecordKind.ContactResistance:
-                Keep(_contacts, ContactRowParser.Parse(fields), fields.Line);
+            case ContactMeasurement c:
+                _contacts.Add(new(c, line));
                 break;
-            case RecordKind.InsulationResistance:
-                Keep(_insulations, InsulationRowParser.Parse(fields), fields.Line);
+            case InsulationMeasurement i:
+                _insulations.Add(new(i, line));
                 break;
-            case RecordKind.CurveTable:
-                Keep(_curveRows, TableRowParser.Curve(fields), fields.Line);
+            case CurveTableRow r:
+                _curveRows.Add(new(r, line));
                 break;
-            case RecordKind.AmbientTable:
-                Keep(_ambientRows, TableRowParser.Ambient(fields), fields.Line);
+            case AmbientTableRow r:
+                _ambientRows.Add(new(r, line));
                 break;
-            case RecordKind.InstrumentRegister:
-                Keep(_instruments, TableRowParser.Instrument(fields), fields.Line);
+            case InstrumentCalibration r:
+                _instruments.Add(new(r, line));
                 break;
         }
     }
@@ -98,15 +111,6 @@ internal sealed class RowSink(RecordKind kind)
                     yield return new RowProblem(path, rows[i].Line, "ambient_c", $"ambient table {group.Key}: temperatures must rise from row to row");
                 }
             }
-        }
-    }
-
-    private static void Keep<T>(List<Located<T>> list, T? record, long line)
-        where T : class
-    {
-        if (record is not null)
-        {
-            list.Add(new Located<T>(record, line));
         }
     }
 }

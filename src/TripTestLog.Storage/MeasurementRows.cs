@@ -27,18 +27,23 @@ internal sealed record MeasurementTable(string Table, string[] Columns)
     public static MeasurementTable Insulations { get; } = new("insulation_tests",
         ["device_id", "tested_at", "stage", "path", "test_voltage_v", "resistance_mohm", "over_range", "temperature_c", "duration_s"]);
 
-    /// <summary>The table and rows of a measurement file, skipping <paramref name="excluded"/> lines.</summary>
-    public static (MeasurementTable Table, List<MeasurementRow> Rows) Of(ParsedFile file, IReadOnlyDictionary<string, long> deviceIds, IReadOnlySet<long> excluded)
+    /// <summary>The table measurements of <paramref name="kind"/> are stored in.</summary>
+    public static MeasurementTable For(RecordKind kind) => kind switch
     {
-        bool Keep(long line) => !excluded.Contains(line);
-        return file.Kind switch
-        {
-            RecordKind.TripTests => (Trips, file.Trips.Where(t => Keep(t.Line)).Select(t => Trip(t.Record, deviceIds[t.Record.Tag.Value], t.Line)).ToList()),
-            RecordKind.ContactResistance => (Contacts, file.Contacts.Where(t => Keep(t.Line)).Select(t => Contact(t.Record, deviceIds[t.Record.Tag.Value], t.Line)).ToList()),
-            RecordKind.InsulationResistance => (Insulations, file.Insulations.Where(t => Keep(t.Line)).Select(t => Insulation(t.Record, deviceIds[t.Record.Tag.Value], t.Line)).ToList()),
-            _ => throw new ArgumentOutOfRangeException(nameof(file), file.Kind, "not a measurement file"),
-        };
-    }
+        RecordKind.TripTests => Trips,
+        RecordKind.ContactResistance => Contacts,
+        RecordKind.InsulationResistance => Insulations,
+        _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "not a measurement kind"),
+    };
+
+    /// <summary>A measurement as a stored row of its table.</summary>
+    public static MeasurementRow RowOf(object measurement, long deviceId, long line) => measurement switch
+    {
+        TripMeasurement t => Trip(t, deviceId, line),
+        ContactMeasurement c => Contact(c, deviceId, line),
+        InsulationMeasurement i => Insulation(i, deviceId, line),
+        _ => throw new ArgumentOutOfRangeException(nameof(measurement), measurement.GetType().Name, "not a measurement"),
+    };
 
     /// <summary>One trip test as a stored row of <see cref="Trips"/>.</summary>
     public static MeasurementRow Of(TripMeasurement trip, long deviceId, long line) => Trip(trip, deviceId, line);

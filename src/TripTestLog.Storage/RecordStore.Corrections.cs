@@ -10,55 +10,15 @@ public sealed partial class RecordStore
     /// test set's export written again. Its rows are matched with the earlier file's by line; a matched row whose values
     /// differ is a correction. A copy under another path is a new file, whose identical rows are duplicates.
     /// </summary>
-    private List<Correction> Corrections(SqliteTransaction transaction, ParsedFile file, MeasurementTable table, List<MeasurementRow> rows)
-    {
-        var earlier = EarlierFileOfTheSameName(transaction, file);
-        if (earlier is not { } source)
-        {
-            return [];
-        }
-
-        using var select = Command(transaction,
-            $"SELECT id, source_line, {string.Join(", ", table.Columns)} FROM {table.Table} WHERE source_file_id = $src");
-        select.Parameters.AddWithValue("$src", source.Id);
-        using var reader = select.ExecuteReader();
-        var stored = new Dictionary<long, (long Id, object[] Values)>();
-        while (reader.Read())
-        {
-            var values = new object[table.Columns.Length];
-            for (var i = 0; i < values.Length; i++)
-            {
-                values[i] = reader.GetValue(i + 2);
-            }
-
-            stored[reader.GetInt64(1)] = (reader.GetInt64(0), values);
-        }
-
-        var corrections = new List<Correction>();
-        foreach (var row in rows)
-        {
-            if (stored.TryGetValue(row.Line, out var old))
-            {
-                var correction = new Correction(row, old.Id, old.Values, source.Id, source.Name, table.Columns);
-                if (correction.Changes.Any())
-                {
-                    corrections.Add(correction);
-                }
-            }
-        }
-
-        return corrections;
-    }
-
-    private (long Id, string Name)? EarlierFileOfTheSameName(SqliteTransaction transaction, ParsedFile file)
+    internal (long Id, string Name)? EarlierFileOfTheSameName(SqliteTransaction transaction, string path, RecordKind kind)
     {
         using var select = Command(transaction, "SELECT id, file_name FROM source_files WHERE kind = $kind ORDER BY id DESC");
-        select.Parameters.AddWithValue("$kind", file.Kind!.Value.ToString());
+        select.Parameters.AddWithValue("$kind", kind.ToString());
         using var reader = select.ExecuteReader();
-        var path = System.IO.Path.GetFullPath(file.Path);
+        var full = System.IO.Path.GetFullPath(path);
         while (reader.Read())
         {
-            if (string.Equals(reader.GetString(1), path, StringComparison.Ordinal))
+            if (string.Equals(reader.GetString(1), full, StringComparison.Ordinal))
             {
                 return (reader.GetInt64(0), reader.GetString(1));
             }
@@ -68,7 +28,7 @@ public sealed partial class RecordStore
     }
 
     /// <summary>Replaces the corrected records' values and writes every old value to `audit_changes`.</summary>
-    private long ApplyCorrections(SqliteTransaction transaction, MeasurementTable table, List<Correction> corrections, long sourceId, DateTimeOffset now)
+    internal long ApplyCorrections(SqliteTransaction transaction, MeasurementTable table, IReadOnlyList<Correction> corrections, long sourceId, DateTimeOffset now)
     {
         if (corrections.Count == 0)
         {

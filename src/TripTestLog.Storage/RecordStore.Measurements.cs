@@ -5,31 +5,6 @@ namespace TripTestLog.Storage;
 
 public sealed partial class RecordStore
 {
-    // One prepared command per file, reused for every row inside the file's transaction: the fast path for bulk import.
-    private long InsertMeasurements(SqliteTransaction transaction, MeasurementTable table, IEnumerable<MeasurementRow> rows, long sourceId)
-    {
-        var names = table.Columns.Select((_, i) => "$p" + i).ToList();
-        using var insert = Command(transaction,
-            $"INSERT OR IGNORE INTO {table.Table} ({string.Join(", ", table.Columns)}, source_file_id, source_line, fingerprint) "
-            + $"VALUES ({string.Join(", ", names)}, $src, $line, $fp)");
-        var p = Parameters(insert, [.. names, "$src", "$line", "$fp"]);
-        long added = 0;
-        foreach (var row in rows)
-        {
-            for (var i = 0; i < row.Values.Length; i++)
-            {
-                p[i].Value = row.Values[i];
-            }
-
-            p[^3].Value = sourceId;
-            p[^2].Value = row.Line;
-            p[^1].Value = row.Fingerprint;
-            added += insert.ExecuteNonQuery();
-        }
-
-        return added;
-    }
-
     private long InsertCurveTableRows(SqliteTransaction transaction, ParsedFile file, long sourceId)
     {
         using var insert = Command(transaction,
@@ -67,7 +42,7 @@ public sealed partial class RecordStore
         return file.AmbientTableRows.Count;
     }
 
-    private static SqliteParameter[] Parameters(SqliteCommand command, params string[] names)
+    internal static SqliteParameter[] Parameters(SqliteCommand command, params string[] names)
     {
         var parameters = names.Select(n =>
         {

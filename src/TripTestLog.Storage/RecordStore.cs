@@ -1,3 +1,4 @@
+using TripTestLog.Application.Import;
 using Microsoft.Data.Sqlite;
 using Microsoft.EntityFrameworkCore;
 
@@ -7,7 +8,7 @@ namespace TripTestLog.Storage;
 /// The SQLite store of devices and measurements. Opening applies any pending migrations (never EnsureCreated), so a
 /// database made by an older version is upgraded in place.
 /// </summary>
-public sealed partial class RecordStore : IDisposable
+public sealed partial class RecordStore : IDisposable, IImportStore
 {
     private readonly SqliteConnection _connection;
     private readonly TripTestLogContext _context;

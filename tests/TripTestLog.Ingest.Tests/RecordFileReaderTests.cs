@@ -55,7 +55,7 @@ public sealed class RecordFileReaderTests
             stream.SetLength(200L * 1024 * 1024);
         }
 
-        var parsed = RecordFileReader.Read(path, Records.Today);
+        var parsed = RecordFileReader.Read(path, Records.Today, ReadOptions.Default with { MaxBytes = 100L * 1024 * 1024 });
 
         var problem = Assert.Single(parsed.Problems);
         Assert.Contains("200 MB, over the 100 MB limit", problem.Reason);

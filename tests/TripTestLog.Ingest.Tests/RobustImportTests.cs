@@ -47,7 +47,7 @@ public sealed class RobustImportTests
         var parsed = RecordFileReader.Read(path, Records.Today);
 
         var outcome = store.Import(parsed, Now, new ImportOptions(AcceptValid: true));
-        var rejects = RejectsFile.Write(path, ReadOptions.Default, outcome.Problems);
+        var rejects = outcome.RejectsFile;
 
         // Six rows: three stored, one duplicate of an earlier row, two refused (a bad number, an unknown tag).
         Assert.Equal((ImportStatus.Imported, 6L, 3L, 1L, 2L), (outcome.Status, outcome.RowsRead, outcome.Added, outcome.Duplicates, outcome.RefusedRows));
@@ -68,7 +68,7 @@ public sealed class RobustImportTests
         using var _ = store;
         var path = temp.Write("mixed.csv", Trips);
         var outcome = store.Import(RecordFileReader.Read(path, Records.Today), Now, new ImportOptions(AcceptValid: true));
-        var rejects = RejectsFile.Write(path, ReadOptions.Default, outcome.Problems)!;
+        var rejects = outcome.RejectsFile!;
         File.WriteAllText(rejects, File.ReadAllText(rejects).Replace(",abc,", ",23.3,").Replace("T-99,", "T-02,"));
 
         var fixedUp = store.Import(RecordFileReader.Read(rejects, Records.Today), Now);

@@ -29,6 +29,9 @@ public sealed record ImportOutcome(
     /// <summary>Where the refused rows were written (accept-valid), when any were.</summary>
     public string? RejectsFile { get; init; }
 
+    /// <summary>Problems found beyond those kept in <see cref="Problems"/> (a report keeps the first ten thousand).</summary>
+    public long ProblemsOmitted { get; init; }
+
     /// <summary>Stored rows replaced by a corrected file (with --replace); their old values are in the audit table.</summary>
     public long Replaced { get; init; }
 

@@ -30,7 +30,7 @@ internal static class ImportCommand
         var profile = new Option<FileInfo?>("--profile") { Description = "A column-mapping profile (JSON) for another layout; applies to every file given", HelpName = "FILE" };
         var delimiter = new Option<string?>("--delimiter") { Description = "Field separator, e.g. ';' (default: recognised from the header)", HelpName = "CHAR" };
         var decimalMark = new Option<string?>("--decimal") { Description = "Decimal mark: '.' or ',' (default: '.' for comma files, ',' accepted in semicolon files)", HelpName = "CHAR" };
-        var maxMb = new Option<int>("--max-file-mb") { Description = "Refuse files larger than this", DefaultValueFactory = _ => 100, HelpName = "MB" };
+        var maxMb = new Option<int?>("--max-file-mb") { Description = "Refuse files larger than this (no limit by default: files stream through)", HelpName = "MB" };
         var command = new Command("import", "Import record files; a file with any bad row is refused whole (unless --accept-valid) and the summary says where and why")
         {
             paths, db, acceptValid, replace, profile, delimiter, decimalMark, maxMb,
@@ -40,7 +40,7 @@ internal static class ImportCommand
         return command;
     }
 
-    private static int Run(CliContext cli, string[] paths, FileInfo db, ImportOptions options, FileInfo? profileFile, string? delimiter, string? decimalMark, int maxMb)
+    private static int Run(CliContext cli, string[] paths, FileInfo db, ImportOptions options, FileInfo? profileFile, string? delimiter, string? decimalMark, int? maxMb)
     {
         if (delimiter is { Length: not 1 } || decimalMark is not (null or "." or ",") || maxMb is < 1 or > 100_000)
         {
@@ -48,7 +48,7 @@ internal static class ImportCommand
             return ExitCodes.BadInput;
         }
 
-        var read = new ReadOptions { Separator = delimiter?[0], Decimal = decimalMark?[0], MaxBytes = maxMb * 1024L * 1024L };
+        var read = new ReadOptions { Separator = delimiter?[0], Decimal = decimalMark?[0], MaxBytes = maxMb is { } mb ? mb * 1024L * 1024L : long.MaxValue };
         if (profileFile is not null)
         {
             var (profile, problem) = profileFile.Exists ? ColumnProfile.Load(profileFile.FullName) : (null, $"{profileFile.FullName}: no such file");

@@ -61,9 +61,10 @@ internal static class ImportReport
             writer.WriteLine("  " + p);
         }
 
-        if (o.Problems.Count > ProblemsShownPerFile)
+        if (o.Problems.Count + o.ProblemsOmitted > ProblemsShownPerFile)
         {
-            writer.WriteLine($"  ... and {o.Problems.Count - ProblemsShownPerFile} more (all are in {logPath})");
+            var inLog = o.ProblemsOmitted > 0 ? $"the first {o.Problems.Count} are in {logPath}" : $"all are in {logPath}";
+            writer.WriteLine($"  ... and {o.Problems.Count + o.ProblemsOmitted - ProblemsShownPerFile} more ({inLog})");
         }
     }
 

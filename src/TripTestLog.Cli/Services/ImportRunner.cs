@@ -57,36 +57,16 @@ internal sealed class ImportRunner(RecordStore store, ILogger log, CliContext cl
     public IReadOnlyList<ImportOutcome> Run(IReadOnlyList<ImportFile> files, ImportOptions options)
     {
         using var progress = Progress.For(cli, files.Count);
-
-        // Order by the kind read off each header, then read and store one file at a time, so that registers go in
-        // before the tests that need them and only one file is held in memory.
-        var ordered = files.OrderBy(f => Order(RecordFileReader.KindOf(f.Path, f.Read))).ToList();
+        var sources = files.Select(f => (IRecordFileSource)new CsvRecordFileSource(f.Path, f.Read)).ToList();
         var outcomes = new List<ImportOutcome>(files.Count);
-        foreach (var (path, read) in ordered)
+        foreach (var outcome in new ImportPipeline(store).Run(sources, options, cli.Today, cli.Clock.GetUtcNow, file => progress.Step(Path.GetFileName(file))))
         {
-            progress.Step(Path.GetFileName(path));
-            var file = RecordFileReader.Read(path, cli.Today, read);
-            var outcome = store.Import(file, cli.Clock.GetUtcNow(), options);
-            if (options.AcceptValid && outcome.Status == ImportStatus.Imported && outcome.RefusedRows > 0)
-            {
-                outcome = outcome with { RejectsFile = RejectsFile.Write(file.Path, read, outcome.Problems) };
-            }
-
-            Log(outcome, file.Sha256);
+            Log(outcome);
             outcomes.Add(outcome);
         }
 
         return outcomes;
     }
-
-    // Registers and tables first: measurement files need their devices, and checks need the tables. Unrecognised last.
-    private static int Order(RecordKind? kind) => kind switch
-    {
-        RecordKind.DeviceRegister => 0,
-        RecordKind.InstrumentRegister or RecordKind.CurveTable or RecordKind.AmbientTable => 1,
-        null => 3,
-        _ => 2,
-    };
 
     // Each folder's profiles are read once per import, not once per file.
     private static IReadOnlyList<ColumnProfile> FolderProfiles(string folder, Dictionary<string, IReadOnlyList<ColumnProfile>> cache, List<string> problems)
@@ -114,13 +94,18 @@ internal sealed class ImportRunner(RecordStore store, ILogger log, CliContext cl
         return loaded;
     }
 
-    private void Log(ImportOutcome o, string sha)
+    private void Log(ImportOutcome o)
     {
-        log.Information("Import {File} sha256 {Sha} kind {Kind}: {Status}, {Rows} rows, {Added} added, {Updated} updated, {Duplicates} duplicates, {Refused} refused, {Replaced} replaced",
-            o.File, sha, o.Kind, o.Status, o.RowsRead, o.Added, o.Updated, o.Duplicates, o.RefusedRows, o.Replaced);
+        log.Information("Import {File} kind {Kind}: {Status}, {Rows} rows, {Added} added, {Updated} updated, {Duplicates} duplicates, {Refused} refused, {Replaced} replaced",
+            o.File, o.Kind, o.Status, o.RowsRead, o.Added, o.Updated, o.Duplicates, o.RefusedRows, o.Replaced);
         foreach (var problem in o.Problems)
         {
             log.Warning("Refused {Problem}", problem.ToString());
+        }
+
+        if (o.ProblemsOmitted > 0)
+        {
+            log.Warning("{File}: {Omitted} further problems not listed", o.File, o.ProblemsOmitted);
         }
     }
 }

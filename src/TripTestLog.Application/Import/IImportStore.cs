@@ -1,0 +1,64 @@
+using TripTestLog.Application.Records;
+using TripTestLog.Domain.Devices;
+
+namespace TripTestLog.Application.Import;
+
+/// <summary>The write side of a store, as the import pipeline needs it (SQLite today; a server database later).</summary>
+public interface IImportStore
+{
+    /// <summary>Begins storing one measurement file in a transaction of its own; waits while another import holds the store.</summary>
+    IMeasurementBatch BeginMeasurements(RecordKind kind, string path, DateTimeOffset now);
+
+    /// <summary>
+    /// Stores a small file read whole (a register, a curve or ambient table, the instrument register) in one transaction:
+    /// its records as given, or nothing when a file with the same hash was imported before.
+    /// </summary>
+    ImportOutcome StoreSmallFile(ParsedFile file, DateTimeOffset now);
+}
+
+/// <summary>
+/// One measurement file being stored, row by row, inside one transaction: all of it is kept by <see cref="Complete"/>,
+/// or none of it when the batch is disposed first (a refusal, an error, Ctrl+C).
+/// </summary>
+public interface IMeasurementBatch : IDisposable
+{
+    /// <summary>Whether the device register holds <paramref name="tag"/>.</summary>
+    bool Knows(AssetTag tag);
+
+    /// <summary>Stores one measurement read from <paramref name="line"/>, unless the same record is stored already or the
+    /// line differs from the same line of an earlier import from the same path.</summary>
+    RowAnswer Add(object measurement, long line);
+
+    /// <summary>Applies a correction that <see cref="Add"/> answered with a conflict: the stored record takes the new values
+    /// and its old ones are kept in the audit table.</summary>
+    void Replace(object measurement, long line);
+
+    /// <summary>Commits the file with its hash and counts; false (and nothing stored) when a file with that hash was imported before.</summary>
+    bool Complete(string sha256, long rowsRead, long added, long duplicates);
+}
+
+/// <summary>What the store did with one row.</summary>
+public enum RowAnswerKind
+{
+    /// <summary>Stored as a new record.</summary>
+    Added,
+
+    /// <summary>Identical to a stored record, or to an earlier row of the file: not stored again.</summary>
+    Duplicate,
+
+    /// <summary>Differs from the same line of an earlier import from the same path: a correction, not stored.</summary>
+    Conflict,
+}
+
+/// <summary>The store's answer for one row; for a conflict, the column that differs first and the words to report.</summary>
+/// <param name="Kind">Added, duplicate or conflict.</param>
+/// <param name="Column">For a conflict: the first column that differs.</param>
+/// <param name="Reason">For a conflict: what differs and how to apply it.</param>
+public readonly record struct RowAnswer(RowAnswerKind Kind, string Column = "", string Reason = "")
+{
+    /// <summary>Stored as a new record.</summary>
+    public static RowAnswer Added => new(RowAnswerKind.Added);
+
+    /// <summary>Already stored.</summary>
+    public static RowAnswer Duplicate => new(RowAnswerKind.Duplicate);
+}

@@ -1,0 +1,16 @@
+using TripTestLog.Application.Records;
+
+namespace TripTestLog.Application.Import;
+
+/// <summary>A record file waiting to be imported, and the way to read it (an ingest adapter implements it).</summary>
+public interface IRecordFileSource
+{
+    /// <summary>The file's path as given.</summary>
+    string Path { get; }
+
+    /// <summary>The file's kind from its header alone, or null when not recognised; cheap, so an import can order files.</summary>
+    RecordKind? PeekKind();
+
+    /// <summary>Opens the file for one streaming pass; dates after <paramref name="today"/> are refused as future dates.</summary>
+    IRecordFile Open(DateOnly today);
+}

@@ -1,0 +1,157 @@
+using TripTestLog.Application.Records;
+using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Measurements;
+
+namespace TripTestLog.Application.Import;
+
+/// <summary>
+/// Imports record files one at a time, each whole or not at all. Registers and tables go first, so the measurement
+/// files of the same run find their devices. A measurement file streams: each row is parsed, checked against the
+/// register and the policy, and stored as it is read, so memory does not grow with the file. A small file (a register,
+/// a table) is read whole, because its rules look across rows.
+/// </summary>
+public sealed class ImportPipeline(IImportStore store)
+{
+    /// <summary>Imports <paramref name="files"/> in kind order, yielding each file's outcome as it is stored.</summary>
+    public IEnumerable<ImportOutcome> Run(IReadOnlyList<IRecordFileSource> files, ImportOptions options, DateOnly today,
+        Func<DateTimeOffset> now, Action<string>? starting = null, CancellationToken cancel = default)
+    {
+        ArgumentNullException.ThrowIfNull(files);
+        ArgumentNullException.ThrowIfNull(now);
+        foreach (var file in files.OrderBy(f => Order(f.PeekKind())))
+        {
+            cancel.ThrowIfCancellationRequested();
+            starting?.Invoke(file.Path);
+            yield return Import(file, options, today, now(), cancel);
+        }
+    }
+
+    /// <summary>Imports one file; see the class remarks.</summary>
+    public ImportOutcome Import(IRecordFileSource source, ImportOptions options, DateOnly today, DateTimeOffset now, CancellationToken cancel = default)
+    {
+        ArgumentNullException.ThrowIfNull(source);
+        ArgumentNullException.ThrowIfNull(options);
+        using var file = source.Open(today);
+        return file.Kind switch
+        {
+            RecordKind.TripTests or RecordKind.ContactResistance or RecordKind.InsulationResistance => Measurements(file, file.Kind.Value, options, now, cancel),
+            _ => Small(file.ReadAll(), options, now),
+        };
+    }
+
+    // Registers and tables first: measurement files need their devices, and checks need the tables. Unrecognised last.
+    private static int Order(RecordKind? kind) => kind switch
+    {
+        RecordKind.DeviceRegister => 0,
+        RecordKind.InstrumentRegister or RecordKind.CurveTable or RecordKind.AmbientTable => 1,
+        null => 3,
+        _ => 2,
+    };
+
+    private ImportOutcome Small(ParsedFile file, ImportOptions options, DateTimeOffset now)
+    {
+        if (file.IsUnreadable || file.Kind is null || (file.Problems.Count > 0 && !options.AcceptValid))
+        {
+            return Refused(file.Path, file.Kind, file.RowsRead, file.Problems);
+        }
+
+        if (file.Kind == RecordKind.DeviceRegister && RegisterRules.Conflicts(file) is { Count: > 0 } conflicts)
+        {
+            // Two different entries for one device and date cannot be sorted out row by row.
+            return Refused(file.Path, file.Kind, file.RowsRead, [.. file.Problems, .. conflicts]);
+        }
+
+        var outcome = store.StoreSmallFile(file, now);
+        if (outcome.Status != ImportStatus.Imported)
+        {
+            return outcome;
+        }
+
+        var log = new ProblemLog();
+        log.Add(file.Problems);
+        return outcome with { Problems = log.Problems, RefusedRows = log.RefusedLines };
+    }
+
+    private ImportOutcome Measurements(IRecordFile file, RecordKind kind, ImportOptions options, DateTimeOffset now, CancellationToken cancel)
+    {
+        using var batch = store.BeginMeasurements(kind, file.Path, now);
+        using var rejects = options.AcceptValid ? file.Rejects() : null;
+        var log = new ProblemLog();
+        long added = 0, duplicates = 0, replaced = 0;
+        foreach (var row in file.Rows())
+        {
+            cancel.ThrowIfCancellationRequested();
+            var problems = row.Problems;
+            if (row.Record is { } record && problems.Count == 0)
+            {
+                // Rows after a strict file's first bad row are still stored, inside the transaction that will be rolled
+                // back, so that every unknown tag and conflict in the file is reported in one go.
+                problems = Store(batch, file.Path, record, row.Line, options, ref added, ref duplicates, ref replaced);
+            }
+
+            if (problems.Count > 0)
+            {
+                log.Add(problems);
+                rejects?.Write(row.Line, problems);
+            }
+        }
+
+        var summary = file.Summary;
+        log.Add(summary.Problems);
+        if (summary.IsUnreadable || (log.Any && !options.AcceptValid))
+        {
+            return Refused(file.Path, kind, summary.RowsRead, log.Problems) with { ProblemsOmitted = log.Omitted };
+        }
+
+        if (!batch.Complete(summary.Sha256, summary.RowsRead, added + replaced, duplicates))
+        {
+            return new ImportOutcome(file.Path, kind, ImportStatus.AlreadyImported, summary.RowsRead, 0, 0, 0, []);
+        }
+
+        return new ImportOutcome(file.Path, kind, ImportStatus.Imported, summary.RowsRead, added, 0, duplicates, log.Problems)
+        {
+            Replaced = replaced,
+            RefusedRows = log.RefusedLines,
+            ProblemsOmitted = log.Omitted,
+            RejectsFile = rejects?.Keep(),
+        };
+    }
+
+    private static IReadOnlyList<RowProblem> Store(IMeasurementBatch batch, string path, object record, long line, ImportOptions options,
+        ref long added, ref long duplicates, ref long replaced)
+    {
+        var tag = TagOf(record);
+        if (!batch.Knows(tag))
+        {
+            return [ImportProblems.UnknownTag(path, line, tag)];
+        }
+
+        var answer = batch.Add(record, line);
+        switch (answer.Kind)
+        {
+            case RowAnswerKind.Added:
+                added++;
+                return [];
+            case RowAnswerKind.Duplicate:
+                duplicates++;
+                return [];
+            case RowAnswerKind.Conflict when options.Replace:
+                batch.Replace(record, line);
+                replaced++;
+                return [];
+            default:
+                return [new RowProblem(path, line, answer.Column, answer.Reason)];
+        }
+    }
+
+    private static AssetTag TagOf(object record) => record switch
+    {
+        TripMeasurement t => t.Tag,
+        ContactMeasurement c => c.Tag,
+        InsulationMeasurement i => i.Tag,
+        _ => throw new ArgumentOutOfRangeException(nameof(record), record.GetType().Name, "not a measurement"),
+    };
+
+    private static ImportOutcome Refused(string path, RecordKind? kind, long rows, IReadOnlyList<RowProblem> problems) =>
+        new(path, kind, ImportStatus.Refused, rows, 0, 0, 0, problems) { RefusedRows = rows };
+}

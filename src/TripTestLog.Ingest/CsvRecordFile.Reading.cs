@@ -1,0 +1,131 @@
+using System.Text;
+using CsvHelper;
+using TripTestLog.Application.Import;
+using TripTestLog.Application.Records;
+using TripTestLog.Ingest.Columns;
+using TripTestLog.Ingest.Rows;
+
+namespace TripTestLog.Ingest;
+
+/// <summary>The row loop, and the checks made on the first block of the file.</summary>
+internal sealed partial class CsvRecordFile
+{
+    /// <summary>The raw text of the row last yielded, for a rejects file.</summary>
+    internal string CurrentRaw => _csv is null ? "" : Encoding.UTF8.GetString(_csv.RawRecord).TrimEnd('\r', '\n');
+
+    /// <summary>The header line as written, for a rejects file.</summary>
+    internal string HeaderText => _headerLine.TrimStart('\uFEFF');
+
+    internal char Separator => _layout?.Separator ?? ',';
+
+    public IRejectsSink Rejects() => new CsvRejectsSink(this);
+
+    private IEnumerable<ReadRow> ReadRows(CsvReader csv, HeaderMap map, MappedHeaders headers, Layout layout)
+    {
+        var kind = map.Schema.Kind;
+        var dateFormats = _options.Profile?.DateFormats ?? [];
+        while (true)
+        {
+            bool more;
+            try
+            {
+                more = csv.Read();
+            }
+            catch (CsvFormatException e)
+            {
+                // Past a malformed record the rest of the file cannot be read, so its rows cannot be accounted for.
+                _unreadable = true;
+                _fileProblems.Add(new RowProblem(_path, e.LineNumber, "", $"the CSV is malformed here ({Describe(e)}); reading stopped, so the file is refused"));
+                yield break;
+            }
+
+            if (!more)
+            {
+                yield break;
+            }
+
+            _rows++;
+            if (csv.FieldCount != csv.Headers.Count)
+            {
+                yield return new ReadRow(csv.LineNumber, null, [new RowProblem(_path, csv.LineNumber, "",
+                    $"this row has {csv.FieldCount} fields but the header has {csv.Headers.Count}; check for a missing or extra "
+                    + $"'{layout.Separator}', or quote fields that hold one")]);
+                continue;
+            }
+
+            var fields = new RowFields(map, headers.Values(csv), _path, csv.LineNumber, _today, layout.DecimalComma, dateFormats);
+            var record = RowSink.Parse(kind, fields);
+            if (record is not null && kind is RecordKind.CurveTable or RecordKind.AmbientTable)
+            {
+                _tables.Add(record, csv.LineNumber);
+            }
+
+            yield return new ReadRow(csv.LineNumber, fields.Problems.Count == 0 ? record : null, fields.Problems);
+        }
+    }
+
+    private static (byte[] Head, int Count) ReadHead(Stream stream)
+    {
+        // The first block, extended to the end of the header line when that is longer (up to 1 MB).
+        var head = new byte[HeadBytes];
+        var count = stream.ReadAtLeast(head, head.Length, throwOnEndOfStream: false);
+        while (count == head.Length && Array.IndexOf(head, (byte)'\n', 0, count) < 0 && head.Length < (1 << 20))
+        {
+            Array.Resize(ref head, head.Length * 2);
+            count += stream.ReadAtLeast(head.AsSpan(count), head.Length - count, throwOnEndOfStream: false);
+        }
+
+        return (head, count);
+    }
+
+    private static string? CheckText(byte[] head, int read)
+    {
+        if (read == 0)
+        {
+            return "the file is empty; a record file needs a header row and at least one data row";
+        }
+
+        if (Array.IndexOf(head, (byte)0, 0, read) >= 0)
+        {
+            return "this is not a text file (it holds NUL bytes); export the records as UTF-8 CSV";
+        }
+
+        try
+        {
+            new UTF8Encoding(false, throwOnInvalidBytes: true).GetCharCount(head, 0, TrimPartialCharacter(head, read));
+        }
+        catch (DecoderFallbackException)
+        {
+            return "the file is not UTF-8 text (it may be a spreadsheet or another encoding); save it as CSV UTF-8";
+        }
+
+        return null;
+    }
+
+    private static string HeaderLine(byte[] head, int count)
+    {
+        var end = Array.IndexOf(head, (byte)'\n', 0, count);
+        var text = Encoding.UTF8.GetString(head, 0, end < 0 ? TrimPartialCharacter(head, count) : end);
+        return text.TrimEnd('\r').TrimStart('\uFEFF');
+    }
+
+    // The sample may end inside a multi-byte character; do not count that as invalid.
+    private static int TrimPartialCharacter(byte[] bytes, int count)
+    {
+        var i = count;
+        while (i > 0 && count - i < 3 && (bytes[i - 1] & 0xC0) == 0x80)
+        {
+            i--;
+        }
+
+        return i > 0 && bytes[i - 1] >= 0xC0 ? i - 1 : count;
+    }
+
+    private static string Describe(CsvFormatException e)
+    {
+        // CsvHelper's message starts with its own location; the problem already carries the line.
+        var message = e.Message;
+        var colon = message.IndexOf("): ", StringComparison.Ordinal);
+        return colon >= 0 ? message[(colon + 3)..].TrimEnd('.') : message;
+    }
+}
