@@ -42,54 +42,7 @@ public sealed partial class RecordStore
          select r.Id).Count();
 
     /// <summary>Every trip test, ordered by asset tag, then test time, then file line; optionally for one device.</summary>
-    public IReadOnlyList<StoredTrip> Trips(AssetTag? only = null)
-    {
-        using var select = _connection.CreateCommand();
-        select.CommandText =
-            "SELECT d.asset_tag, t.tested_at, t.stage, t.pole, t.current_a, t.tripped, t.time_s, t.start, t.ambient_c, t.instrument, t.technician, t.note, "
-            + "f.file_name, t.source_line, t.found_ir_a, t.found_isd_a, t.found_ii_a, t.found_im_a, t.found_pickup_a, t.found_tms "
-            + "FROM trip_tests t JOIN devices d ON d.id = t.device_id JOIN source_files f ON f.id = t.source_file_id "
-            + (only is null ? "" : "WHERE d.asset_tag = $tag ")
-            + "ORDER BY d.asset_tag, t.tested_at, f.id, t.source_line";
-        if (only is { } tag)
-        {
-            select.Parameters.AddWithValue("$tag", tag.Value);
-        }
-
-        using var r = select.ExecuteReader();
-        var trips = new List<StoredTrip>();
-        var tags = new Dictionary<string, AssetTag>(StringComparer.Ordinal);
-        while (r.Read())
-        {
-            var tagText = r.GetString(0);
-            if (!tags.TryGetValue(tagText, out var assetTag))
-            {
-                assetTag = AssetTag.Of(tagText);
-                tags[tagText] = assetTag;
-            }
-
-            var time = Seconds.Of(r.GetDouble(6));
-            var found = new SettingsFound(A(r, 14), A(r, 15), A(r, 16), A(r, 17), A(r, 18), r.IsDBNull(19) ? null : r.GetDouble(19));
-            var measurement = new TripMeasurement(
-                assetTag,
-                TestedAt.Parse(r.GetString(1)),
-                Codes.Stage(r.GetString(2)),
-                Pole.Parse(r.GetString(3)),
-                Amperes.Of(r.GetDouble(4)),
-                r.GetBoolean(5) ? TripOutcome.TrippedAfter(time) : TripOutcome.HeldFor(time),
-                Codes.Start(r.GetString(7)),
-                r.IsDBNull(8) ? null : Celsius.Of(r.GetDouble(8)),
-                r.GetString(9),
-                r.GetString(10),
-                r.GetString(11))
-            {
-                FoundSettings = found.IsEmpty ? null : found,
-            };
-            trips.Add(new StoredTrip(assetTag, measurement, r.GetString(12), r.GetInt64(13)));
-        }
-
-        return trips;
-    }
+    public IReadOnlyList<StoredTrip> Trips(AssetTag? only = null) => Devices(only).SelectMany(d => d.Trips).ToList();
 
     /// <summary>Every device's register entries, oldest first, by asset tag.</summary>
     public IReadOnlyDictionary<string, DeviceHistory> Histories()

@@ -38,7 +38,7 @@ public sealed class SchemaUpgradeTests
 
         using var store = RecordStore.Open(db);
 
-        Assert.EndsWith("_InstrumentsAndAudit", store.AppliedMigrations()[^1]);
+        Assert.EndsWith("_TripDeviceOrder", store.AppliedMigrations()[^1]);
         var histories = store.Histories();
         Assert.Equal(2, histories["TWO-01"].Entries.Count);
         Assert.Equal(500, Assert.IsType<ElectronicTripSettings>(histories["TWO-01"].InForceOn(new DateOnly(2024, 6, 1)).Settings).Ir.Value);
@@ -47,6 +47,25 @@ public sealed class SchemaUpgradeTests
         var trips = store.Trips();
         Assert.Equal(4, trips.Count);
         Assert.Equal(420, trips.Single(t => t.Measurement.Note == "dial found low").Measurement.FoundSettings!.Ir!.Value.Value);
+        Assert.True(store.Verify().IntegrityErrors.Count == 0);
+    }
+
+    [Fact]
+    public void ASchema3Database_UpgradesItsIndexAndFingerprints_AndItsRowsStillCountAsDuplicates()
+    {
+        using var temp = new TempFolder();
+        var db = Path.Combine(temp.Path, "old.db");
+        File.Copy(Path.Combine(AppContext.BaseDirectory, "schemas", "schema-3.db"), db);
+        Assert.EndsWith("_InstrumentsAndAudit", Migrations(db)[^1]);
+        var again = temp.Write("trips-again.csv", File.ReadAllText(Path.Combine(AppContext.BaseDirectory, "schemas", "schema-3-source", "trips.csv")) + "\n");
+
+        using var store = RecordStore.Open(db);
+        var outcome = store.Import(again, DateTimeOffset.UtcNow);
+
+        Assert.EndsWith("_TripDeviceOrder", store.AppliedMigrations()[^1]);
+        Assert.Equal(5, store.Trips().Count);
+        Assert.Equal((0L, 4L), (outcome.Added, outcome.Duplicates));
+        Assert.Null(store.Instruments().Check("INJ-1", new DateOnly(2022, 12, 1), requireRegistered: true));
         Assert.True(store.Verify().IntegrityErrors.Count == 0);
     }
 

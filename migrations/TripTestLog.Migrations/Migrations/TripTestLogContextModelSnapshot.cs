@@ -718,7 +718,8 @@ namespace TripTestLog.Migrations.Migrations
 
                     b.HasIndex("SourceFileId");
 
-                    b.HasIndex("DeviceId", "TestedAt");
+                    b.HasIndex("DeviceId", "TestedAt", "SourceFileId", "SourceLine")
+                        .HasDatabaseName("IX_trip_tests_device_order");
 
                     b.ToTable("trip_tests", (string)null);
                 });

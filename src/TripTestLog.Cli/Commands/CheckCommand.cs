@@ -1,6 +1,6 @@
 using System.CommandLine;
 using TripTestLog.Cli.Output;
-using TripTestLog.Cli.Services;
+using TripTestLog.Application.Check;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Verdicts;
 using TripTestLog.Storage;
@@ -46,24 +46,20 @@ internal static class CheckCommand
         }
 
         using var store = RecordStore.Open(db.FullName);
-        var histories = store.Histories();
-        if (only is { } tag && !histories.ContainsKey(tag.Value))
+        if (only is { } tag && !store.Devices(tag).Any())
         {
             cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {db.FullName}");
             return ExitCodes.BadInput;
         }
 
-        var results = CheckRunner.Run(store, histories, only, requireRegistered);
-        if (json)
+        var counts = new VerdictCounts();
+        var output = new VerdictWriters(json ? new VerdictJson(cli.Out) : new VerdictTable(cli.Out), counts);
+        foreach (var judged in CheckPipeline.Run(store, only, requireRegistered))
         {
-            VerdictJson.Write(cli.Out, results);
-        }
-        else
-        {
-            VerdictTable.Write(cli.Out, results);
+            output.Add(judged);
         }
 
-        var findings = results.Any(r => r.Assessment.Verdict is Verdict.TooEarly or Verdict.TooLate || r.InstrumentFinding is not null);
-        return failOnFindings && findings ? ExitCodes.Findings : ExitCodes.Ok;
+        output.Finish();
+        return failOnFindings && counts.AnyFinding ? ExitCodes.Findings : ExitCodes.Ok;
     }
 }

@@ -55,31 +55,28 @@ internal static class DemoCommand
         }
 
         IReadOnlyList<ImportOutcome> outcomes;
-        IReadOnlyList<CheckedTrip> results;
-        using (var log = Logging.BesideDatabase(db))
-        using (var store = RecordStore.Open(db.FullName))
-        {
-            outcomes = new ImportRunner(store, log, cli).Run(files, ImportOptions.Strict);
-            results = CheckRunner.Run(store, null);
-        }
-
         var text = Path.Combine(output.FullName, "verdicts.txt");
         var json = Path.Combine(output.FullName, "verdicts.json");
-        using (var writer = new StreamWriter(text))
+        var counts = new VerdictCounts();
+        using (var log = Logging.BesideDatabase(db))
+        using (var store = RecordStore.Open(db.FullName))
+        using (var textWriter = new StreamWriter(text))
+        using (var jsonWriter = new StreamWriter(json))
         {
-            VerdictTable.Write(writer, results);
-        }
+            outcomes = new ImportRunner(store, log, cli).Run(files, ImportOptions.Strict);
+            var writers = new VerdictWriters(new VerdictTable(textWriter), new VerdictJson(jsonWriter), counts);
+            foreach (var judged in CheckPipeline.Run(store))
+            {
+                writers.Add(judged);
+            }
 
-        using (var writer = new StreamWriter(json))
-        {
-            VerdictJson.Write(writer, results);
+            writers.Finish();
         }
 
         cli.Out.WriteLine($"Imported the sample records from {folder}:");
         ImportReport.Write(cli.Out, outcomes, ImportCommand.LogPath(db));
         cli.Out.WriteLine();
-        var counts = Enum.GetValues<Verdict>().Select(v => $"{results.Count(r => r.Assessment.Verdict == v)} {Format.Verdict(v)}");
-        cli.Out.WriteLine($"Checked {results.Count} trip tests: {string.Join(", ", counts)}.");
+        cli.Out.WriteLine(counts.Summary("Checked"));
         cli.Out.WriteLine();
         cli.Out.WriteLine("Results:");
         cli.Out.WriteLine($"  database   {db.FullName}");

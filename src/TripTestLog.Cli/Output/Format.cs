@@ -52,6 +52,6 @@ internal static class Format
     };
 
     /// <summary>The test current as a multiple of the envelope's reference, e.g. "2.56 In" or "6.02 Ir".</summary>
-    public static string Multiple(Services.CheckedTrip r) =>
+    public static string Multiple(Application.Check.JudgedTrip r) =>
         $"{Number(r.Trip.Measurement.Current.Value / r.Envelope.Reference.Value, "0.00")} {r.Envelope.ReferenceName}";
 }

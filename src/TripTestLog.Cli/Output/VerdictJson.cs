@@ -1,6 +1,6 @@
 using System.Text.Json;
 using System.Text.Json.Serialization;
-using TripTestLog.Cli.Services;
+using TripTestLog.Application.Check;
 
 namespace TripTestLog.Cli.Output;
 
@@ -8,21 +8,28 @@ namespace TripTestLog.Cli.Output;
 /// The verdicts for programs: a JSON array, one object per trip test. The field names and meanings are documented in
 /// the README ("check --json") and pinned by a golden test; add fields at the end, never rename.
 /// </summary>
-internal static class VerdictJson
+internal sealed class VerdictJson(TextWriter writer) : IVerdictWriter
 {
     private static readonly JsonSerializerOptions Options = new()
     {
         PropertyNamingPolicy = JsonNamingPolicy.SnakeCaseLower,
-        WriteIndented = true,
+        WriteIndented = false,
         DefaultIgnoreCondition = JsonIgnoreCondition.Never,
     };
 
-    public static void Write(TextWriter writer, IReadOnlyList<CheckedTrip> results)
+    private bool _started;
+
+    // One object per line inside the array: the array streams out as tests are judged, and stays valid JSON.
+    public void Add(JudgedTrip judged)
     {
-        writer.WriteLine(JsonSerializer.Serialize(results.Select(Row).ToList(), Options));
+        writer.Write(_started ? ",\n  " : "[\n  ");
+        writer.Write(JsonSerializer.Serialize(Row(judged), Options));
+        _started = true;
     }
 
-    private static VerdictRow Row(CheckedTrip r)
+    public void Finish() => writer.WriteLine(_started ? "\n]" : "[]");
+
+    private static VerdictRow Row(JudgedTrip r)
     {
         var m = r.Trip.Measurement;
         var a = r.Assessment;

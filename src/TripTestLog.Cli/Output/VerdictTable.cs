@@ -1,47 +1,84 @@
-using TripTestLog.Cli.Services;
+using TripTestLog.Application.Check;
 using TripTestLog.Domain.Verdicts;
 
 namespace TripTestLog.Cli.Output;
 
 /// <summary>The verdicts as a person reads them: a table, then what needs attention with the reasons, then the caution.</summary>
-internal static class VerdictTable
+internal sealed class VerdictTable(TextWriter writer) : IVerdictWriter
 {
-    public static void Write(TextWriter writer, IReadOnlyList<CheckedTrip> results)
+    // Fixed widths, so each row is written as it is judged; a longer cell pushes its row out rather than holding the table.
+    private static readonly (string Header, int Width, bool Right)[] Columns =
+    [
+        ("Asset", 12, false), ("Tested", 19, false), ("Stage", 8, false), ("Pole", 4, false), ("Start", 5, false), ("Current", 9, true),
+        ("Multiple", 9, true), ("Result", 17, false), ("Band min", 8, true), ("Band max", 8, true), ("Verdict", 14, false), ("Basis", 9, false),
+    ];
+
+    private readonly VerdictCounts _counts = new();
+    private readonly List<JudgedTrip> _attention = [];
+    private bool _started;
+
+    public void Add(JudgedTrip r)
     {
-        var table = new TextTable("Asset", "Tested", "Stage", "Pole", "Start", "Current>", "Multiple>", "Result", "Band min>", "Band max>", "Verdict", "Basis");
-        foreach (var r in results)
+        if (!_started)
         {
-            var m = r.Trip.Measurement;
-            var a = r.Assessment;
-            table.Add(
-                m.Tag.Value,
-                m.TestedAt.ToString(),
-                Format.Stage(m.Stage),
-                m.Pole.Code,
-                Format.Start(m.Start),
-                m.Current.ToString(),
-                Format.Multiple(r),
-                Format.Outcome(m.Outcome),
-                a.Band.HasRequirement ? Format.Minimum(a.Band.Minimum) : "-",
-                a.Band.HasRequirement ? Format.Maximum(a.Band.Maximum) : "-",
-                Format.Verdict(a.Verdict),
-                Format.Basis(a.Basis));
+            Row(Columns.Select(c => c.Header).ToArray());
+            writer.WriteLine(string.Join("  ", Columns.Select(c => new string('-', c.Width))));
+            _started = true;
         }
 
-        table.WriteTo(writer);
-        writer.WriteLine();
-        var counts = Enum.GetValues<Verdict>().Select(v => $"{results.Count(r => r.Assessment.Verdict == v)} {Format.Verdict(v)}");
-        writer.WriteLine($"{results.Count} trip tests: {string.Join(", ", counts)}.");
+        var m = r.Trip.Measurement;
+        var a = r.Assessment;
+        Row(
+            m.Tag.Value,
+            m.TestedAt.ToString(),
+            Format.Stage(m.Stage),
+            m.Pole.Code,
+            Format.Start(m.Start),
+            m.Current.ToString(),
+            Format.Multiple(r),
+            Format.Outcome(m.Outcome),
+            a.Band.HasRequirement ? Format.Minimum(a.Band.Minimum) : "-",
+            a.Band.HasRequirement ? Format.Maximum(a.Band.Maximum) : "-",
+            Format.Verdict(a.Verdict),
+            Format.Basis(a.Basis));
+        _counts.Add(r);
 
-        WriteReasons(writer, "Outside the band (act on these):", results.Where(r => r.Assessment.Verdict is Verdict.TooEarly or Verdict.TooLate));
-        WriteReasons(writer, "Not assessable (repeat or complete the test):", results.Where(r => r.Assessment.Verdict == Verdict.NotAssessable));
-        WriteInstrumentFindings(writer, results.Where(r => r.InstrumentFinding is not null));
-        WriteNotes(writer, results.Where(r => r.Assessment.Notes.Count > 0));
+        // Only what needs attention is kept for the lists after the table; a healthy fleet holds nothing.
+        if (a.Verdict != Verdict.Pass || r.InstrumentFinding is not null || a.Notes.Count > 0)
+        {
+            _attention.Add(r);
+        }
+    }
+
+    public void Finish()
+    {
+        writer.WriteLine();
+        writer.WriteLine(_counts.Summary("Checked"));
+        WriteReasons(writer, "Outside the band (act on these):", _attention.Where(r => r.Assessment.Verdict is Verdict.TooEarly or Verdict.TooLate));
+        WriteReasons(writer, "Not assessable (repeat or complete the test):", _attention.Where(r => r.Assessment.Verdict == Verdict.NotAssessable));
+        WriteInstrumentFindings(writer, _attention.Where(r => r.InstrumentFinding is not null));
+        WriteNotes(writer, _attention.Where(r => r.Assessment.Notes.Count > 0));
         writer.WriteLine();
         writer.WriteLine(Safety.Caution);
     }
 
-    private static void WriteInstrumentFindings(TextWriter writer, IEnumerable<CheckedTrip> results)
+    private void Row(params string[] cells)
+    {
+        var sb = new System.Text.StringBuilder();
+        for (var i = 0; i < cells.Length; i++)
+        {
+            if (i > 0)
+            {
+                sb.Append("  ");
+            }
+
+            sb.Append(Columns[i].Right ? cells[i].PadLeft(Columns[i].Width) : cells[i].PadRight(Columns[i].Width));
+        }
+
+        writer.WriteLine(sb.ToString().TrimEnd());
+    }
+
+    private static void WriteInstrumentFindings(TextWriter writer, IEnumerable<JudgedTrip> results)
     {
         var list = results.ToList();
         if (list.Count == 0)
@@ -61,7 +98,7 @@ internal static class VerdictTable
         }
     }
 
-    private static void WriteNotes(TextWriter writer, IEnumerable<CheckedTrip> results)
+    private static void WriteNotes(TextWriter writer, IEnumerable<JudgedTrip> results)
     {
         var list = results.ToList();
         if (list.Count == 0)
@@ -81,7 +118,7 @@ internal static class VerdictTable
         }
     }
 
-    private static void WriteReasons(TextWriter writer, string heading, IEnumerable<CheckedTrip> results)
+    private static void WriteReasons(TextWriter writer, string heading, IEnumerable<JudgedTrip> results)
     {
         var list = results.ToList();
         if (list.Count == 0)
