@@ -20,7 +20,7 @@ public sealed partial class RecordStore
         _context.InsulationTests.LongCount());
 
     /// <summary>Every device in the register, by asset tag.</summary>
-    public IReadOnlyList<Device> Devices()
+    public IReadOnlyList<Device> RegisterEntries()
     {
         using var select = _connection.CreateCommand();
         select.CommandText = $"SELECT asset_tag, {RegisterColumns} FROM devices ORDER BY asset_tag";

@@ -20,8 +20,8 @@ public sealed partial class RecordStore : ITripSource
     /// </summary>
     internal const string TripsInDeviceOrder =
         "SELECT d.asset_tag, t.tested_at, t.stage, t.pole, t.current_a, t.tripped, t.time_s, t.start, t.ambient_c, t.instrument, t.technician, t.note, "
-        + "f.file_name, t.source_line, t.found_ir_a, t.found_isd_a, t.found_ii_a, t.found_im_a, t.found_pickup_a, t.found_tms "
-        + "FROM devices d CROSS JOIN trip_tests t ON t.device_id = d.id JOIN source_files f ON f.id = t.source_file_id "
+        + "t.source_file_id, t.source_line, t.found_ir_a, t.found_isd_a, t.found_ii_a, t.found_im_a, t.found_pickup_a, t.found_tms "
+        + "FROM devices d CROSS JOIN trip_tests t ON t.device_id = d.id "
         + "WHERE $tag IS NULL OR d.asset_tag = $tag "
         + "ORDER BY d.asset_tag, t.tested_at, t.source_file_id, t.source_line";
 
@@ -36,6 +36,7 @@ public sealed partial class RecordStore : ITripSource
         using var trips = _connection.CreateCommand();
         trips.CommandText = TripsInDeviceOrder;
         trips.Parameters.AddWithValue("$tag", (object?)only?.Value ?? DBNull.Value);
+        var files = SourceFileNames();
         using var entries = revisions.ExecuteReader();
         using var tests = trips.ExecuteReader();
         var moreEntries = entries.Read();
@@ -57,7 +58,7 @@ public sealed partial class RecordStore : ITripSource
                 // Both queries order by the same binary collation, so a test's device is never behind the register.
                 if (string.Equals(tests.GetString(0), tag, StringComparison.Ordinal))
                 {
-                    list.Add(ReadTrip(tests, tags));
+                    list.Add(ReadTrip(tests, tags, files));
                 }
 
                 moreTests = tests.Read();
@@ -67,11 +68,31 @@ public sealed partial class RecordStore : ITripSource
         }
     }
 
-    private static StoredTrip ReadTrip(SqliteDataReader r, TagCache tags)
+    private Dictionary<long, string> SourceFileNames()
+    {
+        using var select = _connection.CreateCommand();
+        select.CommandText = "SELECT id, file_name FROM source_files";
+        using var reader = select.ExecuteReader();
+        var names = new Dictionary<long, string>();
+        while (reader.Read())
+        {
+            names[reader.GetInt64(0)] = reader.GetString(1);
+        }
+
+        return names;
+    }
+
+    private static StoredTrip ReadTrip(SqliteDataReader r, TagCache tags, Dictionary<long, string> files)
     {
         var assetTag = tags.Of(r.GetString(0));
         var time = Seconds.Of(r.GetDouble(6));
-        var found = new SettingsFound(A(r, 14), A(r, 15), A(r, 16), A(r, 17), A(r, 18), r.IsDBNull(19) ? null : r.GetDouble(19));
+        var anyFound = false;
+        for (var i = 14; i <= 19 && !anyFound; i++)
+        {
+            anyFound = !r.IsDBNull(i);
+        }
+
+        var found = anyFound ? new SettingsFound(A(r, 14), A(r, 15), A(r, 16), A(r, 17), A(r, 18), r.IsDBNull(19) ? null : r.GetDouble(19)) : null;
         var measurement = new TripMeasurement(
             assetTag,
             TestedAt.Parse(r.GetString(1)),
@@ -85,9 +106,9 @@ public sealed partial class RecordStore : ITripSource
             r.GetString(10),
             r.GetString(11))
         {
-            FoundSettings = found.IsEmpty ? null : found,
+            FoundSettings = found is { IsEmpty: false } ? found : null,
         };
-        return new StoredTrip(assetTag, measurement, r.GetString(12), r.GetInt64(13));
+        return new StoredTrip(assetTag, measurement, files[r.GetInt64(12)], r.GetInt64(13));
     }
 
     // A device's tests share one tag value instead of each allocating its own.

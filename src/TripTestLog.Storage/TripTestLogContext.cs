@@ -57,6 +57,8 @@ internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> op
             // The order the check reader streams in: device by device, by test time, then as imported.
             e.HasIndex(x => new { x.DeviceId, x.TestedAt, x.SourceFileId, x.SourceLine }).HasDatabaseName("IX_trip_tests_device_order");
             e.HasOne<DeviceRow>().WithMany().HasForeignKey(x => x.DeviceId).OnDelete(DeleteBehavior.Restrict);
+            // Where each record came from, by line: serves the foreign key and the lookup of a corrected file's lines.
+            e.HasIndex(x => new { x.SourceFileId, x.SourceLine }).HasDatabaseName("IX_trip_tests_source");
             e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
         });
         modelBuilder.Entity<ContactTestRow>(e =>
@@ -65,6 +67,8 @@ internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> op
             e.HasIndex(x => x.Fingerprint).IsUnique();
             e.HasIndex(x => new { x.DeviceId, x.TestedAt });
             e.HasOne<DeviceRow>().WithMany().HasForeignKey(x => x.DeviceId).OnDelete(DeleteBehavior.Restrict);
+            // Where each record came from, by line: serves the foreign key and the lookup of a corrected file's lines.
+            e.HasIndex(x => new { x.SourceFileId, x.SourceLine }).HasDatabaseName("IX_contact_tests_source");
             e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
         });
         modelBuilder.Entity<InsulationTestRow>(e =>
@@ -73,6 +77,8 @@ internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> op
             e.HasIndex(x => x.Fingerprint).IsUnique();
             e.HasIndex(x => new { x.DeviceId, x.TestedAt });
             e.HasOne<DeviceRow>().WithMany().HasForeignKey(x => x.DeviceId).OnDelete(DeleteBehavior.Restrict);
+            // Where each record came from, by line: serves the foreign key and the lookup of a corrected file's lines.
+            e.HasIndex(x => new { x.SourceFileId, x.SourceLine }).HasDatabaseName("IX_insulation_tests_source");
             e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
         });
 

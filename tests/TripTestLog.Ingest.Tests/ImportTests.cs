@@ -178,7 +178,7 @@ public sealed class ImportTests
 
         Assert.Contains(first, m => m.EndsWith("_InitialSchema", StringComparison.Ordinal));
         Assert.Equal(first, reopened.AppliedMigrations());
-        Assert.Equal(2, reopened.Devices().Count);
+        Assert.Equal(2, reopened.RegisterEntries().Count);
         Assert.Equal("wal", Scalar(temp.Database, "PRAGMA journal_mode"));
     }
 

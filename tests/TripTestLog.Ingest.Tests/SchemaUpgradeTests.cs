@@ -38,7 +38,7 @@ public sealed class SchemaUpgradeTests
 
         using var store = RecordStore.Open(db);
 
-        Assert.EndsWith("_TripDeviceOrder", store.AppliedMigrations()[^1]);
+        Assert.EndsWith("_ReaderAndSourceIndexes", store.AppliedMigrations()[^1]);
         var histories = store.Histories();
         Assert.Equal(2, histories["TWO-01"].Entries.Count);
         Assert.Equal(500, Assert.IsType<ElectronicTripSettings>(histories["TWO-01"].InForceOn(new DateOnly(2024, 6, 1)).Settings).Ir.Value);
@@ -62,7 +62,7 @@ public sealed class SchemaUpgradeTests
         using var store = RecordStore.Open(db);
         var outcome = store.Import(again, DateTimeOffset.UtcNow);
 
-        Assert.EndsWith("_TripDeviceOrder", store.AppliedMigrations()[^1]);
+        Assert.EndsWith("_ReaderAndSourceIndexes", store.AppliedMigrations()[^1]);
         Assert.Equal(5, store.Trips().Count);
         Assert.Equal((0L, 4L), (outcome.Added, outcome.Duplicates));
         Assert.Null(store.Instruments().Check("INJ-1", new DateOnly(2022, 12, 1), requireRegistered: true));

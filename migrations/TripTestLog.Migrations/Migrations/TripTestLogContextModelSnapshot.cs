@@ -170,9 +170,10 @@ namespace TripTestLog.Migrations.Migrations
                     b.HasIndex("Fingerprint")
                         .IsUnique();
 
-                    b.HasIndex("SourceFileId");
-
                     b.HasIndex("DeviceId", "TestedAt");
+
+                    b.HasIndex("SourceFileId", "SourceLine")
+                        .HasDatabaseName("IX_contact_tests_source");
 
                     b.ToTable("contact_tests", (string)null);
                 });
@@ -558,9 +559,10 @@ namespace TripTestLog.Migrations.Migrations
                     b.HasIndex("Fingerprint")
                         .IsUnique();
 
-                    b.HasIndex("SourceFileId");
-
                     b.HasIndex("DeviceId", "TestedAt");
+
+                    b.HasIndex("SourceFileId", "SourceLine")
+                        .HasDatabaseName("IX_insulation_tests_source");
 
                     b.ToTable("insulation_tests", (string)null);
                 });
@@ -716,7 +718,8 @@ namespace TripTestLog.Migrations.Migrations
                     b.HasIndex("Fingerprint")
                         .IsUnique();
 
-                    b.HasIndex("SourceFileId");
+                    b.HasIndex("SourceFileId", "SourceLine")
+                        .HasDatabaseName("IX_trip_tests_source");
 
                     b.HasIndex("DeviceId", "TestedAt", "SourceFileId", "SourceLine")
                         .HasDatabaseName("IX_trip_tests_device_order");

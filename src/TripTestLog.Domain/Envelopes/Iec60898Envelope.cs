@@ -36,6 +36,26 @@ public sealed class Iec60898Envelope : ITripEnvelope
     private readonly NormativePoint _e;
     private readonly NormativePoint? _singlePole;
 
+    // Every edge whose words do not depend on the current, built once: At() runs for every test judged.
+    private readonly BandEdge _aHold;
+    private readonly BandEdge _aHoldCarried;
+    private readonly BandEdge _cHold;
+    private readonly BandEdge _dHold;
+    private readonly BandEdge _dHoldCarried;
+    private readonly BandEdge _bTrip;
+    private readonly BandEdge _bTripCarried;
+    private readonly BandEdge _cTrip;
+    private readonly BandEdge _cTripCarried;
+    private readonly BandEdge _eTrip;
+    private readonly BandEdge _eTripCarried;
+    private readonly BandEdge? _spTrip;
+    private readonly BandEdge? _spTripCarried;
+    private readonly BandEdge _derived;
+    private readonly BandEdge _typicalAc;
+    private readonly BandEdge _typicalCd;
+    private readonly BandEdge _typicalBc;
+    private readonly BandEdge _typicalI2t;
+
     /// <summary>
     /// Creates the envelope for a curve and rated current, with an optional ambient factor on the thermal points (0.5 to
     /// 1.5), the number of protected poles (1 to 4), the supply, and whether the breaker is an RCBO (IEC 61009-1).
@@ -54,6 +74,23 @@ public sealed class Iec60898Envelope : ITripEnvelope
         _d = Point("d");
         _e = Point("e");
         _singlePole = _points.FirstOrDefault(p => p.Label == "1-pole");
+        (_aHold, _aHoldCarried) = (_a.HoldEdge(carried: false), _a.HoldEdge(carried: true));
+        (_dHold, _dHoldCarried) = (_d.HoldEdge(carried: false), _d.HoldEdge(carried: true));
+        _cHold = _c.HoldEdge(carried: false);
+        (_bTrip, _bTripCarried) = (_b.TripEdge(carried: false), _b.TripEdge(carried: true));
+        (_cTrip, _cTripCarried) = (_c.TripEdge(carried: false), _c.TripEdge(carried: true));
+        (_eTrip, _eTripCarried) = (_e.TripEdge(carried: false), _e.TripEdge(carried: true));
+        (_spTrip, _spTripCarried) = (_singlePole?.TripEdge(carried: false), _singlePole?.TripEdge(carried: true));
+
+        // A thermal release needs at least row c's I²t at a lower current, so row c's "1 s < t" implies this.
+        _derived = new BandEdge(Seconds.Zero, EdgeSource.Derived, $"I²t of {_c.Requirement} at a lower current: t > 1 s x (2.55 In / I)²", StartCondition.Cold)
+        {
+            Strict = true, Loading = PoleLoading.AllPoles, PointLabel = "c",
+        };
+        _typicalAc = Typical($"log-log line between {_t.Name} a and c", StartCondition.Cold);
+        _typicalCd = Typical($"log-log line between {_t.Name} c and d", StartCondition.Cold);
+        _typicalBc = Typical($"log-log line between {_t.Name} b and c", StartCondition.Warm);
+        _typicalI2t = Typical($"I²t = constant from {_t.Name} c", StartCondition.Cold) with { Source = EdgeSource.Extrapolated };
     }
 
     /// <inheritdoc />
@@ -107,35 +144,28 @@ public sealed class Iec60898Envelope : ITripEnvelope
             return edges;
         }
 
-        edges.Add(_d.HoldEdge(carried: i < t.D));
+        edges.Add(i < t.D ? _dHoldCarried : _dHold);
         if (i <= t.A)
         {
-            edges.Add(_a.HoldEdge(carried: i < t.A));
+            edges.Add(i < t.A ? _aHoldCarried : _aHold);
         }
 
         if (i == t.C)
         {
-            edges.Add(_c.HoldEdge(carried: false));
+            edges.Add(_cHold);
         }
         else if (i < t.C)
         {
-            // A thermal release needs at least row c's I²t at a lower current, so row c's "1 s < t" implies this.
-            var s = LogLog.ConstantI2T(i, t.C, Iec60898Table.ThermalMinimumSeconds);
-            edges.Add(new BandEdge(Seconds.Of(s), EdgeSource.Derived, $"I²t of {_c.Requirement} at a lower current: t > 1 s x (2.55 In / I)²", StartCondition.Cold)
-            {
-                Strict = true, Loading = PoleLoading.AllPoles, PointLabel = "c",
-            });
+            edges.Add(_derived with { Limit = Seconds.Of(LogLog.ConstantI2T(i, t.C, Iec60898Table.ThermalMinimumSeconds)) });
         }
 
         if (i > t.A && i < t.C)
         {
-            var s = LogLog.Interpolate(i, t.A, t.ConventionalTime.Value, t.C, Iec60898Table.ThermalMinimumSeconds);
-            edges.Add(Typical(s, $"log-log line between {t.Name} a and c", StartCondition.Cold));
+            edges.Add(_typicalAc with { Limit = Seconds.Of(LogLog.Interpolate(i, t.A, t.ConventionalTime.Value, t.C, Iec60898Table.ThermalMinimumSeconds)) });
         }
         else if (i > t.C && i < t.D)
         {
-            var s = LogLog.Interpolate(i, t.C, Iec60898Table.ThermalMinimumSeconds, t.D, Iec60898Table.InstantaneousSeconds);
-            edges.Add(Typical(s, $"log-log line between {t.Name} c and d", StartCondition.Cold));
+            edges.Add(_typicalCd with { Limit = Seconds.Of(LogLog.Interpolate(i, t.C, Iec60898Table.ThermalMinimumSeconds, t.D, Iec60898Table.InstantaneousSeconds)) });
         }
 
         return edges;
@@ -147,38 +177,36 @@ public sealed class Iec60898Envelope : ITripEnvelope
         var edges = new List<BandEdge>();
         if (i >= t.B)
         {
-            edges.Add(_b.TripEdge(carried: i > t.B));
+            edges.Add(i > t.B ? _bTripCarried : _bTrip);
         }
 
         if (i >= t.C)
         {
-            edges.Add(_c.TripEdge(carried: i > t.C));
+            edges.Add(i > t.C ? _cTripCarried : _cTrip);
         }
 
         if (i >= t.E)
         {
-            edges.Add(_e.TripEdge(carried: i > t.E));
+            edges.Add(i > t.E ? _eTripCarried : _eTrip);
         }
 
-        if (_singlePole is { } sp && t.SinglePole is { } spCurrent && i >= spCurrent)
+        if (_spTrip is { } sp && _spTripCarried is { } spCarried && t.SinglePole is { } spCurrent && i >= spCurrent)
         {
-            edges.Add(sp.TripEdge(carried: i > spCurrent));
+            edges.Add(i > spCurrent ? spCarried : sp);
         }
 
         if (i > t.B && i < t.C)
         {
-            var s = LogLog.Interpolate(i, t.B, t.ConventionalTime.Value, t.C, t.ThermalMaximum.Value);
-            edges.Add(Typical(s, $"log-log line between {t.Name} b and c", StartCondition.Warm));
+            edges.Add(_typicalBc with { Limit = Seconds.Of(LogLog.Interpolate(i, t.B, t.ConventionalTime.Value, t.C, t.ThermalMaximum.Value)) });
         }
         else if (i > t.C && i < t.E)
         {
-            var s = LogLog.ConstantI2T(i, t.C, t.ThermalMaximum.Value);
-            edges.Add(Typical(s, $"I²t = constant from {t.Name} c", StartCondition.Cold) with { Source = EdgeSource.Extrapolated });
+            edges.Add(_typicalI2t with { Limit = Seconds.Of(LogLog.ConstantI2T(i, t.C, t.ThermalMaximum.Value)) });
         }
 
         return edges;
     }
 
-    private static BandEdge Typical(double seconds, string why, StartCondition start) =>
-        new(Seconds.Of(seconds), EdgeSource.Interpolated, why, start) { Strength = EdgeStrength.Typical, Loading = PoleLoading.AllPoles };
+    private static BandEdge Typical(string why, StartCondition start) =>
+        new(Seconds.Zero, EdgeSource.Interpolated, why, start) { Strength = EdgeStrength.Typical, Loading = PoleLoading.AllPoles };
 }

@@ -10,8 +10,8 @@ using TripTestLog.Storage;
 namespace TripTestLog.Migrations.Migrations
 {
     [DbContext(typeof(TripTestLogContext))]
-    [Migration("20261202034650_TripDeviceOrder")]
-    partial class TripDeviceOrder
+    [Migration("20261202035624_ReaderAndSourceIndexes")]
+    partial class ReaderAndSourceIndexes
     {
         /// <inheritdoc />
         protected override void BuildTargetModel(ModelBuilder modelBuilder)
@@ -173,9 +173,10 @@ namespace TripTestLog.Migrations.Migrations
                     b.HasIndex("Fingerprint")
                         .IsUnique();
 
-                    b.HasIndex("SourceFileId");
-
                     b.HasIndex("DeviceId", "TestedAt");
+
+                    b.HasIndex("SourceFileId", "SourceLine")
+                        .HasDatabaseName("IX_contact_tests_source");
 
                     b.ToTable("contact_tests", (string)null);
                 });
@@ -561,9 +562,10 @@ namespace TripTestLog.Migrations.Migrations
                     b.HasIndex("Fingerprint")
                         .IsUnique();
 
-                    b.HasIndex("SourceFileId");
-
                     b.HasIndex("DeviceId", "TestedAt");
+
+                    b.HasIndex("SourceFileId", "SourceLine")
+                        .HasDatabaseName("IX_insulation_tests_source");
 
                     b.ToTable("insulation_tests", (string)null);
                 });
@@ -719,7 +721,8 @@ namespace TripTestLog.Migrations.Migrations
                     b.HasIndex("Fingerprint")
                         .IsUnique();
 
-                    b.HasIndex("SourceFileId");
+                    b.HasIndex("SourceFileId", "SourceLine")
+                        .HasDatabaseName("IX_trip_tests_source");
 
                     b.HasIndex("DeviceId", "TestedAt", "SourceFileId", "SourceLine")
                         .HasDatabaseName("IX_trip_tests_device_order");

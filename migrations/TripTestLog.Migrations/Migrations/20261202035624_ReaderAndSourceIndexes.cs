@@ -1,0 +1,90 @@
+﻿using Microsoft.EntityFrameworkCore.Migrations;
+
+#nullable disable
+
+namespace TripTestLog.Migrations.Migrations
+{
+    /// <inheritdoc />
+    public partial class ReaderAndSourceIndexes : Migration
+    {
+        /// <inheritdoc />
+        protected override void Up(MigrationBuilder migrationBuilder)
+        {
+            migrationBuilder.DropIndex(
+                name: "IX_trip_tests_device_id_tested_at",
+                table: "trip_tests");
+
+            migrationBuilder.DropIndex(
+                name: "IX_trip_tests_source_file_id",
+                table: "trip_tests");
+
+            migrationBuilder.DropIndex(
+                name: "IX_insulation_tests_source_file_id",
+                table: "insulation_tests");
+
+            migrationBuilder.DropIndex(
+                name: "IX_contact_tests_source_file_id",
+                table: "contact_tests");
+
+            migrationBuilder.CreateIndex(
+                name: "IX_trip_tests_device_order",
+                table: "trip_tests",
+                columns: new[] { "device_id", "tested_at", "source_file_id", "source_line" });
+
+            migrationBuilder.CreateIndex(
+                name: "IX_trip_tests_source",
+                table: "trip_tests",
+                columns: new[] { "source_file_id", "source_line" });
+
+            migrationBuilder.CreateIndex(
+                name: "IX_insulation_tests_source",
+                table: "insulation_tests",
+                columns: new[] { "source_file_id", "source_line" });
+
+            migrationBuilder.CreateIndex(
+                name: "IX_contact_tests_source",
+                table: "contact_tests",
+                columns: new[] { "source_file_id", "source_line" });
+        }
+
+        /// <inheritdoc />
+        protected override void Down(MigrationBuilder migrationBuilder)
+        {
+            migrationBuilder.DropIndex(
+                name: "IX_trip_tests_device_order",
+                table: "trip_tests");
+
+            migrationBuilder.DropIndex(
+                name: "IX_trip_tests_source",
+                table: "trip_tests");
+
+            migrationBuilder.DropIndex(
+                name: "IX_insulation_tests_source",
+                table: "insulation_tests");
+
+            migrationBuilder.DropIndex(
+                name: "IX_contact_tests_source",
+                table: "contact_tests");
+
+            migrationBuilder.CreateIndex(
+                name: "IX_trip_tests_device_id_tested_at",
+                table: "trip_tests",
+                columns: new[] { "device_id", "tested_at" });
+
+            migrationBuilder.CreateIndex(
+                name: "IX_trip_tests_source_file_id",
+                table: "trip_tests",
+                column: "source_file_id");
+
+            migrationBuilder.CreateIndex(
+                name: "IX_insulation_tests_source_file_id",
+                table: "insulation_tests",
+                column: "source_file_id");
+
+            migrationBuilder.CreateIndex(
+                name: "IX_contact_tests_source_file_id",
+                table: "contact_tests",
+                column: "source_file_id");
+        }
+    }
+}

@@ -1,0 +1,264 @@
+using System.Diagnostics;
+using System.Globalization;
+using System.Text.Json;
+using TripTestLog.Application.Check;
+using TripTestLog.Application.Import;
+using TripTestLog.Cli.Output;
+using TripTestLog.Ingest;
+using TripTestLog.Storage;
+
+namespace TripTestLog.Benchmarks;
+
+/// <summary>
+/// The benchmark: for each fleet size it writes an invented fleet, then times in separate child processes (so each
+/// step's peak memory is its own) the raw SQLite insert floor, the project's import, a re-import, the raw read floor and
+/// check with JSON output, and prints rows per second, the ratios to the floors and peak memory.
+/// Usage: dotnet run -c Release --project tests/TripTestLog.Benchmarks -- [--rows 100000,300000,1000000] [--devices 10000] [--files 20] [--work DIR]
+/// </summary>
+internal static class Program
+{
+    private static readonly string[] Steps = ["floor-insert", "import", "reimport", "floor-read", "check"];
+
+    private static int Main(string[] args)
+    {
+        try
+        {
+            var options = Options.Parse(args);
+            if (options.Step == "generate")
+            {
+                BenchmarkFleet.Write(Path.Combine(options.Work, "records"), options.Devices, options.Rows[0], options.Files);
+                return 0;
+            }
+
+            return options.Step is { } step ? RunStep(step, options.Work) : RunAll(options);
+        }
+        catch (ArgumentException e)
+        {
+            Console.Error.WriteLine("error: " + e.Message);
+            return 2;
+        }
+    }
+
+    private static int RunAll(Options o)
+    {
+        Console.WriteLine($"TripTestLog benchmark, {Environment.ProcessorCount} cores, {DateTime.UtcNow:yyyy-MM-dd}; {o.Devices} devices, {o.Files} files");
+        Console.WriteLine();
+        Console.WriteLine("    rows  step           seconds      rows/s   x floor  peak MB");
+        Console.WriteLine("--------  ------------  --------  ----------  --------  -------");
+        var perRow = new List<(long Rows, double ImportSeconds, double CheckSeconds)>();
+        foreach (var rows in o.Rows)
+        {
+            var work = Path.Combine(o.Work, $"n{rows}");
+            if (Directory.Exists(work))
+            {
+                Directory.Delete(work, recursive: true);
+            }
+
+            Console.Error.WriteLine($"writing a fleet of {rows:N0} trip rows in {work} ...");
+            BenchmarkFleet.Write(Path.Combine(work, "records"), o.Devices, rows, o.Files);
+            var results = new Dictionary<string, StepResult>();
+            foreach (var step in Steps)
+            {
+                Console.Error.WriteLine($"  {step} ...");
+                results[step] = Child(step, work);
+                if (results[step].Rows != rows && step != "reimport")
+                {
+                    throw new InvalidOperationException($"{step} handled {results[step].Rows} rows, not {rows}");
+                }
+            }
+
+            Print(rows, "floor-insert", results["floor-insert"], null);
+            Print(rows, "import", results["import"], results["floor-insert"]);
+            Print(rows, "reimport", results["reimport"], results["floor-insert"]);
+            Print(rows, "floor-read", results["floor-read"], null);
+            Print(rows, "check --json", results["check"], results["floor-read"], slower: true);
+            perRow.Add((rows, results["import"].Seconds, results["check"].Seconds));
+            Directory.Delete(work, recursive: true);
+        }
+
+        if (perRow.Count > 1)
+        {
+            var (r0, i0, c0) = perRow[0];
+            var (r1, i1, c1) = perRow[^1];
+            Console.WriteLine();
+            Console.WriteLine($"Growth from {r0:N0} to {r1:N0} rows ({(double)r1 / r0:0.#}x): import time x{i1 / i0:0.##}, check time x{c1 / c0:0.##}.");
+        }
+
+        Console.WriteLine("x floor: for import and re-import, rows/s over the insert floor's (higher is better); for check, time over the read floor's.");
+        return 0;
+    }
+
+    private static void Print(long rows, string step, StepResult r, StepResult? floor, bool slower = false)
+    {
+        var ratio = floor is null ? "" : slower ? (r.Seconds / floor.Seconds).ToString("0.00", CultureInfo.InvariantCulture)
+            : (rows / r.Seconds / (rows / floor.Seconds)).ToString("0.00", CultureInfo.InvariantCulture);
+        Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
+            $"{rows,8}  {step,-12}  {r.Seconds,8:0.00}  {rows / r.Seconds,10:0}  {ratio,8}  {r.PeakMb,7:0}"));
+    }
+
+    private static StepResult Child(string step, string work)
+    {
+        var info = new ProcessStartInfo(Environment.ProcessPath!) { RedirectStandardOutput = true, UseShellExecute = false };
+        foreach (var a in new[] { "--step", step, "--work", work })
+        {
+            info.ArgumentList.Add(a);
+        }
+
+        using var process = Process.Start(info)!;
+        var output = process.StandardOutput.ReadToEnd();
+        process.WaitForExit();
+        if (process.ExitCode != 0)
+        {
+            throw new InvalidOperationException($"step {step} failed with exit code {process.ExitCode}");
+        }
+
+        return JsonSerializer.Deserialize<StepResult>(output)!;
+    }
+
+    private static int RunStep(string step, string work)
+    {
+        var records = Path.Combine(work, "records");
+        var trips = Directory.GetFiles(records, "trips-*.csv").Order(StringComparer.Ordinal).ToList();
+        var project = Path.Combine(work, "project.db");
+        var now = DateTimeOffset.UtcNow;
+        var today = DateOnly.FromDateTime(DateTime.UtcNow);
+        var clock = Stopwatch.StartNew();
+        long rows;
+        switch (step)
+        {
+            case "floor-insert":
+                rows = Floors.Insert(Path.Combine(work, "floor.db"), trips);
+                break;
+            case "import":
+            case "reimport":
+                using (var store = RecordStore.Open(project))
+                {
+                    var pipeline = new ImportPipeline(store);
+                    if (step == "import")
+                    {
+                        pipeline.Import(new CsvRecordFileSource(Path.Combine(records, "register.csv"), ReadOptions.Default), ImportOptions.Strict, today, now);
+                        clock.Restart();
+                    }
+
+                    rows = 0;
+                    foreach (var outcome in pipeline.Run(trips.Select(t => (IRecordFileSource)new CsvRecordFileSource(t, ReadOptions.Default)).ToList(), ImportOptions.Strict, today, () => now))
+                    {
+                        rows += outcome.Status == ImportStatus.Imported ? outcome.Added : outcome.RowsRead;
+                    }
+                }
+
+                break;
+            case "parse-only":
+                rows = 0;
+                foreach (var t in trips)
+                {
+                    using var file = new CsvRecordFileSource(t, ReadOptions.Default).Open(today);
+                    foreach (var row in file.Rows())
+                    {
+                        rows += row.Record is null ? 0 : 1;
+                    }
+                }
+
+                break;
+            case "rows-only":
+                rows = 0;
+                foreach (var t in trips)
+                {
+                    using var file = new CsvRecordFileSource(t, ReadOptions.Default).Open(today);
+                    foreach (var row in file.Rows())
+                    {
+                        rows += MeasurementTable.RowOf(row.Record!, 1, row.Line).Fingerprint.Length > 0 ? 1 : 0;
+                    }
+                }
+
+                break;
+            case "open-only":
+                using (var store = RecordStore.Open(project))
+                {
+                    rows = 0;
+                }
+
+                break;
+            case "read-only":
+                using (var store = RecordStore.Open(project))
+                {
+                    rows = store.Devices().Sum(d => (long)d.Trips.Count);
+                }
+
+                break;
+            case "judge-only":
+                using (var store = RecordStore.Open(project))
+                {
+                    rows = CheckPipeline.Run(store).LongCount();
+                }
+
+                break;
+            case "floor-read":
+                rows = Floors.ReadAsJson(project, Path.Combine(work, "floor.jsonl"));
+                break;
+            case "check":
+                using (var store = RecordStore.Open(project))
+                using (var writer = new StreamWriter(Path.Combine(work, "check.json"), false, new System.Text.UTF8Encoding(false), 1 << 16))
+                {
+                    var json = new VerdictJson(writer);
+                    rows = 0;
+                    foreach (var judged in CheckPipeline.Run(store))
+                    {
+                        json.Add(judged);
+                        rows++;
+                    }
+
+                    json.Finish();
+                }
+
+                break;
+            default:
+                throw new ArgumentException($"unknown step '{step}'");
+        }
+
+        var seconds = clock.Elapsed.TotalSeconds;
+        Console.WriteLine(JsonSerializer.Serialize(new StepResult(seconds, rows, Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0)));
+        return 0;
+    }
+
+    private sealed record StepResult(double Seconds, long Rows, double PeakMb);
+
+    private sealed record Options(IReadOnlyList<long> Rows, int Devices, int Files, string Work, string? Step)
+    {
+        public static Options Parse(string[] args)
+        {
+            var rows = new List<long> { 100_000, 300_000, 1_000_000 };
+            int devices = 10_000, files = 20;
+            var work = Path.Combine(Path.GetTempPath(), "triptestlog-bench");
+            string? step = null;
+            for (var i = 0; i < args.Length; i++)
+            {
+                var value = i + 1 < args.Length ? args[i + 1] : throw new ArgumentException($"{args[i]} needs a value");
+                switch (args[i])
+                {
+                    case "--rows":
+                        rows = value.Split(',').Select(v => long.TryParse(v, out var n) && n > 0 ? n : throw new ArgumentException($"--rows: '{v}' is not a positive whole number")).ToList();
+                        break;
+                    case "--devices":
+                        devices = int.TryParse(value, out var d) && d > 0 ? d : throw new ArgumentException("--devices takes a positive whole number");
+                        break;
+                    case "--files":
+                        files = int.TryParse(value, out var f) && f > 0 ? f : throw new ArgumentException("--files takes a positive whole number");
+                        break;
+                    case "--work":
+                        work = value;
+                        break;
+                    case "--step":
+                        step = value;
+                        break;
+                    default:
+                        throw new ArgumentException($"unknown option {args[i]}; use --rows, --devices, --files, --work");
+                }
+
+                i++;
+            }
+
+            return new Options(rows, devices, files, work, step);
+        }
+    }
+}
