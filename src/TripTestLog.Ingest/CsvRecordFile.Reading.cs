@@ -10,15 +10,20 @@ namespace TripTestLog.Ingest;
 /// <summary>The row loop, and the checks made on the first block of the file.</summary>
 internal sealed partial class CsvRecordFile
 {
-    /// <summary>The raw text of the row last yielded, for a rejects file.</summary>
-    internal string CurrentRaw => _csv is null ? "" : Encoding.UTF8.GetString(_csv.RawRecord).TrimEnd('\r', '\n');
+    private bool _keepRaw;
+
+    private string? CurrentRaw => _keepRaw && _csv is not null ? Encoding.UTF8.GetString(_csv.RawRecord).TrimEnd('\r', '\n') : null;
 
     /// <summary>The header line as written, for a rejects file.</summary>
     internal string HeaderText => _headerLine.TrimStart('\uFEFF');
 
     internal char Separator => _layout?.Separator ?? ',';
 
-    public IRejectsSink Rejects() => new CsvRejectsSink(this);
+    public IRejectsSink Rejects()
+    {
+        _keepRaw = true;
+        return new CsvRejectsSink(this);
+    }
 
     private IEnumerable<ReadRow> ReadRows(CsvReader csv, HeaderMap map, MappedHeaders headers, Layout layout)
     {
@@ -49,7 +54,7 @@ internal sealed partial class CsvRecordFile
             {
                 yield return new ReadRow(csv.LineNumber, null, [new RowProblem(_path, csv.LineNumber, "",
                     $"this row has {csv.FieldCount} fields but the header has {csv.Headers.Count}; check for a missing or extra "
-                    + $"'{layout.Separator}', or quote fields that hold one")]);
+                    + $"'{layout.Separator}', or quote fields that hold one")], CurrentRaw);
                 continue;
             }
 
@@ -60,7 +65,7 @@ internal sealed partial class CsvRecordFile
                 _tables.Add(record, csv.LineNumber);
             }
 
-            yield return new ReadRow(csv.LineNumber, fields.Problems.Count == 0 ? record : null, fields.Problems);
+            yield return new ReadRow(csv.LineNumber, fields.Problems.Count == 0 ? record : null, fields.Problems, CurrentRaw);
         }
     }
 

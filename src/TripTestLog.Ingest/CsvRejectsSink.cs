@@ -15,9 +15,9 @@ internal sealed class CsvRejectsSink(CsvRecordFile file) : IRejectsSink
     private StreamWriter? _writer;
     private string? _temporary;
 
-    public void Write(long line, IReadOnlyList<RowProblem> problems)
+    public void Write(ReadRow row, IReadOnlyList<RowProblem> problems)
     {
-        if (line <= 1)
+        if (row.Line <= 1)
         {
             return;
         }
@@ -29,7 +29,7 @@ internal sealed class CsvRejectsSink(CsvRecordFile file) : IRejectsSink
             _writer.Write(file.HeaderText + file.Separator + Columns.HeaderMap.RejectsColumn + "\n");
         }
 
-        _writer.Write(file.CurrentRaw);
+        _writer.Write(row.Raw ?? throw new InvalidOperationException("ask for the rejects sink before reading the rows"));
         _writer.Write(file.Separator + Quote(string.Join("; ", problems.Select(Reason))) + "\n");
     }
 

@@ -13,13 +13,14 @@ internal sealed record MeasurementRow(object[] Values, string Fingerprint, long 
 /// <summary>A measurement table and the columns a row of it holds (besides id, source and fingerprint).</summary>
 /// <param name="Table">The table name.</param>
 /// <param name="Columns">The value columns, in order.</param>
-internal sealed record MeasurementTable(string Table, string[] Columns)
+/// <param name="TrailingOptional">How many of the last columns are usually empty, so an insert may leave them out.</param>
+internal sealed record MeasurementTable(string Table, string[] Columns, int TrailingOptional = 0)
 {
     public static MeasurementTable Trips { get; } = new("trip_tests",
     [
         "device_id", "tested_at", "stage", "pole", "current_a", "tripped", "time_s", "start", "ambient_c", "instrument", "technician", "note",
         "found_ir_a", "found_isd_a", "found_ii_a", "found_im_a", "found_pickup_a", "found_tms",
-    ]);
+    ], TrailingOptional: 6);
 
     public static MeasurementTable Contacts { get; } = new("contact_tests",
         ["device_id", "tested_at", "stage", "pole", "resistance_uohm", "test_current_a", "temperature_c", "instrument", "technician"]);

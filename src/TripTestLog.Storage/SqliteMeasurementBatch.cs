@@ -20,6 +20,9 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
     private readonly long _sourceId;
     private readonly SqliteCommand _insert;
     private readonly SqliteParameter[] _parameters;
+    private readonly SqliteCommand _insertShort;
+    private readonly SqliteParameter[] _shortParameters;
+    private readonly int _shortColumns;
     private readonly (long Id, string Name)? _earlier;
     private readonly SqliteCommand? _lookup;
     private readonly string _path;
@@ -33,17 +36,22 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
         _path = path;
         _now = now;
         _table = MeasurementTable.For(kind);
+        // Foreign keys are not checked row by row here: every device id comes from the register read inside this
+        // transaction and the source id from the row it just wrote, and `verify` runs SQLite's foreign-key check.
+        // (The pragma is ignored inside a transaction, so it is set before it begins and restored when the batch ends.)
+        store.ForeignKeys(false);
         _transaction = store.BeginWriting();
         try
         {
             _deviceIds = store.DeviceIds(_transaction);
             _earlier = store.EarlierFileOfTheSameName(_transaction, path, kind);
             _sourceId = store.InsertSourceFile(_transaction, path, "pending:" + Guid.NewGuid().ToString("N"), kind, 0, now);
-            var names = _table.Columns.Select((_, i) => "$p" + i).ToList();
-            _insert = store.Command(_transaction,
-                $"INSERT OR IGNORE INTO {_table.Table} ({string.Join(", ", _table.Columns)}, source_file_id, source_line, fingerprint) "
-                + $"VALUES ({string.Join(", ", names)}, $src, $line, $fp)");
-            _parameters = RecordStore.Parameters(_insert, [.. names, "$src", "$line", "$fp"]);
+            (_insert, _parameters) = Insert(store, _table.Columns.Length);
+
+            // Most rows leave the trailing optional columns (settings found on the device) empty; a statement without
+            // them binds fewer parameters per row.
+            _shortColumns = _table.Columns.Length - _table.TrailingOptional;
+            (_insertShort, _shortParameters) = Insert(store, _shortColumns);
             if (_earlier is { } earlier)
             {
                 _lookup = store.Command(_transaction,
@@ -54,15 +62,17 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
         catch
         {
             _transaction.Dispose();
+            store.ForeignKeys(true);
             throw;
         }
     }
 
-    public bool Knows(AssetTag tag) => _deviceIds.ContainsKey(tag.Value);
+    public PreparedRow? Prepare(object measurement, long line) =>
+        _deviceIds.TryGetValue(TagOf(measurement).Value, out var device) ? new Prepared(MeasurementTable.RowOf(measurement, device, line)) : null;
 
-    public RowAnswer Add(object measurement, long line)
+    public RowAnswer Add(PreparedRow prepared)
     {
-        var row = MeasurementTable.RowOf(measurement, _deviceIds[TagOf(measurement).Value], line);
+        var row = ((Prepared)prepared).Row;
         if (Correction(row) is { } correction)
         {
             _pending = correction;
@@ -70,22 +80,29 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
             return new RowAnswer(RowAnswerKind.Conflict, problem.Column, problem.Reason);
         }
 
-        for (var i = 0; i < row.Values.Length; i++)
+        var shortRow = true;
+        for (var i = _shortColumns; i < row.Values.Length && shortRow; i++)
         {
-            _parameters[i].Value = row.Values[i];
+            shortRow = row.Values[i] is DBNull;
         }
 
-        _parameters[^3].Value = _sourceId;
-        _parameters[^2].Value = row.Line;
-        _parameters[^1].Value = row.Fingerprint;
-        return _insert.ExecuteNonQuery() == 1 ? RowAnswer.Added : RowAnswer.Duplicate;
+        var (insert, parameters, count) = shortRow ? (_insertShort, _shortParameters, _shortColumns) : (_insert, _parameters, row.Values.Length);
+        for (var i = 0; i < count; i++)
+        {
+            parameters[i].Value = row.Values[i];
+        }
+
+        parameters[^3].Value = _sourceId;
+        parameters[^2].Value = row.Line;
+        parameters[^1].Value = row.Fingerprint;
+        return insert.ExecuteNonQuery() == 1 ? RowAnswer.Added : RowAnswer.Duplicate;
     }
 
-    public void Replace(object measurement, long line)
+    public void Replace(PreparedRow prepared)
     {
-        if (_pending is not { } correction || correction.New.Line != line)
+        if (_pending is not { } correction || correction.New.Line != prepared.Line)
         {
-            throw new InvalidOperationException($"line {line} was not answered with a conflict");
+            throw new InvalidOperationException($"line {prepared.Line} was not answered with a conflict");
         }
 
         _store.ApplyCorrections(_transaction, _table, [correction], _sourceId, _now);
@@ -117,6 +134,7 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
     public void Dispose()
     {
         _insert.Dispose();
+        _insertShort.Dispose();
         _lookup?.Dispose();
         if (!_done)
         {
@@ -124,6 +142,17 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
         }
 
         _transaction.Dispose();
+        _store.ForeignKeys(true);
+    }
+
+    private (SqliteCommand Command, SqliteParameter[] Parameters) Insert(RecordStore store, int columns)
+    {
+        var used = _table.Columns.Take(columns).ToList();
+        var names = used.Select((_, i) => "$p" + i).ToList();
+        var command = store.Command(_transaction,
+            $"INSERT OR IGNORE INTO {_table.Table} ({string.Join(", ", used)}, source_file_id, source_line, fingerprint) "
+            + $"VALUES ({string.Join(", ", names)}, $src, $line, $fp)");
+        return (command, RecordStore.Parameters(command, [.. names, "$src", "$line", "$fp"]));
     }
 
     private Correction? Correction(MeasurementRow row)
@@ -149,6 +178,9 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
         var correction = new Correction(row, reader.GetInt64(0), values, earlier.Id, earlier.Name, _table.Columns);
         return correction.Changes.Any() ? correction : null;
     }
+
+    // The device dictionary is only read once the batch has begun, so preparing rows on another thread is safe.
+    private sealed record Prepared(MeasurementRow Row) : PreparedRow(Row.Line);
 
     private static AssetTag TagOf(object measurement) => measurement switch
     {

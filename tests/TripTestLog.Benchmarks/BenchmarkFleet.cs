@@ -30,6 +30,8 @@ internal static class BenchmarkFleet
         var start = new DateTime(2006, 1, 2, 8, 0, 0);
         var paths = new List<string>();
         var perFile = (rows + files - 1) / files;
+        var years = ((rows + devices - 1) / devices + 4) / 5;
+        var stride = (int)Math.Clamp(7300 / Math.Max(1, years), 1, 365);
         long written = 0;
         for (var f = 0; f < files && written < rows; f++)
         {
@@ -43,7 +45,9 @@ internal static class BenchmarkFleet
                 var rated = Ratings[device % Ratings.Length];
                 var multiple = 2.55 * (1 + random.NextDouble() * 0.02);
                 var trip = 5 + random.NextDouble() * 40;
-                var at = start.AddMinutes(written / devices * 7 + device % 7);
+                // Each device is tested five times on a yearly test day, 90 minutes apart (so each start is rested and cold).
+                var test = written / devices;
+                var at = start.AddDays(test / 5 * stride + device % Math.Min(200, stride)).AddMinutes(test % 5 * 90);
                 w.Write(string.Create(CultureInfo.InvariantCulture,
                     $"BNC-{device:D6},{at:yyyy-MM-ddTHH:mm},as-found,all,{rated * multiple:0.00},{trip:0.000},,cold,{18 + random.NextDouble() * 8:0.0},INJ-B-{f % 3},R. Okonjo,\n"));
             }

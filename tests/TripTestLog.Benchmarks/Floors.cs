@@ -18,6 +18,11 @@ internal static class Floors
     /// </summary>
     public static long Insert(string db, IReadOnlyList<string> files)
     {
+        foreach (var stale in new[] { db, db + "-wal", db + "-shm" })
+        {
+            File.Delete(stale);
+        }
+
         using var connection = new SqliteConnection($"Data Source={db};Pooling=False");
         connection.Open();
         Execute(connection, "PRAGMA journal_mode=WAL; PRAGMA synchronous=NORMAL; PRAGMA cache_size=-200000; PRAGMA temp_store=MEMORY;");

@@ -1,5 +1,4 @@
 using TripTestLog.Application.Records;
-using TripTestLog.Domain.Devices;
 
 namespace TripTestLog.Application.Import;
 
@@ -22,20 +21,28 @@ public interface IImportStore
 /// </summary>
 public interface IMeasurementBatch : IDisposable
 {
-    /// <summary>Whether the device register holds <paramref name="tag"/>.</summary>
-    bool Knows(AssetTag tag);
+    /// <summary>
+    /// Turns a measurement read from <paramref name="line"/> into the row the store will write (values, fingerprint),
+    /// or null when the device register does not hold its tag. Pure and safe to call from another thread, so the
+    /// pipeline prepares rows while the previous ones are written.
+    /// </summary>
+    PreparedRow? Prepare(object measurement, long line);
 
-    /// <summary>Stores one measurement read from <paramref name="line"/>, unless the same record is stored already or the
-    /// line differs from the same line of an earlier import from the same path.</summary>
-    RowAnswer Add(object measurement, long line);
+    /// <summary>Stores a prepared row, unless the same record is stored already or the line differs from the same line
+    /// of an earlier import from the same path.</summary>
+    RowAnswer Add(PreparedRow row);
 
     /// <summary>Applies a correction that <see cref="Add"/> answered with a conflict: the stored record takes the new values
     /// and its old ones are kept in the audit table.</summary>
-    void Replace(object measurement, long line);
+    void Replace(PreparedRow row);
 
     /// <summary>Commits the file with its hash and counts; false (and nothing stored) when a file with that hash was imported before.</summary>
     bool Complete(string sha256, long rowsRead, long added, long duplicates);
 }
+
+/// <summary>A measurement as a store will write it; what it holds is the store's own business.</summary>
+/// <param name="Line">The line of the file it was read from.</param>
+public abstract record PreparedRow(long Line);
 
 /// <summary>What the store did with one row.</summary>
 public enum RowAnswerKind

@@ -23,7 +23,10 @@ public interface IRecordFile : IDisposable
     /// <summary>What is known once the rows have been read: hash, rows read, file-level problems.</summary>
     FileSummary Summary { get; }
 
-    /// <summary>A place for the rows an import refuses, written unchanged beside the file as they are found.</summary>
+    /// <summary>
+    /// A place for the rows an import refuses, written unchanged beside the file as they are found. Ask for it before
+    /// reading the rows: from then on each row carries its raw text.
+    /// </summary>
     IRejectsSink Rejects();
 }
 
@@ -31,7 +34,8 @@ public interface IRecordFile : IDisposable
 /// <param name="Line">The 1-based line the row starts on.</param>
 /// <param name="Record">The record (a device, a measurement, a table row), or null when the row has problems.</param>
 /// <param name="Problems">Why the row was refused; empty when it parsed.</param>
-public readonly record struct ReadRow(long Line, object? Record, IReadOnlyList<RowProblem> Problems);
+/// <param name="Raw">The row's text as written, when a rejects sink was asked for; else null.</param>
+public readonly record struct ReadRow(long Line, object? Record, IReadOnlyList<RowProblem> Problems, string? Raw = null);
 
 /// <summary>A file as a whole, once read.</summary>
 /// <param name="Sha256">SHA-256 of the file's bytes, lower-case hex.</param>
@@ -43,8 +47,8 @@ public sealed record FileSummary(string Sha256, long RowsRead, IReadOnlyList<Row
 /// <summary>Refused rows written unchanged with their reasons, so they can be fixed and imported on their own.</summary>
 public interface IRejectsSink : IDisposable
 {
-    /// <summary>Writes the row being read now (the one last yielded) with its problems.</summary>
-    void Write(long line, IReadOnlyList<RowProblem> problems);
+    /// <summary>Writes <paramref name="row"/> as it was written, with its problems.</summary>
+    void Write(ReadRow row, IReadOnlyList<RowProblem> problems);
 
     /// <summary>Keeps the file; returns its path, or null when no row was written. Without it, disposing deletes the file.</summary>
     string? Keep();

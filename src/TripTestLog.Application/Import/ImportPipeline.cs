@@ -1,3 +1,4 @@
+using System.Threading.Channels;
 using TripTestLog.Application.Records;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Measurements;
@@ -78,7 +79,7 @@ public sealed class ImportPipeline(IImportStore store)
         using var rejects = options.AcceptValid ? file.Rejects() : null;
         var log = new ProblemLog();
         long added = 0, duplicates = 0, replaced = 0;
-        foreach (var row in file.Rows())
+        foreach (var (row, prepared) in ParsedAhead(file, batch, cancel))
         {
             cancel.ThrowIfCancellationRequested();
             var problems = row.Problems;
@@ -86,13 +87,15 @@ public sealed class ImportPipeline(IImportStore store)
             {
                 // Rows after a strict file's first bad row are still stored, inside the transaction that will be rolled
                 // back, so that every unknown tag and conflict in the file is reported in one go.
-                problems = Store(batch, file.Path, record, row.Line, options, ref added, ref duplicates, ref replaced);
+                problems = prepared is null
+                    ? [ImportProblems.UnknownTag(file.Path, row.Line, TagOf(record))]
+                    : Store(batch, file.Path, prepared, options, ref added, ref duplicates, ref replaced);
             }
 
             if (problems.Count > 0)
             {
                 log.Add(problems);
-                rejects?.Write(row.Line, problems);
+                rejects?.Write(row, problems);
             }
         }
 
@@ -117,16 +120,60 @@ public sealed class ImportPipeline(IImportStore store)
         };
     }
 
-    private static IReadOnlyList<RowProblem> Store(IMeasurementBatch batch, string path, object record, long line, ImportOptions options,
+    /// <summary>
+    /// The file's rows, parsed on another thread a few thousand rows ahead of the store: on two cores the CSV parsing
+    /// and the database writes then overlap. The queue is bounded, so memory stays flat; rows keep their order.
+    /// </summary>
+    private static IEnumerable<(ReadRow Row, PreparedRow? Prepared)> ParsedAhead(IRecordFile file, IMeasurementBatch batch, CancellationToken cancel)
+    {
+        var queue = Channel.CreateBounded<(ReadRow, PreparedRow?)>(new BoundedChannelOptions(4096) { SingleReader = true, SingleWriter = true });
+        using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancel);
+        var producer = Task.Run(async () =>
+        {
+            try
+            {
+                foreach (var row in file.Rows())
+                {
+                    var prepared = row.Record is { } record && row.Problems.Count == 0 ? batch.Prepare(record, row.Line) : null;
+                    await queue.Writer.WriteAsync((row, prepared), stop.Token).ConfigureAwait(false);
+                }
+
+                queue.Writer.Complete();
+            }
+            catch (Exception e)
+            {
+                queue.Writer.Complete(e);
+            }
+        }, stop.Token);
+
+        try
+        {
+            while (queue.Reader.WaitToReadAsync(cancel).AsTask().GetAwaiter().GetResult())
+            {
+                while (queue.Reader.TryRead(out var row))
+                {
+                    yield return row;
+                }
+            }
+        }
+        finally
+        {
+            // Stops the reader when the consumer leaves early (an error, Ctrl+C) and waits, so the file is not closed under it.
+            stop.Cancel();
+            try
+            {
+                producer.GetAwaiter().GetResult();
+            }
+            catch (OperationCanceledException)
+            {
+            }
+        }
+    }
+
+    private static IReadOnlyList<RowProblem> Store(IMeasurementBatch batch, string path, PreparedRow row, ImportOptions options,
         ref long added, ref long duplicates, ref long replaced)
     {
-        var tag = TagOf(record);
-        if (!batch.Knows(tag))
-        {
-            return [ImportProblems.UnknownTag(path, line, tag)];
-        }
-
-        var answer = batch.Add(record, line);
+        var answer = batch.Add(row);
         switch (answer.Kind)
         {
             case RowAnswerKind.Added:
@@ -136,11 +183,11 @@ public sealed class ImportPipeline(IImportStore store)
                 duplicates++;
                 return [];
             case RowAnswerKind.Conflict when options.Replace:
-                batch.Replace(record, line);
+                batch.Replace(row);
                 replaced++;
                 return [];
             default:
-                return [new RowProblem(path, line, answer.Column, answer.Reason)];
+                return [new RowProblem(path, row.Line, answer.Column, answer.Reason)];
         }
     }
 

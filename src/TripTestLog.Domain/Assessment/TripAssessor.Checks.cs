@@ -54,8 +54,10 @@ public sealed partial class TripAssessor
             return null;
         }
 
-        // Warmer than the reference, the release acts at a lower current: its thresholds scale by (1 - k dT).
-        var factor = Math.Clamp(1 - LabPolicy.AmbientShiftPerKelvin * delta, 0.5, 1.5);
+        // Warmer than the reference, the release acts at a lower current: its thresholds scale by (1 - k dT). dT is
+        // rounded away from zero to whole half kelvins: a slightly larger shift (stricter), and few distinct envelopes.
+        var rounded = Math.Sign(delta) * Math.Ceiling(Math.Abs(delta) * 2) / 2;
+        var factor = Math.Clamp(1 - LabPolicy.AmbientShiftPerKelvin * rounded, 0.5, 1.5);
         var shifted = TripJudge.Assess(Envelope(device, settings, factor), m, conditions).Verdict;
         var k = (LabPolicy.AmbientShiftPerKelvin * 100).ToString("0.#", CultureInfo.InvariantCulture);
         if (!Changes(assessment.Verdict, shifted))
