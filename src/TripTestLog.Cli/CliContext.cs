@@ -9,4 +9,7 @@ internal sealed record CliContext(TextWriter Out, TextWriter Error, TimeProvider
 {
     /// <summary>Today in local time: record dates after it are refused.</summary>
     public DateOnly Today => DateOnly.FromDateTime(Clock.GetLocalNow().DateTime);
+
+    /// <summary>Cancelled by Ctrl+C (in the real program): long pipelines stop and roll back the file in progress.</summary>
+    public CancellationToken Cancel { get; init; }
 }

@@ -28,17 +28,26 @@ public interface IMeasurementBatch : IDisposable
     /// </summary>
     PreparedRow? Prepare(object measurement, long line);
 
-    /// <summary>Stores a prepared row, unless the same record is stored already or the line differs from the same line
-    /// of an earlier import from the same path.</summary>
+    /// <summary>Stores a prepared row (an identical stored record makes it a duplicate, counted at the end), unless the
+    /// line differs from the same line of an earlier import from the same path: then it answers with the conflict.</summary>
     RowAnswer Add(PreparedRow row);
 
     /// <summary>Applies a correction that <see cref="Add"/> answered with a conflict: the stored record takes the new values
     /// and its old ones are kept in the audit table.</summary>
     void Replace(PreparedRow row);
 
-    /// <summary>Commits the file with its hash and counts; false (and nothing stored) when a file with that hash was imported before.</summary>
-    bool Complete(string sha256, long rowsRead, long added, long duplicates);
+    /// <summary>
+    /// Commits the file with its hash and counts; not committed (and nothing stored) when a file with that hash was
+    /// imported before. <paramref name="replaced"/> corrections count as stored records.
+    /// </summary>
+    BatchResult Complete(string sha256, long rowsRead, long replaced);
 }
+
+/// <summary>How a measurement file ended in the store.</summary>
+/// <param name="Committed">False when a file with the same hash was imported before, so nothing was kept.</param>
+/// <param name="Added">New records stored.</param>
+/// <param name="Duplicates">Rows identical to a record already stored, or to an earlier row of the file.</param>
+public sealed record BatchResult(bool Committed, long Added, long Duplicates);
 
 /// <summary>A measurement as a store will write it; what it holds is the store's own business.</summary>
 /// <param name="Line">The line of the file it was read from.</param>
@@ -47,11 +56,8 @@ public abstract record PreparedRow(long Line);
 /// <summary>What the store did with one row.</summary>
 public enum RowAnswerKind
 {
-    /// <summary>Stored as a new record.</summary>
-    Added,
-
-    /// <summary>Identical to a stored record, or to an earlier row of the file: not stored again.</summary>
-    Duplicate,
+    /// <summary>Stored, or found identical to a stored record (the batch counts which).</summary>
+    Stored,
 
     /// <summary>Differs from the same line of an earlier import from the same path: a correction, not stored.</summary>
     Conflict,
@@ -63,9 +69,6 @@ public enum RowAnswerKind
 /// <param name="Reason">For a conflict: what differs and how to apply it.</param>
 public readonly record struct RowAnswer(RowAnswerKind Kind, string Column = "", string Reason = "")
 {
-    /// <summary>Stored as a new record.</summary>
-    public static RowAnswer Added => new(RowAnswerKind.Added);
-
-    /// <summary>Already stored.</summary>
-    public static RowAnswer Duplicate => new(RowAnswerKind.Duplicate);
+    /// <summary>Stored, or a duplicate.</summary>
+    public static RowAnswer Stored => new(RowAnswerKind.Stored);
 }

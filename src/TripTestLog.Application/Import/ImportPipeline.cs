@@ -78,7 +78,7 @@ public sealed class ImportPipeline(IImportStore store)
         using var batch = store.BeginMeasurements(kind, file.Path, now);
         using var rejects = options.AcceptValid ? file.Rejects() : null;
         var log = new ProblemLog();
-        long added = 0, duplicates = 0, replaced = 0;
+        long replaced = 0;
         foreach (var (row, prepared) in ParsedAhead(file, batch, cancel))
         {
             cancel.ThrowIfCancellationRequested();
@@ -89,7 +89,7 @@ public sealed class ImportPipeline(IImportStore store)
                 // back, so that every unknown tag and conflict in the file is reported in one go.
                 problems = prepared is null
                     ? [ImportProblems.UnknownTag(file.Path, row.Line, TagOf(record))]
-                    : Store(batch, file.Path, prepared, options, ref added, ref duplicates, ref replaced);
+                    : Store(batch, file.Path, prepared, options, ref replaced);
             }
 
             if (problems.Count > 0)
@@ -106,12 +106,13 @@ public sealed class ImportPipeline(IImportStore store)
             return Refused(file.Path, kind, summary.RowsRead, log.Problems) with { ProblemsOmitted = log.Omitted };
         }
 
-        if (!batch.Complete(summary.Sha256, summary.RowsRead, added + replaced, duplicates))
+        var result = batch.Complete(summary.Sha256, summary.RowsRead, replaced);
+        if (!result.Committed)
         {
             return new ImportOutcome(file.Path, kind, ImportStatus.AlreadyImported, summary.RowsRead, 0, 0, 0, []);
         }
 
-        return new ImportOutcome(file.Path, kind, ImportStatus.Imported, summary.RowsRead, added, 0, duplicates, log.Problems)
+        return new ImportOutcome(file.Path, kind, ImportStatus.Imported, summary.RowsRead, result.Added, 0, result.Duplicates, log.Problems)
         {
             Replaced = replaced,
             RefusedRows = log.RefusedLines,
@@ -170,17 +171,12 @@ public sealed class ImportPipeline(IImportStore store)
         }
     }
 
-    private static IReadOnlyList<RowProblem> Store(IMeasurementBatch batch, string path, PreparedRow row, ImportOptions options,
-        ref long added, ref long duplicates, ref long replaced)
+    private static IReadOnlyList<RowProblem> Store(IMeasurementBatch batch, string path, PreparedRow row, ImportOptions options, ref long replaced)
     {
         var answer = batch.Add(row);
         switch (answer.Kind)
         {
-            case RowAnswerKind.Added:
-                added++;
-                return [];
-            case RowAnswerKind.Duplicate:
-                duplicates++;
+            case RowAnswerKind.Stored:
                 return [];
             case RowAnswerKind.Conflict when options.Replace:
                 batch.Replace(row);

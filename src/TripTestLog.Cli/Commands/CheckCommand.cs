@@ -54,9 +54,17 @@ internal static class CheckCommand
 
         var counts = new VerdictCounts();
         var output = new VerdictWriters(json ? new VerdictJson(cli.Out) : new VerdictTable(cli.Out), counts);
-        foreach (var judged in CheckPipeline.Run(store, only, requireRegistered))
+        try
         {
-            output.Add(judged);
+            foreach (var judged in CheckPipeline.Run(store, only, requireRegistered, cli.Cancel))
+            {
+                output.Add(judged);
+            }
+        }
+        catch (OperationCanceledException)
+        {
+            cli.Error.WriteLine("check stopped: the output above is incomplete");
+            return ExitCodes.BadInput;
         }
 
         output.Finish();

@@ -80,7 +80,18 @@ internal static class ImportCommand
 
         using var log = Logging.BesideDatabase(db);
         using var store = RecordStore.Open(db.FullName);
-        var outcomes = new ImportRunner(store, log, cli).Run(files, options);
+        IReadOnlyList<ImportOutcome> outcomes;
+        try
+        {
+            outcomes = new ImportRunner(store, log, cli).Run(files, options);
+        }
+        catch (OperationCanceledException)
+        {
+            log.Warning("Import stopped by the user");
+            cli.Error.WriteLine("import stopped: the file in progress was rolled back; the files before it are stored (import again to finish)");
+            return ExitCodes.BadInput;
+        }
+
         ImportReport.Write(cli.Out, outcomes, LogPath(db));
         return outcomes.Any(o => o.Status == ImportStatus.Refused) ? ExitCodes.BadInput
             : outcomes.Any(o => o.RefusedRows > 0) ? ExitCodes.Findings

@@ -59,7 +59,7 @@ internal sealed class ImportRunner(RecordStore store, ILogger log, CliContext cl
         using var progress = Progress.For(cli, files.Count);
         var sources = files.Select(f => (IRecordFileSource)new CsvRecordFileSource(f.Path, f.Read)).ToList();
         var outcomes = new List<ImportOutcome>(files.Count);
-        foreach (var outcome in new ImportPipeline(store).Run(sources, options, cli.Today, cli.Clock.GetUtcNow, file => progress.Step(Path.GetFileName(file))))
+        foreach (var outcome in new ImportPipeline(store).Run(sources, options, cli.Today, cli.Clock.GetUtcNow, file => progress.Step(Path.GetFileName(file)), cli.Cancel))
         {
             Log(outcome);
             outcomes.Add(outcome);
