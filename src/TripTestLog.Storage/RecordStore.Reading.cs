@@ -9,14 +9,14 @@ namespace TripTestLog.Storage;
 
 /// <summary>
 /// The streaming read: two ordered queries (register revisions, trip tests) merged by asset tag, so one device is
-/// held at a time. The trips query walks IX_trip_tests_device_order; DEVELOPERS.md shows its plan.
+/// held at a time. The trips query finds each device's tests by IX_trip_tests_device; DEVELOPERS.md shows its plan.
 /// </summary>
 public sealed partial class RecordStore : ITripSource
 {
     /// <summary>
     /// The trip query the check reader runs, by device and then test time: its plan is pinned by a test. CROSS JOIN
-    /// fixes the join order (SQLite keeps it as written), so devices are walked by their asset-tag index and each
-    /// device's tests come from IX_trip_tests_device_order already sorted: no sort of the whole table.
+    /// fixes the join order (SQLite keeps it as written), so devices are walked by their asset-tag index, each device's
+    /// tests are found by IX_trip_tests_device and only they are sorted by time: never a sort of the whole table.
     /// </summary>
     internal const string TripsInDeviceOrder =
         "SELECT d.asset_tag, t.tested_at, t.stage, t.pole, t.current_a, t.tripped, t.time_s, t.start, t.ambient_c, t.instrument, t.technician, t.note, "

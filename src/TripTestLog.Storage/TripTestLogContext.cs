@@ -54,8 +54,9 @@ internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> op
             e.ToTable("trip_tests");
             e.HasIndex(x => x.Fingerprint).IsUnique();
 
-            // The order the check reader streams in: device by device, by test time, then as imported.
-            e.HasIndex(x => new { x.DeviceId, x.TestedAt, x.SourceFileId, x.SourceLine }).HasDatabaseName("IX_trip_tests_device_order");
+            // The check reader streams device by device: it finds each device's tests here and sorts those few by time.
+            // One integer column keeps an import's random inserts cheap (a 4-column index cost 3 s per million rows).
+            e.HasIndex(x => x.DeviceId).HasDatabaseName("IX_trip_tests_device");
             e.HasOne<DeviceRow>().WithMany().HasForeignKey(x => x.DeviceId).OnDelete(DeleteBehavior.Restrict);
             // Where each record came from, by line: serves the foreign key and the lookup of a corrected file's lines.
             e.HasIndex(x => new { x.SourceFileId, x.SourceLine }).HasDatabaseName("IX_trip_tests_source");

@@ -715,14 +715,14 @@ namespace TripTestLog.Migrations.Migrations
 
                     b.HasKey("Id");
 
+                    b.HasIndex("DeviceId")
+                        .HasDatabaseName("IX_trip_tests_device");
+
                     b.HasIndex("Fingerprint")
                         .IsUnique();
 
                     b.HasIndex("SourceFileId", "SourceLine")
                         .HasDatabaseName("IX_trip_tests_source");
-
-                    b.HasIndex("DeviceId", "TestedAt", "SourceFileId", "SourceLine")
-                        .HasDatabaseName("IX_trip_tests_device_order");
 
                     b.ToTable("trip_tests", (string)null);
                 });

@@ -10,7 +10,7 @@ using TripTestLog.Storage;
 namespace TripTestLog.Migrations.Migrations
 {
     [DbContext(typeof(TripTestLogContext))]
-    [Migration("20261202035624_ReaderAndSourceIndexes")]
+    [Migration("20261202043215_ReaderAndSourceIndexes")]
     partial class ReaderAndSourceIndexes
     {
         /// <inheritdoc />
@@ -718,14 +718,14 @@ namespace TripTestLog.Migrations.Migrations
 
                     b.HasKey("Id");
 
+                    b.HasIndex("DeviceId")
+                        .HasDatabaseName("IX_trip_tests_device");
+
                     b.HasIndex("Fingerprint")
                         .IsUnique();
 
                     b.HasIndex("SourceFileId", "SourceLine")
                         .HasDatabaseName("IX_trip_tests_source");
-
-                    b.HasIndex("DeviceId", "TestedAt", "SourceFileId", "SourceLine")
-                        .HasDatabaseName("IX_trip_tests_device_order");
 
                     b.ToTable("trip_tests", (string)null);
                 });

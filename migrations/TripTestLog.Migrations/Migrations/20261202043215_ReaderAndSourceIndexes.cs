@@ -27,9 +27,9 @@ namespace TripTestLog.Migrations.Migrations
                 table: "contact_tests");
 
             migrationBuilder.CreateIndex(
-                name: "IX_trip_tests_device_order",
+                name: "IX_trip_tests_device",
                 table: "trip_tests",
-                columns: new[] { "device_id", "tested_at", "source_file_id", "source_line" });
+                column: "device_id");
 
             migrationBuilder.CreateIndex(
                 name: "IX_trip_tests_source",
@@ -51,7 +51,7 @@ namespace TripTestLog.Migrations.Migrations
         protected override void Down(MigrationBuilder migrationBuilder)
         {
             migrationBuilder.DropIndex(
-                name: "IX_trip_tests_device_order",
+                name: "IX_trip_tests_device",
                 table: "trip_tests");
 
             migrationBuilder.DropIndex(
