@@ -83,7 +83,8 @@ internal sealed partial class CsvRecordFile
         return (head, count);
     }
 
-    private static string? CheckText(byte[] head, int read)
+    /// <summary>Why the first block of a file shows it is no UTF-8 text record file, or null.</summary>
+    internal static string? CheckText(byte[] head, int read)
     {
         if (read == 0)
         {

@@ -65,37 +65,6 @@ public static class RecordFileReader
             read = stream.ReadAtLeast(head, head.Length, throwOnEndOfStream: false);
         }
 
-        if (read == 0)
-        {
-            return "the file is empty; a record file needs a header row and at least one data row";
-        }
-
-        if (Array.IndexOf(head, (byte)0, 0, read) >= 0)
-        {
-            return "this is not a text file (it holds NUL bytes); export the records as UTF-8 CSV";
-        }
-
-        try
-        {
-            new UTF8Encoding(false, throwOnInvalidBytes: true).GetCharCount(head, 0, TrimPartialCharacter(head, read));
-        }
-        catch (DecoderFallbackException)
-        {
-            return "the file is not UTF-8 text (it may be a spreadsheet or another encoding); save it as CSV UTF-8";
-        }
-
-        return null;
-    }
-
-    // The 8 KB sample may end inside a multi-byte character; do not count that as invalid.
-    private static int TrimPartialCharacter(byte[] bytes, int count)
-    {
-        var i = count;
-        while (i > 0 && count - i < 3 && (bytes[i - 1] & 0xC0) == 0x80)
-        {
-            i--;
-        }
-
-        return i > 0 && bytes[i - 1] >= 0xC0 ? i - 1 : count;
+        return CsvRecordFile.CheckText(head, read);
     }
 }
