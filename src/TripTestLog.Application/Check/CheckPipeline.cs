@@ -31,8 +31,8 @@ public static class CheckPipeline
             foreach (var trip in device.Trips)
             {
                 var result = assessor.Assess(device.History, trip.Measurement, previous);
-                var finding = instruments.Check(trip.Measurement.Instrument, trip.Measurement.TestedAt.Date, requireRegisteredInstruments);
-                yield return new JudgedTrip(trip, result.Device, result.Envelope, result.Assessment, finding);
+                var untraced = instruments.Trace(trip.Measurement.Instrument, trip.Measurement.TestedAt.Date, requireRegisteredInstruments);
+                yield return new JudgedTrip(trip, result.Device, result.Envelope, result.Assessment, TripFindings.Of(trip, result.Assessment, untraced));
                 previous = trip.Measurement;
             }
         }

@@ -40,4 +40,13 @@ public static class TextCodes
         (Settings.IdmtCurve.IeeeModeratelyInverse, "ieee-moderately-inverse"),
         (Settings.IdmtCurve.IeeeVeryInverse, "ieee-very-inverse"),
         (Settings.IdmtCurve.IeeeExtremelyInverse, "ieee-extremely-inverse"));
+
+    /// <summary>Finding kinds, as documented in the README.</summary>
+    public static CodeBook<FindingKind> FindingKind { get; } = new("finding kind",
+        (Codes.FindingKind.TripOutOfBand, "trip-out-of-band"),
+        (Codes.FindingKind.CalibrationLapsed, "calibration-lapsed"),
+        (Codes.FindingKind.InstrumentUnregistered, "instrument-unregistered"));
+
+    /// <summary>Finding severities, in rising order.</summary>
+    public static CodeBook<Severity> Severity { get; } = new("severity", (Codes.Severity.Investigate, "investigate"), (Codes.Severity.Act, "act"));
 }
