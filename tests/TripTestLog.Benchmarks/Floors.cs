@@ -62,6 +62,63 @@ internal static class Floors
         return rows;
     }
 
+    /// <summary>
+    /// A diagnostic, not a floor of the targets: the same raw insert into the project's own trip table (its columns,
+    /// indexes and a hex fingerprint), to tell what the table costs from what the import's code costs.
+    /// </summary>
+    public static long InsertIntoProjectSchema(string db, IReadOnlyList<string> files)
+    {
+        using var connection = new SqliteConnection($"Data Source={db};Pooling=False");
+        connection.Open();
+        Execute(connection, "PRAGMA journal_mode=WAL; PRAGMA synchronous=NORMAL; PRAGMA cache_size=-262144; PRAGMA temp_store=MEMORY;");
+        Execute(connection, "INSERT INTO source_files (file_name, sha256, kind, rows_read, records_added, duplicates, imported_at) VALUES ('x', 'x', 'TripTests', 0, 0, 0, '2026-12-02T00:00:00Z')");
+        var ids = new Dictionary<string, long>(StringComparer.Ordinal);
+        using (var select = connection.CreateCommand())
+        {
+            select.CommandText = "SELECT asset_tag, id FROM devices";
+            using var reader = select.ExecuteReader();
+            while (reader.Read())
+            {
+                ids[reader.GetString(0)] = reader.GetInt64(1);
+            }
+        }
+
+        long rows = 0;
+        foreach (var file in files)
+        {
+            using var transaction = connection.BeginTransaction();
+            using var insert = connection.CreateCommand();
+            insert.Transaction = transaction;
+            insert.CommandText = "INSERT OR IGNORE INTO trip_tests (device_id, tested_at, stage, pole, current_a, tripped, time_s, start, ambient_c, instrument, technician, note, "
+                + "source_file_id, source_line, fingerprint) VALUES ($a, $b, $c, $d, $e, 1, $f, $g, $h, $i, $j, $k, (SELECT MAX(id) FROM source_files), $line, $key)";
+            var p = new[] { "$a", "$b", "$c", "$d", "$e", "$f", "$g", "$h", "$i", "$j", "$k", "$line", "$key" }.Select(n => insert.Parameters.Add(n, SqliteType.Text)).ToArray();
+            insert.Prepare();
+            long lineNo = 1;
+            foreach (var line in File.ReadLines(file).Skip(1))
+            {
+                var f = line.Split(',');
+                p[0].Value = ids[f[0]];
+                p[1].Value = f[1] + ":00";
+                p[2].Value = f[2];
+                p[3].Value = f[3];
+                p[4].Value = double.Parse(f[4], CultureInfo.InvariantCulture);
+                p[5].Value = double.Parse(f[5], CultureInfo.InvariantCulture);
+                p[6].Value = f[7];
+                p[7].Value = double.Parse(f[8], CultureInfo.InvariantCulture);
+                p[8].Value = f[9];
+                p[9].Value = f[10];
+                p[10].Value = f[11];
+                p[11].Value = ++lineNo;
+                p[12].Value = Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(line)).AsSpan(0, 16));
+                rows += insert.ExecuteNonQuery();
+            }
+
+            transaction.Commit();
+        }
+
+        return rows;
+    }
+
     /// <summary>Reads the project's stored trip rows back in device and time order and writes each as a JSON line.</summary>
     public static long ReadAsJson(string db, string output)
     {
@@ -108,9 +165,10 @@ internal static class Floors
         return rows;
     }
 
-    private static void Execute(SqliteConnection connection, string sql)
+    private static void Execute(SqliteConnection connection, string sql, SqliteTransaction? transaction = null)
     {
         using var command = connection.CreateCommand();
+        command.Transaction = transaction;
         command.CommandText = sql;
         command.ExecuteNonQuery();
     }

@@ -14,6 +14,8 @@ namespace TripTestLog.Benchmarks;
 /// step's peak memory is its own) the raw SQLite insert floor, the project's import, a re-import, the raw read floor and
 /// check with JSON output, and prints rows per second, the ratios to the floors and peak memory.
 /// Usage: dotnet run -c Release --project tests/TripTestLog.Benchmarks -- [--rows 100000,300000,1000000] [--devices 10000] [--files 20] [--work DIR]
+/// Diagnostic steps, run one at a time on a fleet written with --step generate: --step NAME --work DIR, where NAME is
+/// floor-schema (the raw insert into the project's own table), parse-only, rows-only, open-only, read-only, judge-only.
 /// </summary>
 internal static class Program
 {
@@ -147,6 +149,16 @@ internal static class Program
                     }
                 }
 
+                break;
+            case "floor-schema":
+                var schemaDb = Path.Combine(work, "schema-floor.db");
+                using (var store = RecordStore.Open(schemaDb))
+                {
+                    new ImportPipeline(store).Import(new CsvRecordFileSource(Path.Combine(records, "register.csv"), ReadOptions.Default), ImportOptions.Strict, today, now);
+                }
+
+                clock.Restart();
+                rows = Floors.InsertIntoProjectSchema(schemaDb, trips);
                 break;
             case "parse-only":
                 rows = 0;
