@@ -198,13 +198,8 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
         return correction.Changes.Any() ? correction : null;
     }
 
-    private static AssetTag TagOf(object measurement) => measurement switch
-    {
-        TripMeasurement t => t.Tag,
-        ContactMeasurement c => c.Tag,
-        InsulationMeasurement i => i.Tag,
-        _ => throw new ArgumentOutOfRangeException(nameof(measurement), measurement.GetType().Name, "not a measurement"),
-    };
+    private static AssetTag TagOf(object record) =>
+        record is IMeasurement m ? m.Tag : throw new ArgumentOutOfRangeException(nameof(record), record.GetType().Name, "not a measurement");
 
     // The device dictionary is only read once the batch has begun, so preparing rows on another thread is safe.
     private sealed record Prepared(MeasurementRow Row) : PreparedRow(Row.Line);

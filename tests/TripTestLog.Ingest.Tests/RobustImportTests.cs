@@ -28,14 +28,7 @@ public sealed class RobustImportTests
         return (store, temp.Database);
     }
 
-    private static long Count(string db, string sql)
-    {
-        using var connection = new SqliteConnection($"Data Source={db};Pooling=False");
-        connection.Open();
-        using var command = connection.CreateCommand();
-        command.CommandText = sql;
-        return (long)command.ExecuteScalar()!;
-    }
+    private static long Count(string db, string sql) => Sql.Count(db, sql);
 
     [Fact]
     public void AcceptValid_StoresTheGoodRows_AccountsForEveryRow_AndWritesTheRefusedOnesUnchanged()

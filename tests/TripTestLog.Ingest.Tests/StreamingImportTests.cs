@@ -26,14 +26,7 @@ public sealed class StreamingImportTests
         return temp.Write("big.csv", sb.ToString());
     }
 
-    private static long Count(string db, string sql)
-    {
-        using var connection = new SqliteConnection($"Data Source={db};Pooling=False");
-        connection.Open();
-        using var command = connection.CreateCommand();
-        command.CommandText = sql;
-        return (long)command.ExecuteScalar()!;
-    }
+    private static long Count(string db, string sql) => Sql.Count(db, sql);
 
     [Fact]
     public void AStrictFileWithOneBadRowNearItsEnd_StoresNothing_AndNamesTheRow()

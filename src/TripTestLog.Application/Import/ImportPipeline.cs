@@ -187,13 +187,8 @@ public sealed class ImportPipeline(IImportStore store)
         }
     }
 
-    private static AssetTag TagOf(object record) => record switch
-    {
-        TripMeasurement t => t.Tag,
-        ContactMeasurement c => c.Tag,
-        InsulationMeasurement i => i.Tag,
-        _ => throw new ArgumentOutOfRangeException(nameof(record), record.GetType().Name, "not a measurement"),
-    };
+    private static AssetTag TagOf(object record) =>
+        record is IMeasurement m ? m.Tag : throw new ArgumentOutOfRangeException(nameof(record), record.GetType().Name, "not a measurement");
 
     private static ImportOutcome Refused(string path, RecordKind? kind, long rows, IReadOnlyList<RowProblem> problems) =>
         new(path, kind, ImportStatus.Refused, rows, 0, 0, 0, problems) { RefusedRows = rows };

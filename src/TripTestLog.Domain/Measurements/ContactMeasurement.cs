@@ -22,4 +22,4 @@ public sealed record ContactMeasurement(
     Amperes TestCurrent,
     Celsius? Temperature,
     string Instrument,
-    string Technician);
+    string Technician) : IMeasurement;

@@ -20,4 +20,4 @@ public sealed record InsulationMeasurement(
     Volts TestVoltage,
     InsulationReading Resistance,
     Celsius? Temperature,
-    Seconds? Duration);
+    Seconds? Duration) : IMeasurement;

@@ -27,7 +27,7 @@ public sealed record TripMeasurement(
     Celsius? Ambient,
     string Instrument,
     string Technician,
-    string Note)
+    string Note) : IMeasurement
 {
     /// <summary>Settings read off the device at this test, when the record carries them.</summary>
     public SettingsFound? FoundSettings { get; init; }
