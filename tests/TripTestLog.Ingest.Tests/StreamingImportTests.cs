@@ -99,6 +99,20 @@ public sealed class StreamingImportTests
         Assert.Equal(2_000, Count(temp.Database, "SELECT COUNT(*) FROM trip_tests"));
     }
 
+    [Fact]
+    public void AFileGoneBeforeItIsOpened_IsRefusedWithAPlainReason()
+    {
+        using var temp = new TempFolder();
+        using var store = RecordStore.Open(temp.Database);
+        var path = temp.Write("gone.csv", Records.Trips);
+        File.Delete(path);
+
+        var outcome = store.Import(path, Now);
+
+        Assert.Equal(ImportStatus.Refused, outcome.Status);
+        Assert.Contains("cannot be opened", Assert.Single(outcome.Problems).Reason);
+    }
+
     // Cancels the token once a number of rows has been read, as Ctrl+C would in the middle of a file.
     private sealed class CountingSource(IRecordFileSource inner, int after, CancellationTokenSource cancel) : IRecordFileSource
     {

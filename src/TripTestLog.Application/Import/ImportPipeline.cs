@@ -32,7 +32,18 @@ public sealed class ImportPipeline(IImportStore store)
     {
         ArgumentNullException.ThrowIfNull(source);
         ArgumentNullException.ThrowIfNull(options);
-        using var file = source.Open(today);
+        IRecordFile file;
+        try
+        {
+            file = source.Open(today);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            // Gone, locked or unreadable since it was listed: refused with the system's reason, never a stack trace.
+            return Refused(source.Path, null, 0, [new RowProblem(source.Path, 1, "", $"the file cannot be opened ({e.Message}); check that it exists and can be read")]);
+        }
+
+        using var _ = file;
         return file.Kind switch
         {
             RecordKind.TripTests or RecordKind.ContactResistance or RecordKind.InsulationResistance => Measurements(file, file.Kind.Value, options, now, cancel),
