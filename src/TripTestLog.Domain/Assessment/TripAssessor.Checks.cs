@@ -62,7 +62,7 @@ public sealed partial class TripAssessor
         var k = (LabPolicy.AmbientShiftPerKelvin * 100).ToString("0.#", CultureInfo.InvariantCulture);
         if (!Changes(assessment.Verdict, shifted))
         {
-            return Math.Abs(delta) <= LabPolicy.AmbientNoteKelvin ? null : assessment with
+            return Math.Abs(delta) <= ambientNoteKelvin ? null : assessment with
             {
                 Notes = [.. assessment.Notes, $"ambient {ambient} is {Math.Abs(delta):0.#} K from the {r} reference and the device has no derating table; "
                     + $"the verdict holds with a shift of up to {k} % of current per K"],

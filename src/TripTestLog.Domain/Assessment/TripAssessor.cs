@@ -14,7 +14,11 @@ namespace TripTestLog.Domain.Assessment;
 /// records leave in doubt, under the ambient shift a thermal release may have without a derating table, or (on an RCBO
 /// loaded on one pole) by the residual-current release, is not assessable, and the reason says why.
 /// </summary>
-public sealed partial class TripAssessor(IReadOnlyDictionary<string, CurveTable> curveTables, IReadOnlyDictionary<string, AmbientTable> ambientTables)
+/// <param name="curveTables">Curve tables by name.</param>
+/// <param name="ambientTables">Ambient tables by name.</param>
+/// <param name="ambientNoteKelvin">How far from the reference ambient a surviving thermal verdict still carries a note, in kelvin.</param>
+public sealed partial class TripAssessor(IReadOnlyDictionary<string, CurveTable> curveTables, IReadOnlyDictionary<string, AmbientTable> ambientTables,
+    double ambientNoteKelvin = LabPolicy.AmbientNoteKelvin)
 {
     private readonly Dictionary<(Device, DeviceSettings, double), ITripEnvelope> _envelopes = [];
 

@@ -1,3 +1,4 @@
+using TripTestLog.Domain.Condition;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Settings;
@@ -44,9 +45,31 @@ public static class TextCodes
     /// <summary>Finding kinds, as documented in the README.</summary>
     public static CodeBook<FindingKind> FindingKind { get; } = new("finding kind",
         (Codes.FindingKind.TripOutOfBand, "trip-out-of-band"),
+        (Codes.FindingKind.TripDrift, "trip-drift"),
+        (Codes.FindingKind.TripTrendExit, "trip-trend-exit"),
+        (Codes.FindingKind.PeerOutlier, "peer-outlier"),
+        (Codes.FindingKind.ContactOverLimit, "contact-over-limit"),
+        (Codes.FindingKind.ContactPoleSpread, "contact-pole-spread"),
+        (Codes.FindingKind.ContactRise, "contact-rise"),
+        (Codes.FindingKind.ContactTrendLimit, "contact-trend-limit"),
+        (Codes.FindingKind.ContactLowTestCurrent, "contact-low-test-current"),
+        (Codes.FindingKind.InsulationBelowMinimum, "insulation-below-minimum"),
+        (Codes.FindingKind.InsulationFalling, "insulation-falling"),
         (Codes.FindingKind.CalibrationLapsed, "calibration-lapsed"),
-        (Codes.FindingKind.InstrumentUnregistered, "instrument-unregistered"));
+        (Codes.FindingKind.InstrumentUnregistered, "instrument-unregistered"),
+        (Codes.FindingKind.SettingsDiffer, "settings-differ"),
+        (Codes.FindingKind.TestOverdue, "test-overdue"));
 
     /// <summary>Finding severities, in rising order.</summary>
-    public static CodeBook<Severity> Severity { get; } = new("severity", (Codes.Severity.Investigate, "investigate"), (Codes.Severity.Act, "act"));
+    public static CodeBook<Severity> Severity { get; } = new("severity",
+        (Codes.Severity.Investigate, "investigate"), (Codes.Severity.Plan, "plan"), (Codes.Severity.Act, "act"), (Codes.Severity.OutOfService, "out-of-service"));
+
+    /// <summary>Condition grades, best first.</summary>
+    public static CodeBook<ConditionGrade> Grade { get; } = new("condition grade",
+        (ConditionGrade.Sound, "sound"), (ConditionGrade.Watch, "watch"), (ConditionGrade.PlanWork, "plan-work"),
+        (ConditionGrade.Repair, "repair"), (ConditionGrade.TakeOutOfService, "take-out-of-service"));
+
+    /// <summary>Insulation minimum tables a lab may choose.</summary>
+    public static CodeBook<InsulationTable> InsulationTable { get; } = new("insulation table",
+        (Condition.InsulationTable.NetaMaintenance, "neta"), (Condition.InsulationTable.Iec60364Installation, "iec60364-6"));
 }
