@@ -73,6 +73,7 @@ internal static class OtherLayouts
                      ("INJ-ARW-1", "primary injection set", "PIS-20417"), ("INJ-ARW-2", "primary injection set", "PIS-31190"),
                      ("INJ-BPS-1", "primary injection set", "PIS-20988"), ("INJ-BPS-2", "primary injection set", "PIS-31422"),
                      ("OHM-ARW-1", "micro-ohm meter", "MOM-5521"), ("OHM-BPS-1", "micro-ohm meter", "MOM-5530"),
+                     ("INJ-CWD-1", "primary injection set", "PIS-40213"), ("OHM-CWD-1", "micro-ohm meter", "MOM-6604"),
                  })
         {
             for (var year = 2020; year <= 2026; year++)
@@ -84,6 +85,12 @@ internal static class OtherLayouts
                 if (name == "INJ-BPS-1" && year == 2024)
                 {
                     due = new DateOnly(2025, 8, 31);
+                }
+
+                // Copperwell's ohmmeter went back for calibration late in 2026: its May readings are untraceable.
+                if (name == "OHM-CWD-1" && year == 2026)
+                {
+                    on = new DateOnly(2026, 6, 1);
                 }
 
                 sb.Append(string.Join(',', name, kind, serial, Iso(on), Iso(due))).Append('\n');

@@ -32,6 +32,10 @@ internal static class SampleFleet
         written.Add(Write(Path.Combine(folder, "device-register.csv"), Register(fleet, random)));
         written.Add(Write(Path.Combine(folder, "curve-tables.csv"), new StringBuilder(IndustrialFleet.CurveTables())));
         written.Add(Write(Path.Combine(folder, "ambient-tables.csv"), new StringBuilder(IndustrialFleet.AmbientTables())));
+        written.Add(Write(Path.Combine(folder, "lab-policy.conf"), new StringBuilder(
+            "# The invented labs' policy: the shipped defaults (see `triptestlog policy`), except that every instrument\n"
+            + "# must be in the instrument register. The demo puts this file beside its database.\n"
+            + "require_registered_instruments = yes\n")));
         var industrial = new Random(Seed + 1);
         for (var site = 0; site < SiteNames.Length; site++)
         {
@@ -49,7 +53,7 @@ internal static class SampleFleet
             }
         }
 
-        foreach (var (relative, content) in OtherLayouts.Files(new Random(Seed + 2)))
+        foreach (var (relative, content) in OtherLayouts.Files(new Random(Seed + 2)).Concat(DepotFleet.Files()))
         {
             var path = Path.Combine(folder, relative);
             Directory.CreateDirectory(Path.GetDirectoryName(path)!);
@@ -101,7 +105,7 @@ internal static class SampleFleet
                 F(voltage, "0"), commissioned.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture), F(ContactLimit(d), "0"), make, model, serial + IndustrialFleet.EmptyTail);
         }
 
-        foreach (var row in IndustrialFleet.RegisterRows())
+        foreach (var row in IndustrialFleet.RegisterRows().Concat(DepotFleet.RegisterRows(IndustrialFleet.EmptyTail)))
         {
             sb.Append(row).Append('\n');
         }
@@ -216,13 +220,26 @@ internal static class SampleFleet
                 .Concat(d.Poles > 1 ? Enumerable.Range(1, d.Poles - 1).Select(p => $"{p}-{p + 1}") : []);
             foreach (var path in paths)
             {
-                var r = 800 * Math.Exp(random.NextDouble() * 3.0);
+                // Each path keeps its own level from year to year, within ±10 %: healthy insulation does not wander.
+                var r = PathLevel(d.Tag, path) * (1 + (random.NextDouble() - 0.5) * 0.2);
                 var text = r > 10000 ? ">10000" : F(r, "0");
                 Row(sb, d.Tag, Iso(date), "as-found", path, "500", text, F(16 + random.NextDouble() * 8, "0.0"), "60");
             }
         }
 
         return sb;
+    }
+
+    /// <summary>A path's own insulation level, 800 MOhm to about 16 GOhm, fixed by its name rather than drawn in sequence.</summary>
+    private static double PathLevel(string tag, string path)
+    {
+        var hash = 17u;
+        foreach (var c in tag + "|" + path)
+        {
+            hash = hash * 31 + c;
+        }
+
+        return 800 * Math.Exp(hash % 1000 / 1000.0 * 3.0);
     }
 
     /// <summary>An invented typical contact resistance: roughly inverse to the rating, as for small breakers.</summary>
