@@ -25,23 +25,31 @@ public sealed partial class RecordStore : ITripSource
         + "WHERE $tag IS NULL OR d.asset_tag = $tag "
         + "ORDER BY d.asset_tag, t.tested_at, t.source_file_id, t.source_line";
 
+    /// <summary>Contact readings by device, then test time: found by their (device_id, tested_at) index, as the trips are.</summary>
+    internal const string ContactsInDeviceOrder =
+        "SELECT d.asset_tag, c.tested_at, c.stage, c.pole, c.resistance_uohm, c.test_current_a, c.temperature_c, c.instrument, c.technician, "
+        + "c.source_file_id, c.source_line FROM devices d CROSS JOIN contact_tests c ON c.device_id = d.id "
+        + "WHERE $tag IS NULL OR d.asset_tag = $tag ORDER BY d.asset_tag, c.tested_at, c.source_file_id, c.source_line";
+
+    /// <summary>Insulation readings by device, then test time.</summary>
+    internal const string InsulationInDeviceOrder =
+        "SELECT d.asset_tag, i.tested_at, i.stage, i.path, i.test_voltage_v, i.resistance_mohm, i.over_range, i.temperature_c, i.duration_s, "
+        + "i.source_file_id, i.source_line FROM devices d CROSS JOIN insulation_tests i ON i.device_id = d.id "
+        + "WHERE $tag IS NULL OR d.asset_tag = $tag ORDER BY d.asset_tag, i.tested_at, i.source_file_id, i.source_line";
+
     /// <inheritdoc />
-    public IEnumerable<DeviceRecords> Devices(AssetTag? only = null)
+    public IEnumerable<DeviceRecords> Devices(AssetTag? only = null, bool withResistance = false)
     {
-        using var revisions = _connection.CreateCommand();
-        revisions.CommandText =
+        using var revisions = TagQuery(
             $"SELECT d.asset_tag, {string.Join(", ", RegisterColumns.Split(", ").Select(c => "r." + c))} "
-            + "FROM device_revisions r JOIN devices d ON d.id = r.device_id WHERE $tag IS NULL OR d.asset_tag = $tag ORDER BY d.asset_tag, r.id";
-        revisions.Parameters.AddWithValue("$tag", (object?)only?.Value ?? DBNull.Value);
-        using var trips = _connection.CreateCommand();
-        trips.CommandText = TripsInDeviceOrder;
-        trips.Parameters.AddWithValue("$tag", (object?)only?.Value ?? DBNull.Value);
+            + "FROM device_revisions r JOIN devices d ON d.id = r.device_id WHERE $tag IS NULL OR d.asset_tag = $tag ORDER BY d.asset_tag, r.id", only);
         var files = SourceFileNames();
-        using var entries = revisions.ExecuteReader();
-        using var tests = trips.ExecuteReader();
-        var moreEntries = entries.Read();
-        var moreTests = tests.Read();
         var tags = new TagCache();
+        using var entries = revisions.ExecuteReader();
+        using var trips = new TagStream<StoredTrip>(TagQuery(TripsInDeviceOrder, only), r => ReadTrip(r, tags, files));
+        using var contacts = withResistance ? new TagStream<StoredMeasurement<ContactMeasurement>>(TagQuery(ContactsInDeviceOrder, only), r => ReadContact(r, tags, files)) : null;
+        using var insulation = withResistance ? new TagStream<StoredMeasurement<InsulationMeasurement>>(TagQuery(InsulationInDeviceOrder, only), r => ReadInsulation(r, tags, files)) : null;
+        var moreEntries = entries.Read();
         while (moreEntries)
         {
             var tag = entries.GetString(0);
@@ -52,20 +60,20 @@ public sealed partial class RecordStore : ITripSource
                 moreEntries = entries.Read();
             }
 
-            var list = new List<StoredTrip>();
-            while (moreTests && string.CompareOrdinal(tests.GetString(0), tag) <= 0)
+            yield return new DeviceRecords(new DeviceHistory(history), trips.Take(tag))
             {
-                // Both queries order by the same binary collation, so a test's device is never behind the register.
-                if (string.Equals(tests.GetString(0), tag, StringComparison.Ordinal))
-                {
-                    list.Add(ReadTrip(tests, tags, files));
-                }
-
-                moreTests = tests.Read();
-            }
-
-            yield return new DeviceRecords(new DeviceHistory(history), list);
+                Contacts = contacts?.Take(tag) ?? [],
+                Insulation = insulation?.Take(tag) ?? [],
+            };
         }
+    }
+
+    private SqliteCommand TagQuery(string sql, AssetTag? only)
+    {
+        var command = _connection.CreateCommand();
+        command.CommandText = sql;
+        command.Parameters.AddWithValue("$tag", (object?)only?.Value ?? DBNull.Value);
+        return command;
     }
 
     private Dictionary<long, string> SourceFileNames()
@@ -110,6 +118,29 @@ public sealed partial class RecordStore : ITripSource
         };
         return new StoredTrip(assetTag, measurement, files[r.GetInt64(12)], r.GetInt64(13));
     }
+
+    private static StoredMeasurement<ContactMeasurement> ReadContact(SqliteDataReader r, TagCache tags, Dictionary<long, string> files) =>
+        new(new ContactMeasurement(
+            tags.Of(r.GetString(0)),
+            TestedAt.Parse(r.GetString(1)),
+            Codes.Stage(r.GetString(2)),
+            Pole.Parse(r.GetString(3)),
+            MicroOhms.Of(r.GetDouble(4)),
+            Amperes.Of(r.GetDouble(5)),
+            r.IsDBNull(6) ? null : Celsius.Of(r.GetDouble(6)),
+            r.GetString(7),
+            r.GetString(8)), files[r.GetInt64(9)], r.GetInt64(10));
+
+    private static StoredMeasurement<InsulationMeasurement> ReadInsulation(SqliteDataReader r, TagCache tags, Dictionary<long, string> files) =>
+        new(new InsulationMeasurement(
+            tags.Of(r.GetString(0)),
+            TestedAt.Parse(r.GetString(1)),
+            Codes.Stage(r.GetString(2)),
+            r.GetString(3),
+            Volts.Of(r.GetDouble(4)),
+            new InsulationReading(MegaOhms.Of(r.GetDouble(5)), r.GetBoolean(6)),
+            r.IsDBNull(7) ? null : Celsius.Of(r.GetDouble(7)),
+            r.IsDBNull(8) ? null : Seconds.Of(r.GetDouble(8))), files[r.GetInt64(9)], r.GetInt64(10));
 
     // A device's tests share one tag value instead of each allocating its own.
     private sealed class TagCache

@@ -1,6 +1,4 @@
-using TripTestLog.Domain.Assessment;
 using TripTestLog.Domain.Devices;
-using TripTestLog.Domain.Measurements;
 
 namespace TripTestLog.Application.Check;
 
@@ -18,22 +16,13 @@ public static class CheckPipeline
         CancellationToken cancel = default)
     {
         ArgumentNullException.ThrowIfNull(source);
-        var curves = source.CurveTables();
-        var ambients = source.AmbientTables();
-        var instruments = source.Instruments();
+        var judge = DeviceJudge.For(source, requireRegisteredInstruments);
         foreach (var device in source.Devices(only))
         {
             cancel.ThrowIfCancellationRequested();
-
-            // One assessor per device: its envelope cache then holds that device's settings only.
-            var assessor = new TripAssessor(curves, ambients);
-            TripMeasurement? previous = null;
-            foreach (var trip in device.Trips)
+            foreach (var judged in judge.Judge(device))
             {
-                var result = assessor.Assess(device.History, trip.Measurement, previous);
-                var untraced = instruments.Trace(trip.Measurement.Instrument, trip.Measurement.TestedAt.Date, requireRegisteredInstruments);
-                yield return new JudgedTrip(trip, result.Device, result.Envelope, result.Assessment, TripFindings.Of(trip, result.Assessment, untraced));
-                previous = trip.Measurement;
+                yield return judged;
             }
         }
     }

@@ -1,6 +1,7 @@
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Envelopes;
 using TripTestLog.Domain.Instruments;
+using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Settings;
 
 namespace TripTestLog.Application.Check;
@@ -10,9 +11,10 @@ public interface ITripSource
 {
     /// <summary>
     /// Every registered device, in asset-tag order, each with its register history and its trip tests in test-time
-    /// order; streamed, so only one device is held at a time. <paramref name="only"/> limits it to one device.
+    /// order; streamed, so only one device is held at a time. <paramref name="only"/> limits it to one device;
+    /// <paramref name="withResistance"/> adds its contact and insulation readings.
     /// </summary>
-    IEnumerable<DeviceRecords> Devices(AssetTag? only = null);
+    IEnumerable<DeviceRecords> Devices(AssetTag? only = null, bool withResistance = false);
 
     /// <summary>Every curve table, each as the newest imported file defines it.</summary>
     IReadOnlyDictionary<string, CurveTable> CurveTables();
@@ -27,4 +29,11 @@ public interface ITripSource
 /// <summary>One device as the store holds it: its register entries and its trip tests.</summary>
 /// <param name="History">Every register entry the device has had.</param>
 /// <param name="Trips">Its trip tests, by test time, then as imported.</param>
-public sealed record DeviceRecords(DeviceHistory History, IReadOnlyList<StoredTrip> Trips);
+public sealed record DeviceRecords(DeviceHistory History, IReadOnlyList<StoredTrip> Trips)
+{
+    /// <summary>Its contact resistance readings by test time, when asked for.</summary>
+    public IReadOnlyList<StoredMeasurement<ContactMeasurement>> Contacts { get; init; } = [];
+
+    /// <summary>Its insulation readings by test time, when asked for.</summary>
+    public IReadOnlyList<StoredMeasurement<InsulationMeasurement>> Insulation { get; init; } = [];
+}

@@ -21,7 +21,7 @@ internal static class TripFindings
         if (assessment.IsFailure)
         {
             var edge = assessment.Verdict == Verdict.TooEarly ? assessment.Band.Minimum : assessment.Band.Maximum;
-            findings.Add(new Finding(FindingKind.TripOutOfBand, Severity.Act, m.Tag, m.TestedAt, edge.Requirement, assessment.Reason, [source]));
+            findings.Add(new Finding(FindingKind.TripOutOfBand, assessment.Verdict == Verdict.TooLate ? Severity.OutOfService : Severity.Act, m.Tag, m.TestedAt, edge.Requirement, assessment.Reason, [source]));
         }
 
         if (untraced is not null)

@@ -22,7 +22,38 @@ public sealed record Finding(
     TestedAt TestedAt,
     string Basis,
     string Message,
-    IReadOnlyList<RecordSource> RestsOn);
+    IReadOnlyList<RecordSource> RestsOn)
+{
+    /// <summary>The pole it concerns (contact resistance), when it concerns one.</summary>
+    public string? Pole { get; init; }
+
+    /// <summary>The insulation path it concerns, when it concerns one.</summary>
+    public string? Path { get; init; }
+
+    /// <summary>The trip test point it concerns, e.g. "2.55 In cold", when it concerns one.</summary>
+    public string? Point { get; init; }
+
+    /// <summary>The value the rule judged, with its unit.</summary>
+    public Reading? Value { get; init; }
+
+    /// <summary>The limit it was judged against, in the same unit.</summary>
+    public Reading? Limit { get; init; }
+
+    /// <summary>The lab policy setting the rule used, as "key = value"; null when the rule rests on a standard alone.</summary>
+    public string? Policy { get; init; }
+
+    /// <summary>The first test of the run of tests that raised it.</summary>
+    public DateOnly? FirstSeen { get; init; }
+
+    /// <summary>For a forecast, the date the trend reaches the edge or limit.</summary>
+    public DateOnly? ForecastOn { get; init; }
+
+    /// <summary>False once a later as-found test no longer raises it.</summary>
+    public bool Open { get; init; } = true;
+
+    /// <summary>What changed its standing: the later test that closed it, or the as-left test that confirms a repair.</summary>
+    public string? Standing { get; init; }
+}
 
 /// <summary>Where a stored record came from.</summary>
 /// <param name="File">The file it was imported from.</param>

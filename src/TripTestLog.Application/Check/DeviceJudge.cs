@@ -1,0 +1,35 @@
+using TripTestLog.Domain.Assessment;
+using TripTestLog.Domain.Envelopes;
+using TripTestLog.Domain.Instruments;
+using TripTestLog.Domain.Measurements;
+using TripTestLog.Domain.Settings;
+
+namespace TripTestLog.Application.Check;
+
+/// <summary>Judges one device's trip tests with the tables and instruments of the store: shared by check and findings.</summary>
+/// <param name="Curves">Curve tables by name.</param>
+/// <param name="Ambients">Ambient tables by name.</param>
+/// <param name="Instruments">The instrument register.</param>
+/// <param name="RequireRegisteredInstruments">Whether an instrument missing from the register is a finding.</param>
+/// <param name="AmbientNoteKelvin">How far from the reference ambient a thermal verdict carries a note.</param>
+internal sealed record DeviceJudge(IReadOnlyDictionary<string, CurveTable> Curves, IReadOnlyDictionary<string, AmbientTable> Ambients,
+    InstrumentRegister Instruments, bool RequireRegisteredInstruments, double AmbientNoteKelvin = LabPolicy.AmbientNoteKelvin)
+{
+    public static DeviceJudge For(ITripSource source, bool requireRegisteredInstruments, double ambientNoteKelvin = LabPolicy.AmbientNoteKelvin) =>
+        new(source.CurveTables(), source.AmbientTables(), source.Instruments(), requireRegisteredInstruments, ambientNoteKelvin);
+
+    /// <summary>The device's tests judged in test-time order, each with the test before it to check its start claim.</summary>
+    public IEnumerable<JudgedTrip> Judge(DeviceRecords device)
+    {
+        // One assessor per device: its envelope cache then holds that device's settings only.
+        var assessor = new TripAssessor(Curves, Ambients, AmbientNoteKelvin);
+        TripMeasurement? previous = null;
+        foreach (var trip in device.Trips)
+        {
+            var result = assessor.Assess(device.History, trip.Measurement, previous);
+            var untraced = Instruments.Trace(trip.Measurement.Instrument, trip.Measurement.TestedAt.Date, RequireRegisteredInstruments);
+            yield return new JudgedTrip(trip, result.Device, result.Envelope, result.Assessment, TripFindings.Of(trip, result.Assessment, untraced));
+            previous = trip.Measurement;
+        }
+    }
+}

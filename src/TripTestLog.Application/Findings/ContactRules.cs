@@ -1,0 +1,247 @@
+using System.Globalization;
+using TripTestLog.Application.Check;
+using TripTestLog.Domain.Codes;
+using TripTestLog.Domain.Condition;
+using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Instruments;
+using TripTestLog.Domain.Measurements;
+using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Trends;
+
+namespace TripTestLog.Application.Findings;
+
+/// <summary>
+/// The findings a device's contact resistance readings raise. Each test's readings of a pole are referred to 20 °C
+/// (copper, IEC 60228) where a temperature is recorded, and the median kept: labs often take three readings, operating
+/// the breaker between them (common practice).
+/// </summary>
+internal static class ContactRules
+{
+    /// <summary>One pole at one test: the median of its readings.</summary>
+    internal sealed record PoleResult(AssetTag Tag, string Pole, TestedAt At, TestStage Stage, double Corrected, double Measured, bool TemperatureKnown,
+        double TestCurrent, string Instrument, IReadOnlyList<RecordSource> Sources);
+
+    /// <summary>The tests, each as its poles' results, in time order (as-found before as-left on a day).</summary>
+    public static IEnumerable<List<PoleResult>> Sessions(IReadOnlyList<StoredMeasurement<ContactMeasurement>> readings) =>
+        readings.GroupBy(r => (r.Measurement.TestedAt.Date, r.Measurement.Stage))
+            .OrderBy(g => g.Key.Date).ThenBy(g => g.Key.Stage)
+            .Select(g => g.GroupBy(r => r.Measurement.Pole.Code).OrderBy(p => p.Key, StringComparer.Ordinal).Select(Pole).ToList());
+
+    private static PoleResult Pole(IGrouping<string, StoredMeasurement<ContactMeasurement>> readings)
+    {
+        var list = readings.ToList();
+        var last = list[^1].Measurement;
+        var known = list.All(r => r.Measurement.Temperature is not null);
+        return new PoleResult(last.Tag, readings.Key, last.TestedAt, last.Stage,
+            RobustStatistics.Median(list.Select(r => known ? CopperCorrection.ToTwentyCelsius(r.Measurement.Resistance, r.Measurement.Temperature!.Value).Value : r.Measurement.Resistance.Value)),
+            RobustStatistics.Median(list.Select(r => r.Measurement.Resistance.Value)),
+            known,
+            list.Min(r => r.Measurement.TestCurrent.Value),
+            last.Instrument,
+            [.. list.Select(r => new RecordSource(r.SourceFile, r.SourceLine))]);
+    }
+
+    /// <summary>Over the limit, pole spread, rise over baseline, low test current and instruments, test by test.</summary>
+    public static void States(DeviceHistory history, IReadOnlyList<StoredMeasurement<ContactMeasurement>> readings, FindingLedger ledger,
+        FindingPolicy policy, InstrumentRegister instruments)
+    {
+        var baseline = new Dictionary<string, PoleResult>(StringComparer.Ordinal);
+        foreach (var session in Sessions(readings))
+        {
+            var device = history.InForceOn(session[0].At.Date);
+            var asFound = session[0].Stage == TestStage.AsFound;
+            var lowest = session.Min(p => p.Corrected);
+            foreach (var pole in session)
+            {
+                if (asFound)
+                {
+                    baseline.TryAdd(pole.Pole, pole);
+                }
+
+                OverLimit(device, pole, ledger, asFound);
+                Spread(pole, lowest, session.Count, ledger, policy, asFound);
+                Rise(baseline.GetValueOrDefault(pole.Pole), pole, ledger, policy, asFound);
+            }
+
+            if (asFound)
+            {
+                TestCurrent(device, session, ledger, policy);
+                Instrument(session, ledger, policy, instruments);
+            }
+        }
+    }
+
+    private static void OverLimit(Device device, PoleResult pole, FindingLedger ledger, bool asFound)
+    {
+        if (device.ContactLimit is not { } limit)
+        {
+            return;
+        }
+
+        var subject = "over|" + pole.Pole;
+        if (pole.Corrected > limit.Value)
+        {
+            ledger.Raise(subject, Make(FindingKind.ContactOverLimit, Severity.Act, device, pole, "the maker's contact resistance limit (register contact_limit_uohm)",
+                Invariant($"pole {pole.Pole} reads {Describe(pole)}, over the limit of {limit.Value:0} uOhm; clean and re-torque the terminations or replace the breaker"))
+                with { Value = new Reading(pole.Corrected, ReadingUnit.MicroOhms), Limit = new Reading(limit.Value, ReadingUnit.MicroOhms) });
+        }
+        else
+        {
+            Settle(ledger, subject, pole, asFound, Invariant($"reading of pole {pole.Pole} within the limit ({pole.Corrected:0} uOhm)"));
+        }
+    }
+
+    private static void Spread(PoleResult pole, double lowest, int poles, FindingLedger ledger, FindingPolicy policy, bool asFound)
+    {
+        if (poles < 2)
+        {
+            return;
+        }
+
+        var subject = "spread|" + pole.Pole;
+        var above = (pole.Corrected / lowest - 1) * 100;
+        if (above > policy.ContactSpreadPercent)
+        {
+            ledger.Raise(subject, Make(FindingKind.ContactPoleSpread, Severity.Investigate, pole.At, pole,
+                "ANSI/NETA maintenance testing specifications: investigate a pole more than 50 % above the lowest (a customary guide, not a failure)",
+                Invariant($"pole {pole.Pole} reads {above:0}% above the device's lowest pole ({pole.Corrected:0} against {lowest:0} uOhm at 20 C); investigate the connections and contacts of that pole (pole resistance alone does not predict performance)"))
+                with { Value = new Reading(above, ReadingUnit.Percent), Limit = new Reading(policy.ContactSpreadPercent, ReadingUnit.Percent),
+                    Policy = PolicyFile.Setting(policy, "contact_spread_percent") });
+        }
+        else
+        {
+            Settle(ledger, subject, pole, asFound, $"reading of pole {pole.Pole} within the spread");
+        }
+    }
+
+    private static void Rise(PoleResult? first, PoleResult pole, FindingLedger ledger, FindingPolicy policy, bool asFound)
+    {
+        if (first is null || first.At.Date >= pole.At.Date)
+        {
+            return;
+        }
+
+        var subject = "rise|" + pole.Pole;
+        var rise = (pole.Corrected / first.Corrected - 1) * 100;
+        if (rise > policy.ContactRisePercent)
+        {
+            ledger.Raise(subject, Make(FindingKind.ContactRise, Severity.Plan, pole.At, pole, "lab policy: contact resistance rise over the pole's first as-found test",
+                Invariant($"pole {pole.Pole} has risen {rise:0}% since {first.At.Date:yyyy-MM-dd} ({first.Corrected:0} to {pole.Corrected:0} uOhm at 20 C); plan cleaning and re-torquing"))
+                with { Value = new Reading(rise, ReadingUnit.Percent), Limit = new Reading(policy.ContactRisePercent, ReadingUnit.Percent),
+                    Policy = PolicyFile.Setting(policy, "contact_rise_percent"), RestsOn = [.. first.Sources, .. pole.Sources] });
+        }
+        else
+        {
+            Settle(ledger, subject, pole, asFound, $"reading of pole {pole.Pole} near its baseline");
+        }
+    }
+
+    private static void TestCurrent(Device device, List<PoleResult> session, FindingLedger ledger, FindingPolicy policy)
+    {
+        var large = device.RatedCurrent.Value >= policy.ContactLargeRating;
+        var least = large ? policy.ContactCurrentLargeAmperes : policy.ContactCurrentSmallAmperes;
+        var low = session.Where(p => p.TestCurrent < least).ToList();
+        if (low.Count == 0)
+        {
+            ledger.Clear("current", session[0].At, "test at an adequate test current");
+            return;
+        }
+
+        var current = low.Min(p => p.TestCurrent);
+        ledger.Raise("current", Make(FindingKind.ContactLowTestCurrent, Severity.Investigate, session[0].At, low[0],
+            "common practice from makers' maintenance guides (lab policy, not a standard): about 10 A under 100 A rating, 100 A at and above",
+            Invariant($"contact resistance measured at {current:0.#} A DC, below the {least:0} A usual for a {device.RatedCurrent.Value:0} A breaker; a low current can miss a film or a loose joint: repeat at the usual current")) with
+        {
+            Pole = null,
+            Value = new Reading(current, ReadingUnit.Amperes),
+            Limit = new Reading(least, ReadingUnit.Amperes),
+            Policy = PolicyFile.Setting(policy, large ? "contact_current_large_a" : "contact_current_small_a"),
+            RestsOn = [.. low.SelectMany(p => p.Sources)],
+        });
+    }
+
+    private static void Instrument(List<PoleResult> session, FindingLedger ledger, FindingPolicy policy, InstrumentRegister instruments)
+    {
+        var at = session[0].At;
+        var untraced = session.Select(p => (p, u: instruments.Trace(p.Instrument, at.Date, policy.RequireRegisteredInstruments))).FirstOrDefault(x => x.u is not null);
+        if (untraced.u is null)
+        {
+            ledger.Clear("instrument|contact", at, "contact test with a traceable instrument");
+            return;
+        }
+
+        ledger.Raise("instrument|contact", new Finding(untraced.u.Registered ? FindingKind.CalibrationLapsed : FindingKind.InstrumentUnregistered,
+            Severity.Investigate, session[0].Tag, at, "lab policy: every measurement is made with an instrument in calibration",
+            $"contact resistance tests on {at.Date:yyyy-MM-dd}: {untraced.u.Message}; confirm the instrument's accuracy or repeat the tests",
+            [.. session.SelectMany(p => p.Sources)]));
+    }
+
+    /// <summary>contact-trend-limit: a Theil–Sen line through a pole's readings since its last repair reaches the limit before <paramref name="due"/>.</summary>
+    public static void TrendLimit(DeviceHistory history, IReadOnlyList<StoredMeasurement<ContactMeasurement>> readings, FindingLedger ledger,
+        FindingPolicy policy, DateOnly due)
+    {
+        if (history.Latest.ContactLimit is not { } limit)
+        {
+            return;
+        }
+
+        var sessions = Sessions(readings).SelectMany(s => s).ToList();
+        foreach (var pole in sessions.GroupBy(p => p.Pole))
+        {
+            // Readings since the pole's last as-left test: a repair starts a new trend.
+            var list = pole.ToList();
+            var repaired = list.FindLastIndex(p => p.Stage == TestStage.AsLeft);
+            var found = list.Skip(repaired + 1).Where(p => p.Stage == TestStage.AsFound).ToList();
+            if (found.Select(p => p.At.Date).Distinct().Count() < policy.TrendMinimumTests || found[^1].Corrected > limit.Value)
+            {
+                continue;
+            }
+
+            var line = TheilSen.Fit([.. found.Select(p => new TrendPoint(TrendPoint.YearOf(p.At.Date), p.Corrected))]);
+            var until = Math.Min(TrendPoint.YearOf(due), line?.LastYear + policy.ForecastHorizonYears ?? 0);
+            if (line is null || line.Slope <= 0 || line.Reaches(limit.Value) is not { } year || year > until)
+            {
+                continue;
+            }
+
+            var uncertain = line.Spread > limit.Value * policy.ContactTrendScatterPercent / 100;
+            var on = TrendPoint.DateOf(year);
+            var last = found[^1];
+            ledger.Add(Make(FindingKind.ContactTrendLimit, uncertain ? Severity.Investigate : Severity.Plan, last.At, last,
+                $"Theil–Sen trend (Sen 1968) of {line.Count} as-found tests against the maker's limit",
+                Invariant($"pole {last.Pole} rises {line.Slope:0} uOhm a year and reaches the limit of {limit.Value:0} uOhm about {on:yyyy-MM-dd}, before the next test is due ({due:yyyy-MM-dd})")
+                    + (uncertain ? "; the readings scatter too much for the date to be trusted: retest sooner" : "; plan cleaning and re-torquing before then")) with
+            {
+                Value = new Reading(last.Corrected, ReadingUnit.MicroOhms),
+                Limit = new Reading(limit.Value, ReadingUnit.MicroOhms),
+                Policy = $"{PolicyFile.Setting(policy, "trend_min_tests")}; {PolicyFile.Setting(policy, "contact_trend_scatter_percent")}",
+                ForecastOn = on,
+                RestsOn = [.. found.SelectMany(p => p.Sources)],
+            });
+        }
+    }
+
+    private static void Settle(FindingLedger ledger, string subject, PoleResult pole, bool asFound, string what)
+    {
+        if (asFound)
+        {
+            ledger.Clear(subject, pole.At, what);
+        }
+        else
+        {
+            ledger.Confirm(subject, pole.At, what);
+        }
+    }
+
+    private static Finding Make(FindingKind kind, Severity severity, Device device, PoleResult pole, string basis, string message) =>
+        Make(kind, severity, pole.At, pole, basis, message);
+
+    private static Finding Make(FindingKind kind, Severity severity, TestedAt at, PoleResult pole, string basis, string message) =>
+        new(kind, severity, pole.Tag, at, basis, pole.Stage == TestStage.AsLeft ? "as-left: " + message : message, pole.Sources) { Pole = pole.Pole };
+
+    private static string Describe(PoleResult pole) => pole.TemperatureKnown
+        ? Invariant($"{pole.Corrected:0} uOhm at 20 C ({pole.Measured:0} uOhm as measured)")
+        : Invariant($"{pole.Measured:0} uOhm (no temperature recorded: not corrected)");
+
+    private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
+}

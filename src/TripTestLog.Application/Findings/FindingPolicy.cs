@@ -1,0 +1,89 @@
+using TripTestLog.Domain.Condition;
+using TripTestLog.Domain.Devices;
+
+namespace TripTestLog.Application.Findings;
+
+/// <summary>
+/// Every threshold the findings use, with the shipped defaults. A lab overrides them in a policy file
+/// (<see cref="PolicyFile"/>); each default says where it comes from: a source, common practice, or lab policy.
+/// </summary>
+public sealed record FindingPolicy
+{
+    /// <summary>The shipped defaults.</summary>
+    public static FindingPolicy Default { get; } = new();
+
+    /// <summary>trip-drift: a move of the trip time from baseline, either way, in per cent (lab policy: 50).</summary>
+    public double TripDriftTimePercent { get; init; } = 50;
+
+    /// <summary>trip-drift: a move of the position within the band, in per cent of the band's log width (lab policy: 30).</summary>
+    public double TripDriftBandPercent { get; init; } = 30;
+
+    /// <summary>The fewest as-found tests at distinct dates a trend rests on (the floor: 3).</summary>
+    public int TrendMinimumTests { get; init; } = 3;
+
+    /// <summary>How far past the latest test a trend may be extrapolated, in years (lab policy: 5).</summary>
+    public double ForecastHorizonYears { get; init; } = 5;
+
+    /// <summary>A trip trend whose scatter exceeds this share of the band's log width is marked uncertain (lab policy: 20 %).</summary>
+    public double TripTrendScatterBandPercent { get; init; } = 20;
+
+    /// <summary>A contact trend whose scatter exceeds this share of the limit is marked uncertain (lab policy: 10 %).</summary>
+    public double ContactTrendScatterPercent { get; init; } = 10;
+
+    /// <summary>peer-outlier: the fewest devices in a peer group, the device included (lab policy: 8).</summary>
+    public int PeerMinimumDevices { get; init; } = 8;
+
+    /// <summary>peer-outlier: the modified z-score beyond which a result is an outlier (Iglewicz and Hoaglin, 1993: 3.5).</summary>
+    public double PeerScoreLimit { get; init; } = 3.5;
+
+    /// <summary>
+    /// peer-outlier: the least distance from the peers' median, in per cent of the band's log width (lab policy: 10), so a
+    /// very consistent group does not flag a difference of no consequence.
+    /// </summary>
+    public double PeerMinimumBandPercent { get; init; } = 10;
+
+    /// <summary>contact-pole-spread: a pole this many per cent above the lowest pole (ANSI/NETA customary guide: 50).</summary>
+    public double ContactSpreadPercent { get; init; } = 50;
+
+    /// <summary>contact-rise: a rise over the pole's baseline, in per cent (lab policy: 50).</summary>
+    public double ContactRisePercent { get; init; } = 50;
+
+    /// <summary>contact-low-test-current: the least DC test current below <see cref="ContactLargeRating"/> (common practice: 10 A).</summary>
+    public double ContactCurrentSmallAmperes { get; init; } = 10;
+
+    /// <summary>contact-low-test-current: the least DC test current at and above <see cref="ContactLargeRating"/> (common practice: 100 A).</summary>
+    public double ContactCurrentLargeAmperes { get; init; } = 100;
+
+    /// <summary>The rating from which the larger test current applies (common practice: 100 A).</summary>
+    public double ContactLargeRating { get; init; } = 100;
+
+    /// <summary>insulation-below-minimum: the table of minimums (default: the ANSI/NETA maintenance table).</summary>
+    public InsulationTable InsulationTable { get; init; } = InsulationTable.NetaMaintenance;
+
+    /// <summary>insulation-falling: a trend falling faster than this, in per cent a year (lab policy: 20).</summary>
+    public double InsulationFallPercentPerYear { get; init; } = 20;
+
+    /// <summary>How far the test ambient may lie from the reference before a thermal verdict carries a note, in kelvin (lab policy: 15).</summary>
+    public double AmbientNoteKelvin { get; init; } = 15;
+
+    /// <summary>Whether a test made with an instrument missing from the register is a finding (default: no).</summary>
+    public bool RequireRegisteredInstruments { get; init; }
+
+    /// <summary>Months from the latest as-found test to the next, by grade (lab policy).</summary>
+    public IReadOnlyDictionary<ConditionGrade, int> DueMonths { get; init; } = new Dictionary<ConditionGrade, int>
+    {
+        [ConditionGrade.Sound] = 36,
+        [ConditionGrade.Watch] = 24,
+        [ConditionGrade.PlanWork] = 12,
+        [ConditionGrade.Repair] = 3,
+        [ConditionGrade.TakeOutOfService] = 0,
+    };
+
+    /// <summary>Per-family overrides of <see cref="DueMonths"/>.</summary>
+    public IReadOnlyDictionary<(DeviceFamily Family, ConditionGrade Grade), int> FamilyDueMonths { get; init; } =
+        new Dictionary<(DeviceFamily, ConditionGrade), int>();
+
+    /// <summary>The months between tests for a device of <paramref name="family"/> in <paramref name="grade"/>.</summary>
+    public int MonthsBetweenTests(DeviceFamily family, ConditionGrade grade) =>
+        FamilyDueMonths.TryGetValue((family, grade), out var months) ? months : DueMonths[grade];
+}

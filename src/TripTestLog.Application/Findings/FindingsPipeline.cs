@@ -1,0 +1,41 @@
+using TripTestLog.Application.Check;
+using TripTestLog.Domain.Devices;
+
+namespace TripTestLog.Application.Findings;
+
+/// <summary>
+/// Every device's condition, device by device, in two streaming passes: the first judges every trip test to learn each
+/// peer group's spread (one number per device and point), the second raises each device's findings and yields its
+/// condition. Memory holds one device's records and the peer statistics, however long the history.
+/// </summary>
+public static class FindingsPipeline
+{
+    /// <summary>
+    /// The condition of every device (or of <paramref name="only"/>, still compared with the whole fleet's peers) on
+    /// <paramref name="asOf"/>, in asset-tag order.
+    /// </summary>
+    public static IEnumerable<DeviceCondition> Run(ITripSource source, FindingPolicy policy, DateOnly asOf, AssetTag? only = null,
+        CancellationToken cancel = default)
+    {
+        ArgumentNullException.ThrowIfNull(source);
+        ArgumentNullException.ThrowIfNull(policy);
+        var judge = DeviceJudge.For(source, policy.RequireRegisteredInstruments, policy.AmbientNoteKelvin);
+        var peers = new PeerGroups();
+        foreach (var device in source.Devices())
+        {
+            cancel.ThrowIfCancellationRequested();
+            foreach (var (point, latest, position) in TripRules.Positions(judge.Judge(device).ToList()))
+            {
+                peers.Add(PeerGroups.GroupOf(latest.Device, point).Key, position);
+            }
+        }
+
+        peers.Seal();
+        foreach (var device in source.Devices(only, withResistance: true))
+        {
+            cancel.ThrowIfCancellationRequested();
+            var trips = judge.Judge(device).ToList();
+            yield return DeviceFindings.Of(device, trips, peers, policy, judge.Instruments, asOf);
+        }
+    }
+}

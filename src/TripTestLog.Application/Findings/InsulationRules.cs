@@ -1,0 +1,117 @@
+using System.Globalization;
+using TripTestLog.Application.Check;
+using TripTestLog.Domain.Codes;
+using TripTestLog.Domain.Condition;
+using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Measurements;
+using TripTestLog.Domain.Trends;
+
+namespace TripTestLog.Application.Findings;
+
+/// <summary>
+/// The findings a device's insulation readings raise. Each reading is referred to 20 °C by the halving-per-10-K rule
+/// where a temperature is recorded; an over-range reading ('&gt;') counts as at least its value, so it never falls below a minimum.
+/// </summary>
+internal static class InsulationRules
+{
+    private sealed record PathResult(AssetTag Tag, string Path, TestedAt At, TestStage Stage, double Corrected, double Measured, bool OverRange,
+        bool TemperatureKnown, double TestVoltage, RecordSource Source);
+
+    /// <summary>insulation-below-minimum, test by test.</summary>
+    public static void States(DeviceHistory history, IReadOnlyList<StoredMeasurement<InsulationMeasurement>> readings, FindingLedger ledger, FindingPolicy policy)
+    {
+        foreach (var r in readings.Select(Result).OrderBy(r => r.At).ThenBy(r => r.Stage))
+        {
+            var device = history.InForceOn(r.At.Date);
+            if (InsulationMinimum.For(policy.InsulationTable, device.RatedVoltage) is not { } row)
+            {
+                continue;
+            }
+
+            var subject = "insulation|" + r.Path;
+            if (!r.OverRange && r.Corrected < row.Minimum.Value)
+            {
+                var voltage = r.TestVoltage < row.TestVoltage.Value
+                    ? Invariant($" (tested at {r.TestVoltage:0} V DC; the table's minimum assumes {row.TestVoltage.Value:0} V DC)")
+                    : "";
+                ledger.Raise(subject, new Finding(FindingKind.InsulationBelowMinimum, Severity.Act, r.Tag, r.At, row.Source,
+                    Invariant($"{(r.Stage == TestStage.AsLeft ? "as-left: " : "")}path {r.Path} reads {Describe(r)}, below the minimum of {row.Minimum.Value:0.##} MOhm for a {device.RatedVoltage.Value:0} V breaker{voltage}; find and remove the cause (moisture, dirt, damage) before returning it to service"),
+                    [r.Source])
+                {
+                    Path = r.Path,
+                    Value = new Reading(r.Corrected, ReadingUnit.MegaOhms),
+                    Limit = new Reading(row.Minimum.Value, ReadingUnit.MegaOhms),
+                    Policy = PolicyFile.Setting(policy, "insulation_table"),
+                });
+            }
+            else if (r.Stage == TestStage.AsFound)
+            {
+                ledger.Clear(subject, r.At, $"reading of path {r.Path} above the minimum");
+            }
+            else
+            {
+                ledger.Confirm(subject, r.At, $"reading of path {r.Path} above the minimum");
+            }
+        }
+    }
+
+    /// <summary>insulation-falling: a Theil–Sen line through a path's log readings falls faster than the policy allows, clearly beyond their scatter.</summary>
+    public static void Falling(DeviceHistory history, IReadOnlyList<StoredMeasurement<InsulationMeasurement>> readings, FindingLedger ledger, FindingPolicy policy)
+    {
+        foreach (var path in readings.Select(Result).Where(r => r.Stage == TestStage.AsFound).GroupBy(r => r.Path))
+        {
+            var list = path.OrderBy(r => r.At).ToList();
+            if (list.Select(r => r.At.Date).Distinct().Count() < policy.TrendMinimumTests)
+            {
+                continue;
+            }
+
+            var line = TheilSen.Fit([.. list.Select(r => new TrendPoint(TrendPoint.YearOf(r.At.Date), Math.Log10(r.Corrected)))]);
+            if (line is null || line.Slope >= 0)
+            {
+                continue;
+            }
+
+            var fall = 100 * (1 - Math.Pow(10, line.Slope));
+            var span = line.LastYear - TrendPoint.YearOf(list[0].At.Date);
+
+            // The fall over the span must stand clear of the scatter: twice the robust spread, so noise does not read as a trend.
+            if (fall < policy.InsulationFallPercentPerYear || -line.Slope * span < 2 * line.Spread)
+            {
+                continue;
+            }
+
+            var last = list[^1];
+            var row = InsulationMinimum.For(policy.InsulationTable, history.InForceOn(last.At.Date).RatedVoltage);
+            var reach = row is null ? null : line.Reaches(Math.Log10(row.Minimum.Value));
+            var forecast = reach is { } year && year <= line.LastYear + policy.ForecastHorizonYears ? TrendPoint.DateOf(year) : (DateOnly?)null;
+            ledger.Add(new Finding(FindingKind.InsulationFalling, Severity.Plan, last.Tag, last.At,
+                $"Theil–Sen trend (Sen 1968) of {line.Count} as-found readings referred to 20 C (halving per 10 K rule)",
+                Invariant($"path {last.Path} falls about {fall:0}% a year ({list[0].Corrected:0.#} to {last.Corrected:0.#} MOhm at 20 C since {list[0].At.Date:yyyy-MM-dd})")
+                    + (forecast is { } on ? Invariant($" and would reach the minimum of {row!.Minimum.Value:0.##} MOhm about {on:yyyy-MM-dd}") : "")
+                    + "; look for moisture, contamination or tracking",
+                [.. list.Select(r => r.Source)])
+            {
+                Path = last.Path,
+                Value = new Reading(fall, ReadingUnit.Percent),
+                Limit = new Reading(policy.InsulationFallPercentPerYear, ReadingUnit.Percent),
+                Policy = PolicyFile.Setting(policy, "insulation_fall_percent_per_year"),
+                ForecastOn = forecast,
+            });
+        }
+    }
+
+    private static PathResult Result(StoredMeasurement<InsulationMeasurement> stored)
+    {
+        var m = stored.Measurement;
+        var corrected = m.Temperature is { } t ? InsulationCorrection.ToTwentyCelsius(m.Resistance.Value, t).Value : m.Resistance.Value.Value;
+        return new PathResult(m.Tag, m.Path, m.TestedAt, m.Stage, corrected, m.Resistance.Value.Value, m.Resistance.OverRange, m.Temperature is not null,
+            m.TestVoltage.Value, new RecordSource(stored.SourceFile, stored.SourceLine));
+    }
+
+    private static string Describe(PathResult r) => r.TemperatureKnown
+        ? Invariant($"{r.Corrected:0.##} MOhm at 20 C ({r.Measured:0.##} MOhm as measured)")
+        : Invariant($"{r.Measured:0.##} MOhm (no temperature recorded: not corrected)");
+
+    private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
+}

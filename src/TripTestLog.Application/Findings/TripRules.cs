@@ -1,0 +1,194 @@
+using System.Globalization;
+using TripTestLog.Application.Check;
+using TripTestLog.Domain.Codes;
+using TripTestLog.Domain.Measurements;
+using TripTestLog.Domain.Trends;
+using TripTestLog.Domain.Verdicts;
+
+namespace TripTestLog.Application.Findings;
+
+/// <summary>The findings one device's judged trip tests raise: verdicts out of band, settings, instruments, drift and trends.</summary>
+internal static class TripRules
+{
+    /// <summary>Out-of-band verdicts, settings that differ from the register, and untraceable instruments, test by test.</summary>
+    public static void States(IReadOnlyList<JudgedTrip> trips, FindingLedger ledger)
+    {
+        foreach (var judged in trips)
+        {
+            var m = judged.Trip.Measurement;
+            var a = judged.Assessment;
+            var point = TripPoint.Of(judged);
+            var subject = "band|" + point.Key;
+            if (a.IsFailure)
+            {
+                var edge = a.Verdict == Verdict.TooEarly ? a.Band.Minimum : a.Band.Maximum;
+                var stage = TextCodes.Stage.Of(m.Stage);
+                ledger.Raise(subject, new Finding(FindingKind.TripOutOfBand, a.Verdict == Verdict.TooLate ? Severity.OutOfService : Severity.Act,
+                    m.Tag, m.TestedAt, edge.Requirement, $"{stage} at {point.Label}: {a.Reason}", [Source(judged)])
+                {
+                    Point = point.Label,
+                    Value = new Reading(m.Outcome.Time.Value, ReadingUnit.Seconds),
+                    Limit = edge.Limit is { } t ? new Reading(t.Value, ReadingUnit.Seconds) : null,
+                });
+            }
+            else if (a.Verdict == Verdict.Pass)
+            {
+                if (m.Stage == TestStage.AsFound)
+                {
+                    ledger.Clear(subject, m.TestedAt, $"pass at {point.Label}");
+                }
+                else
+                {
+                    ledger.Confirm(subject, m.TestedAt, $"pass at {point.Label}");
+                }
+            }
+
+            Settings(judged, ledger);
+            Instrument(judged, ledger);
+        }
+    }
+
+    private static void Settings(JudgedTrip judged, FindingLedger ledger)
+    {
+        var m = judged.Trip.Measurement;
+        if (m.FoundSettings is not { IsEmpty: false } found)
+        {
+            return;
+        }
+
+        var (applied, notes) = found.ApplyTo(judged.Device.Settings);
+        if (applied == judged.Device.Settings)
+        {
+            ledger.Clear("settings", m.TestedAt, "test that read the register's settings");
+            return;
+        }
+
+        ledger.Raise("settings", new Finding(FindingKind.SettingsDiffer, Severity.Investigate, m.Tag, m.TestedAt,
+            "register entry in force on the test date", $"settings found on the device differ from the register ({string.Join("; ", notes)}); "
+            + "review protection coordination, then correct the device or the register", [Source(judged)]));
+    }
+
+    private static void Instrument(JudgedTrip judged, FindingLedger ledger)
+    {
+        var m = judged.Trip.Measurement;
+        var untraced = judged.Findings.FirstOrDefault(f => f.Kind is FindingKind.CalibrationLapsed or FindingKind.InstrumentUnregistered);
+        if (untraced is null)
+        {
+            ledger.Clear("instrument|trip", m.TestedAt, "trip test with a traceable instrument");
+            return;
+        }
+
+        ledger.Raise("instrument|trip", untraced with
+        {
+            Message = $"trip tests on {m.TestedAt.Date:yyyy-MM-dd}: {untraced.Message}; confirm the instrument's accuracy or repeat the tests",
+        });
+    }
+
+    /// <summary>The latest tripped as-found test at each point with its band position, for the peer comparison.</summary>
+    public static IEnumerable<(TripPoint Point, JudgedTrip Latest, double Position)> Positions(IReadOnlyList<JudgedTrip> trips) =>
+        ByPoint(trips).Select(g => (g.Point, Latest: g.Tests[^1]))
+            .Where(x => x.Latest.Assessment.Margin.PositionInBand is not null)
+            .Select(x => (x.Point, x.Latest, x.Latest.Assessment.Margin.PositionInBand!.Value));
+
+    /// <summary>trip-drift: the latest as-found time at each point against the first.</summary>
+    public static void Drift(IReadOnlyList<JudgedTrip> trips, FindingLedger ledger, FindingPolicy policy)
+    {
+        foreach (var (point, tests) in ByPoint(trips))
+        {
+            var (first, last) = (tests[0], tests[^1]);
+            if (last.Trip.Measurement.TestedAt.Date <= first.Trip.Measurement.TestedAt.Date)
+            {
+                continue;
+            }
+
+            var (p0, p1) = (first.Assessment.Margin.PositionInBand, last.Assessment.Margin.PositionInBand);
+            var drift = TripDrift.Between(first.Trip.Measurement.Outcome.Time, p0, last.Trip.Measurement.Outcome.Time, p1);
+            var byTime = Math.Abs(drift.Decades) >= Math.Log10(1 + policy.TripDriftTimePercent / 100);
+            var byBand = drift.PositionShift is { } shift && Math.Abs(shift) * 100 >= policy.TripDriftBandPercent;
+            if (!byTime && !byBand)
+            {
+                continue;
+            }
+
+            var (t0, t1) = (first.Trip.Measurement.Outcome.Time, last.Trip.Measurement.Outcome.Time);
+            var place = drift.PositionShift is not null
+                ? Invariant($"; its place in the band moved from {p0!.Value * 100:0}% to {p1!.Value * 100:0}% (0% = earliest allowed, 100% = latest)")
+                : "";
+            var m = last.Trip.Measurement;
+            ledger.Add(new Finding(FindingKind.TripDrift, Severity.Investigate, m.Tag, m.TestedAt, "lab policy: trip-time drift from the device's first as-found tests",
+                Invariant($"as-found trip time at {point.Label} moved from {t0} ({first.Trip.Measurement.TestedAt.Date:yyyy-MM-dd}) to {t1} ({m.TestedAt.Date:yyyy-MM-dd}), {drift.TimeChangePercent:+0;-0}%{place}; look for wear, dirt or a changed setting before it leaves the band"),
+                [Source(first), Source(last)])
+            {
+                Point = point.Label,
+                Value = byTime || drift.PositionShift is null
+                    ? new Reading(drift.TimeChangePercent, ReadingUnit.Percent)
+                    : new Reading(drift.PositionShift!.Value * 100, ReadingUnit.Percent),
+                Limit = new Reading(byTime ? policy.TripDriftTimePercent : policy.TripDriftBandPercent, ReadingUnit.Percent),
+                Policy = byTime ? PolicyFile.Setting(policy, "trip_drift_time_percent") : PolicyFile.Setting(policy, "trip_drift_band_percent"),
+                FirstSeen = first.Trip.Measurement.TestedAt.Date,
+            });
+        }
+    }
+
+    /// <summary>trip-trend-exit: a Theil–Sen line through log trip time reaches a guaranteed edge before <paramref name="due"/>.</summary>
+    public static void TrendExit(IReadOnlyList<JudgedTrip> trips, FindingLedger ledger, FindingPolicy policy, DateOnly due)
+    {
+        foreach (var (point, tests) in ByPoint(trips))
+        {
+            var last = tests[^1];
+            var dates = tests.Select(t => t.Trip.Measurement.TestedAt.Date).Distinct().Count();
+            if (dates < policy.TrendMinimumTests || last.Assessment.Verdict != Verdict.Pass)
+            {
+                continue;
+            }
+
+            var line = TheilSen.Fit(tests.Select(t => new TrendPoint(TrendPoint.YearOf(t.Trip.Measurement.TestedAt.Date), Math.Log10(t.Trip.Measurement.Outcome.Time.Value))).ToList());
+            var band = last.Assessment.Band;
+            if (line is null || line.Slope == 0)
+            {
+                continue;
+            }
+
+            var edge = line.Slope > 0 ? band.Maximum : band.Minimum;
+            if (edge.Limit is not { Value: > 0 } limit)
+            {
+                continue;
+            }
+
+            var exit = line.Reaches(Math.Log10(limit.Value));
+            var until = Math.Min(TrendPoint.YearOf(due), line.LastYear + policy.ForecastHorizonYears);
+            if (exit is not { } year || year > until)
+            {
+                continue;
+            }
+
+            var width = band.Minimum.Limit is { Value: > 0 } min && band.Maximum.Limit is { } max ? Math.Log10(max.Value / min.Value) : (double?)null;
+            var uncertain = width is { } w && line.Spread > w * policy.TripTrendScatterBandPercent / 100;
+            var on = TrendPoint.DateOf(year);
+            var m = last.Trip.Measurement;
+            var side = line.Slope > 0 ? "latest allowed time" : "earliest allowed time";
+            ledger.Add(new Finding(FindingKind.TripTrendExit, uncertain ? Severity.Investigate : Severity.Plan, m.Tag, m.TestedAt,
+                $"Theil–Sen trend (Sen 1968) of {line.Count} as-found tests against {edge.Requirement}",
+                Invariant($"as-found trip times at {point.Label} trend towards the {side} ({limit}) and reach it about {on:yyyy-MM-dd}, before the next test is due ({due:yyyy-MM-dd})")
+                    + (string)(uncertain ? "; the tests scatter too much for the date to be trusted: retest sooner" : "; plan a service or replacement before then"),
+                [.. tests.Select(Source)])
+            {
+                Point = point.Label,
+                Value = new Reading(m.Outcome.Time.Value, ReadingUnit.Seconds),
+                Limit = new Reading(limit.Value, ReadingUnit.Seconds),
+                Policy = $"{PolicyFile.Setting(policy, "trend_min_tests")}; {PolicyFile.Setting(policy, "trip_trend_scatter_band_percent")}",
+                ForecastOn = on,
+            });
+        }
+    }
+
+    // The tripped as-found tests at each point, in time order: held tests and as-left ones do not show drift.
+    private static IEnumerable<(TripPoint Point, List<JudgedTrip> Tests)> ByPoint(IReadOnlyList<JudgedTrip> trips) =>
+        trips.Where(t => t.Trip.Measurement.Stage == TestStage.AsFound && t.Trip.Measurement.Outcome.Tripped && t.Assessment.Verdict != Verdict.NotAssessable)
+            .GroupBy(TripPoint.Of)
+            .Select(g => (g.Key, g.ToList()));
+
+    internal static RecordSource Source(JudgedTrip judged) => new(judged.Trip.SourceFile, judged.Trip.SourceLine);
+
+    private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
+}
