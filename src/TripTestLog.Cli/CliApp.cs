@@ -10,10 +10,14 @@ internal static class CliApp
     public static Command Build(CliContext cli) =>
         new("triptestlog", "Keep breaker test records (trip times, contact and insulation resistance) in one SQLite database and judge every trip time against the band its standard allows.")
         {
-            new System.CommandLine.Help.HelpOption(),
+            // Help wraps at 100 columns whatever the terminal, so it reads the same everywhere (and in golden files).
+            new System.CommandLine.Help.HelpOption { Action = new System.CommandLine.Help.HelpAction { MaxWidth = 100 } },
             new VersionOption(),
             ImportCommand.Create(cli),
             CheckCommand.Create(cli),
+            FindingsCommand.Create(cli),
+            FleetCommand.Create(cli),
+            PolicyCommand.Create(cli),
             EnvelopeCommand.Create(cli),
             VerifyCommand.Create(cli),
             BackupCommand.Create(cli),

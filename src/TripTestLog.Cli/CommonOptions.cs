@@ -8,7 +8,7 @@ internal static class CommonOptions
     /// <summary>The database file; created on first use. The log file is written beside it.</summary>
     public static Option<FileInfo> Database() => new("--db")
     {
-        Description = "SQLite database file (created if missing); the log is written beside it",
+        Description = "Database file (created if missing), the log beside it",
         DefaultValueFactory = _ => new FileInfo("triptestlog.db"),
         HelpName = "PATH",
     };

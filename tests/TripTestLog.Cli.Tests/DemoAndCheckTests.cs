@@ -25,7 +25,7 @@ public sealed class DemoAndCheckTests : IDisposable
         var (exit, output, _) = CliRun.Run("demo", "--records", SampleRecords, "--out", _folder);
 
         Assert.Equal(0, exit);
-        Assert.Contains("54 files: 54 imported, 0 already imported, 0 refused", output);
+        Assert.Contains("72 files: 72 imported, 0 already imported, 0 refused", output);
         var verdicts = JsonDocument.Parse(File.ReadAllText(Path.Combine(_folder, "verdicts.json"))).RootElement.EnumerateArray().ToList();
         var findings = verdicts.Where(v => v.GetProperty("verdict").GetString() is "too-late" or "too-early").ToList();
 
@@ -91,7 +91,7 @@ public sealed class DemoAndCheckTests : IDisposable
         Assert.Equal((0, 1, 0), (sound.Exit, changed.Exit, backup.Exit));
         Assert.Contains("The database is sound.", sound.Out);
         Assert.Contains("CHANGED since import", changed.Out);
-        Assert.Contains("47 devices", backup.Out);
+        Assert.Contains("57 devices", backup.Out);
         Assert.Equal(2, CliRun.Run("backup", Path.Combine(_folder, "copy.db"), "--db", db).Exit);
     }
 
@@ -172,7 +172,7 @@ public sealed class DemoAndCheckTests : IDisposable
     {
         var written = SampleFleet.WriteTo(_folder);
 
-        Assert.Equal(56, written.Count);
+        Assert.Equal(75, written.Count);
         foreach (var file in written)
         {
             var committed = Path.Combine(SampleRecords, Path.GetRelativePath(_folder, file));

@@ -11,6 +11,9 @@ public sealed class HelpTextTests
     [InlineData("demo", new[] { "demo" })]
     [InlineData("verify", new[] { "verify" })]
     [InlineData("backup", new[] { "backup" })]
+    [InlineData("findings", new[] { "findings" })]
+    [InlineData("fleet", new[] { "fleet" })]
+    [InlineData("policy", new[] { "policy" })]
     public void HelpText_MatchesTheGoldenFile(string name, string[] command)
     {
         var (exit, output, _) = CliRun.Run([.. command, "--help"]);

@@ -1,5 +1,6 @@
 using TripTestLog.Application.Import;
 using TripTestLog.Application.Check;
+using TripTestLog.Application.Findings;
 using System.CommandLine;
 using TripTestLog.Cli.Output;
 using TripTestLog.Cli.Services;
@@ -48,6 +49,20 @@ internal static class DemoCommand
             File.Delete(stale);
         }
 
+        // The sample labs' policy goes beside the database, where findings and fleet look for it.
+        var samplePolicy = Path.Combine(folder, PolicyFile.BesideDatabase);
+        var policyFile = Path.Combine(output.FullName, PolicyFile.BesideDatabase);
+        if (File.Exists(samplePolicy))
+        {
+            File.Copy(samplePolicy, policyFile, overwrite: true);
+        }
+
+        if (PolicyLoader.Load(null, db, out var policyProblem) is not { } policy)
+        {
+            cli.Error.WriteLine($"error: {policyProblem}");
+            return ExitCodes.BadInput;
+        }
+
         var (files, problems) = ImportRunner.Expand([folder], Ingest.ReadOptions.Default);
         foreach (var problem in problems)
         {
@@ -58,6 +73,9 @@ internal static class DemoCommand
         var text = Path.Combine(output.FullName, "verdicts.txt");
         var json = Path.Combine(output.FullName, "verdicts.json");
         var counts = new VerdictCounts();
+        var findingsText = Path.Combine(output.FullName, "findings.txt");
+        var findingsJson = Path.Combine(output.FullName, "findings.json");
+        var fleet = new FleetSummary(5);
         using (var log = Logging.BesideDatabase(db))
         using (var store = RecordStore.Open(db.FullName))
         using (var textWriter = new StreamWriter(text))
@@ -71,6 +89,7 @@ internal static class DemoCommand
             }
 
             writers.Finish();
+            WriteFindings(store, policy.Policy, policy.From, fleet, findingsText, findingsJson, cli.Today);
         }
 
         cli.Out.WriteLine($"Imported the sample records from {folder}:");
@@ -78,13 +97,40 @@ internal static class DemoCommand
         cli.Out.WriteLine();
         cli.Out.WriteLine(counts.Summary("Checked"));
         cli.Out.WriteLine();
+        FleetText.Write(cli.Out, fleet, cli.Today.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture), policy.From);
+        cli.Out.WriteLine();
         cli.Out.WriteLine("Results:");
         cli.Out.WriteLine($"  database   {db.FullName}");
         cli.Out.WriteLine($"  verdicts   {text}");
         cli.Out.WriteLine($"  json       {json}");
+        cli.Out.WriteLine($"  findings   {findingsText}");
+        cli.Out.WriteLine($"  json       {findingsJson}");
         cli.Out.WriteLine($"  log        {ImportCommand.LogPath(db)}");
         cli.Out.WriteLine($"Next: triptestlog check --db {db.FullName}");
+        cli.Out.WriteLine($"      triptestlog findings --db {db.FullName}");
+        cli.Out.WriteLine($"      triptestlog fleet --db {db.FullName}");
         return outcomes.Any(o => o.Status == ImportStatus.Refused) ? ExitCodes.BadInput : ExitCodes.Ok;
+    }
+
+    // One pass of the findings writes the findings files and gathers the fleet summary the demo prints.
+    private static void WriteFindings(RecordStore store, FindingPolicy policy, string policyFrom, FleetSummary fleet, string textPath, string jsonPath,
+        DateOnly asOf)
+    {
+        using var textWriter = new StreamWriter(textPath);
+        using var jsonWriter = new StreamWriter(jsonPath);
+        var date = asOf.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture);
+        var text = new FindingText(textWriter, date, policyFrom);
+        using var json = new FindingJson(jsonWriter);
+        foreach (var device in FindingsPipeline.Run(store, policy, asOf))
+        {
+            var open = device.Open.ToList();
+            text.Add(device, open);
+            json.Add(device, open);
+            fleet.Add(device);
+        }
+
+        text.Finish();
+        json.Finish();
     }
 
     /// <summary>The sample-records folder next to the working folder or any folder above it, then above the program.</summary>

@@ -1,0 +1,80 @@
+using System.CommandLine;
+using System.Globalization;
+using TripTestLog.Application.Findings;
+using TripTestLog.Cli.Output;
+using TripTestLog.Storage;
+
+namespace TripTestLog.Cli.Commands;
+
+/// <summary>`fleet`: the asset manager's view: devices by site and grade, and what to act on first.</summary>
+internal static class FleetCommand
+{
+    public static Command Create(CliContext cli)
+    {
+        var shared = new ConditionOptions();
+        var top = new Option<int>("--top") { Description = "How many devices the priority list shows", DefaultValueFactory = _ => 15, HelpName = "N" };
+        var json = new Option<bool>("--json") { Description = "Write one JSON object (fields in the README)" };
+        var command = new Command("fleet", "The fleet by site and condition grade, and what to act on first");
+        foreach (var option in shared.All.Concat<Option>([top, json]))
+        {
+            command.Options.Add(option);
+        }
+
+        command.SetAction(parse =>
+        {
+            if (shared.Resolve(parse, cli) is not { } options)
+            {
+                return ExitCodes.BadInput;
+            }
+
+            var n = parse.GetValue(top);
+            if (n is < 1 or > 10000)
+            {
+                cli.Error.WriteLine($"error: --top: expected a number from 1 to 10000, got {n}");
+                return ExitCodes.BadInput;
+            }
+
+            return Run(cli, options, n, parse.GetValue(json));
+        });
+        return command;
+    }
+
+    private static int Run(CliContext cli, ConditionOptions.Resolved options, int top, bool json)
+    {
+        using var store = RecordStore.Open(options.Database.FullName);
+        if (options.Only is { } tag && !store.Devices(tag).Any())
+        {
+            cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {options.Database.FullName}");
+            return ExitCodes.BadInput;
+        }
+
+        var fleet = new FleetSummary(top);
+        try
+        {
+            foreach (var device in FindingsPipeline.Run(store, options.Policy, options.AsOf, options.Only, cli.Cancel))
+            {
+                if (options.AtSite(device))
+                {
+                    fleet.Add(device);
+                }
+            }
+        }
+        catch (OperationCanceledException)
+        {
+            cli.Error.WriteLine("fleet stopped: nothing was written");
+            return ExitCodes.BadInput;
+        }
+
+        var asOf = options.AsOf.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);
+        if (json)
+        {
+            FleetJson.Write(cli.Out, fleet, asOf, options.PolicyFrom);
+        }
+        else
+        {
+            FleetText.Write(cli.Out, fleet, asOf, options.PolicyFrom);
+        }
+
+        return ExitCodes.Ok;
+    }
+}
