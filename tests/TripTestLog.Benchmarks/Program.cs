@@ -2,6 +2,7 @@ using System.Diagnostics;
 using System.Globalization;
 using System.Text.Json;
 using TripTestLog.Application.Check;
+using TripTestLog.Application.Findings;
 using TripTestLog.Application.Import;
 using TripTestLog.Cli.Output;
 using TripTestLog.Ingest;
@@ -19,7 +20,7 @@ namespace TripTestLog.Benchmarks;
 /// </summary>
 internal static class Program
 {
-    private static readonly string[] Steps = ["floor-insert", "import", "reimport", "floor-read", "check"];
+    private static readonly string[] Steps = ["floor-insert", "import", "reimport", "floor-read", "check", "findings"];
 
     private static int Main(string[] args)
     {
@@ -63,7 +64,7 @@ internal static class Program
             {
                 Console.Error.WriteLine($"  {step} ...");
                 results[step] = Child(step, work);
-                if (results[step].Rows != rows && step != "reimport")
+                if (results[step].Rows != rows && step is not "reimport" and not "findings")
                 {
                     throw new InvalidOperationException($"{step} handled {results[step].Rows} rows, not {rows}");
                 }
@@ -74,6 +75,7 @@ internal static class Program
             Print(rows, "reimport", results["reimport"], results["floor-insert"]);
             Print(rows, "floor-read", results["floor-read"], null);
             Print(rows, "check --json", results["check"], results["floor-read"], slower: true);
+            Print(rows, "findings", results["findings"], results["floor-read"], slower: true);
             perRow.Add((rows, results["import"].Seconds, results["check"].Seconds));
             Directory.Delete(work, recursive: true);
         }
@@ -86,7 +88,8 @@ internal static class Program
             Console.WriteLine($"Growth from {r0:N0} to {r1:N0} rows ({(double)r1 / r0:0.#}x): import time x{i1 / i0:0.##}, check time x{c1 / c0:0.##}.");
         }
 
-        Console.WriteLine("x floor: for import and re-import, rows/s over the insert floor's (higher is better); for check, time over the read floor's.");
+        Console.WriteLine("x floor: for import and re-import, rows/s over the insert floor's (higher is better); for check and findings,");
+        Console.WriteLine("time over the read floor's (lower is better). Findings makes two passes: peers, then each device's findings.");
         return 0;
     }
 
@@ -217,6 +220,24 @@ internal static class Program
                     foreach (var judged in CheckPipeline.Run(store))
                     {
                         json.Add(judged);
+                        rows++;
+                    }
+
+                    json.Finish();
+                }
+
+                break;
+            case "findings":
+                // Both passes of the findings pipeline over every device, every finding written as JSON; rows here are
+                // the devices, the trip rows they rest on are the fleet's.
+                using (var store = RecordStore.Open(project))
+                using (var writer = new StreamWriter(Path.Combine(work, "findings.json"), false, new System.Text.UTF8Encoding(false), 1 << 16))
+                using (var json = new FindingJson(writer))
+                {
+                    rows = 0;
+                    foreach (var device in FindingsPipeline.Run(store, FindingPolicy.Default, today))
+                    {
+                        json.Add(device, device.Findings);
                         rows++;
                     }
 

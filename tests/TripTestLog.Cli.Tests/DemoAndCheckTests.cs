@@ -47,10 +47,13 @@ public sealed class DemoAndCheckTests : IDisposable
         Assert.Contains(unit, v => v.GetProperty("notes").EnumerateArray().Any(n => n.GetString()!.Contains("Ir 420 A found", StringComparison.Ordinal)));
         Assert.Contains(verdicts, v => v.GetProperty("notes").EnumerateArray().Any(n => n.GetString()!.Contains("ambient table HB-TM-AMBIENT", StringComparison.Ordinal)));
 
-        // The instrument register: Brackenford's injection set lapsed before its September 2025 tests.
+        // The instrument register: Brackenford's injection set lapsed before its September 2025 tests, and (the sample
+        // labs' policy requiring registered instruments) Copperwell's borrowed set was never registered.
         var untraceable = verdicts.Where(v => v.GetProperty("instrument_finding").GetString() is not null).ToList();
         Assert.NotEmpty(untraceable);
-        Assert.All(untraceable, v => Assert.StartsWith("2025-09", v.GetProperty("tested_at").GetString()));
+        Assert.All(untraceable, v => Assert.True(v.GetProperty("tested_at").GetString()!.StartsWith("2025-09", StringComparison.Ordinal)
+            || v.GetProperty("asset_tag").GetString() == "CWD-DB1-Q10", v.ToString()));
+        Assert.Contains(untraceable, v => v.GetProperty("instrument_finding").GetString()!.Contains("INJ-CWD-LOAN is not in the instrument register", StringComparison.Ordinal));
 
         // The two other layouts came in through their profiles.
         Assert.Contains(verdicts, v => v.GetProperty("source_file").GetString()!.EndsWith("bench-2026-11.csv", StringComparison.Ordinal));

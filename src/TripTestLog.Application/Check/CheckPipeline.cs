@@ -1,4 +1,5 @@
 using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Settings;
 
 namespace TripTestLog.Application.Check;
 
@@ -10,13 +11,14 @@ public static class CheckPipeline
 {
     /// <summary>
     /// The judged tests of every device (or of <paramref name="only"/>), in asset-tag and test-time order;
-    /// <paramref name="requireRegisteredInstruments"/> makes an instrument missing from the register a finding.
+    /// <paramref name="requireRegisteredInstruments"/> makes an instrument missing from the register a finding;
+    /// <paramref name="ambientNoteKelvin"/> is the lab policy's ambient warning.
     /// </summary>
     public static IEnumerable<JudgedTrip> Run(ITripSource source, AssetTag? only = null, bool requireRegisteredInstruments = false,
-        CancellationToken cancel = default)
+        CancellationToken cancel = default, double ambientNoteKelvin = LabPolicy.AmbientNoteKelvin)
     {
         ArgumentNullException.ThrowIfNull(source);
-        var judge = DeviceJudge.For(source, requireRegisteredInstruments);
+        var judge = DeviceJudge.For(source, requireRegisteredInstruments, ambientNoteKelvin);
         foreach (var device in source.Devices(only))
         {
             cancel.ThrowIfCancellationRequested();

@@ -83,7 +83,7 @@ internal static class DemoCommand
         {
             outcomes = new ImportRunner(store, log, cli).Run(files, ImportOptions.Strict);
             var writers = new VerdictWriters(new VerdictTable(textWriter), new VerdictJson(jsonWriter), counts);
-            foreach (var judged in CheckPipeline.Run(store))
+            foreach (var judged in CheckPipeline.Run(store, null, policy.Policy.RequireRegisteredInstruments, cli.Cancel, policy.Policy.AmbientNoteKelvin))
             {
                 writers.Add(judged);
             }
