@@ -27,7 +27,10 @@ internal static class TripFindings
         if (untraced is not null)
         {
             findings.Add(new Finding(untraced.Registered ? FindingKind.CalibrationLapsed : FindingKind.InstrumentUnregistered, Severity.Investigate,
-                m.Tag, m.TestedAt, "lab policy: every measurement is made with an instrument in calibration", untraced.Message, [source]));
+                m.Tag, m.TestedAt, "lab policy: every measurement is made with an instrument in calibration", untraced.Message, [source])
+            {
+                Instrument = m.Instrument,
+            });
         }
 
         return findings;

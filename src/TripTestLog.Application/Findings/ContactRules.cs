@@ -173,7 +173,10 @@ internal static class ContactRules
         ledger.Raise("instrument|contact", new Finding(untraced.u.Registered ? FindingKind.CalibrationLapsed : FindingKind.InstrumentUnregistered,
             Severity.Investigate, session[0].Tag, at, "lab policy: every measurement is made with an instrument in calibration",
             $"contact resistance tests on {at.Date:yyyy-MM-dd}: {untraced.u.Message}; confirm the instrument's accuracy or repeat the tests",
-            [.. session.SelectMany(p => p.Sources)]));
+            [.. session.SelectMany(p => p.Sources)])
+        {
+            Instrument = untraced.p.Instrument,
+        });
     }
 
     /// <summary>contact-trend-limit: a Theil–Sen line through a pole's readings since its last repair reaches the limit before <paramref name="due"/>.</summary>
@@ -216,6 +219,7 @@ internal static class ContactRules
                 Limit = new Reading(limit.Value, ReadingUnit.MicroOhms),
                 Policy = $"{PolicyFile.Setting(policy, "trend_min_tests")}; {PolicyFile.Setting(policy, "contact_trend_scatter_percent")}",
                 ForecastOn = on,
+                Trend = line,
                 RestsOn = [.. found.SelectMany(p => p.Sources)],
             });
         }

@@ -1,6 +1,7 @@
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Measurements;
+using TripTestLog.Domain.Trends;
 
 namespace TripTestLog.Application.Findings;
 
@@ -50,6 +51,15 @@ public sealed record Finding(
 
     /// <summary>False once a later as-found test no longer raises it.</summary>
     public bool Open { get; init; } = true;
+
+    /// <summary>
+    /// For a forecast, the robust trend line it rests on, in the rule's own scale: log10 of seconds (trip times),
+    /// micro-ohms (contact resistance) or log10 of megohms (insulation), against the fractional year.
+    /// </summary>
+    public TrendLine? Trend { get; init; }
+
+    /// <summary>The instrument an instrument finding is about.</summary>
+    public string? Instrument { get; init; }
 
     /// <summary>What changed its standing: the later test that closed it, or the as-left test that confirms a repair.</summary>
     public string? Standing { get; init; }

@@ -15,6 +15,11 @@ public static class FindingsPipeline
     /// <paramref name="asOf"/>, in asset-tag order.
     /// </summary>
     public static IEnumerable<DeviceCondition> Run(ITripSource source, FindingPolicy policy, DateOnly asOf, AssetTag? only = null,
+        CancellationToken cancel = default) =>
+        RunWithRecords(source, policy, asOf, only, cancel).Select(d => d.Condition);
+
+    /// <summary>As <see cref="Run"/>, with each device's records and judged trip tests beside its condition, for reports.</summary>
+    public static IEnumerable<DeviceReport> RunWithRecords(ITripSource source, FindingPolicy policy, DateOnly asOf, AssetTag? only = null,
         CancellationToken cancel = default)
     {
         ArgumentNullException.ThrowIfNull(source);
@@ -35,7 +40,7 @@ public static class FindingsPipeline
         {
             cancel.ThrowIfCancellationRequested();
             var trips = judge.Judge(device).ToList();
-            yield return DeviceFindings.Of(device, trips, peers, policy, judge.Instruments, asOf);
+            yield return new DeviceReport(device, trips, DeviceFindings.Of(device, trips, peers, policy, judge.Instruments, asOf));
         }
     }
 }

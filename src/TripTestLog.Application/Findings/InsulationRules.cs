@@ -14,7 +14,7 @@ namespace TripTestLog.Application.Findings;
 /// </summary>
 internal static class InsulationRules
 {
-    private sealed record PathResult(AssetTag Tag, string Path, TestedAt At, TestStage Stage, double Corrected, double Measured, bool OverRange,
+    internal sealed record PathResult(AssetTag Tag, string Path, TestedAt At, TestStage Stage, double Corrected, double Measured, bool OverRange,
         bool TemperatureKnown, double TestVoltage, RecordSource Source);
 
     /// <summary>insulation-below-minimum, test by test.</summary>
@@ -97,9 +97,14 @@ internal static class InsulationRules
                 Limit = new Reading(policy.InsulationFallPercentPerYear, ReadingUnit.Percent),
                 Policy = PolicyFile.Setting(policy, "insulation_fall_percent_per_year"),
                 ForecastOn = forecast,
+                Trend = line,
             });
         }
     }
+
+    /// <summary>Every reading referred to 20 °C, in time order (as-found before as-left on a day).</summary>
+    public static IEnumerable<PathResult> Results(IReadOnlyList<StoredMeasurement<InsulationMeasurement>> readings) =>
+        readings.Select(Result).OrderBy(r => r.At).ThenBy(r => r.Stage).ThenBy(r => r.Path, StringComparer.Ordinal);
 
     private static PathResult Result(StoredMeasurement<InsulationMeasurement> stored)
     {

@@ -12,12 +12,13 @@ namespace TripTestLog.Application.Findings;
 /// </summary>
 /// <param name="Key">Identity for grouping.</param>
 /// <param name="Label">In words, e.g. "2.55 In cold" or "5 In cold, pole 2".</param>
-internal readonly record struct TripPoint(string Key, string Label)
+public readonly record struct TripPoint(string Key, string Label)
 {
     // Aimed at a standard's point when within 10 % of its multiple (test sets land a few per cent off the set point).
     private const double PointWindow = 0.10;
     private const double Grid = 1.05;
 
+    /// <summary>The point <paramref name="judged"/> was made at.</summary>
     public static TripPoint Of(JudgedTrip judged)
     {
         var a = judged.Assessment;

@@ -178,6 +178,7 @@ internal static class TripRules
                 Limit = new Reading(limit.Value, ReadingUnit.Seconds),
                 Policy = $"{PolicyFile.Setting(policy, "trend_min_tests")}; {PolicyFile.Setting(policy, "trip_trend_scatter_band_percent")}",
                 ForecastOn = on,
+                Trend = line,
             });
         }
     }

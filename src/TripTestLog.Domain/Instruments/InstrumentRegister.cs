@@ -11,6 +11,10 @@ public sealed class InstrumentRegister(IReadOnlyList<InstrumentCalibration> cali
     /// <summary>An empty register.</summary>
     public static InstrumentRegister Empty { get; } = new([]);
 
+    /// <summary>The calibration period of <paramref name="instrument"/> that covers <paramref name="date"/>, or null.</summary>
+    public InstrumentCalibration? PeriodOn(string instrument, DateOnly date) =>
+        _byName[instrument].Where(p => p.CalibratedOn <= date && date <= p.CalibrationDue).OrderByDescending(p => p.CalibratedOn).FirstOrDefault();
+
     /// <summary>
     /// The finding for a measurement taken with <paramref name="instrument"/> on <paramref name="date"/>, or null when it
     /// is traceable. An instrument left blank or unregistered is a finding only when <paramref name="requireRegistered"/>.
