@@ -1,0 +1,66 @@
+using ScottPlot;
+
+namespace TripTestLog.Reports.Charts;
+
+/// <summary>
+/// The charts' own look: a pale band, dark edges, and marks that differ by shape as well as colour, so a black-and-white
+/// print still tells a failure from a pass.
+/// </summary>
+internal static class ChartStyle
+{
+    public static readonly Color Band = Color.FromHex("#d9e6d3");
+    public static readonly Color Edge = Color.FromHex("#2f4a2a");
+    public static readonly Color Pass = Color.FromHex("#1d4e89");
+    public static readonly Color Fail = Color.FromHex("#a4161a");
+    public static readonly Color Doubt = Color.FromHex("#6c6c6c");
+    public static readonly Color Limit = Color.FromHex("#a4161a");
+    public static readonly Color Trend = Color.FromHex("#b5651d");
+
+    public const int Width = 760;
+    public const int Height = 460;
+
+    /// <summary>The marker of each kind of test mark.</summary>
+    public static (MarkerShape Shape, Color Color, float Size) Marker(MarkKind kind) => kind switch
+    {
+        MarkKind.Failed => (MarkerShape.Eks, Fail, 14),
+        MarkKind.NotAssessable => (MarkerShape.OpenTriangleUp, Doubt, 10),
+        MarkKind.Held => (MarkerShape.OpenSquare, Pass, 9),
+        MarkKind.PassBand => (MarkerShape.OpenCircle, Pass, 9),
+        _ => (MarkerShape.FilledCircle, Pass, 8),
+    };
+
+    /// <summary>A plot with the shipped font and a white background.</summary>
+    public static Plot NewPlot()
+    {
+        var plot = new Plot();
+        ChartFont.Apply(plot);
+        return plot;
+    }
+
+    /// <summary>The chart as SVG markup, ready to inline in a page (without the XML declaration, which HTML does not take).</summary>
+    public static string Svg(Plot plot, int width = Width, int height = Height)
+    {
+        var svg = plot.GetSvgXml(width, height);
+        var start = svg.IndexOf("<svg", StringComparison.Ordinal);
+        return start > 0 ? svg[start..] : svg;
+    }
+}
+
+/// <summary>How a test is marked on a chart.</summary>
+internal enum MarkKind
+{
+    /// <summary>Passed at a standard's own point (filled circle).</summary>
+    PassNormative,
+
+    /// <summary>Passed on the band between points (open circle).</summary>
+    PassBand,
+
+    /// <summary>Held without tripping for the time shown (open square).</summary>
+    Held,
+
+    /// <summary>Too early or too late (a bold X).</summary>
+    Failed,
+
+    /// <summary>Not assessable (open triangle).</summary>
+    NotAssessable,
+}

@@ -1,0 +1,144 @@
+using ScottPlot;
+using TripTestLog.Application.Check;
+using TripTestLog.Domain.Envelopes;
+using TripTestLog.Domain.Measurements;
+using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Verdicts;
+
+namespace TripTestLog.Reports.Charts;
+
+/// <summary>
+/// The time-current chart of one device: log current (as a multiple of the setting) against log time, the guaranteed
+/// band shaded between solid edges, the typical edges dashed, and every test marked by its verdict. The band is drawn
+/// for the reference conditions (cold, all poles); each test's mark shows the verdict it got under its own conditions.
+/// </summary>
+internal static class TimeCurrentChart
+{
+    /// <summary>The lowest and highest times drawn: 1 ms to 30,000 s.</summary>
+    public const double FloorSeconds = 1e-3, CeilingSeconds = 3e4;
+
+    /// <summary>The band sampled for drawing: each edge in seconds, NaN where there is none.</summary>
+    internal sealed record BandLines(double[] Multiples, double[] Minimum, double[] Maximum, double[] TypicalMinimum, double[] TypicalMaximum);
+
+    /// <summary>A test on the chart.</summary>
+    internal sealed record Mark(double Multiple, double Seconds, MarkKind Kind, string Label);
+
+    /// <summary>The band at log-spaced multiples from 1 to <paramref name="upTo"/>, and just either side of each standard's point.</summary>
+    public static BandLines Band(ITripEnvelope envelope, double upTo)
+    {
+        var multiples = Enumerable.Range(0, 121).Select(i => Math.Pow(10, Math.Log10(upTo) * i / 120))
+            .Concat(envelope.Points.SelectMany(p => new[] { p.Multiple.Value * 0.999999, p.Multiple.Value * 1.000001 }))
+            .Where(m => m >= 1 && m <= upTo)
+            .Distinct()
+            .Order()
+            .ToArray();
+        var bands = multiples.Select(m => envelope.At(CurrentMultiple.Of(m) * envelope.Reference).For(TestConditions.Reference)).ToArray();
+        return new BandLines(
+            multiples,
+            [.. bands.Select(b => b.HasRequirement ? Bottom(b.Minimum.Limit) : double.NaN)],
+            [.. bands.Select(b => b.HasRequirement ? Top(b.Maximum.Limit) : double.NaN)],
+            [.. bands.Select(b => b.TypicalMinimum is { } t ? Bottom(t.Limit) : double.NaN)],
+            [.. bands.Select(b => b.TypicalMaximum is { } t ? Top(t.Limit) : double.NaN)]);
+    }
+
+    /// <summary>Each test as a mark: its current over the envelope's reference, its time, and how its verdict is drawn.</summary>
+    public static IReadOnlyList<Mark> Marks(IEnumerable<JudgedTrip> trips) =>
+        [.. trips.Select(t =>
+        {
+            var m = t.Trip.Measurement;
+            var a = t.Assessment;
+            var kind = a.IsFailure ? MarkKind.Failed
+                : a.Verdict == Verdict.NotAssessable ? MarkKind.NotAssessable
+                : !m.Outcome.Tripped ? MarkKind.Held
+                : a.Basis == VerdictBasis.Normative ? MarkKind.PassNormative
+                : MarkKind.PassBand;
+            return new Mark(m.Current.Value / t.Envelope.Reference.Value, Math.Clamp(m.Outcome.Time.Value, FloorSeconds, CeilingSeconds), kind,
+                $"{m.TestedAt.Date:yyyy-MM-dd} {(m.Stage == TestStage.AsLeft ? "as-left" : "as-found")}");
+        })];
+
+    /// <summary>The chart as a ScottPlot plot (kept for tests to inspect), from the band and the marks.</summary>
+    public static Plot Build(ITripEnvelope envelope, BandLines band, IReadOnlyList<Mark> marks)
+    {
+        var plot = ChartStyle.NewPlot();
+        var xs = band.Multiples.Select(Math.Log10).ToArray();
+        var lower = band.Minimum.Select(Log).ToArray();
+        var upper = band.Maximum.Select(Log).ToArray();
+        var drawn = Enumerable.Range(0, xs.Length).Where(i => !double.IsNaN(lower[i]) && !double.IsNaN(upper[i])).ToArray();
+        if (drawn.Length > 1)
+        {
+            var fill = plot.Add.FillY([.. drawn.Select(i => xs[i])], [.. drawn.Select(i => lower[i])], [.. drawn.Select(i => upper[i])]);
+            fill.FillColor = ChartStyle.Band;
+            fill.LineWidth = 0;
+            fill.LegendText = "allowed band (guaranteed)";
+        }
+
+        Line(plot, xs, lower, ChartStyle.Edge, dashed: false, "earliest allowed");
+        Line(plot, xs, upper, ChartStyle.Edge, dashed: false, "latest allowed");
+        Line(plot, xs, [.. band.TypicalMinimum.Select(Log)], ChartStyle.Edge, dashed: true, "typical edges (advisory only)");
+        Line(plot, xs, [.. band.TypicalMaximum.Select(Log)], ChartStyle.Edge, dashed: true, null);
+
+        foreach (var group in marks.GroupBy(m => m.Kind).OrderBy(g => g.Key))
+        {
+            var (shape, color, size) = ChartStyle.Marker(group.Key);
+            double[] gx = [.. group.Select(m => Math.Log10(m.Multiple))];
+            double[] gy = [.. group.Select(m => Math.Log10(m.Seconds))];
+            var points = plot.Add.ScatterPoints(gx, gy);
+            points.MarkerShape = shape;
+            points.MarkerSize = size;
+            points.MarkerLineWidth = group.Key == MarkKind.Failed ? 3 : 1.5f;
+            points.Color = color;
+            points.LegendText = Legend(group.Key);
+        }
+
+        LogAxes.Apply(plot.Axes.Bottom, LogAxes.Multiple);
+        LogAxes.Apply(plot.Axes.Left, LogAxes.Seconds);
+        plot.XLabel($"current, multiple of {envelope.ReferenceName} ({envelope.Reference})");
+        plot.YLabel("trip time");
+        plot.Axes.SetLimits(0, Math.Log10(band.Multiples[^1]), Math.Log10(FloorSeconds), Math.Log10(CeilingSeconds));
+        plot.ShowLegend(Alignment.UpperRight);
+        return plot;
+    }
+
+    /// <summary>The chart of a device's envelope and tests as SVG.</summary>
+    public static string Svg(ITripEnvelope envelope, IReadOnlyList<JudgedTrip> trips)
+    {
+        var marks = Marks(trips);
+        var upTo = Math.Max(20, marks.Count == 0 ? 0 : marks.Max(m => m.Multiple) * 1.5);
+        return ChartStyle.Svg(Build(envelope, Band(envelope, upTo), marks));
+    }
+
+    public static string Legend(MarkKind kind) => kind switch
+    {
+        MarkKind.Failed => "too early or too late",
+        MarkKind.NotAssessable => "not assessable",
+        MarkKind.Held => "held, no trip",
+        MarkKind.PassBand => "pass (band between points)",
+        _ => "pass (standard's point)",
+    };
+
+    private static void Line(Plot plot, double[] xs, double[] ys, Color color, bool dashed, string? legend)
+    {
+        if (ys.All(double.IsNaN))
+        {
+            return;
+        }
+
+        if (dashed)
+        {
+            Dashes.Add(plot, xs, ys, color, 1.5f, legend);
+            return;
+        }
+
+        var line = plot.Add.Scatter(xs, ys);
+        line.Color = color;
+        line.LineWidth = 2;
+        line.MarkerSize = 0;
+        line.LegendText = legend ?? "";
+    }
+
+    private static double Bottom(Seconds? limit) => limit is { } l ? Math.Clamp(l.Value, FloorSeconds, CeilingSeconds) : double.NaN;
+
+    private static double Top(Seconds? limit) => limit is { } l ? Math.Clamp(l.Value, FloorSeconds, CeilingSeconds) : CeilingSeconds;
+
+    private static double Log(double seconds) => double.IsNaN(seconds) ? double.NaN : Math.Log10(seconds);
+}

@@ -1,0 +1,225 @@
+using System.Text;
+using TripTestLog.Application.Check;
+using TripTestLog.Application.Findings;
+using TripTestLog.Domain.Codes;
+using TripTestLog.Domain.Measurements;
+using TripTestLog.Domain.Trends;
+using TripTestLog.Domain.Verdicts;
+using TripTestLog.Reports.Charts;
+using static TripTestLog.Reports.Html.Markup;
+
+namespace TripTestLog.Reports.Html;
+
+/// <summary>
+/// One device's page: the register entry and settings history, the time-current chart, every trip record with its
+/// verdict and source, drift charts, contact and insulation results, its findings, and a sign-off block for a print.
+/// </summary>
+internal static class DevicePage
+{
+    public static string Write(DeviceReport report, ReportContext context)
+    {
+        var condition = report.Condition;
+        var device = condition.Device;
+        var html = new StringBuilder(64 * 1024);
+        Layout.Begin(html, $"{device.Tag}: {device.Site}, {device.Location}",
+            $"Condition {TextCodes.Grade.Of(condition.Grade)}; next as-found test due {condition.DueOn:yyyy-MM-dd}"
+            + (condition.Overdue ? " (overdue)" : "") + $"; findings as of {context.AsOf:yyyy-MM-dd}", "../index.html");
+        html.Append("<section class=\"device-page\">\n");
+        Register(html, report);
+        Chart(html, report);
+        Trips(html, report.Trips);
+        Drift(html, report);
+        Contacts(html, report);
+        Insulation(html, report);
+        Findings(html, condition);
+        SignOff(html, report, context);
+        html.Append("</section>\n");
+        Layout.End(html, context.Footer);
+        return html.ToString();
+    }
+
+    private static void Register(StringBuilder html, DeviceReport report)
+    {
+        var d = report.Condition.Device;
+        html.Append("<h2>Register entry</h2>\n");
+        Table(html, ["field", "value"],
+        [
+            ["asset tag", H(d.Tag.Value)], ["site", H(d.Site)], ["location", H(d.Location)], ["family", H(TextCodes.Family.Of(d.Family))],
+            ["rated current In", H($"{N(d.RatedCurrent.Value)} A")], ["poles", H(N(d.Poles))], ["rated voltage", H($"{N(d.RatedVoltage.Value)} V")],
+            ["commissioned", H(d.CommissionedOn?.ToString("yyyy-MM-dd") ?? "not recorded")],
+            ["contact limit", H(d.ContactLimit is { } l ? $"{N(l.Value, "0")} micro-ohm" : "not recorded")],
+            ["make, model, serial", H($"{d.Make} {d.Model} {d.Serial}".Trim())],
+            ["settings in force", H(d.Settings.Summary)], ["curve table", H(d.CurveTable ?? "none")], ["ambient table", H(d.AmbientTable ?? "none")],
+        ]);
+        html.Append("<h3>Settings history</h3>\n");
+        Table(html, ["in force from", "settings", "curve table"], report.Records.History.Entries.Select(e => new[]
+        {
+            H(e.SettingsFrom?.ToString("yyyy-MM-dd") ?? "the start"), H(e.Settings.Summary), H(e.CurveTable ?? ""),
+        }));
+    }
+
+    private static void Chart(StringBuilder html, DeviceReport report)
+    {
+        html.Append("<h2>Time-current chart</h2>\n");
+        if (report.Trips.Count == 0)
+        {
+            html.Append("<p class=\"none\">No trip tests recorded.</p>\n");
+            return;
+        }
+
+        var latest = report.Trips[^1];
+        html.Append("<figure>").Append(TimeCurrentChart.Svg(latest.Envelope, report.Trips)).Append("<figcaption>")
+            .Append(H($"Band of the settings in force at the latest test ({latest.Envelope.Standard}, {latest.Device.Settings.Summary}), drawn for a cold "
+                + "start with all poles loaded: shaded between the guaranteed edges (solid), typical edges dashed. Each test is marked at its current "
+                + "over the setting in force on its date, by the verdict it got under its own conditions: filled circle pass at a standard's point, "
+                + "open circle pass between points, square held without tripping, bold X too early or too late, triangle not assessable."))
+            .Append("</figcaption></figure>\n");
+    }
+
+    private static void Trips(StringBuilder html, IReadOnlyList<JudgedTrip> trips)
+    {
+        html.Append("<h2>Trip records</h2>\n");
+        Table(html, ["tested", "stage", "pole", "start", "current", "x ref", "result", "band", "verdict", "basis", "margin", "source"], trips.Select(t =>
+        {
+            var m = t.Trip.Measurement;
+            var a = t.Assessment;
+            var verdict = Verdict(a.Verdict);
+            var band = a.Band.HasRequirement ? $"{Edge(a.Band.Minimum.Limit)} to {Edge(a.Band.Maximum.Limit)}" : "no band";
+            return new[]
+            {
+                H(m.TestedAt.ToString()), H(TextCodes.Stage.Of(m.Stage)), H(m.Pole.Code), H(TextCodes.Start.Of(m.Start)),
+                H($"{N(m.Current.Value, "0.##")} A"), H(N(m.Current.Value / t.Envelope.Reference.Value, "0.##")),
+                H(m.Outcome.ToString()), H(band), $"<span class=\"verdict-{verdict}\">{H(verdict)}</span><br>{H(a.Reason)}",
+                H(a.Basis == VerdictBasis.Normative ? "normative" + (a.Point is { } p ? " " + p.Label : "") : "band"),
+                H(a.Margin.DecadesToNearerEdge is { } d ? N(d, "0.00") + " dec" : ""),
+                H($"{t.Trip.SourceFile}:{t.Trip.SourceLine}"),
+            };
+        }));
+    }
+
+    private static void Drift(StringBuilder html, DeviceReport report)
+    {
+        var points = report.Trips
+            .Where(t => t.Trip.Measurement.Stage == TestStage.AsFound && t.Trip.Measurement.Outcome.Tripped && t.Assessment.Verdict != Domain.Verdicts.Verdict.NotAssessable)
+            .GroupBy(TripPoint.Of)
+            .Where(g => g.Select(t => t.Trip.Measurement.TestedAt.Date).Distinct().Count() >= 2)
+            .ToList();
+        html.Append("<h2>Trip drift at each test point</h2>\n");
+        if (points.Count == 0)
+        {
+            html.Append("<p class=\"none\">No test point has as-found trips on two dates yet.</p>\n");
+            return;
+        }
+
+        html.Append("<div class=\"charts\">");
+        foreach (var point in points)
+        {
+            var tests = point.ToList();
+            var band = tests[^1].Assessment.Band;
+            var exit = report.Condition.Open.FirstOrDefault(f => f.Kind == FindingKind.TripTrendExit && f.Point == point.Key.Label);
+            var chart = DriftChart.Build(point.Key.Label, [.. tests.Select(t => new DriftChart.Point(TrendPoint.YearOf(t.Trip.Measurement.TestedAt.Date),
+                t.Trip.Measurement.Outcome.Time.Value, TimeCurrentChart.Marks([t])[0].Kind))], band.Minimum.Limit?.Value, band.Maximum.Limit?.Value, exit);
+            html.Append("<figure>").Append(ChartStyle.Svg(chart, 520, 320)).Append("</figure>");
+        }
+
+        html.Append("</div>\n");
+    }
+
+    private static void Contacts(StringBuilder html, DeviceReport report)
+    {
+        var readings = ReadingHistory.Contacts(report.Records.Contacts).ToList();
+        html.Append("<h2>Contact resistance</h2>\n");
+        if (readings.Count == 0)
+        {
+            html.Append("<p class=\"none\">No contact resistance readings recorded.</p>\n");
+            return;
+        }
+
+        var forecasts = report.Condition.Open.Where(f => f.Kind == FindingKind.ContactTrendLimit).ToList();
+        var chart = ContactChart.Build(readings, report.Condition.Device.ContactLimit?.Value, forecasts);
+        html.Append("<figure>").Append(ChartStyle.Svg(chart)).Append("<figcaption>")
+            .Append(H("Each pole's median reading at each test, referred to 20 °C for copper (IEC 60228, 0.00393 per K); dotted: each pole's first "
+                + "as-found reading; red: the maker's limit; dashed: a Theil–Sen trend to the date it reaches the limit."))
+            .Append("</figcaption></figure>\n");
+        Table(html, ["tested", "stage", "pole", "at 20 °C", "as measured", "readings", "test current"], readings.Select(r => new[]
+        {
+            H(r.Date.ToString("yyyy-MM-dd")), H(TextCodes.Stage.Of(r.Stage)), H(r.Pole), H(N(r.CorrectedMicroOhms, "0") + " micro-ohm"),
+            H(N(r.MeasuredMicroOhms, "0") + (r.TemperatureKnown ? "" : " (no temperature)")), H(N(r.Readings)), H(N(r.TestCurrentAmperes) + " A"),
+        }));
+    }
+
+    private static void Insulation(StringBuilder html, DeviceReport report)
+    {
+        var readings = ReadingHistory.Insulation(report.Records.Insulation).ToList();
+        html.Append("<h2>Insulation resistance</h2>\n");
+        if (readings.Count == 0)
+        {
+            html.Append("<p class=\"none\">No insulation readings recorded.</p>\n");
+            return;
+        }
+
+        Table(html, ["tested", "stage", "path", "test voltage", "as measured", "at 20 °C (halving per 10 K)"], readings.Select(r => new[]
+        {
+            H(r.Date.ToString("yyyy-MM-dd")), H(TextCodes.Stage.Of(r.Stage)), H(r.Path), H(N(r.TestVoltageVolts, "0") + " V DC"),
+            H((r.OverRange ? ">" : "") + N(r.MeasuredMegaOhms, "0.##") + " MOhm"), H((r.OverRange ? ">" : "") + N(r.CorrectedMegaOhms, "0.##") + " MOhm"),
+        }));
+    }
+
+    private static void Findings(StringBuilder html, Application.Findings.DeviceCondition condition)
+    {
+        html.Append("<h2>Open findings</h2>\n");
+        FindingTable(html, condition.Open);
+        html.Append("<h2>Closed findings</h2>\n");
+        FindingTable(html, condition.Findings.Where(f => !f.Open));
+    }
+
+    internal static void FindingTable(StringBuilder html, IEnumerable<Finding> findings) =>
+        Table(html, ["severity", "kind", "concerns", "first seen", "latest test", "what to do", "requirement or policy"], findings.Select(f =>
+        {
+            var severity = f.Open ? TextCodes.Severity.Of(f.Severity) : "closed";
+            return new[]
+            {
+                $"<span class=\"sev-{H(severity)}\">{H(severity)}</span>", H(TextCodes.FindingKind.Of(f.Kind)),
+                H(f.Pole is not null ? $"pole {f.Pole}" : f.Path is not null ? $"path {f.Path}" : f.Point ?? ""),
+                H(f.FirstSeen?.ToString("yyyy-MM-dd") ?? ""), H(f.TestedAt.Date.ToString("yyyy-MM-dd")),
+                H(f.Message) + (f.Standing is null ? "" : $"<br><em>{H(f.Standing)}</em>"),
+                H(f.Basis) + (f.Policy is null ? "" : $"<br>policy: {H(f.Policy)}"),
+            };
+        }));
+
+    private static void SignOff(StringBuilder html, DeviceReport report, ReportContext context)
+    {
+        html.Append("<h2>Sign-off</h2>\n<table class=\"signoff\"><tbody>")
+            .Append("<tr><th>Tested by</th><td></td><th>Date</th><td></td></tr>")
+            .Append("<tr><th>Checked by</th><td></td><th>Date</th><td></td></tr></tbody></table>\n");
+        var standards = report.Trips.Select(t => t.Envelope.Standard).Distinct().ToList();
+        html.Append("<p>").Append(H($"Standards: {(standards.Count == 0 ? "none (no trip tests)" : string.Join("; ", standards))}.")).Append("</p>\n");
+        var policy = PolicyFile.Write(context.Policy).Split('\n').Where(l => l.Contains(" = ", StringComparison.Ordinal) && !l.StartsWith('#'));
+        html.Append("<p>").Append(H($"Lab policy ({context.PolicyFrom}): {string.Join("; ", policy)}.")).Append("</p>\n");
+        var used = report.Trips.Select(t => (t.Trip.Measurement.Instrument, t.Trip.Measurement.TestedAt.Date))
+            .Concat(report.Records.Contacts.Select(c => (c.Measurement.Instrument, c.Measurement.TestedAt.Date)))
+            .Where(u => u.Instrument.Length > 0)
+            .GroupBy(u => u.Instrument)
+            .Select(g => (Name: g.Key, Latest: g.Max(u => u.Date)))
+            .OrderBy(u => u.Name, StringComparer.Ordinal);
+        html.Append("<h3>Instruments</h3>\n");
+        Table(html, ["instrument", "last used", "calibration on that date"], used.Select(u => new[]
+        {
+            H(u.Name), H(u.Latest.ToString("yyyy-MM-dd")),
+            H(context.Instruments.PeriodOn(u.Name, u.Latest) is { } p
+                ? $"{p.Kind} {p.Serial}: calibrated {p.CalibratedOn:yyyy-MM-dd}, due {p.CalibrationDue:yyyy-MM-dd}"
+                : context.Instruments.Trace(u.Name, u.Latest, true)?.Message ?? ""),
+        }));
+        html.Append("<p>").Append(H(context.Footer)).Append("</p>\n");
+    }
+
+    private static string Verdict(Verdict verdict) => verdict switch
+    {
+        Domain.Verdicts.Verdict.Pass => "pass",
+        Domain.Verdicts.Verdict.TooEarly => "too-early",
+        Domain.Verdicts.Verdict.TooLate => "too-late",
+        _ => "not-assessable",
+    };
+
+    private static string Edge(Domain.Quantities.Seconds? limit) => limit is { } s ? s.ToString() : "none";
+}

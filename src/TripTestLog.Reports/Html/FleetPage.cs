@@ -1,0 +1,90 @@
+using System.Text;
+using TripTestLog.Application.Findings;
+using TripTestLog.Domain.Codes;
+using TripTestLog.Domain.Condition;
+using TripTestLog.Domain.Verdicts;
+using TripTestLog.Reports.Charts;
+using static TripTestLog.Reports.Html.Markup;
+
+namespace TripTestLog.Reports.Html;
+
+/// <summary>
+/// The fleet page for the asset manager: counts by site and grade with a chart, the priority list with the reason in
+/// words, overdue devices, the biggest drifts and soonest forecasts, results per family and rating, and the
+/// instruments used while untraceable.
+/// </summary>
+internal static class FleetPage
+{
+    public static string Write(FleetReport fleet, ReportContext context, Func<string, string?> pageOf, string selection)
+    {
+        var html = new StringBuilder(64 * 1024);
+        var sites = fleet.Summary.Sites;
+        var devices = sites.Values.Sum(s => s.Devices);
+        Layout.Begin(html, "Fleet condition", $"{devices} devices at {sites.Count} sites{selection}; findings as of {context.AsOf:yyyy-MM-dd}", null);
+        html.Append("<nav>Data beside this page: <a href=\"findings.csv\">findings.csv</a> <a href=\"findings.json\">findings.json</a> ")
+            .Append("<a href=\"verdicts.csv\">verdicts.csv</a> <a href=\"verdicts.json\">verdicts.json</a></nav>\n");
+        var grades = Enum.GetValues<ConditionGrade>();
+
+        html.Append("<h2>Devices by site and condition grade</h2>\n");
+        Table(html, ["site", "devices", .. grades.Select(g => TextCodes.Grade.Of(g)), "overdue"],
+            sites.Select(s => (string[])[H(s.Key), N(s.Value.Devices), .. s.Value.ByGrade.Select(n => N(n)), N(s.Value.Overdue)])
+                .Append(["all sites", N(devices), .. grades.Select(g => N(sites.Values.Sum(s => s.ByGrade[(int)g]))), N(sites.Values.Sum(s => s.Overdue))]));
+        var totals = grades.Select(g => sites.Values.Sum(s => s.ByGrade[(int)g])).ToList();
+        html.Append("<figure>").Append(ChartStyle.Svg(GradeChart.Build(totals), 640, 300)).Append("<figcaption>")
+            .Append(H("Grades: sound, nothing open; watch, look into it; plan-work, a trend or change needs work; repair, over a limit or out of "
+                + "band; take-out-of-service, may not protect its circuit until repaired and retested."))
+            .Append("</figcaption></figure>\n");
+
+        html.Append("<h2>Act first</h2>\n<p class=\"sub\">Worst grade first, then the soonest forecast, then overdue.</p>\n");
+        Table(html, ["#", "device", "site", "grade", "next test due", "why it is here"], fleet.Summary.Priority.Select((d, i) => new[]
+        {
+            N(i + 1), Link(d, pageOf), H(d.Device.Site), $"<span class=\"grade\">{H(TextCodes.Grade.Of(d.Grade))}</span>",
+            H(d.DueOn.ToString("yyyy-MM-dd")) + (d.Overdue ? " (overdue)" : ""), H(Why(d)),
+        }));
+
+        html.Append("<h2>Overdue for test</h2>\n");
+        Table(html, ["device", "site", "last as-found test", "was due", "days overdue"], fleet.Overdue.Select(d => new[]
+        {
+            Link(d, pageOf), H(d.Device.Site), H(d.LastTested?.ToString("yyyy-MM-dd") ?? "never"), H(d.DueOn.ToString("yyyy-MM-dd")),
+            N(context.AsOf.DayNumber - d.DueOn.DayNumber),
+        }));
+
+        html.Append("<h2>Biggest drifts</h2>\n");
+        Table(html, ["device", "test point", "change", "what moved"], fleet.Drifts.Select(x => new[]
+        {
+            Link(x.Device, pageOf), H(x.Finding.Point ?? ""), H(x.Finding.Value is { } v ? N(v.Amount, "+0;-0") + " %" : ""), H(x.Finding.Message),
+        }));
+        html.Append("<h2>Forecast exits and limits</h2>\n");
+        Table(html, ["device", "kind", "concerns", "forecast date", "what to do"], fleet.Forecasts.Select(x => new[]
+        {
+            Link(x.Device, pageOf), H(TextCodes.FindingKind.Of(x.Finding.Kind)),
+            H(x.Finding.Pole is not null ? $"pole {x.Finding.Pole}" : x.Finding.Path is not null ? $"path {x.Finding.Path}" : x.Finding.Point ?? ""),
+            H(x.Finding.ForecastOn?.ToString("yyyy-MM-dd") ?? ""), H(x.Finding.Message),
+        }));
+
+        html.Append("<h2>Trip results per family and rating</h2>\n");
+        Table(html, ["family", "rating", "tests", "pass", "too early", "too late", "not assessable"], fleet.Results.Select(r => new[]
+        {
+            H(r.Key.Family), H(N(r.Key.Rating) + " A"), N(r.Value.Sum()), N(r.Value[(int)Verdict.Pass]), N(r.Value[(int)Verdict.TooEarly]),
+            N(r.Value[(int)Verdict.TooLate]), N(r.Value[(int)Verdict.NotAssessable]),
+        }));
+
+        html.Append("<h2>Instruments used while untraceable</h2>\n");
+        Table(html, ["instrument", "records touched", "devices", "why"], fleet.Lapses.Select(l => new[]
+        {
+            H(l.Key), N(l.Value.Records), N(l.Value.Devices), H(l.Value.Reason),
+        }));
+        Layout.End(html, context.Footer);
+        return html.ToString();
+    }
+
+    /// <summary>The worst open finding in words, and how many more there are.</summary>
+    private static string Why(DeviceCondition device)
+    {
+        var open = device.Open.OrderByDescending(f => f.Kind != FindingKind.TestOverdue).ThenByDescending(f => f.Severity).ToList();
+        return open.Count == 0 ? "" : open[0].Message + (open.Count > 1 ? $" (and {open.Count - 1} more)" : "");
+    }
+
+    private static string Link(DeviceCondition device, Func<string, string?> pageOf) =>
+        pageOf(device.Device.Tag.Value) is { } page ? $"<a href=\"{Href("devices", page)}\">{H(device.Device.Tag.Value)}</a>" : H(device.Device.Tag.Value);
+}

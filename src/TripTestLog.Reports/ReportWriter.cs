@@ -1,0 +1,53 @@
+using System.Text;
+using TripTestLog.Application.Findings;
+using TripTestLog.Reports.Html;
+
+namespace TripTestLog.Reports;
+
+/// <summary>
+/// Writes a report folder as device conditions stream past: one self-contained page per device in <c>devices/</c>
+/// (inline styles and SVG charts, no network fetch), written one after another as each device arrives, and the fleet
+/// page <c>index.html</c> at the end from the bounded fleet lists.
+/// </summary>
+public sealed class ReportWriter
+{
+    private readonly string _folder;
+    private readonly ReportContext _context;
+    private readonly bool _devicePages;
+    private readonly FleetReport _fleet = new(30);
+    private readonly HashSet<string> _pages = new(StringComparer.Ordinal);
+
+    /// <summary>Starts a report in <paramref name="folder"/> (created if missing); <paramref name="devicePages"/> writes a page per device.</summary>
+    public ReportWriter(string folder, ReportContext context, bool devicePages)
+    {
+        _folder = folder;
+        _context = context;
+        _devicePages = devicePages;
+        Directory.CreateDirectory(Path.Combine(folder, "devices"));
+    }
+
+    /// <summary>How many device pages were written.</summary>
+    public int DevicePages => _pages.Count;
+
+    /// <summary>Takes one device: its page, and its place in the fleet lists.</summary>
+    public void Add(DeviceReport report)
+    {
+        ArgumentNullException.ThrowIfNull(report);
+        _fleet.Add(report);
+        if (_devicePages)
+        {
+            var tag = report.Condition.Device.Tag.Value;
+            var page = Markup.PageName(tag);
+            File.WriteAllText(Path.Combine(_folder, "devices", page), DevicePage.Write(report, _context), Encoding.UTF8);
+            _pages.Add(tag);
+        }
+    }
+
+    /// <summary>Writes the fleet page and returns its path; <paramref name="selection"/> describes a filter, e.g. ", site X".</summary>
+    public string Finish(string selection = "")
+    {
+        var path = Path.Combine(_folder, "index.html");
+        File.WriteAllText(path, FleetPage.Write(_fleet, _context, tag => _pages.Contains(tag) ? Markup.PageName(tag) : null, selection), Encoding.UTF8);
+        return path;
+    }
+}
