@@ -18,6 +18,7 @@ internal static class CliApp
             FindingsCommand.Create(cli),
             FleetCommand.Create(cli),
             PolicyCommand.Create(cli),
+            ReportCommand.Create(cli),
             EnvelopeCommand.Create(cli),
             VerifyCommand.Create(cli),
             BackupCommand.Create(cli),

@@ -20,7 +20,7 @@ namespace TripTestLog.Benchmarks;
 /// </summary>
 internal static class Program
 {
-    private static readonly string[] Steps = ["floor-insert", "import", "reimport", "floor-read", "check", "findings"];
+    private static readonly string[] Steps = ["floor-insert", "import", "reimport", "floor-read", "check", "findings", "report", "pages"];
 
     private static int Main(string[] args)
     {
@@ -64,7 +64,7 @@ internal static class Program
             {
                 Console.Error.WriteLine($"  {step} ...");
                 results[step] = Child(step, work);
-                if (results[step].Rows != rows && step is not "reimport" and not "findings")
+                if (results[step].Rows != rows && step is not "reimport" and not "findings" and not "report" and not "pages")
                 {
                     throw new InvalidOperationException($"{step} handled {results[step].Rows} rows, not {rows}");
                 }
@@ -76,6 +76,9 @@ internal static class Program
             Print(rows, "floor-read", results["floor-read"], null);
             Print(rows, "check --json", results["check"], results["floor-read"], slower: true);
             Print(rows, "findings", results["findings"], results["floor-read"], slower: true);
+            Print(rows, "report", results["report"], results["check"], slower: true);
+            Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                $"{rows,8}  device pages: {results["pages"].Rows} written in {results["pages"].Seconds:0.00} s, {results["pages"].Rows / results["pages"].Seconds:0} pages/s ({results["pages"].PeakMb:0} MB peak)"));
             perRow.Add((rows, results["import"].Seconds, results["check"].Seconds));
             Directory.Delete(work, recursive: true);
         }
@@ -224,6 +227,38 @@ internal static class Program
                     }
 
                     json.Finish();
+                }
+
+                break;
+            case "report":
+            case "pages":
+                // report: the fleet page and the data files beside it (device pages off); x floor is its time over
+                // check's. pages: the time spent writing device pages alone, for the first 500 devices.
+                using (var store = RecordStore.Open(project))
+                {
+                    var folder = Path.Combine(work, step);
+                    var context = new TripTestLog.Reports.ReportContext(project, "benchmark", today, DateTimeOffset.UtcNow, FindingPolicy.Default, "defaults", store.Instruments());
+                    if (step == "report")
+                    {
+                        TripTestLog.Cli.Services.ReportRun.Write(store, folder, context, new TripTestLog.Cli.Services.ReportRun.Selection(null, null, null, null, false), default);
+                        rows = 1;
+                    }
+                    else
+                    {
+                        var writer = new TripTestLog.Reports.ReportWriter(folder, context, devicePages: true);
+                        var pageClock = new Stopwatch();
+                        rows = 0;
+                        foreach (var device in FindingsPipeline.RunWithRecords(store, FindingPolicy.Default, today).Take(500))
+                        {
+                            pageClock.Start();
+                            writer.Add(device);
+                            pageClock.Stop();
+                            rows++;
+                        }
+
+                        Console.WriteLine(JsonSerializer.Serialize(new StepResult(pageClock.Elapsed.TotalSeconds, rows, Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0)));
+                        return 0;
+                    }
                 }
 
                 break;

@@ -14,6 +14,7 @@ public sealed class HelpTextTests
     [InlineData("findings", new[] { "findings" })]
     [InlineData("fleet", new[] { "fleet" })]
     [InlineData("policy", new[] { "policy" })]
+    [InlineData("report", new[] { "report" })]
     public void HelpText_MatchesTheGoldenFile(string name, string[] command)
     {
         var (exit, output, _) = CliRun.Run([.. command, "--help"]);

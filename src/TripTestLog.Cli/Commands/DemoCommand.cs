@@ -97,6 +97,13 @@ internal static class DemoCommand
         cli.Out.WriteLine();
         cli.Out.WriteLine(counts.Summary("Checked"));
         cli.Out.WriteLine();
+        string reportPage;
+        using (var store = RecordStore.Open(db.FullName))
+        {
+            var context = new Reports.ReportContext(db.FullName, ReportRun.ToolVersion, cli.Today, cli.Clock.GetUtcNow(), policy.Policy, policy.From, store.Instruments());
+            reportPage = ReportRun.Write(store, Path.Combine(output.FullName, "report"), context, new ReportRun.Selection(null, null, null, null, true), cli.Cancel).FleetPage;
+        }
+
         FleetText.Write(cli.Out, fleet, cli.Today.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture), policy.From);
         cli.Out.WriteLine();
         cli.Out.WriteLine("Results:");
@@ -106,6 +113,7 @@ internal static class DemoCommand
         cli.Out.WriteLine($"  findings   {findingsText}");
         cli.Out.WriteLine($"  json       {findingsJson}");
         cli.Out.WriteLine($"  log        {ImportCommand.LogPath(db)}");
+        cli.Out.WriteLine($"  report     {reportPage}");
         cli.Out.WriteLine($"Next: triptestlog check --db {db.FullName}");
         cli.Out.WriteLine($"      triptestlog findings --db {db.FullName}");
         cli.Out.WriteLine($"      triptestlog fleet --db {db.FullName}");

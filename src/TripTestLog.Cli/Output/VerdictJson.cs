@@ -22,7 +22,7 @@ internal sealed class VerdictJson(TextWriter writer) : IVerdictWriter
 
     public void Finish() => writer.WriteLine(_started ? "\n]" : "[]");
 
-    private static VerdictRow Row(JudgedTrip r)
+    internal static VerdictRow Row(JudgedTrip r)
     {
         var m = r.Trip.Measurement;
         var a = r.Assessment;

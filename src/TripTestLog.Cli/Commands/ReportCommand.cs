@@ -1,0 +1,103 @@
+using System.CommandLine;
+using System.Diagnostics;
+using TripTestLog.Cli.Services;
+using TripTestLog.Reports;
+using TripTestLog.Storage;
+
+namespace TripTestLog.Cli.Commands;
+
+/// <summary>`report`: a folder of self-contained HTML pages (fleet and devices) with CSV and JSON beside them.</summary>
+internal static class ReportCommand
+{
+    public static Command Create(CliContext cli)
+    {
+        var shared = new ConditionOptions();
+        var output = new Option<DirectoryInfo?>("--out") { Description = "Folder for the report (default: report/ beside the database)", HelpName = "DIR" };
+        var from = new Option<string?>("--from") { Description = "Show trip tests from this date", HelpName = "YYYY-MM-DD" };
+        var to = new Option<string?>("--to") { Description = "Show trip tests up to this date", HelpName = "YYYY-MM-DD" };
+        var pages = new Option<string>("--device-pages")
+        {
+            Description = "Write a page per device (all) or the fleet page only (none)", DefaultValueFactory = _ => "all", HelpName = "all|none",
+        };
+        var command = new Command("report", "Write HTML pages a person reads: the fleet page, a page per device, with CSV and JSON beside them");
+        foreach (var option in shared.All.Concat<Option>([output, from, to, pages]))
+        {
+            command.Options.Add(option);
+        }
+
+        command.SetAction(parse =>
+        {
+            if (shared.Resolve(parse, cli) is not { } options)
+            {
+                return ExitCodes.BadInput;
+            }
+
+            DateOnly? first = null, last = null;
+            if (parse.GetValue(from) is { } f)
+            {
+                if (!ConditionOptions.Date(f, "--from", cli, out var d))
+                {
+                    return ExitCodes.BadInput;
+                }
+
+                first = d;
+            }
+
+            if (parse.GetValue(to) is { } t)
+            {
+                if (!ConditionOptions.Date(t, "--to", cli, out var d))
+                {
+                    return ExitCodes.BadInput;
+                }
+
+                last = d;
+            }
+
+            if (parse.GetValue(pages) is not ("all" or "none"))
+            {
+                cli.Error.WriteLine($"error: --device-pages: expected all or none, got '{parse.GetValue(pages)}'");
+                return ExitCodes.BadInput;
+            }
+
+            var folder = parse.GetValue(output)?.FullName ?? Path.Combine(options.Database.DirectoryName ?? ".", "report");
+            return Run(cli, options, folder, new ReportRun.Selection(options.Site, options.Only, first, last, parse.GetValue(pages) == "all"));
+        });
+        return command;
+    }
+
+    private static int Run(CliContext cli, ConditionOptions.Resolved options, string folder, ReportRun.Selection selection)
+    {
+        try
+        {
+            Directory.CreateDirectory(folder);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            cli.Error.WriteLine($"error: --out: cannot write the report to {folder}: {e.Message}");
+            return ExitCodes.BadInput;
+        }
+
+        using var store = RecordStore.Open(options.Database.FullName);
+        if (options.Only is { } tag && !store.Devices(tag).Any())
+        {
+            cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {options.Database.FullName}");
+            return ExitCodes.BadInput;
+        }
+
+        var context = new ReportContext(options.Database.FullName, ReportRun.ToolVersion, options.AsOf, cli.Clock.GetUtcNow(), options.Policy,
+            options.PolicyFrom, store.Instruments());
+        var clock = Stopwatch.StartNew();
+        try
+        {
+            var (page, devices) = ReportRun.Write(store, folder, context, selection, cli.Cancel);
+            cli.Out.WriteLine($"Wrote {devices} device pages and the fleet page in {clock.Elapsed.TotalSeconds:0.0} s.");
+            cli.Out.WriteLine($"Fleet page: {page}");
+            return ExitCodes.Ok;
+        }
+        catch (OperationCanceledException)
+        {
+            cli.Error.WriteLine("report stopped: the folder holds an incomplete report");
+            return ExitCodes.BadInput;
+        }
+    }
+}

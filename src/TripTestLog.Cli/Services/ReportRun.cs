@@ -1,0 +1,66 @@
+using System.Reflection;
+using TripTestLog.Application.Check;
+using TripTestLog.Application.Findings;
+using TripTestLog.Cli.Output;
+using TripTestLog.Domain.Devices;
+using TripTestLog.Reports;
+using TripTestLog.Storage;
+
+namespace TripTestLog.Cli.Services;
+
+/// <summary>
+/// One report run: the findings pipeline streams each device to the report writer (its page), and to the companion
+/// files beside the pages (findings and verdicts as CSV and JSON), so nothing is held for the whole fleet.
+/// </summary>
+internal static class ReportRun
+{
+    /// <summary>What to include.</summary>
+    public sealed record Selection(string? Site, AssetTag? Only, DateOnly? From, DateOnly? To, bool DevicePages)
+    {
+        public string Describe => (Site is null ? "" : $", site {Site}") + (Only is { } t ? $", device {t}" : "")
+            + (From is { } f ? $", tests from {f:yyyy-MM-dd}" : "") + (To is { } to ? $", tests to {to:yyyy-MM-dd}" : "");
+    }
+
+    /// <summary>The tool's version, as every page prints it.</summary>
+    public static string ToolVersion =>
+        typeof(ReportRun).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion.Split('+')[0] ?? "unknown";
+
+    /// <summary>Writes the report into <paramref name="folder"/> and returns the fleet page's path and the number of device pages.</summary>
+    public static (string FleetPage, int DevicePages) Write(RecordStore store, string folder, ReportContext context, Selection selection, CancellationToken cancel)
+    {
+        var writer = new ReportWriter(folder, context, selection.DevicePages);
+        using var findingsCsvFile = new StreamWriter(Path.Combine(folder, "findings.csv"));
+        using var findingsJsonFile = new StreamWriter(Path.Combine(folder, "findings.json"));
+        using var verdictsCsvFile = new StreamWriter(Path.Combine(folder, "verdicts.csv"));
+        using var verdictsJsonFile = new StreamWriter(Path.Combine(folder, "verdicts.json"));
+        var findingsCsv = new FindingCsv(findingsCsvFile);
+        using var findingsJson = new FindingJson(findingsJsonFile);
+        var verdicts = new VerdictWriters(new VerdictCsv(verdictsCsvFile), new VerdictJson(verdictsJsonFile), new VerdictCounts());
+        foreach (var device in FindingsPipeline.RunWithRecords(store, context.Policy, context.AsOf, selection.Only, cancel))
+        {
+            if (selection.Site is { } site && !string.Equals(device.Condition.Device.Site, site, StringComparison.OrdinalIgnoreCase))
+            {
+                continue;
+            }
+
+            var shown = selection.From is null && selection.To is null ? device : device with { Trips = [.. device.Trips.Where(t => InPeriod(t, selection))] };
+            writer.Add(shown);
+            findingsCsv.Add(device.Condition, device.Condition.Findings);
+            findingsJson.Add(device.Condition, device.Condition.Findings);
+            foreach (var trip in shown.Trips)
+            {
+                verdicts.Add(trip);
+            }
+        }
+
+        findingsJson.Finish();
+        verdicts.Finish();
+        return (writer.Finish(selection.Describe), writer.DevicePages);
+    }
+
+    private static bool InPeriod(JudgedTrip trip, Selection selection)
+    {
+        var date = trip.Trip.Measurement.TestedAt.Date;
+        return (selection.From is not { } from || date >= from) && (selection.To is not { } to || date <= to);
+    }
+}

@@ -1,0 +1,58 @@
+using Microsoft.Playwright;
+
+namespace TripTestLog.Cli.Tests;
+
+/// <summary>
+/// The report in a real headless browser: Debian's Chromium (installed by .ci/run), driven by Playwright, which never
+/// downloads a browser of its own. Each page must render its charts and log no error. UPDATE_SCREENSHOTS=1 rewrites the
+/// screenshots under docs/.
+/// </summary>
+public sealed class ReportBrowserTests(SampleFleetDatabase fleet) : IClassFixture<SampleFleetDatabase>
+{
+    private const string Chromium = "/usr/bin/chromium";
+
+    [Theory]
+    [InlineData("index.html", "devices", "report-fleet.png")]
+    [InlineData("devices/BPS-DB1-Q03.html", "trip time", "report-device.png")]
+    [InlineData("devices/ARW-DB2-Q02.html", "contact resistance at 20 °C, micro-ohm", null)]
+    public async Task APage_RendersItsCharts_WithoutConsoleErrors(string page, string chartText, string? screenshot)
+    {
+        Assert.True(File.Exists(Chromium), $"{Chromium} is missing: install Debian's chromium package (apt-get install -y chromium), as .ci/run does");
+        var folder = Path.Combine(fleet.Folder, "report-browser");
+        if (!File.Exists(Path.Combine(folder, "index.html")))
+        {
+            Assert.Equal(0, CliRun.Run("report", "--db", fleet.Database, "--out", folder).Exit);
+        }
+
+        using var playwright = await Playwright.CreateAsync();
+        await using var browser = await playwright.Chromium.LaunchAsync(new() { ExecutablePath = Chromium, Headless = true, Args = ["--no-sandbox"] });
+        var tab = await browser.NewPageAsync(new() { ViewportSize = new() { Width = 1200, Height = 1500 } });
+        var errors = new List<string>();
+        tab.Console += (_, message) =>
+        {
+            if (message.Type == "error")
+            {
+                errors.Add(message.Text);
+            }
+        };
+        tab.PageError += (_, error) => errors.Add(error);
+        var requests = new List<string>();
+        tab.Request += (_, request) => requests.Add(request.Url);
+
+        await tab.GotoAsync(new Uri(Path.Combine(folder, page)).AbsoluteUri);
+
+        Assert.True(await tab.Locator("svg").CountAsync() >= 1);
+        var texts = await tab.Locator("svg text").AllTextContentsAsync();
+        Assert.Contains(texts, t => t.Trim() == chartText);
+        Assert.Contains("Caution:", await tab.Locator("p.caution").InnerTextAsync());
+        Assert.Empty(errors);
+        Assert.All(requests, url => Assert.StartsWith("file://", url));
+
+        var png = await tab.ScreenshotAsync(new() { FullPage = false });
+        Assert.True(png.Length > 20_000, "the screenshot is nearly empty");
+        if (screenshot is not null && Environment.GetEnvironmentVariable("UPDATE_SCREENSHOTS") == "1")
+        {
+            await File.WriteAllBytesAsync(Path.Combine(Golden.RepositoryRoot(), "docs", screenshot), png);
+        }
+    }
+}

@@ -1,0 +1,73 @@
+using System.Text.Json;
+
+namespace TripTestLog.Cli.Tests;
+
+/// <summary>`report` on the sample fleet and on hostile register data: files written, data escaped, companions beside.</summary>
+public sealed class ReportCommandTests(SampleFleetDatabase fleet) : IClassFixture<SampleFleetDatabase>
+{
+    [Fact]
+    public void TheSampleReport_HasAFleetPage_APagePerDevice_AndTheCompanions()
+    {
+        var folder = Path.Combine(fleet.Folder, "report-test");
+
+        var (exit, output, _) = CliRun.Run("report", "--db", fleet.Database, "--out", folder);
+
+        Assert.Equal(0, exit);
+        Assert.Contains($"Fleet page: {Path.Combine(folder, "index.html")}", output);
+        Assert.Equal(57, Directory.GetFiles(Path.Combine(folder, "devices"), "*.html").Length);
+        var index = File.ReadAllText(Path.Combine(folder, "index.html"));
+        Assert.Contains("href=\"devices/BPS-DB1-Q03.html\"", index);
+        Assert.Contains("Caution:", index);
+        Assert.DoesNotContain("http://", index.Replace("http://www.w3.org/", "", StringComparison.Ordinal), StringComparison.Ordinal);
+        var device = File.ReadAllText(Path.Combine(folder, "devices", "ARW-DB2-Q02.html"));
+        Assert.Contains("Sign-off", device);
+        Assert.Contains("OHM-ARW-1", device);
+        Assert.Contains("Caution:", device);
+
+        // The companions: the same fields as `findings --json` and `check --json`.
+        var findings = JsonDocument.Parse(File.ReadAllText(Path.Combine(folder, "findings.json"))).RootElement;
+        Assert.Equal("asset_tag", findings[0].EnumerateObject().First().Name);
+        var verdictsCsv = File.ReadLines(Path.Combine(folder, "verdicts.csv")).First();
+        var checkFields = JsonDocument.Parse(CliRun.Run("check", "--json", "--asset", "ARW-DB1-Q01", "--db", fleet.Database).Out).RootElement[0]
+            .EnumerateObject().Select(p => p.Name);
+        Assert.Equal(string.Join(',', checkFields), verdictsCsv);
+        Assert.Equal(2239, File.ReadLines(Path.Combine(folder, "verdicts.csv")).Count() - 1);
+    }
+
+    [Fact]
+    public void AReportForOneSite_WritesOnlyItsDevices()
+    {
+        var folder = Path.Combine(fleet.Folder, "report-site");
+
+        var (exit, _, _) = CliRun.Run("report", "--db", fleet.Database, "--out", folder, "--site", "Copperwell Depot");
+
+        Assert.Equal(0, exit);
+        Assert.All(Directory.GetFiles(Path.Combine(folder, "devices")), f => Assert.StartsWith("CWD-", Path.GetFileName(f)));
+        Assert.Equal(10, Directory.GetFiles(Path.Combine(folder, "devices")).Length);
+    }
+
+    [Theory]
+    [InlineData("--device-pages", "some", "error: --device-pages: expected all or none, got 'some'")]
+    [InlineData("--from", "2026-02-30", "error: --from: expected a date as YYYY-MM-DD")]
+    public void AMistake_GetsOnePlainSentence(string option, string value, string expected)
+    {
+        var (exit, output, error) = CliRun.Run("report", "--db", fleet.Database, option, value);
+
+        Assert.Equal(2, exit);
+        Assert.StartsWith(expected, error);
+        Assert.DoesNotContain("   at ", error + output);
+    }
+
+    [Fact]
+    public void AnOutFolderThatIsAFile_IsRefusedPlainly()
+    {
+        var file = Path.Combine(fleet.Folder, "not-a-folder.txt");
+        File.WriteAllText(file, "x");
+
+        var (exit, output, error) = CliRun.Run("report", "--db", fleet.Database, "--out", Path.Combine(file, "report"));
+
+        Assert.Equal(2, exit);
+        Assert.StartsWith("error: --out: cannot write the report to", error);
+        Assert.DoesNotContain("   at ", error + output);
+    }
+}
