@@ -20,7 +20,7 @@ namespace TripTestLog.Benchmarks;
 /// </summary>
 internal static class Program
 {
-    private static readonly string[] Steps = ["floor-insert", "import", "reimport", "floor-read", "check", "findings", "report", "pages"];
+    private static readonly string[] Steps = ["floor-insert", "import", "reimport", "floor-read", "check", "findings", "fleet-page", "report", "pages"];
 
     private static int Main(string[] args)
     {
@@ -64,7 +64,7 @@ internal static class Program
             {
                 Console.Error.WriteLine($"  {step} ...");
                 results[step] = Child(step, work);
-                if (results[step].Rows != rows && step is not "reimport" and not "findings" and not "report" and not "pages")
+                if (results[step].Rows != rows && step is not "reimport" and not "findings" and not "fleet-page" and not "report" and not "pages")
                 {
                     throw new InvalidOperationException($"{step} handled {results[step].Rows} rows, not {rows}");
                 }
@@ -76,6 +76,7 @@ internal static class Program
             Print(rows, "floor-read", results["floor-read"], null);
             Print(rows, "check --json", results["check"], results["floor-read"], slower: true);
             Print(rows, "findings", results["findings"], results["floor-read"], slower: true);
+            Print(rows, "fleet-page", results["fleet-page"], results["check"], slower: true);
             Print(rows, "report", results["report"], results["check"], slower: true);
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
                 $"{rows,8}  device pages: {results["pages"].Rows} written in {results["pages"].Seconds:0.00} s, {results["pages"].Rows / results["pages"].Seconds:0} pages/s ({results["pages"].PeakMb:0} MB peak)"));
@@ -92,7 +93,8 @@ internal static class Program
         }
 
         Console.WriteLine("x floor: for import and re-import, rows/s over the insert floor's (higher is better); for check and findings,");
-        Console.WriteLine("time over the read floor's (lower is better). Findings makes two passes: peers, then each device's findings.");
+        Console.WriteLine("time over the read floor's (lower is better); for fleet-page and report, time over check's. fleet-page: the");
+        Console.WriteLine("fleet page alone; report: the fleet page with the findings and verdicts as CSV and JSON beside it.");
         return 0;
     }
 
@@ -227,6 +229,22 @@ internal static class Program
                     }
 
                     json.Finish();
+                }
+
+                break;
+            case "fleet-page":
+                // The fleet page alone: both passes of the findings and the page, no device pages, no data files.
+                using (var store = RecordStore.Open(project))
+                {
+                    var context = new TripTestLog.Reports.ReportContext(project, "benchmark", today, DateTimeOffset.UtcNow, FindingPolicy.Default, "defaults", store.Instruments());
+                    var writer = new TripTestLog.Reports.ReportWriter(Path.Combine(work, step), context, devicePages: false);
+                    foreach (var device in FindingsPipeline.RunWithRecords(store, FindingPolicy.Default, today))
+                    {
+                        writer.Add(device);
+                    }
+
+                    writer.Finish();
+                    rows = 1;
                 }
 
                 break;

@@ -4,9 +4,9 @@ using TripTestLog.Domain.Devices;
 namespace TripTestLog.Application.Findings;
 
 /// <summary>
-/// Every device's condition, device by device, in two streaming passes: the first judges every trip test to learn each
-/// peer group's spread (one number per device and point), the second raises each device's findings and yields its
-/// condition. Memory holds one device's records and the peer statistics, however long the history.
+/// Every device's condition, device by device, in two streaming passes: the first learns each peer group's spread
+/// (one number per device and point, judging only each point's latest test), the second raises each device's findings
+/// and yields its condition. Memory holds one device's records and the peer statistics, however long the history.
 /// </summary>
 public static class FindingsPipeline
 {
@@ -29,10 +29,7 @@ public static class FindingsPipeline
         foreach (var device in source.Devices())
         {
             cancel.ThrowIfCancellationRequested();
-            foreach (var (point, latest, position) in TripRules.Positions(judge.Judge(device).ToList()))
-            {
-                peers.Add(PeerGroups.GroupOf(latest.Device, point).Key, position);
-            }
+            PeerPass.Add(device, judge, peers);
         }
 
         peers.Seal();

@@ -50,6 +50,9 @@ internal sealed class PeerGroups
         _positions.Clear();
     }
 
+    /// <summary>Every group's key, once sealed.</summary>
+    public IEnumerable<string> Keys => (_groups ?? throw new InvalidOperationException("peer groups are not sealed yet")).Keys;
+
     /// <summary>The statistics of a group; null when no device is in it.</summary>
     public Group? Of(string key) =>
         (_groups ?? throw new InvalidOperationException("peer groups are not sealed yet")).GetValueOrDefault(key);

@@ -1,14 +1,15 @@
 using System.Globalization;
 using TripTestLog.Application.Check;
 using TripTestLog.Domain.Codes;
+using TripTestLog.Domain.Envelopes;
 using TripTestLog.Domain.Measurements;
 
 namespace TripTestLog.Application.Findings;
 
 /// <summary>
 /// A trip test point of one device, so tests made at it over the years can be compared: the nominal multiple (the
-/// standard's point the test was aimed at, else the measured multiple on a 5 % grid), the start, and the pole when
-/// one pole was loaded.
+/// standard's point nearest the test's current, within 10 %, else the measured multiple on a 5 % grid), the start, and
+/// the pole when one pole was loaded.
 /// </summary>
 /// <param name="Key">Identity for grouping.</param>
 /// <param name="Label">In words, e.g. "2.55 In cold" or "5 In cold, pole 2".</param>
@@ -21,15 +22,25 @@ public readonly record struct TripPoint(string Key, string Label)
     /// <summary>The point <paramref name="judged"/> was made at.</summary>
     public static TripPoint Of(JudgedTrip judged)
     {
-        var a = judged.Assessment;
-        var multiple = a.Band.Multiple.Value;
-        var nominal = a.Point is { } p && Math.Abs(multiple / p.Multiple.Value - 1) <= PointWindow
-            ? p.Multiple.Value
-            : Math.Round(Math.Pow(Grid, Math.Round(Math.Log(multiple) / Math.Log(Grid))), 2);
-        var m = judged.Trip.Measurement;
+        ArgumentNullException.ThrowIfNull(judged);
+        return Of(judged.Trip.Measurement, judged.Envelope, judged.Device.Poles);
+    }
+
+    /// <summary>
+    /// The point a test at <paramref name="m"/> on a device of <paramref name="poles"/> poles was made at, against
+    /// <paramref name="envelope"/>: needs no verdict, so the peer pass can group tests before judging any.
+    /// </summary>
+    public static TripPoint Of(TripMeasurement m, ITripEnvelope envelope, int poles)
+    {
+        ArgumentNullException.ThrowIfNull(m);
+        ArgumentNullException.ThrowIfNull(envelope);
+        var multiple = m.Current.Value / envelope.Reference.Value;
+        var aimed = envelope.Points.Select(p => p.Multiple.Value).Where(p => Math.Abs(multiple / p - 1) <= PointWindow)
+            .OrderBy(p => Math.Abs(multiple / p - 1)).Cast<double?>().FirstOrDefault();
+        var nominal = aimed ?? Math.Round(Math.Pow(Grid, Math.Round(Math.Log(multiple) / Math.Log(Grid))), 2);
         var start = TextCodes.Start.Of(m.Start);
-        var pole = a.Band.Conditions.Loading == PoleLoading.OnePole ? $", pole {m.Pole}" : "";
+        var pole = TestConditions.Of(m, poles).Loading == PoleLoading.OnePole ? $", pole {m.Pole}" : "";
         var text = nominal.ToString("0.##", CultureInfo.InvariantCulture);
-        return new TripPoint($"{text}|{start}|{pole}", $"{text} {judged.Envelope.ReferenceName} {start}{pole}");
+        return new TripPoint($"{text}|{start}|{pole}", $"{text} {envelope.ReferenceName} {start}{pole}");
     }
 }

@@ -1,4 +1,5 @@
 using System.Reflection;
+using System.Threading.Channels;
 using TripTestLog.Application.Check;
 using TripTestLog.Application.Findings;
 using TripTestLog.Cli.Output;
@@ -25,7 +26,12 @@ internal static class ReportRun
     public static string ToolVersion =>
         typeof(ReportRun).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion.Split('+')[0] ?? "unknown";
 
-    /// <summary>Writes the report into <paramref name="folder"/> and returns the fleet page's path and the number of device pages.</summary>
+    /// <summary>
+    /// Writes the report into <paramref name="folder"/> and returns the fleet page's path and the number of device pages.
+    /// The findings pipeline runs on this thread and hands each device through a small bounded queue to a second thread
+    /// that writes its page and its rows in the data files: judging and writing overlap on two cores, and at most 16
+    /// devices wait in between.
+    /// </summary>
     public static (string FleetPage, int DevicePages) Write(RecordStore store, string folder, ReportContext context, Selection selection, CancellationToken cancel)
     {
         var writer = new ReportWriter(folder, context, selection.DevicePages);
@@ -36,21 +42,79 @@ internal static class ReportRun
         var findingsCsv = new FindingCsv(findingsCsvFile);
         using var findingsJson = new FindingJson(findingsJsonFile);
         var verdicts = new VerdictWriters(new VerdictCsv(verdictsCsvFile), new VerdictJson(verdictsJsonFile), new VerdictCounts());
-        foreach (var device in FindingsPipeline.RunWithRecords(store, context.Policy, context.AsOf, selection.Only, cancel))
+        var queue = Channel.CreateBounded<DeviceReport>(new BoundedChannelOptions(16) { SingleReader = true, SingleWriter = true });
+        var writing = Task.Run(async () =>
         {
-            if (selection.Site is { } site && !string.Equals(device.Condition.Device.Site, site, StringComparison.OrdinalIgnoreCase))
+            try
             {
-                continue;
+                await foreach (var device in queue.Reader.ReadAllAsync(CancellationToken.None))
+                {
+                    writer.Add(device);
+                    findingsCsv.Add(device.Condition, device.Condition.Findings);
+                    findingsJson.Add(device.Condition, device.Condition.Findings);
+                    foreach (var trip in device.Trips)
+                    {
+                        verdicts.Add(trip);
+                    }
+                }
             }
+            catch (Exception e)
+            {
+                // Closing the queue with the failure releases the reading thread, which then rethrows it.
+                queue.Writer.TryComplete(e);
+                throw;
+            }
+        }, CancellationToken.None);
+        Exception? failure = null;
+        try
+        {
+            foreach (var device in FindingsPipeline.RunWithRecords(store, context.Policy, context.AsOf, selection.Only, cancel))
+            {
+                if (selection.Site is { } site && !string.Equals(device.Condition.Device.Site, site, StringComparison.OrdinalIgnoreCase))
+                {
+                    continue;
+                }
 
-            var shown = selection.From is null && selection.To is null ? device : device with { Trips = [.. device.Trips.Where(t => InPeriod(t, selection))] };
-            writer.Add(shown);
-            findingsCsv.Add(device.Condition, device.Condition.Findings);
-            findingsJson.Add(device.Condition, device.Condition.Findings);
-            foreach (var trip in shown.Trips)
-            {
-                verdicts.Add(trip);
+                var shown = selection.From is null && selection.To is null ? device : device with { Trips = [.. device.Trips.Where(t => InPeriod(t, selection))] };
+                while (!queue.Writer.TryWrite(shown))
+                {
+                    bool open;
+                    try
+                    {
+                        open = queue.Writer.WaitToWriteAsync(CancellationToken.None).AsTask().GetAwaiter().GetResult();
+                    }
+                    catch (Exception) when (writing.IsFaulted || writing.IsCompleted)
+                    {
+                        open = false;
+                    }
+
+                    if (!open)
+                    {
+                        writing.GetAwaiter().GetResult();
+                        throw new InvalidOperationException("the report writer stopped early");
+                    }
+                }
             }
+        }
+        catch (Exception e)
+        {
+            failure = e;
+        }
+
+        // The writing thread finishes what it holds before the files close, whichever side failed.
+        queue.Writer.TryComplete();
+        try
+        {
+            writing.GetAwaiter().GetResult();
+        }
+        catch (Exception) when (failure is not null)
+        {
+            // The reading side's failure is the one to report.
+        }
+
+        if (failure is not null)
+        {
+            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Throw(failure);
         }
 
         findingsJson.Finish();

@@ -34,6 +34,28 @@ public sealed partial class TripAssessor(IReadOnlyDictionary<string, CurveTable>
     /// </summary>
     public Result Assess(DeviceHistory history, TripMeasurement measurement, TripMeasurement? previous = null)
     {
+        var (device, settings, envelope, thermal, notes) = Prepare(history, measurement);
+        var conditions = TestConditions.Of(measurement, device.Poles);
+        var assessment = TripJudge.Assess(envelope, measurement, conditions);
+        assessment = CheckStart(assessment, envelope, previous, conditions)
+            ?? CheckAmbient(assessment, device, settings, thermal, conditions)
+            ?? CheckResidual(assessment, device, conditions)
+            ?? assessment;
+        return new Result(device, envelope, assessment with { Notes = [.. notes, .. assessment.Notes] });
+    }
+
+    /// <summary>
+    /// The envelope <see cref="Assess"/> would judge <paramref name="measurement"/> against (the register entry in
+    /// force, settings found on the device, the ambient correction), without judging it, and that entry.
+    /// </summary>
+    public (Device Device, ITripEnvelope Envelope) EnvelopeOf(DeviceHistory history, TripMeasurement measurement)
+    {
+        var prepared = Prepare(history, measurement);
+        return (prepared.Device, prepared.Envelope);
+    }
+
+    private (Device Device, DeviceSettings Settings, ITripEnvelope Envelope, bool Thermal, List<string> Notes) Prepare(DeviceHistory history, TripMeasurement measurement)
+    {
         ArgumentNullException.ThrowIfNull(history);
         ArgumentNullException.ThrowIfNull(measurement);
         var device = history.InForceOn(measurement.TestedAt.Date);
@@ -54,14 +76,7 @@ public sealed partial class TripAssessor(IReadOnlyDictionary<string, CurveTable>
             notes.Add(ambientNote);
         }
 
-        var envelope = factor == 1.0 ? uncorrected : Envelope(device, settings, factor);
-        var conditions = TestConditions.Of(measurement, device.Poles);
-        var assessment = TripJudge.Assess(envelope, measurement, conditions);
-        assessment = CheckStart(assessment, envelope, previous, conditions)
-            ?? CheckAmbient(assessment, device, settings, thermal, conditions)
-            ?? CheckResidual(assessment, device, conditions)
-            ?? assessment;
-        return new Result(device, envelope, assessment with { Notes = [.. notes, .. assessment.Notes] });
+        return (device, settings, factor == 1.0 ? uncorrected : Envelope(device, settings, factor), thermal, notes);
     }
 
     private (double Factor, string Note) TableFactor(Device device, Quantities.Celsius ambient)
