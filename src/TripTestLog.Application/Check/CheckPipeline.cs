@@ -1,3 +1,4 @@
+using TripTestLog.Application.Streams;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Settings;
 
@@ -19,7 +20,8 @@ public static class CheckPipeline
     {
         ArgumentNullException.ThrowIfNull(source);
         var judge = DeviceJudge.For(source, requireRegisteredInstruments, ambientNoteKelvin);
-        foreach (var device in source.Devices(only))
+        // The store is read a few devices ahead on another thread, so reading and judging overlap on two cores.
+        foreach (var device in ReadAhead.Of(source.Devices(only), 8, cancel))
         {
             cancel.ThrowIfCancellationRequested();
             foreach (var judged in judge.Judge(device))

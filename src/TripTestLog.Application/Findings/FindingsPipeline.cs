@@ -1,3 +1,4 @@
+using TripTestLog.Application.Streams;
 using TripTestLog.Application.Check;
 using TripTestLog.Domain.Devices;
 
@@ -26,14 +27,15 @@ public static class FindingsPipeline
         ArgumentNullException.ThrowIfNull(policy);
         var judge = DeviceJudge.For(source, policy.RequireRegisteredInstruments, policy.AmbientNoteKelvin);
         var peers = new PeerGroups();
-        foreach (var device in source.Devices())
+        // The store is read a few devices ahead on another thread, so reading and judging overlap on two cores.
+        foreach (var device in ReadAhead.Of(source.Devices(), 8, cancel))
         {
             cancel.ThrowIfCancellationRequested();
             PeerPass.Add(device, judge, peers);
         }
 
         peers.Seal();
-        foreach (var device in source.Devices(only, withResistance: true))
+        foreach (var device in ReadAhead.Of(source.Devices(only, withResistance: true), 8, cancel))
         {
             cancel.ThrowIfCancellationRequested();
             var trips = judge.Judge(device).ToList();

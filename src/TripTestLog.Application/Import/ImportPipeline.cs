@@ -1,4 +1,4 @@
-using System.Threading.Channels;
+using TripTestLog.Application.Streams;
 using TripTestLog.Application.Records;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Measurements;
@@ -136,51 +136,8 @@ public sealed class ImportPipeline(IImportStore store)
     /// The file's rows, parsed on another thread a few thousand rows ahead of the store: on two cores the CSV parsing
     /// and the database writes then overlap. The queue is bounded, so memory stays flat; rows keep their order.
     /// </summary>
-    private static IEnumerable<(ReadRow Row, PreparedRow? Prepared)> ParsedAhead(IRecordFile file, IMeasurementBatch batch, CancellationToken cancel)
-    {
-        var queue = Channel.CreateBounded<(ReadRow, PreparedRow?)>(new BoundedChannelOptions(4096) { SingleReader = true, SingleWriter = true });
-        using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancel);
-        var producer = Task.Run(async () =>
-        {
-            try
-            {
-                foreach (var row in file.Rows())
-                {
-                    var prepared = row.Record is { } record && row.Problems.Count == 0 ? batch.Prepare(record, row.Line) : null;
-                    await queue.Writer.WriteAsync((row, prepared), stop.Token).ConfigureAwait(false);
-                }
-
-                queue.Writer.Complete();
-            }
-            catch (Exception e)
-            {
-                queue.Writer.Complete(e);
-            }
-        }, stop.Token);
-
-        try
-        {
-            while (queue.Reader.WaitToReadAsync(cancel).AsTask().GetAwaiter().GetResult())
-            {
-                while (queue.Reader.TryRead(out var row))
-                {
-                    yield return row;
-                }
-            }
-        }
-        finally
-        {
-            // Stops the reader when the consumer leaves early (an error, Ctrl+C) and waits, so the file is not closed under it.
-            stop.Cancel();
-            try
-            {
-                producer.GetAwaiter().GetResult();
-            }
-            catch (OperationCanceledException)
-            {
-            }
-        }
-    }
+    private static IEnumerable<(ReadRow Row, PreparedRow? Prepared)> ParsedAhead(IRecordFile file, IMeasurementBatch batch, CancellationToken cancel) =>
+        ReadAhead.Of(file.Rows().Select(row => (row, row.Record is { } record && row.Problems.Count == 0 ? batch.Prepare(record, row.Line) : null)), 4096, cancel);
 
     private static IReadOnlyList<RowProblem> Store(IMeasurementBatch batch, string path, PreparedRow row, ImportOptions options, ref long replaced)
     {
