@@ -19,9 +19,10 @@ internal static class DeviceFindings
     {
         var history = device.History;
         var ledger = new FindingLedger();
+        var points = TripRules.ByPoint(trips);
         TripRules.States(trips, ledger);
-        TripRules.Drift(trips, ledger, policy);
-        PeerRule.Apply(trips, peers, ledger, policy);
+        TripRules.Drift(points, ledger, policy);
+        PeerRule.Apply(points, peers, ledger, policy);
         ContactRules.States(history, device.Contacts, ledger, policy, instruments);
         InsulationRules.States(history, device.Insulation, ledger, policy);
         InsulationRules.Falling(history, device.Insulation, ledger, policy);
@@ -29,7 +30,7 @@ internal static class DeviceFindings
         var last = LastTested(device);
         var first = GradeOf(ledger.All());
         var due = DueOn(device, last, first, policy, asOf);
-        TripRules.TrendExit(trips, ledger, policy, due);
+        TripRules.TrendExit(points, ledger, policy, due);
         ContactRules.TrendLimit(history, device.Contacts, ledger, policy, due);
 
         var grade = GradeOf(ledger.All());

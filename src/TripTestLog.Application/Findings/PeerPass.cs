@@ -9,7 +9,7 @@ namespace TripTestLog.Application.Findings;
 /// The first pass of the findings: each device's latest assessable as-found trip at each point, placed in its band,
 /// for the peer groups. Tests are grouped by point from their envelope alone, and only the latest of each point is
 /// judged (walking back past one that is not assessable), so this pass costs little more than reading: the same
-/// result the second pass's <see cref="TripRules.Positions"/> gives, without judging every test.
+/// result the second pass's <see cref="TripRules.Positions(IReadOnlyList{JudgedTrip})"/> gives, without judging every test.
 /// </summary>
 internal static class PeerPass
 {

@@ -12,9 +12,9 @@ namespace TripTestLog.Application.Findings;
 /// </summary>
 internal static class PeerRule
 {
-    public static void Apply(IReadOnlyList<JudgedTrip> trips, PeerGroups peers, FindingLedger ledger, FindingPolicy policy)
+    public static void Apply(IReadOnlyList<(TripPoint Point, List<JudgedTrip> Tests)> points, PeerGroups peers, FindingLedger ledger, FindingPolicy policy)
     {
-        foreach (var (point, latest, position) in TripRules.Positions(trips))
+        foreach (var (point, latest, position) in TripRules.Positions(points))
         {
             var (key, name) = PeerGroups.GroupOf(latest.Device, point);
             if (peers.Of(key) is not { } group || group.Count < policy.PeerMinimumDevices

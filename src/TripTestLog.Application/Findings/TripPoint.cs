@@ -35,8 +35,17 @@ public readonly record struct TripPoint(string Key, string Label)
         ArgumentNullException.ThrowIfNull(m);
         ArgumentNullException.ThrowIfNull(envelope);
         var multiple = m.Current.Value / envelope.Reference.Value;
-        var aimed = envelope.Points.Select(p => p.Multiple.Value).Where(p => Math.Abs(multiple / p - 1) <= PointWindow)
-            .OrderBy(p => Math.Abs(multiple / p - 1)).Cast<double?>().FirstOrDefault();
+        double? aimed = null;
+        var nearest = PointWindow;
+        foreach (var point in envelope.Points)
+        {
+            var off = Math.Abs(multiple / point.Multiple.Value - 1);
+            if (aimed is null ? off <= nearest : off < nearest)
+            {
+                (aimed, nearest) = (point.Multiple.Value, off);
+            }
+        }
+
         var nominal = aimed ?? Math.Round(Math.Pow(Grid, Math.Round(Math.Log(multiple) / Math.Log(Grid))), 2);
         var start = TextCodes.Start.Of(m.Start);
         var pole = TestConditions.Of(m, poles).Loading == PoleLoading.OnePole ? $", pole {m.Pole}" : "";

@@ -86,14 +86,18 @@ internal static class TripRules
 
     /// <summary>The latest tripped as-found test at each point with its band position, for the peer comparison.</summary>
     public static IEnumerable<(TripPoint Point, JudgedTrip Latest, double Position)> Positions(IReadOnlyList<JudgedTrip> trips) =>
-        ByPoint(trips).Select(g => (g.Point, Latest: g.Tests[^1]))
+        Positions(ByPoint(trips));
+
+    /// <summary>As <see cref="Positions(IReadOnlyList{JudgedTrip})"/>, from tests already grouped by point.</summary>
+    public static IEnumerable<(TripPoint Point, JudgedTrip Latest, double Position)> Positions(IReadOnlyList<(TripPoint Point, List<JudgedTrip> Tests)> points) =>
+        points.Select(g => (g.Point, Latest: g.Tests[^1]))
             .Where(x => x.Latest.Assessment.Margin.PositionInBand is not null)
             .Select(x => (x.Point, x.Latest, x.Latest.Assessment.Margin.PositionInBand!.Value));
 
     /// <summary>trip-drift: the latest as-found time at each point against the first.</summary>
-    public static void Drift(IReadOnlyList<JudgedTrip> trips, FindingLedger ledger, FindingPolicy policy)
+    public static void Drift(IReadOnlyList<(TripPoint Point, List<JudgedTrip> Tests)> points, FindingLedger ledger, FindingPolicy policy)
     {
-        foreach (var (point, tests) in ByPoint(trips))
+        foreach (var (point, tests) in points)
         {
             var (first, last) = (tests[0], tests[^1]);
             if (last.Trip.Measurement.TestedAt.Date <= first.Trip.Measurement.TestedAt.Date)
@@ -131,9 +135,9 @@ internal static class TripRules
     }
 
     /// <summary>trip-trend-exit: a Theil–Sen line through log trip time reaches a guaranteed edge before <paramref name="due"/>.</summary>
-    public static void TrendExit(IReadOnlyList<JudgedTrip> trips, FindingLedger ledger, FindingPolicy policy, DateOnly due)
+    public static void TrendExit(IReadOnlyList<(TripPoint Point, List<JudgedTrip> Tests)> points, FindingLedger ledger, FindingPolicy policy, DateOnly due)
     {
-        foreach (var (point, tests) in ByPoint(trips))
+        foreach (var (point, tests) in points)
         {
             var last = tests[^1];
             var dates = tests.Select(t => t.Trip.Measurement.TestedAt.Date).Distinct().Count();
@@ -183,11 +187,11 @@ internal static class TripRules
         }
     }
 
-    // The tripped as-found tests at each point, in time order: held tests and as-left ones do not show drift.
-    private static IEnumerable<(TripPoint Point, List<JudgedTrip> Tests)> ByPoint(IReadOnlyList<JudgedTrip> trips) =>
-        trips.Where(t => t.Trip.Measurement.Stage == TestStage.AsFound && t.Trip.Measurement.Outcome.Tripped && t.Assessment.Verdict != Verdict.NotAssessable)
+    /// <summary>The tripped, assessable as-found tests at each point, in time order: held and as-left tests show no drift.</summary>
+    public static IReadOnlyList<(TripPoint Point, List<JudgedTrip> Tests)> ByPoint(IReadOnlyList<JudgedTrip> trips) =>
+        [.. trips.Where(t => t.Trip.Measurement.Stage == TestStage.AsFound && t.Trip.Measurement.Outcome.Tripped && t.Assessment.Verdict != Verdict.NotAssessable)
             .GroupBy(TripPoint.Of)
-            .Select(g => (g.Key, g.ToList()));
+            .Select(g => (g.Key, g.ToList()))];
 
     internal static RecordSource Source(JudgedTrip judged) => new(judged.Trip.SourceFile, judged.Trip.SourceLine);
 
