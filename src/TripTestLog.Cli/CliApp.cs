@@ -28,9 +28,31 @@ internal static class CliApp
     public static int Run(string[] args, CliContext cli)
     {
         var parse = Build(cli).Parse(args);
-        var exit = parse.Invoke(new InvocationConfiguration { Output = cli.Out, Error = cli.Error });
+        int exit;
+        try
+        {
+            exit = parse.Invoke(new InvocationConfiguration { Output = cli.Out, Error = cli.Error, EnableDefaultExceptionHandler = false });
+        }
+        catch (Exception e) when (e is not OutOfMemoryException)
+        {
+            // Whatever went wrong, a person gets one plain sentence, never a stack trace.
+            cli.Error.WriteLine($"error: {Plain(e)}");
+            return ExitCodes.BadInput;
+        }
 
         // System.CommandLine answers parse errors with 1; this tool keeps 1 for findings and uses 2 for bad usage.
         return parse.Errors.Count > 0 ? ExitCodes.BadInput : exit;
+    }
+
+    // The innermost message on one line: what failed, in the words of the layer that knew.
+    private static string Plain(Exception e)
+    {
+        while (e.InnerException is { } inner)
+        {
+            e = inner;
+        }
+
+        var message = e.Message.ReplaceLineEndings(" ").Trim();
+        return e is Microsoft.Data.Sqlite.SqliteException ? $"the database could not be used ({message})" : message;
     }
 }

@@ -32,6 +32,12 @@ internal static class BackupCommand
             return ExitCodes.BadInput;
         }
 
+        if (target.Directory is { Exists: false } folder)
+        {
+            cli.Error.WriteLine($"error: the folder {folder.FullName} does not exist; create it or choose another path for the backup");
+            return ExitCodes.BadInput;
+        }
+
         using var store = RecordStore.Open(db.FullName);
         store.Backup(target.FullName);
         var counts = store.Counts();
