@@ -12,4 +12,12 @@ internal static class CommonOptions
         DefaultValueFactory = _ => new FileInfo("triptestlog.db"),
         HelpName = "PATH",
     };
+
+    /// <summary>The database file of a command that reads an existing database and refuses a missing one.</summary>
+    public static Option<FileInfo> ExistingDatabase() => new("--db")
+    {
+        Description = "Database file to read (it must exist; import creates it)",
+        DefaultValueFactory = _ => new FileInfo("triptestlog.db"),
+        HelpName = "PATH",
+    };
 }

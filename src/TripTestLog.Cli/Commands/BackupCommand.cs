@@ -9,7 +9,7 @@ internal static class BackupCommand
     public static Command Create(CliContext cli)
     {
         var target = new Argument<FileInfo>("PATH") { Description = "The new file to write the copy to (must not exist)" };
-        var db = CommonOptions.Database();
+        var db = CommonOptions.ExistingDatabase();
         var command = new Command("backup", "Write a consistent copy of the database, safe while other imports run (SQLite online backup)")
         {
             target, db,

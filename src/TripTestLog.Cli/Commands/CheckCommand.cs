@@ -13,7 +13,7 @@ internal static class CheckCommand
 {
     public static Command Create(CliContext cli)
     {
-        var db = CommonOptions.Database();
+        var db = CommonOptions.ExistingDatabase();
         var asset = new Option<string?>("--asset") { Description = "Only this device's tests", HelpName = "TAG" };
         var json = new Option<bool>("--json") { Description = "Write a JSON array, one object per trip test (fields in the README)" };
         var failOnFindings = new Option<bool>("--fail-on-findings") { Description = "Exit with 1 when any test is too early or too late, or its instrument was not traceable" };
@@ -32,7 +32,7 @@ internal static class CheckCommand
     {
         if (!db.Exists)
         {
-            cli.Error.WriteLine($"error: no database at {db.FullName}; import records first (triptestlog import PATH --db {db.Name})");
+            cli.Error.WriteLine($"error: no database at {db.FullName}; import records first (triptestlog import PATH --db {db.FullName})");
             return ExitCodes.BadInput;
         }
 

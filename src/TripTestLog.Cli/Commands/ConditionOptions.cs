@@ -9,7 +9,7 @@ namespace TripTestLog.Cli.Commands;
 /// <summary>The options `findings` and `fleet` share: the database, the lab policy, the date judged, and which devices.</summary>
 internal sealed class ConditionOptions
 {
-    public Option<FileInfo> Database { get; } = CommonOptions.Database();
+    public Option<FileInfo> Database { get; } = CommonOptions.ExistingDatabase();
 
     public Option<FileInfo?> Policy { get; } = new("--policy")
     {
@@ -31,7 +31,7 @@ internal sealed class ConditionOptions
         var db = parse.GetValue(Database)!;
         if (!db.Exists)
         {
-            return Fail(cli, $"no database at {db.FullName}; import records first (triptestlog import PATH --db {db.Name})");
+            return Fail(cli, $"no database at {db.FullName}; import records first (triptestlog import PATH --db {db.FullName})");
         }
 
         var asOf = cli.Today;

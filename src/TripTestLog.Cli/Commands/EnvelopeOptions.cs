@@ -36,7 +36,7 @@ internal sealed class EnvelopeOptions
     private readonly Option<double?> _opening = new("--opening-time") { Description = "relay-idmt: breaker opening time added to the latest time, s", HelpName = "SECONDS" };
     private readonly Option<FileInfo?> _table = new("--table") { Description = "curve-table: a curve table CSV file", HelpName = "FILE" };
     private readonly Option<string?> _asset = new("--asset") { Description = "Draw a registered device's band instead, from --db", HelpName = "TAG" };
-    private readonly Option<FileInfo> _db = CommonOptions.Database();
+    private readonly Option<FileInfo> _db = CommonOptions.ExistingDatabase();
     private readonly Option<bool> _csv = new("--csv") { Description = "Write CSV: multiple,current_a,min_s,max_s,min_source,max_source,point,typical_min_s,typical_max_s" };
 
     private readonly Option<string> _start = new("--start")

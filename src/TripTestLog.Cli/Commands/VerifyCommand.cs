@@ -9,7 +9,7 @@ internal static class VerifyCommand
 {
     public static Command Create(CliContext cli)
     {
-        var db = CommonOptions.Database();
+        var db = CommonOptions.ExistingDatabase();
         var command = new Command("verify", "Check the database: SQLite integrity and foreign keys, every record traced to an imported file, and each file still at hand unchanged")
         {
             db,

@@ -34,7 +34,7 @@ internal static class ImportReport
         var again = outcomes.Count(o => o.Status == ImportStatus.AlreadyImported);
         var refused = outcomes.Where(o => o.Status == ImportStatus.Refused).ToList();
         writer.WriteLine();
-        writer.WriteLine($"{outcomes.Count} files: {imported} imported, {again} already imported, {refused.Count} refused; "
+        writer.WriteLine($"{outcomes.Count} {(outcomes.Count == 1 ? "file" : "files")}: {imported} imported, {again} already imported, {refused.Count} refused; "
             + $"{outcomes.Where(o => o.Status == ImportStatus.Imported).Sum(o => o.Added)} records added.");
         writer.WriteLine("Every row is accounted for: rows = added + updated + unchanged + duplicates + replaced + refused.");
 
