@@ -15,7 +15,7 @@ public sealed class ReportWriter
     private readonly ReportContext _context;
     private readonly bool _devicePages;
     private readonly FleetReport _fleet = new(30);
-    private readonly HashSet<string> _pages = new(StringComparer.Ordinal);
+    private int _pages;
 
     /// <summary>Starts a report in <paramref name="folder"/> (created if missing); <paramref name="devicePages"/> writes a page per device.</summary>
     public ReportWriter(string folder, ReportContext context, bool devicePages)
@@ -27,7 +27,7 @@ public sealed class ReportWriter
     }
 
     /// <summary>How many device pages were written.</summary>
-    public int DevicePages => _pages.Count;
+    public int DevicePages => _pages;
 
     /// <summary>Takes one device: its page, and its place in the fleet lists.</summary>
     public void Add(DeviceReport report)
@@ -39,7 +39,7 @@ public sealed class ReportWriter
             var tag = report.Condition.Device.Tag.Value;
             var page = Markup.PageName(tag);
             File.WriteAllText(Path.Combine(_folder, "devices", page), DevicePage.Write(report, _context), Encoding.UTF8);
-            _pages.Add(tag);
+            _pages++;
         }
     }
 
@@ -47,7 +47,8 @@ public sealed class ReportWriter
     public string Finish(string selection = "")
     {
         var path = Path.Combine(_folder, "index.html");
-        File.WriteAllText(path, FleetPage.Write(_fleet, _context, tag => _pages.Contains(tag) ? Markup.PageName(tag) : null, selection), Encoding.UTF8);
+        // Every device on the fleet page went through Add, so it has a page exactly when device pages are written.
+        File.WriteAllText(path, FleetPage.Write(_fleet, _context, tag => _devicePages ? Markup.PageName(tag) : null, selection), Encoding.UTF8);
         return path;
     }
 }

@@ -81,7 +81,7 @@ internal static class ContactRules
         var subject = "over|" + pole.Pole;
         if (pole.Corrected > limit.Value)
         {
-            ledger.Raise(subject, Make(FindingKind.ContactOverLimit, Severity.Act, device, pole, "the maker's contact resistance limit (register contact_limit_uohm)",
+            ledger.Raise(subject, Make(FindingKind.ContactOverLimit, Severity.Act, pole.At, pole, "the maker's contact resistance limit (register contact_limit_uohm)",
                 Invariant($"pole {pole.Pole} reads {Describe(pole)}, over the limit of {limit.Value:0} uOhm; clean and re-torque the terminations or replace the breaker"))
                 with { Value = new Reading(pole.Corrected, ReadingUnit.MicroOhms), Limit = new Reading(limit.Value, ReadingUnit.MicroOhms) });
         }
@@ -236,9 +236,6 @@ internal static class ContactRules
             ledger.Confirm(subject, pole.At, what);
         }
     }
-
-    private static Finding Make(FindingKind kind, Severity severity, Device device, PoleResult pole, string basis, string message) =>
-        Make(kind, severity, pole.At, pole, basis, message);
 
     private static Finding Make(FindingKind kind, Severity severity, TestedAt at, PoleResult pole, string basis, string message) =>
         new(kind, severity, pole.Tag, at, basis, pole.Stage == TestStage.AsLeft ? "as-left: " + message : message, pole.Sources) { Pole = pole.Pole };

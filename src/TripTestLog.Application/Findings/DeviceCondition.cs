@@ -21,6 +21,12 @@ public sealed record DeviceCondition(Device Device, ConditionGrade Grade, DateOn
     /// <summary>The soonest date an open forecast says it leaves its band or reaches a limit.</summary>
     public DateOnly? SoonestForecast => Open.Where(f => f.ForecastOn is not null).Select(f => f.ForecastOn).Min();
 
+    /// <summary>
+    /// The open finding that puts it where it is in the priority order: the most severe about its condition, else its
+    /// overdue test; null when nothing is open.
+    /// </summary>
+    public Finding? WorstOpen => Open.OrderByDescending(f => f.Kind != FindingKind.TestOverdue).ThenByDescending(f => f.Severity).FirstOrDefault();
+
     /// <summary>Whether it belongs on a priority list at all: a grade below sound, or overdue.</summary>
     public bool NeedsAttention => Grade != ConditionGrade.Sound || Overdue;
 }

@@ -34,6 +34,9 @@ public sealed record Finding(
     /// <summary>The trip test point it concerns, e.g. "2.55 In cold", when it concerns one.</summary>
     public string? Point { get; init; }
 
+    /// <summary>What it concerns in words: "pole 1", "path 1-E", "at 2.55 In cold", or "" for the whole device.</summary>
+    public string Concerns => Pole is not null ? $"pole {Pole}" : Path is not null ? $"path {Path}" : Point is not null ? $"at {Point}" : "";
+
     /// <summary>The value the rule judged, with its unit.</summary>
     public Reading? Value { get; init; }
 

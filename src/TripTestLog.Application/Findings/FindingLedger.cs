@@ -53,9 +53,6 @@ internal sealed class FindingLedger
         }
     }
 
-    /// <summary>Whether <paramref name="subject"/> has an open finding.</summary>
-    public bool IsOpen(string subject) => _open.ContainsKey(subject);
-
     /// <summary>Adds a finding that stands on its own (a forecast, a comparison): open, not carried forward.</summary>
     public void Add(Finding finding) => _others.Add(finding);
 

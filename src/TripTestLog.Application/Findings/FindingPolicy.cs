@@ -18,7 +18,7 @@ public sealed record FindingPolicy
     /// <summary>trip-drift: a move of the position within the band, in per cent of the band's log width (lab policy: 30).</summary>
     public double TripDriftBandPercent { get; init; } = 30;
 
-    /// <summary>The fewest as-found tests at distinct dates a trend rests on (the floor: 3).</summary>
+    /// <summary>The fewest as-found tests at distinct dates a trend rests on (lab policy: 3, the fewest that show a direction and its scatter).</summary>
     public int TrendMinimumTests { get; init; } = 3;
 
     /// <summary>How far past the latest test a trend may be extrapolated, in years (lab policy: 5).</summary>

@@ -15,7 +15,7 @@ public sealed class FleetReport(int top)
     private readonly List<(DeviceCondition Device, Finding Finding)> _drifts = [];
     private readonly List<(DeviceCondition Device, Finding Finding)> _forecasts = [];
     private readonly List<DeviceCondition> _overdue = [];
-    private readonly SortedDictionary<(string Family, double Rating), int[]> _results = [];
+    private readonly SortedDictionary<(DeviceFamily Family, double Rating), int[]> _results = [];
     private readonly SortedDictionary<string, Lapse> _lapses = new(StringComparer.Ordinal);
 
     /// <summary>An instrument that was out of calibration or unregistered when used.</summary>
@@ -44,7 +44,7 @@ public sealed class FleetReport(int top)
     public IReadOnlyList<(DeviceCondition Device, Finding Finding)> Forecasts => _forecasts;
 
     /// <summary>Trip verdicts per family and rating, indexed by <see cref="Verdict"/>.</summary>
-    public IReadOnlyDictionary<(string Family, double Rating), int[]> Results => _results;
+    public IReadOnlyDictionary<(DeviceFamily Family, double Rating), int[]> Results => _results;
 
     /// <summary>Instruments used while untraceable, by name.</summary>
     public IReadOnlyDictionary<string, Lapse> Lapses => _lapses;
@@ -57,7 +57,7 @@ public sealed class FleetReport(int top)
         Summary.Add(device);
         foreach (var trip in report.Trips)
         {
-            var key = (TextCodes.Family.Of(trip.Device.Family), trip.Device.RatedCurrent.Value);
+            var key = (trip.Device.Family, trip.Device.RatedCurrent.Value);
             if (!_results.TryGetValue(key, out var counts))
             {
                 _results[key] = counts = new int[Enum.GetValues<Verdict>().Length];

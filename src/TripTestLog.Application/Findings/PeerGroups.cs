@@ -16,7 +16,7 @@ internal sealed class PeerGroups
     private Dictionary<string, Group>? _groups;
 
     /// <summary>A group's median and median absolute deviation of positions, and its size.</summary>
-    public sealed record Group(string Name, double Median, double Mad, int Count);
+    public sealed record Group(double Median, double Mad, int Count);
 
     /// <summary>The group a device's result at <paramref name="point"/> belongs to.</summary>
     public static (string Key, string Name) GroupOf(Device device, TripPoint point)
@@ -45,7 +45,7 @@ internal sealed class PeerGroups
     /// <summary>Computes each group's statistics and lets go of the positions.</summary>
     public void Seal()
     {
-        _groups = _positions.ToDictionary(p => p.Key, p => new Group(p.Key, RobustStatistics.Median(p.Value), RobustStatistics.MedianAbsoluteDeviation(p.Value), p.Value.Count),
+        _groups = _positions.ToDictionary(p => p.Key, p => new Group(RobustStatistics.Median(p.Value), RobustStatistics.MedianAbsoluteDeviation(p.Value), p.Value.Count),
             StringComparer.Ordinal);
         _positions.Clear();
     }

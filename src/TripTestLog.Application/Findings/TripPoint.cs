@@ -19,6 +19,19 @@ public readonly record struct TripPoint(string Key, string Label)
     private const double PointWindow = 0.10;
     private const double Grid = 1.05;
 
+    /// <summary>
+    /// The tests that can be compared over the years, by point, in time order: tripped, assessable as-found tests (held
+    /// and as-left tests show no drift). Drift, trends, peers and the report's drift charts all read this one grouping.
+    /// </summary>
+    public static IReadOnlyList<(TripPoint Point, List<JudgedTrip> Tests)> Series(IReadOnlyList<JudgedTrip> trips)
+    {
+        ArgumentNullException.ThrowIfNull(trips);
+        return [.. trips.Where(t => t.Trip.Measurement.Stage == TestStage.AsFound && t.Trip.Measurement.Outcome.Tripped
+                && t.Assessment.Verdict != Domain.Verdicts.Verdict.NotAssessable)
+            .GroupBy(Of)
+            .Select(g => (g.Key, g.ToList()))];
+    }
+
     /// <summary>The point <paramref name="judged"/> was made at.</summary>
     public static TripPoint Of(JudgedTrip judged)
     {

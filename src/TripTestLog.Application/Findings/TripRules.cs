@@ -187,11 +187,8 @@ internal static class TripRules
         }
     }
 
-    /// <summary>The tripped, assessable as-found tests at each point, in time order: held and as-left tests show no drift.</summary>
-    public static IReadOnlyList<(TripPoint Point, List<JudgedTrip> Tests)> ByPoint(IReadOnlyList<JudgedTrip> trips) =>
-        [.. trips.Where(t => t.Trip.Measurement.Stage == TestStage.AsFound && t.Trip.Measurement.Outcome.Tripped && t.Assessment.Verdict != Verdict.NotAssessable)
-            .GroupBy(TripPoint.Of)
-            .Select(g => (g.Key, g.ToList()))];
+    /// <summary>The device's comparable tests grouped by point (<see cref="TripPoint.Series"/>).</summary>
+    public static IReadOnlyList<(TripPoint Point, List<JudgedTrip> Tests)> ByPoint(IReadOnlyList<JudgedTrip> trips) => TripPoint.Series(trips);
 
     internal static RecordSource Source(JudgedTrip judged) => new(judged.Trip.SourceFile, judged.Trip.SourceLine);
 

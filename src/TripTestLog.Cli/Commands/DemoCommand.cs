@@ -76,6 +76,7 @@ internal static class DemoCommand
         var findingsText = Path.Combine(output.FullName, "findings.txt");
         var findingsJson = Path.Combine(output.FullName, "findings.json");
         var fleet = new FleetSummary(5);
+        string reportPage;
         using (var log = Logging.BesideDatabase(db))
         using (var store = RecordStore.Open(db.FullName))
         using (var textWriter = new StreamWriter(text))
@@ -89,7 +90,23 @@ internal static class DemoCommand
             }
 
             writers.Finish();
-            WriteFindings(store, policy.Policy, policy.From, fleet, findingsText, findingsJson, cli.Today);
+
+            // One run of the findings writes the report, the findings files and the fleet summary the demo prints.
+            using var findingsTextWriter = new StreamWriter(findingsText);
+            using var findingsJsonWriter = new StreamWriter(findingsJson);
+            var findingsTable = new FindingText(findingsTextWriter, cli.Today.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture), policy.From);
+            using var findingsRows = new FindingJson(findingsJsonWriter);
+            var context = new Reports.ReportContext(db.FullName, ReportRun.ToolVersion, cli.Today, cli.Clock.GetUtcNow(), policy.Policy, policy.From, store.Instruments());
+            reportPage = ReportRun.Write(store, Path.Combine(output.FullName, "report"), context, new ReportRun.Selection(null, null, null, null, true), cli.Cancel,
+                device =>
+                {
+                    var open = device.Condition.Open.ToList();
+                    findingsTable.Add(device.Condition, open);
+                    findingsRows.Add(device.Condition, open);
+                    fleet.Add(device.Condition);
+                }).FleetPage;
+            findingsTable.Finish();
+            findingsRows.Finish();
         }
 
         cli.Out.WriteLine($"Imported the sample records from {folder}:");
@@ -97,13 +114,6 @@ internal static class DemoCommand
         cli.Out.WriteLine();
         cli.Out.WriteLine(counts.Summary("Checked"));
         cli.Out.WriteLine();
-        string reportPage;
-        using (var store = RecordStore.Open(db.FullName))
-        {
-            var context = new Reports.ReportContext(db.FullName, ReportRun.ToolVersion, cli.Today, cli.Clock.GetUtcNow(), policy.Policy, policy.From, store.Instruments());
-            reportPage = ReportRun.Write(store, Path.Combine(output.FullName, "report"), context, new ReportRun.Selection(null, null, null, null, true), cli.Cancel).FleetPage;
-        }
-
         FleetText.Write(cli.Out, fleet, cli.Today.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture), policy.From);
         cli.Out.WriteLine();
         cli.Out.WriteLine("Results:");
@@ -118,27 +128,6 @@ internal static class DemoCommand
         cli.Out.WriteLine($"      triptestlog findings --db {db.FullName}");
         cli.Out.WriteLine($"      triptestlog fleet --db {db.FullName}");
         return outcomes.Any(o => o.Status == ImportStatus.Refused) ? ExitCodes.BadInput : ExitCodes.Ok;
-    }
-
-    // One pass of the findings writes the findings files and gathers the fleet summary the demo prints.
-    private static void WriteFindings(RecordStore store, FindingPolicy policy, string policyFrom, FleetSummary fleet, string textPath, string jsonPath,
-        DateOnly asOf)
-    {
-        using var textWriter = new StreamWriter(textPath);
-        using var jsonWriter = new StreamWriter(jsonPath);
-        var date = asOf.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture);
-        var text = new FindingText(textWriter, date, policyFrom);
-        using var json = new FindingJson(jsonWriter);
-        foreach (var device in FindingsPipeline.Run(store, policy, asOf))
-        {
-            var open = device.Open.ToList();
-            text.Add(device, open);
-            json.Add(device, open);
-            fleet.Add(device);
-        }
-
-        text.Finish();
-        json.Finish();
     }
 
     /// <summary>The sample-records folder next to the working folder or any folder above it, then above the program.</summary>

@@ -23,7 +23,7 @@ internal static class EnvelopeWriter
     public static void WriteTable(TextWriter writer, ITripEnvelope envelope, string title, TestConditions conditions)
     {
         writer.WriteLine(title);
-        writer.WriteLine($"Band for a test {Format.Conditions(conditions)}.");
+        writer.WriteLine($"Band for a test {conditions}.");
         writer.WriteLine();
         var table = new TextTable($"x {envelope.ReferenceName}>", "Current>", "Min>", "Max>", "Typical min>", "Typical max>", "Min from", "Max from", "Point");
         foreach (var m in Multiples(envelope))

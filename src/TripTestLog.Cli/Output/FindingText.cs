@@ -31,7 +31,7 @@ internal sealed class FindingText(TextWriter writer, string asOf, string policyF
                 _closed++;
             }
 
-            var subject = f.Pole is not null ? $", pole {f.Pole}" : f.Path is not null ? $", path {f.Path}" : f.Point is not null ? $", at {f.Point}" : "";
+            var subject = f.Concerns.Length == 0 ? "" : ", " + f.Concerns;
             var status = f.Open ? TextCodes.Severity.Of(f.Severity) : "closed";
             var since = f.FirstSeen is { } first && first != f.TestedAt.Date ? $", since {first:yyyy-MM-dd}" : "";
             Wrapped.Write(writer, $"[{status}] {TextCodes.FindingKind.Of(f.Kind)}{subject}, tested {f.TestedAt.Date:yyyy-MM-dd}{since}", 2);

@@ -53,11 +53,15 @@ internal static class FleetText
     /// <summary>The worst open finding's kind and subject, and how many more there are.</summary>
     public static string Why(DeviceCondition device)
     {
-        var open = device.Open.OrderByDescending(f => f.Kind != FindingKind.TestOverdue).ThenByDescending(f => f.Severity).ToList();
-        var worst = open[0];
-        var subject = worst.Pole is not null ? $" pole {worst.Pole}" : worst.Path is not null ? $" path {worst.Path}" : worst.Point is not null ? $" at {worst.Point}" : "";
+        if (device.WorstOpen is not { } worst)
+        {
+            return "";
+        }
+
+        var more = device.Open.Count() - 1;
+        var subject = worst.Concerns.Length == 0 ? "" : " " + worst.Concerns;
         var forecast = worst.ForecastOn is { } on ? $" by {on:yyyy-MM}" : "";
-        return $"{TextCodes.FindingKind.Of(worst.Kind)}{subject}{forecast}" + (open.Count > 1 ? $" +{open.Count - 1}" : "");
+        return $"{TextCodes.FindingKind.Of(worst.Kind)}{subject}{forecast}" + (more > 0 ? $" +{more}" : "");
     }
 
     private static string Short(ConditionGrade grade) => grade == ConditionGrade.TakeOutOfService ? "out-of-service" : TextCodes.Grade.Of(grade);

@@ -24,17 +24,7 @@ internal static class Format
 
     public static string Start(StartCondition start) => TextCodes.Start.Of(start);
 
-    /// <summary>Test conditions in words, e.g. "from cold, all poles loaded".</summary>
-    public static string Conditions(TestConditions c) =>
-        $"{(c.Start == StartCondition.Cold ? "from cold" : "from warm")}, {(c.Loading == PoleLoading.AllPoles ? "all poles loaded" : "one pole loaded")}";
-
-    public static string Verdict(Verdict verdict) => verdict switch
-    {
-        Domain.Verdicts.Verdict.Pass => "pass",
-        Domain.Verdicts.Verdict.TooEarly => "too-early",
-        Domain.Verdicts.Verdict.TooLate => "too-late",
-        _ => "not-assessable",
-    };
+    public static string Verdict(Verdict verdict) => TextCodes.Verdict.Of(verdict);
 
     public static string Basis(VerdictBasis basis) => basis == VerdictBasis.Normative ? "normative" : "band";
 

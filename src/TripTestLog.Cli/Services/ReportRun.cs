@@ -27,12 +27,14 @@ internal static class ReportRun
         typeof(ReportRun).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion.Split('+')[0] ?? "unknown";
 
     /// <summary>
-    /// Writes the report into <paramref name="folder"/> and returns the fleet page's path and the number of device pages.
+    /// Writes the report into <paramref name="folder"/> and returns the fleet page's path and the number of device pages;
+    /// <paramref name="alsoEach"/>, when given, sees each device on the writing thread too (the demo's own outputs).
     /// The findings pipeline runs on this thread and hands each device through a small bounded queue to a second thread
     /// that writes its page and its rows in the data files: judging and writing overlap on two cores, and at most 16
     /// devices wait in between.
     /// </summary>
-    public static (string FleetPage, int DevicePages) Write(RecordStore store, string folder, ReportContext context, Selection selection, CancellationToken cancel)
+    public static (string FleetPage, int DevicePages) Write(RecordStore store, string folder, ReportContext context, Selection selection, CancellationToken cancel,
+        Action<DeviceReport>? alsoEach = null)
     {
         var writer = new ReportWriter(folder, context, selection.DevicePages);
         using var findingsCsvFile = new StreamWriter(Path.Combine(folder, "findings.csv"));
@@ -56,6 +58,8 @@ internal static class ReportRun
                     {
                         verdicts.Add(trip);
                     }
+
+                    alsoEach?.Invoke(device);
                 }
             }
             catch (Exception e)

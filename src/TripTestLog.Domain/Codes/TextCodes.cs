@@ -2,6 +2,7 @@ using TripTestLog.Domain.Condition;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Settings;
+using TripTestLog.Domain.Verdicts;
 
 namespace TripTestLog.Domain.Codes;
 
@@ -41,6 +42,11 @@ public static class TextCodes
         (Settings.IdmtCurve.IeeeModeratelyInverse, "ieee-moderately-inverse"),
         (Settings.IdmtCurve.IeeeVeryInverse, "ieee-very-inverse"),
         (Settings.IdmtCurve.IeeeExtremelyInverse, "ieee-extremely-inverse"));
+
+    /// <summary>Verdicts: pass, too-early, too-late, not-assessable.</summary>
+    public static CodeBook<Verdict> Verdict { get; } = new("verdict",
+        (Verdicts.Verdict.Pass, "pass"), (Verdicts.Verdict.TooEarly, "too-early"), (Verdicts.Verdict.TooLate, "too-late"),
+        (Verdicts.Verdict.NotAssessable, "not-assessable"));
 
     /// <summary>Finding kinds, as documented in the README.</summary>
     public static CodeBook<FindingKind> FindingKind { get; } = new("finding kind",

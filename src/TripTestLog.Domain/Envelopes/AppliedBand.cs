@@ -25,4 +25,8 @@ public sealed record AppliedBand(
 {
     /// <summary>Whether the standard sets any requirement at this current.</summary>
     public bool HasRequirement => NoRequirement is null;
+
+    /// <summary>The guaranteed band in words, e.g. "1 s to 60 s", "0 s to no limit" or "never to 100 ms".</summary>
+    public string Range =>
+        $"{(Minimum.IsOpen ? "0 s" : Minimum.Limit?.ToString() ?? "never")} to {(Maximum.Limit is { } max ? max.ToString() : "no limit")}";
 }

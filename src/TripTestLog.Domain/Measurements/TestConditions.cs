@@ -19,4 +19,8 @@ public readonly record struct TestConditions(StartCondition Start, PoleLoading L
         var onePole = poles > 1 && measurement.Pole != Pole.All;
         return new TestConditions(measurement.Start, onePole ? PoleLoading.OnePole : PoleLoading.AllPoles);
     }
+
+    /// <summary>In words, e.g. "from cold, all poles loaded".</summary>
+    public override string ToString() =>
+        $"{(Start == StartCondition.Cold ? "from cold" : "from warm")}, {(Loading == PoleLoading.AllPoles ? "all poles loaded" : "one pole loaded")}";
 }

@@ -42,14 +42,14 @@ public static partial class TripJudge
         if (outcome.Tripped && guaranteedMins.FirstOrDefault(e => !e.IsOpen && e.TripIsBefore(t)) is { Requirement: not null } early)
         {
             return new(Verdict.NotAssessable,
-                $"{what}, before the {early.Limit} minimum, but that limit assumes {early.Assumes()} and this test ({Describe(conditions)}) trips sooner, so it proves nothing ({early.Requirement}); repeat {Repeat(early)}",
+                $"{what}, before the {early.Limit} minimum, but that limit assumes {early.Assumes()} and this test ({conditions}) trips sooner, so it proves nothing ({early.Requirement}); repeat {Repeat(early)}",
                 early, []);
         }
 
         if (guaranteedMaxs.FirstOrDefault(e => e.Limit is { } l && (outcome.Tripped ? e.TripIsAfter(t) : t >= l)) is { Requirement: not null } late)
         {
             return new(Verdict.NotAssessable,
-                $"{what}, past the {late.Limit} maximum, but that limit assumes {late.Assumes()} and this test ({Describe(conditions)}) trips later, so it proves nothing ({late.Requirement}); repeat {Repeat(late)}",
+                $"{what}, past the {late.Limit} maximum, but that limit assumes {late.Assumes()} and this test ({conditions}) trips later, so it proves nothing ({late.Requirement}); repeat {Repeat(late)}",
                 late, []);
         }
 
@@ -67,7 +67,7 @@ public static partial class TripJudge
             .ToList();
         if (shown.Count == 0)
         {
-            return new(Verdict.NotAssessable, $"tripped after {t}; no requirement at this current can be shown by a test run {Describe(conditions)}", null, []);
+            return new(Verdict.NotAssessable, $"tripped after {t}; no requirement at this current can be shown by a test run {conditions}", null, []);
         }
 
         var notes = maxs
@@ -83,7 +83,7 @@ public static partial class TripJudge
         var edge = decisive.Requirement is null ? shown[0] : decisive;
         var inside = applied.Maximum.Limit is null && applied.Minimum.IsOpen
             ? $"meets {edge.Requirement}"
-            : $"inside {Describe(applied)}";
+            : $"inside {applied.Range}";
         return new(Verdict.Pass, $"tripped after {t}, {inside}", edge, notes);
     }
 
@@ -121,12 +121,6 @@ public static partial class TripJudge
 
         return new(Verdict.NotAssessable, $"held only {held}; the no-trip requirement here runs to {provable.Limit} ({provable.Requirement})", null, []);
     }
-
-    private static string Describe(TestConditions c) =>
-        $"{(c.Start == StartCondition.Cold ? "from cold" : "from warm")}, {(c.Loading == PoleLoading.AllPoles ? "all poles loaded" : "one pole loaded")}";
-
-    private static string Describe(AppliedBand band) =>
-        $"{(band.Minimum.IsOpen ? "0 s" : band.Minimum.Limit?.ToString() ?? "never")} to {(band.Maximum.Limit is { } max ? max.ToString() : "no limit")}";
 
     private static string Repeat(BandEdge edge) => edge.Assumes() is { Length: > 0 } a ? a : "under the standard's conditions";
 }

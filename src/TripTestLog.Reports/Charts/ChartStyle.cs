@@ -29,6 +29,18 @@ internal static class ChartStyle
         _ => (MarkerShape.FilledCircle, Pass, 8),
     };
 
+    /// <summary>Adds one kind of test mark at (<paramref name="xs"/>, <paramref name="ys"/>), in its shape, colour and legend.</summary>
+    public static void AddMarks(Plot plot, MarkKind kind, double[] xs, double[] ys)
+    {
+        var (shape, color, size) = Marker(kind);
+        var points = plot.Add.ScatterPoints(xs, ys);
+        points.MarkerShape = shape;
+        points.MarkerSize = size;
+        points.MarkerLineWidth = kind == MarkKind.Failed ? 3 : 1.5f;
+        points.Color = color;
+        points.LegendText = TimeCurrentChart.Legend(kind);
+    }
+
     /// <summary>A plot with the shipped font and a white background.</summary>
     public static Plot NewPlot()
     {

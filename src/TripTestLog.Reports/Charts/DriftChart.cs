@@ -29,17 +29,9 @@ internal static class DriftChart
             }
         }
 
-        foreach (var group in tests.GroupBy(t => t.Kind))
+        foreach (var group in tests.GroupBy(t => t.Kind).OrderBy(g => g.Key))
         {
-            var (shape, color, size) = ChartStyle.Marker(group.Key);
-            double[] xs = [.. group.Select(t => t.Year)];
-            double[] ys = [.. group.Select(t => Math.Log10(t.Seconds))];
-            var points = plot.Add.ScatterPoints(xs, ys);
-            points.MarkerShape = shape;
-            points.MarkerSize = size;
-            points.MarkerLineWidth = group.Key == MarkKind.Failed ? 3 : 1.5f;
-            points.Color = color;
-            points.LegendText = TimeCurrentChart.Legend(group.Key);
+            ChartStyle.AddMarks(plot, group.Key, [.. group.Select(t => t.Year)], [.. group.Select(t => Math.Log10(t.Seconds))]);
         }
 
         if (exit?.Trend is { } trend && exit.ForecastOn is { } date)

@@ -46,15 +46,21 @@ internal static class TimeCurrentChart
         [.. trips.Select(t =>
         {
             var m = t.Trip.Measurement;
-            var a = t.Assessment;
-            var kind = a.IsFailure ? MarkKind.Failed
-                : a.Verdict == Verdict.NotAssessable ? MarkKind.NotAssessable
-                : !m.Outcome.Tripped ? MarkKind.Held
-                : a.Basis == VerdictBasis.Normative ? MarkKind.PassNormative
-                : MarkKind.PassBand;
-            return new Mark(m.Current.Value / t.Envelope.Reference.Value, Math.Clamp(m.Outcome.Time.Value, FloorSeconds, CeilingSeconds), kind,
+            return new Mark(m.Current.Value / t.Envelope.Reference.Value, Math.Clamp(m.Outcome.Time.Value, FloorSeconds, CeilingSeconds), KindOf(t),
                 $"{m.TestedAt.Date:yyyy-MM-dd} {(m.Stage == TestStage.AsLeft ? "as-left" : "as-found")}");
         })];
+
+    /// <summary>How a judged test is marked: by its verdict, and for a pass by whether it rests on a standard's point.</summary>
+    public static MarkKind KindOf(JudgedTrip trip)
+    {
+        ArgumentNullException.ThrowIfNull(trip);
+        var a = trip.Assessment;
+        return a.IsFailure ? MarkKind.Failed
+            : a.Verdict == Verdict.NotAssessable ? MarkKind.NotAssessable
+            : !trip.Trip.Measurement.Outcome.Tripped ? MarkKind.Held
+            : a.Basis == VerdictBasis.Normative ? MarkKind.PassNormative
+            : MarkKind.PassBand;
+    }
 
     /// <summary>The chart as a ScottPlot plot (kept for tests to inspect), from the band and the marks.</summary>
     public static Plot Build(ITripEnvelope envelope, BandLines band, IReadOnlyList<Mark> marks)
@@ -79,15 +85,7 @@ internal static class TimeCurrentChart
 
         foreach (var group in marks.GroupBy(m => m.Kind).OrderBy(g => g.Key))
         {
-            var (shape, color, size) = ChartStyle.Marker(group.Key);
-            double[] gx = [.. group.Select(m => Math.Log10(m.Multiple))];
-            double[] gy = [.. group.Select(m => Math.Log10(m.Seconds))];
-            var points = plot.Add.ScatterPoints(gx, gy);
-            points.MarkerShape = shape;
-            points.MarkerSize = size;
-            points.MarkerLineWidth = group.Key == MarkKind.Failed ? 3 : 1.5f;
-            points.Color = color;
-            points.LegendText = Legend(group.Key);
+            ChartStyle.AddMarks(plot, group.Key, [.. group.Select(m => Math.Log10(m.Multiple))], [.. group.Select(m => Math.Log10(m.Seconds))]);
         }
 
         LogAxes.Apply(plot.Axes.Bottom, LogAxes.Multiple);

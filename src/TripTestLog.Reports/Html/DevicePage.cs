@@ -83,8 +83,8 @@ internal static class DevicePage
         {
             var m = t.Trip.Measurement;
             var a = t.Assessment;
-            var verdict = Verdict(a.Verdict);
-            var band = a.Band.HasRequirement ? $"{Edge(a.Band.Minimum.Limit)} to {Edge(a.Band.Maximum.Limit)}" : "no band";
+            var verdict = TextCodes.Verdict.Of(a.Verdict);
+            var band = a.Band.HasRequirement ? a.Band.Range : "no band";
             return new[]
             {
                 H(m.TestedAt.ToString()), H(TextCodes.Stage.Of(m.Stage)), H(m.Pole.Code), H(TextCodes.Start.Of(m.Start)),
@@ -99,11 +99,7 @@ internal static class DevicePage
 
     private static void Drift(StringBuilder html, DeviceReport report)
     {
-        var points = report.Trips
-            .Where(t => t.Trip.Measurement.Stage == TestStage.AsFound && t.Trip.Measurement.Outcome.Tripped && t.Assessment.Verdict != Domain.Verdicts.Verdict.NotAssessable)
-            .GroupBy(TripPoint.Of)
-            .Where(g => g.Select(t => t.Trip.Measurement.TestedAt.Date).Distinct().Count() >= 2)
-            .ToList();
+        var points = TripPoint.Series(report.Trips).Where(p => p.Tests.Select(t => t.Trip.Measurement.TestedAt.Date).Distinct().Count() >= 2).ToList();
         html.Append("<h2>Trip drift at each test point</h2>\n");
         if (points.Count == 0)
         {
@@ -112,13 +108,12 @@ internal static class DevicePage
         }
 
         html.Append("<div class=\"charts\">");
-        foreach (var point in points)
+        foreach (var (point, tests) in points)
         {
-            var tests = point.ToList();
             var band = tests[^1].Assessment.Band;
-            var exit = report.Condition.Open.FirstOrDefault(f => f.Kind == FindingKind.TripTrendExit && f.Point == point.Key.Label);
-            var chart = DriftChart.Build(point.Key.Label, [.. tests.Select(t => new DriftChart.Point(TrendPoint.YearOf(t.Trip.Measurement.TestedAt.Date),
-                t.Trip.Measurement.Outcome.Time.Value, TimeCurrentChart.Marks([t])[0].Kind))], band.Minimum.Limit?.Value, band.Maximum.Limit?.Value, exit);
+            var exit = report.Condition.Open.FirstOrDefault(f => f.Kind == FindingKind.TripTrendExit && f.Point == point.Label);
+            var chart = DriftChart.Build(point.Label, [.. tests.Select(t => new DriftChart.Point(TrendPoint.YearOf(t.Trip.Measurement.TestedAt.Date),
+                t.Trip.Measurement.Outcome.Time.Value, TimeCurrentChart.KindOf(t)))], band.Minimum.Limit?.Value, band.Maximum.Limit?.Value, exit);
             html.Append("<figure>").Append(ChartStyle.Svg(chart, 520, 320)).Append("</figure>");
         }
 
@@ -180,7 +175,7 @@ internal static class DevicePage
             return new[]
             {
                 $"<span class=\"sev-{H(severity)}\">{H(severity)}</span>", H(TextCodes.FindingKind.Of(f.Kind)),
-                H(f.Pole is not null ? $"pole {f.Pole}" : f.Path is not null ? $"path {f.Path}" : f.Point ?? ""),
+                H(f.Concerns),
                 H(f.FirstSeen?.ToString("yyyy-MM-dd") ?? ""), H(f.TestedAt.Date.ToString("yyyy-MM-dd")),
                 H(f.Message) + (f.Standing is null ? "" : $"<br><em>{H(f.Standing)}</em>"),
                 H(f.Basis) + (f.Policy is null ? "" : $"<br>policy: {H(f.Policy)}"),
@@ -212,14 +207,4 @@ internal static class DevicePage
         }));
         html.Append("<p>").Append(H(context.Footer)).Append("</p>\n");
     }
-
-    private static string Verdict(Verdict verdict) => verdict switch
-    {
-        Domain.Verdicts.Verdict.Pass => "pass",
-        Domain.Verdicts.Verdict.TooEarly => "too-early",
-        Domain.Verdicts.Verdict.TooLate => "too-late",
-        _ => "not-assessable",
-    };
-
-    private static string Edge(Domain.Quantities.Seconds? limit) => limit is { } s ? s.ToString() : "none";
 }

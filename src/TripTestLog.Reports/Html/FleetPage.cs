@@ -58,14 +58,14 @@ internal static class FleetPage
         Table(html, ["device", "kind", "concerns", "forecast date", "what to do"], fleet.Forecasts.Select(x => new[]
         {
             Link(x.Device, pageOf), H(TextCodes.FindingKind.Of(x.Finding.Kind)),
-            H(x.Finding.Pole is not null ? $"pole {x.Finding.Pole}" : x.Finding.Path is not null ? $"path {x.Finding.Path}" : x.Finding.Point ?? ""),
+            H(x.Finding.Concerns),
             H(x.Finding.ForecastOn?.ToString("yyyy-MM-dd") ?? ""), H(x.Finding.Message),
         }));
 
         html.Append("<h2>Trip results per family and rating</h2>\n");
         Table(html, ["family", "rating", "tests", "pass", "too early", "too late", "not assessable"], fleet.Results.Select(r => new[]
         {
-            H(r.Key.Family), H(N(r.Key.Rating) + " A"), N(r.Value.Sum()), N(r.Value[(int)Verdict.Pass]), N(r.Value[(int)Verdict.TooEarly]),
+            H(TextCodes.Family.Of(r.Key.Family)), H(N(r.Key.Rating) + " A"), N(r.Value.Sum()), N(r.Value[(int)Verdict.Pass]), N(r.Value[(int)Verdict.TooEarly]),
             N(r.Value[(int)Verdict.TooLate]), N(r.Value[(int)Verdict.NotAssessable]),
         }));
 
@@ -81,8 +81,8 @@ internal static class FleetPage
     /// <summary>The worst open finding in words, and how many more there are.</summary>
     private static string Why(DeviceCondition device)
     {
-        var open = device.Open.OrderByDescending(f => f.Kind != FindingKind.TestOverdue).ThenByDescending(f => f.Severity).ToList();
-        return open.Count == 0 ? "" : open[0].Message + (open.Count > 1 ? $" (and {open.Count - 1} more)" : "");
+        var more = device.Open.Count() - 1;
+        return device.WorstOpen is { } worst ? worst.Message + (more > 0 ? $" (and {more} more)" : "") : "";
     }
 
     private static string Link(DeviceCondition device, Func<string, string?> pageOf) =>
