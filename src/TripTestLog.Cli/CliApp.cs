@@ -22,6 +22,7 @@ internal static class CliApp
             EnvelopeCommand.Create(cli),
             VerifyCommand.Create(cli),
             BackupCommand.Create(cli),
+            WorksheetCommand.Create(cli),
             DemoCommand.Create(cli),
         };
 

@@ -59,6 +59,12 @@ internal sealed partial class CsvRecordFile
             }
 
             var fields = new RowFields(map, headers.Values(csv), _path, csv.LineNumber, _today, layout.DecimalComma, dateFormats);
+            if (IsNotTested(kind, fields))
+            {
+                yield return new ReadRow(csv.LineNumber, null, [], CurrentRaw) { NotTested = true };
+                continue;
+            }
+
             var record = RowSink.Parse(kind, fields);
             if (record is not null && kind is RecordKind.CurveTable or RecordKind.AmbientTable)
             {
@@ -68,6 +74,11 @@ internal sealed partial class CsvRecordFile
             yield return new ReadRow(csv.LineNumber, fields.Problems.Count == 0 ? record : null, fields.Problems, CurrentRaw);
         }
     }
+
+    // A planned worksheet row with every result blank: the test was not made.
+    private static bool IsNotTested(RecordKind kind, RowFields fields) =>
+        fields.Text(RecordSchema.PlanColumn).Length > 0 && RecordSchema.ResultColumns(kind) is { Count: > 0 } results
+        && results.All(c => fields.Text(c).Length == 0);
 
     private static (byte[] Head, int Count) ReadHead(Stream stream)
     {

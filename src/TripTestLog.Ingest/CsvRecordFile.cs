@@ -101,8 +101,10 @@ internal sealed partial class CsvRecordFile : IRecordFile
     {
         var sink = new RowSink(Kind ?? RecordKind.DeviceRegister);
         var problems = new List<RowProblem>();
+        long notTested = 0;
         foreach (var row in Rows())
         {
+            notTested += row.NotTested ? 1 : 0;
             if (row.Record is { } record)
             {
                 sink.Add(record, row.Line);
@@ -117,6 +119,7 @@ internal sealed partial class CsvRecordFile : IRecordFile
         {
             Kind = Kind,
             IsUnreadable = summary.IsUnreadable,
+            NotTested = notTested,
         };
     }
 

@@ -55,4 +55,51 @@ public sealed class ReportBrowserTests(SampleFleetDatabase fleet) : IClassFixtur
             await File.WriteAllBytesAsync(Path.Combine(Golden.RepositoryRoot(), "docs", screenshot), png);
         }
     }
+
+    [Fact]
+    public async Task TheWorksheet_RendersItsTables_WithoutConsoleErrors_AndPrintsAPagePerDevice()
+    {
+        Assert.True(File.Exists(Chromium), $"{Chromium} is missing: install Debian's chromium package (apt-get install -y chromium), as .ci/run does");
+        var folder = Path.Combine(fleet.Folder, "worksheet-browser");
+        Assert.Equal(0, CliRun.Run("worksheet", "--db", fleet.Database, "--site", "Alder Ridge Works", "--out", folder).Exit);
+
+        using var playwright = await Playwright.CreateAsync();
+        await using var browser = await playwright.Chromium.LaunchAsync(new() { ExecutablePath = Chromium, Headless = true, Args = ["--no-sandbox"] });
+        var tab = await browser.NewPageAsync(new() { ViewportSize = new() { Width = 1200, Height = 1500 } });
+        var errors = new List<string>();
+        tab.Console += (_, message) =>
+        {
+            if (message.Type == "error")
+            {
+                errors.Add(message.Text);
+            }
+        };
+        tab.PageError += (_, error) => errors.Add(error);
+
+        await tab.GotoAsync(new Uri(Path.Combine(folder, "worksheet.html")).AbsoluteUri);
+
+        Assert.Contains("Caution:", await tab.Locator("p.caution").InnerTextAsync());
+        Assert.Equal(24, await tab.Locator("section.device-page").CountAsync());
+        var q05 = tab.Locator("section.device-page", new() { HasText = "ARW-DB1-Q05" });
+        Assert.Equal(6, await q05.Locator("table.worksheet").First.Locator("tbody tr").CountAsync());
+        Assert.Empty(errors);
+
+        // Printed, each device starts a page of its own.
+        var pdf = await tab.PdfAsync(new() { Format = "A4" });
+        Assert.True(CountPages(pdf) >= 24, "fewer printed pages than devices");
+
+        var png = await tab.ScreenshotAsync(new() { FullPage = false });
+        Assert.True(png.Length > 20_000, "the screenshot is nearly empty");
+        if (Environment.GetEnvironmentVariable("UPDATE_SCREENSHOTS") == "1")
+        {
+            await File.WriteAllBytesAsync(Path.Combine(Golden.RepositoryRoot(), "docs", "worksheet.png"), png);
+        }
+    }
+
+    // Each page of a PDF is one "/Type /Page" object (the tree's root is "/Type /Pages").
+    private static int CountPages(byte[] pdf)
+    {
+        var text = System.Text.Encoding.Latin1.GetString(pdf);
+        return System.Text.RegularExpressions.Regex.Matches(text, @"/Type\s*/Page(?!s)").Count;
+    }
 }

@@ -35,6 +35,9 @@ public sealed record ImportOutcome(
     /// <summary>Stored rows replaced by a corrected file (with --replace); their old values are in the audit table.</summary>
     public long Replaced { get; init; }
 
+    /// <summary>Rows planned on a worksheet and left blank: tests not made, counted and never stored.</summary>
+    public long NotTested { get; init; }
+
     /// <summary>Register rows that matched the stored entry exactly.</summary>
     public long Unchanged => Status == ImportStatus.Imported && Kind == RecordKind.DeviceRegister ? RowsRead - Added - Updated - Duplicates - RefusedRows : 0;
 }

@@ -90,9 +90,16 @@ public sealed class ImportPipeline(IImportStore store)
         using var rejects = options.AcceptValid ? file.Rejects() : null;
         var log = new ProblemLog();
         long replaced = 0;
+        long notTested = 0;
         foreach (var (row, prepared) in ParsedAhead(file, batch, cancel))
         {
             cancel.ThrowIfCancellationRequested();
+            if (row.NotTested)
+            {
+                notTested++;
+                continue;
+            }
+
             var problems = row.Problems;
             if (row.Record is { } record && problems.Count == 0)
             {
@@ -120,12 +127,13 @@ public sealed class ImportPipeline(IImportStore store)
         var result = batch.Complete(summary.Sha256, summary.RowsRead, replaced);
         if (!result.Committed)
         {
-            return new ImportOutcome(file.Path, kind, ImportStatus.AlreadyImported, summary.RowsRead, 0, 0, 0, []);
+            return new ImportOutcome(file.Path, kind, ImportStatus.AlreadyImported, summary.RowsRead, 0, 0, 0, []) { NotTested = notTested };
         }
 
         return new ImportOutcome(file.Path, kind, ImportStatus.Imported, summary.RowsRead, result.Added, 0, result.Duplicates, log.Problems)
         {
             Replaced = replaced,
+            NotTested = notTested,
             RefusedRows = log.RefusedLines,
             ProblemsOmitted = log.Omitted,
             RejectsFile = rejects?.Keep(),

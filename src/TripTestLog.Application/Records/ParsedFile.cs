@@ -24,6 +24,9 @@ public sealed record ParsedFile
     /// <summary>Data rows read (header and blank lines not counted).</summary>
     public long RowsRead { get; init; }
 
+    /// <summary>Rows planned on a worksheet and left blank (tests not made): counted, not records.</summary>
+    public long NotTested { get; init; }
+
     /// <summary>Every problem found, in file order.</summary>
     public IReadOnlyList<RowProblem> Problems { get; init; } = [];
 

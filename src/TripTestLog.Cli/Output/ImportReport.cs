@@ -1,6 +1,7 @@
 using TripTestLog.Application.Import;
 using TripTestLog.Application.Check;
 using TripTestLog.Application.Records;
+using System.Globalization;
 using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Output;
@@ -13,20 +14,26 @@ internal static class ImportReport
 
     public static void Write(TextWriter writer, IReadOnlyList<ImportOutcome> outcomes, string logPath)
     {
-        var table = new TextTable("File", "Kind", "Result", "Rows>", "Added>", "Updated>", "Unchanged>", "Duplicates>", "Replaced>", "Refused>");
+        // Columns that are zero for every file are left out, so the table stays narrow; the sentence below names them all.
+        var counts = new (string Header, Func<ImportOutcome, long> Count, bool Always)[]
+        {
+            ("Rows>", o => o.RowsRead, true),
+            ("Added>", o => o.Added, true),
+            ("Updated>", o => o.Updated, false),
+            ("Unchanged>", o => o.Unchanged, false),
+            ("Duplicates>", o => o.Duplicates, true),
+            ("Replaced>", o => o.Replaced, false),
+            ("Not tested>", o => o.NotTested, false),
+            ("Refused>", o => o.RefusedRows, true),
+        }.Where(c => c.Always || outcomes.Any(o => c.Count(o) != 0)).ToList();
+        var table = new TextTable(["File", "Kind", "Result", .. counts.Select(c => c.Header)]);
         foreach (var o in outcomes)
         {
-            table.Add(
+            table.Add([
                 Path.GetRelativePath(Directory.GetCurrentDirectory(), o.File),
-                o.Kind is { } k ? Kind(k) : "?",
+                o.Kind is { } k ? Kind(k) : "unknown",
                 o.Status switch { ImportStatus.Imported => "imported", ImportStatus.AlreadyImported => "already imported", _ => "REFUSED" },
-                o.RowsRead.ToString(),
-                o.Added.ToString(),
-                o.Updated.ToString(),
-                o.Unchanged.ToString(),
-                o.Duplicates.ToString(),
-                o.Replaced.ToString(),
-                o.RefusedRows.ToString());
+                .. counts.Select(c => c.Count(o).ToString(CultureInfo.InvariantCulture))]);
         }
 
         table.WriteTo(writer);
@@ -36,7 +43,15 @@ internal static class ImportReport
         writer.WriteLine();
         writer.WriteLine($"{outcomes.Count} {(outcomes.Count == 1 ? "file" : "files")}: {imported} imported, {again} already imported, {refused.Count} refused; "
             + $"{outcomes.Where(o => o.Status == ImportStatus.Imported).Sum(o => o.Added)} records added.");
-        writer.WriteLine("Every row is accounted for: rows = added + updated + unchanged + duplicates + replaced + refused.");
+        if (outcomes.Any(o => o.RowsRead > 0))
+        {
+            writer.WriteLine("Every row is accounted for: rows = added + updated + unchanged + duplicates + replaced + not tested + refused.");
+        }
+
+        if (outcomes.Sum(o => o.NotTested) is > 0 and var blank)
+        {
+            writer.WriteLine($"{blank} planned {(blank == 1 ? "row was" : "rows were")} left blank on a worksheet: counted as not tested, not stored.");
+        }
 
         foreach (var o in outcomes.Where(o => o.Status == ImportStatus.Imported && o.RefusedRows > 0))
         {

@@ -8,6 +8,9 @@ public sealed class UnavailableEnvelope(string standard, Amperes reference, stri
     /// <inheritdoc />
     public string Standard => standard;
 
+    /// <summary>Why no band can be drawn, and what to do about it.</summary>
+    public string Reason => reason;
+
     /// <inheritdoc />
     public string ReferenceName => "In";
 

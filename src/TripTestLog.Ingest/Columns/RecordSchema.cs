@@ -4,6 +4,20 @@ namespace TripTestLog.Ingest.Columns;
 /// <summary>The columns of one record kind, version 1 of the formats. The README documents the same lists.</summary>
 internal sealed record RecordSchema(RecordKind Kind, IReadOnlyList<ColumnSpec> Columns, IReadOnlyList<string> Signature)
 {
+    /// <summary>
+    /// A worksheet's label for a planned row (T1, C1, I1 ...). A row that carries one and leaves every result column blank
+    /// is a test not made: counted, never stored.
+    /// </summary>
+    public const string PlanColumn = "plan";
+
+    /// <summary>The columns that hold a measurement's result, for each kind that a worksheet plans.</summary>
+    public static IReadOnlyList<string> ResultColumns(RecordKind kind) => kind switch
+    {
+        RecordKind.TripTests => ["trip_time", "held"],
+        RecordKind.ContactResistance or RecordKind.InsulationResistance => ["resistance"],
+        _ => [],
+    };
+
     private static ColumnSpec Req(string name, Quantity q = Quantity.None) => new(name, q, true);
 
     private static ColumnSpec Opt(string name, Quantity q = Quantity.None) => new(name, q, false);
@@ -30,7 +44,7 @@ internal sealed record RecordSchema(RecordKind Kind, IReadOnlyList<ColumnSpec> C
             Opt("trip_time", Quantity.Time), Opt("held", Quantity.Time), Req("start"), Opt("ambient", Quantity.Temperature),
             Opt("instrument"), Opt("technician"), Opt("note"),
             Opt("ir", Quantity.Current), Opt("isd", Quantity.Current), Opt("ii", Quantity.Current), Opt("im", Quantity.Current),
-            Opt("pickup", Quantity.Current), Opt("tms"),
+            Opt("pickup", Quantity.Current), Opt("tms"), Opt(PlanColumn),
         ],
         ["trip_time", "held", "start"]);
 
@@ -39,6 +53,7 @@ internal sealed record RecordSchema(RecordKind Kind, IReadOnlyList<ColumnSpec> C
         [
             Req("asset_tag"), Req("tested_at"), Req("stage"), Req("pole"), Req("resistance", Quantity.ContactResistance),
             Req("test_current", Quantity.Current), Opt("temperature", Quantity.Temperature), Opt("instrument"), Opt("technician"),
+            Opt(PlanColumn),
         ],
         ["test_current"]);
 
@@ -47,6 +62,7 @@ internal sealed record RecordSchema(RecordKind Kind, IReadOnlyList<ColumnSpec> C
         [
             Req("asset_tag"), Req("tested_at"), Req("stage"), Req("path"), Req("test_voltage", Quantity.Voltage),
             Req("resistance", Quantity.InsulationResistance), Opt("temperature", Quantity.Temperature), Opt("duration", Quantity.Time),
+            Opt(PlanColumn),
         ],
         ["path", "test_voltage"]);
 

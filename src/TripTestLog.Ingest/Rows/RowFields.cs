@@ -221,6 +221,12 @@ internal sealed class RowFields
             return null;
         }
 
+        // A spreadsheet-safe cell ("'=X", as this tool writes a tag that starts like a formula) reads as the tag itself.
+        if (text.Length > 1 && text[0] == '\'' && text[1] is '=' or '+' or '-' or '@')
+        {
+            text = text[1..];
+        }
+
         if (!AssetTag.IsValid(text, out var reason))
         {
             Fail("asset_tag", reason);

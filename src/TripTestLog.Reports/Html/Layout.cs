@@ -38,6 +38,8 @@ internal static class Layout
         figure { margin: 8px 0 16px; } figure svg { max-width: 100%; height: auto; } figcaption { color: var(--muted); font-size: 12px; }
         .charts { display: flex; flex-wrap: wrap; gap: 8px; } .charts figure { flex: 1 1 480px; }
         .signoff td { height: 2.2em; } .signoff th { width: 22%; }
+        td.entry { min-width: 7em; height: 2.2em; border: 1px solid var(--ink); background: #fff; }
+        .small { color: var(--muted); font-size: 12px; }
         nav a { margin-right: 12px; }
         footer { color: var(--muted); font-size: 12px; margin-top: 24px; border-top: 1px solid var(--line); padding-top: 6px; }
         @page { margin: 14mm 12mm; }

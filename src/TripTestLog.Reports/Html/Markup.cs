@@ -36,7 +36,10 @@ internal static class Markup
     /// <summary>A link target for a page name, escaped for an attribute.</summary>
     public static string Href(string folder, string page) => H($"{folder}/{Uri.EscapeDataString(page)}");
 
-    /// <summary>Writes a table of <paramref name="rows"/> whose cells are already escaped markup.</summary>
+    /// <summary>A cell left empty for a person to write in, boxed on screen and in print.</summary>
+    public const string EntryCell = "\u0000entry";
+
+    /// <summary>Writes a table of <paramref name="rows"/> whose cells are already escaped markup (or <see cref="EntryCell"/>).</summary>
     public static void Table(StringBuilder html, string[] headers, IEnumerable<string[]> rows, string? cssClass = null)
     {
         html.Append(cssClass is null ? "<table>" : $"<table class=\"{cssClass}\">").Append("<thead><tr>");
@@ -53,7 +56,7 @@ internal static class Markup
             html.Append("<tr>");
             foreach (var cell in row)
             {
-                html.Append("<td>").Append(cell).Append("</td>");
+                html.Append(ReferenceEquals(cell, EntryCell) || cell == EntryCell ? "<td class=\"entry\"></td>" : $"<td>{cell}</td>");
             }
 
             html.Append("</tr>");
