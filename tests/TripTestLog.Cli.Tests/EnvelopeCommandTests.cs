@@ -40,7 +40,7 @@ public sealed class EnvelopeCommandTests
     public void RelayIdmt_Csv_HasTheCharacteristicAtTenTimesPickup()
     {
         // IEC 60255-151 standard inverse, TMS 0.1, 10 x 200 A: 0.29706 s, ±40 ms (lab policy floor) = 0.25706 s to 0.33706 s.
-        var (exit, output, _) = CliRun.Run("envelope", "--family", "relay-idmt", "--curve", "standard-inverse", "--pickup", "200", "--tms", "0.1", "--rated", "400", "--csv");
+        var (exit, output, _) = CliRun.Run("envelope", "--family", "relay-idmt", "--curve", "standard-inverse", "--pickup", "200", "--tms", "0.1", "--csv");
 
         Assert.Equal(0, exit);
         var row = output.Split('\n').Select(l => l.Split(',')).Single(r => r[0] == "10");
@@ -74,12 +74,33 @@ public sealed class EnvelopeCommandTests
     [Fact]
     public void CurveTable_IsDrawnFromAFile()
     {
-        var file = Path.Combine(Golden.RepositoryRoot(), "sample-records", "curve-tables.csv");
+        var sample = Path.Combine(Golden.RepositoryRoot(), "sample-records", "curve-tables.csv");
+        var file = Path.Combine(Path.GetTempPath(), $"ttl-one-table-{Guid.NewGuid():N}.csv");
+        File.WriteAllLines(file, File.ReadLines(sample).Where(l => !l.StartsWith("CV-M32-SPECIAL,", StringComparison.Ordinal)));
 
         var (exit, output, error) = CliRun.Run("envelope", "--family", "curve-table", "--rated", "160", "--table", file, "--csv");
+        var (twoExit, _, twoError) = CliRun.Run("envelope", "--family", "curve-table", "--rated", "160", "--table", sample, "--csv");
+        File.Delete(file);
 
         Assert.True(exit == 0, error);
         Assert.Contains("2,320,40,400,curve-table,curve-table,", output);
+        Assert.Equal(2, twoExit);
+        Assert.StartsWith("error: --table: curve-tables.csv holds 2 tables (HB-TM160-CURVE, CV-M32-SPECIAL); give a file with the one table to draw", twoError);
+    }
+
+    [Theory]
+    [InlineData(new[] { "--curve", "C", "--rated", "16", "--tms", "0.1" }, "error: --tms does not apply to iec60898; it applies to relay-idmt")]
+    [InlineData(new[] { "--family", "relay-idmt", "--curve", "standard-inverse", "--pickup", "200", "--tms", "0.1", "--rated", "400" },
+        "error: --rated does not apply to relay-idmt")]
+    [InlineData(new[] { "--family", "iec60947-thermal-magnetic", "--rated", "160", "--ir", "125", "--im", "1000", "--isd", "900" },
+        "error: --isd does not apply to iec60947-thermal-magnetic")]
+    [InlineData(new[] { "--curve", "C", "--rated", "16", "--on", "2024-01-01" }, "error: --on applies with --asset")]
+    public void AnOptionThatDoesNotApply_IsRefused_NotIgnored(string[] args, string expected)
+    {
+        var (exit, _, error) = CliRun.Run(["envelope", .. args]);
+
+        Assert.Equal(2, exit);
+        Assert.StartsWith(expected, error);
     }
 
     [Theory]

@@ -1,39 +1,133 @@
 using System.CommandLine;
+using TripTestLog.Application.Check;
 using TripTestLog.Cli.Output;
 using TripTestLog.Cli.Services;
-using TripTestLog.Application.Check;
+using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Verdicts;
 using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Commands;
 
-/// <summary>`check`: the verdict of every stored trip test, as a table or as JSON.</summary>
+/// <summary>`check`: the verdict of every stored trip test, as a table, JSON or CSV, optionally filtered.</summary>
 internal static class CheckCommand
 {
     public static Command Create(CliContext cli)
     {
         var db = CommonOptions.ExistingDatabase();
         var asset = new Option<string?>("--asset") { Description = "Only this device's tests", HelpName = "TAG" };
+        var site = new Option<string?>("--site") { Description = "Only tests of devices at this site", HelpName = "SITE" };
+        var from = new Option<string?>("--from") { Description = "Only tests on or after this date", HelpName = "YYYY-MM-DD" };
+        var to = new Option<string?>("--to") { Description = "Only tests on or before this date", HelpName = "YYYY-MM-DD" };
+        var verdict = new Option<string[]>("--verdict")
+        {
+            Description = $"Only these verdicts ({TextCodes.Verdict.Choices}); repeat or separate with commas", HelpName = "VERDICT",
+            AllowMultipleArgumentsPerToken = false,
+        };
+        var stage = new Option<string?>("--stage") { Description = $"Only this stage ({TextCodes.Stage.Choices})", HelpName = "STAGE" };
+        var family = new Option<string?>("--family") { Description = $"Only this family ({string.Join(", ", FamilyCodes.All)})", HelpName = "FAMILY" };
         var json = new Option<bool>("--json") { Description = "Write a JSON array, one object per trip test (fields in the README)" };
-        var failOnFindings = new Option<bool>("--fail-on-findings") { Description = "Exit with 1 when any test is too early or too late, or its instrument was not traceable" };
+        var csv = new Option<bool>("--csv") { Description = "Write CSV, the same fields as --json, with formula cells neutralised" };
+        var failOnFindings = new Option<bool>("--fail-on-findings") { Description = "Exit with 1 when any test shown is too early or too late, or its instrument was not traceable" };
         var registered = new Option<bool>("--require-registered-instruments") { Description = "Report tests made with an instrument missing from the instrument register" };
         var policy = new Option<FileInfo?>("--policy") { Description = "Lab policy file (default: lab-policy.conf beside the database)", HelpName = "FILE" };
         var command = new Command("check", "Judge every trip test against the band its standard allows: pass, too-early, too-late or not-assessable")
         {
-            db, asset, json, failOnFindings, registered, policy,
+            db, asset, site, from, to, verdict, stage, family, json, csv, failOnFindings, registered, policy,
         };
-        command.SetAction(parse => Run(cli, parse.GetValue(db)!, parse.GetValue(asset), parse.GetValue(json), parse.GetValue(failOnFindings), parse.GetValue(registered),
-            parse.GetValue(policy)));
+        command.SetAction(parse =>
+        {
+            if (parse.GetValue(json) && parse.GetValue(csv))
+            {
+                return Usage(cli, "--json and --csv: choose one");
+            }
+
+            if (Filter(cli, parse.GetValue(site), parse.GetValue(from), parse.GetValue(to), parse.GetValue(verdict) ?? [], parse.GetValue(stage),
+                parse.GetValue(family)) is not { } filter)
+            {
+                return ExitCodes.BadInput;
+            }
+
+            var format = parse.GetValue(json) ? "json" : parse.GetValue(csv) ? "csv" : "table";
+            return Run(cli, parse.GetValue(db)!, parse.GetValue(asset), filter, format, parse.GetValue(failOnFindings), parse.GetValue(registered), parse.GetValue(policy));
+        });
         return command;
     }
 
-    private static int Run(CliContext cli, FileInfo db, string? asset, bool json, bool failOnFindings, bool requireRegistered, FileInfo? policyFile)
+    private static CheckFilter? Filter(CliContext cli, string? site, string? fromText, string? toText, string[] verdictTexts, string? stageText, string? familyText)
+    {
+        DateOnly? from = null, to = null;
+        if (fromText is not null)
+        {
+            if (!ConditionOptions.Date(fromText, "--from", cli, out var d))
+            {
+                return null;
+            }
+
+            from = d;
+        }
+
+        if (toText is not null)
+        {
+            if (!ConditionOptions.Date(toText, "--to", cli, out var d))
+            {
+                return null;
+            }
+
+            to = d;
+        }
+
+        if (from > to)
+        {
+            Usage(cli, $"--from {from:yyyy-MM-dd} is after --to {to:yyyy-MM-dd}");
+            return null;
+        }
+
+        HashSet<Verdict>? verdicts = null;
+        foreach (var text in verdictTexts.SelectMany(v => v.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)))
+        {
+            if (!TextCodes.Verdict.TryParse(text, out var v))
+            {
+                Usage(cli, $"--verdict: '{text}' is not a verdict; use {TextCodes.Verdict.Choices}");
+                return null;
+            }
+
+            (verdicts ??= []).Add(v);
+        }
+
+        TestStage? stage = null;
+        if (stageText is not null)
+        {
+            if (!TextCodes.Stage.TryParse(stageText, out var s))
+            {
+                Usage(cli, $"--stage: '{stageText}' is not a stage; use {TextCodes.Stage.Choices}");
+                return null;
+            }
+
+            stage = s;
+        }
+
+        DeviceFamily? family = null;
+        if (familyText is not null)
+        {
+            if (!FamilyCodes.TryParse(familyText, out var f))
+            {
+                Usage(cli, $"--family: '{familyText}' is not a family; use one of {string.Join(", ", FamilyCodes.All)}");
+                return null;
+            }
+
+            family = f;
+        }
+
+        return new CheckFilter(site, from, to, verdicts, stage, family);
+    }
+
+    private static int Run(CliContext cli, FileInfo db, string? asset, CheckFilter filter, string format, bool failOnFindings, bool requireRegistered, FileInfo? policyFile)
     {
         if (!db.Exists)
         {
-            cli.Error.WriteLine($"error: no database at {db.FullName}; import records first (triptestlog import PATH --db {db.FullName})");
-            return ExitCodes.BadInput;
+            return Usage(cli, $"no database at {db.FullName}; import records first (triptestlog import PATH --db {db.FullName})");
         }
 
         AssetTag? only = null;
@@ -41,8 +135,7 @@ internal static class CheckCommand
         {
             if (!AssetTag.IsValid(asset, out var reason))
             {
-                cli.Error.WriteLine($"error: --asset: {reason}");
-                return ExitCodes.BadInput;
+                return Usage(cli, $"--asset: {reason}");
             }
 
             only = AssetTag.Of(asset);
@@ -51,24 +144,31 @@ internal static class CheckCommand
         // The lab policy's ambient warning and instrument rule apply to verdicts as they do to findings.
         if (PolicyLoader.Load(policyFile, db, out var problem) is not { } policy)
         {
-            cli.Error.WriteLine($"error: {problem}");
-            return ExitCodes.BadInput;
+            return Usage(cli, problem!);
         }
 
         using var store = RecordStore.Open(db.FullName);
         if (only is { } tag && !store.Devices(tag).Any())
         {
-            cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {db.FullName}");
-            return ExitCodes.BadInput;
+            return Usage(cli, $"--asset: '{tag}' is not in the device register of {db.FullName}");
         }
 
         var counts = new VerdictCounts();
-        var output = new VerdictWriters(json ? new VerdictJson(cli.Out) : new VerdictTable(cli.Out), counts);
+        IVerdictWriter writer = format switch
+        {
+            "json" => new VerdictJson(cli.Out),
+            "csv" => new VerdictCsv(cli.Out),
+            _ => new VerdictTable(cli.Out),
+        };
+        var output = new VerdictWriters(writer, counts);
         try
         {
             foreach (var judged in CheckPipeline.Run(store, only, requireRegistered || policy.Policy.RequireRegisteredInstruments, cli.Cancel, policy.Policy.AmbientNoteKelvin))
             {
-                output.Add(judged);
+                if (filter.Admits(judged))
+                {
+                    output.Add(judged);
+                }
             }
         }
         catch (OperationCanceledException)
@@ -79,5 +179,11 @@ internal static class CheckCommand
 
         output.Finish();
         return failOnFindings && counts.AnyFinding ? ExitCodes.Findings : ExitCodes.Ok;
+    }
+
+    private static int Usage(CliContext cli, string message)
+    {
+        cli.Error.WriteLine("error: " + message);
+        return ExitCodes.BadInput;
     }
 }

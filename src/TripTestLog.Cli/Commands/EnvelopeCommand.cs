@@ -40,6 +40,32 @@ internal static class EnvelopeCommand
             return Usage(cli, $"--start: '{request.Start}' is not a start condition; use {TextCodes.Start.Choices}");
         }
 
+        // An option that describes another family's device, or any device when --asset draws the register's, is refused
+        // rather than ignored: the band drawn would not be the one asked for.
+        var familyCode = FamilyCodes.Of(family);
+        foreach (var given in request.Given)
+        {
+            if (!EnvelopeOptions.FamiliesOf.TryGetValue(given, out var families) && given != "--family")
+            {
+                continue;
+            }
+
+            if (request.Asset is not null)
+            {
+                return Usage(cli, $"{given}: --asset draws the device's band from its register settings; leave {given} out");
+            }
+
+            if (families is not null && !families.Contains(familyCode))
+            {
+                return Usage(cli, $"{given} does not apply to {familyCode}; it applies to {string.Join(", ", families)}");
+            }
+        }
+
+        if (request.On is not null && request.Asset is null)
+        {
+            return Usage(cli, "--on applies with --asset: the date whose register settings to draw");
+        }
+
         var conditions = new TestConditions(start, request.OnePole ? PoleLoading.OnePole : PoleLoading.AllPoles);
         ITripEnvelope envelope;
         string title;
@@ -57,8 +83,19 @@ internal static class EnvelopeCommand
             }
 
             var device = history.Latest;
+            if (request.On is { } onText)
+            {
+                if (!ConditionOptions.Date(onText, "--on", cli, out var on))
+                {
+                    return ExitCodes.BadInput;
+                }
+
+                device = history.InForceOn(on);
+            }
+
             envelope = EnvelopeFactory.For(device, device.Settings, 1.0, store.CurveTables());
-            title = $"{device.Tag}: {FamilyCodes.Of(device.Family)}, In = {device.RatedCurrent}, {device.Settings.Summary} ({envelope.Standard})";
+            title = $"{device.Tag}: {FamilyCodes.Of(device.Family)}, In = {device.RatedCurrent}, {device.Settings.Summary} ({envelope.Standard})"
+                + (request.On is { } shown ? $", settings in force on {shown}" : "");
         }
         else
         {
@@ -68,7 +105,8 @@ internal static class EnvelopeCommand
                 return Usage(cli, error!);
             }
 
-            var rated = Amperes.Of(request.Rated!.Value);
+            // A relay's band rests on its pickup alone; the breaker's rating does not enter it.
+            var rated = Amperes.Of(request.Rated ?? request.Pickup!.Value);
             if (request.Poles is { } n && n is < 1 or > 4)
             {
                 return Usage(cli, "--poles: give 1 to 4");
@@ -76,7 +114,7 @@ internal static class EnvelopeCommand
 
             var device = new Device(AssetTag.Of("envelope"), "", "", family, rated, request.Poles ?? 1, Volts.Of(400), null, null, "", "", "", settings.Value.Settings);
             envelope = EnvelopeFactory.For(device, device.Settings, 1.0, settings.Value.Tables);
-            title = $"{FamilyCodes.Of(family)}, In = {rated}, {device.Settings.Summary} ({envelope.Standard})";
+            title = $"{FamilyCodes.Of(family)}, {(request.Rated is null ? "" : $"In = {rated}, ")}{device.Settings.Summary} ({envelope.Standard})";
         }
 
         if (request.Csv)
@@ -93,7 +131,7 @@ internal static class EnvelopeCommand
 
     private static ((DeviceSettings Settings, IReadOnlyDictionary<string, CurveTable> Tables)? Value, string? Error) SettingsFromOptions(EnvelopeRequest r, DateOnly today)
     {
-        if (r.Rated is not { } rated || !double.IsFinite(rated) || rated <= 0 || rated > 10_000)
+        if (r.Family != DeviceFamily.RelayIdmt && (r.Rated is not { } rated || !double.IsFinite(rated) || rated <= 0 || rated > 10_000))
         {
             return (null, "--rated: give the rated current In in amperes, e.g. --rated 16");
         }
@@ -161,7 +199,13 @@ internal static class EnvelopeCommand
                     return (null, parsed.Problems.Count > 0 ? parsed.Problems[0].ToString() : $"{file.Name} is not a curve table file");
                 }
 
-                var name = parsed.CurveTableRows[0].Record.Table;
+                var names = parsed.CurveTableRows.Select(x => x.Record.Table).Distinct(StringComparer.Ordinal).ToList();
+                if (names.Count > 1)
+                {
+                    return (null, $"--table: {file.Name} holds {names.Count} tables ({string.Join(", ", names)}); give a file with the one table to draw");
+                }
+
+                var name = names[0];
                 var table = CurveTable.Create(name, parsed.CurveTableRows.Where(x => x.Record.Table == name).Select(x => x.Record.Point).ToList());
                 return ((new CurveTableSettings(name), new Dictionary<string, CurveTable> { [name] = table }), null);
         }

@@ -7,7 +7,8 @@ namespace TripTestLog.Cli.Commands;
 internal sealed record EnvelopeRequest(
     DeviceFamily? Family, string FamilyText, string? Curve, double? Rated, double? Ir, double? Tr, double? TrReference, double? Isd, double? Tsd, bool I2t,
     double? Ii, double? Im, double? Pickup, double? Tms, double? HighSet, double? HighSetDelay, double? OpeningTime, FileInfo? Table,
-    string? Asset, FileInfo Database, bool Csv, string Start, bool OnePole, int? Poles, string? Supply, bool ThermalMemory);
+    string? Asset, FileInfo Database, bool Csv, string Start, bool OnePole, int? Poles, string? Supply, bool ThermalMemory, string? On,
+    IReadOnlyList<string> Given);
 
 /// <summary>The options of `envelope`, declared once and read into an <see cref="EnvelopeRequest"/>.</summary>
 internal sealed class EnvelopeOptions
@@ -50,9 +51,34 @@ internal sealed class EnvelopeOptions
     private readonly Option<int?> _poles = new("--poles") { Description = "iec60898, iec61009: protected poles, 1 to 4 (default 1)", HelpName = "N" };
     private readonly Option<string?> _supply = new("--supply") { Description = "iec60898: ac or dc (IEC 60898-2; curves B and C)", HelpName = "ac|dc" };
     private readonly Option<bool> _thermalMemory = new("--thermal-memory") { Description = "iec60947-electronic: the unit keeps a thermal image" };
+    private readonly Option<string?> _on = new("--on") { Description = "With --asset: the settings in force on this date (default: the latest)", HelpName = "YYYY-MM-DD" };
+
+    /// <summary>The options that describe a device, by the families they apply to; the rest apply to every request.</summary>
+    public static readonly IReadOnlyDictionary<string, string[]> FamiliesOf = new Dictionary<string, string[]>
+    {
+        ["--curve"] = ["iec60898", "iec61009", "relay-idmt"],
+        ["--rated"] = ["iec60898", "iec61009", "iec60947-electronic", "iec60947-thermal-magnetic", "curve-table"],
+        ["--poles"] = ["iec60898", "iec61009"],
+        ["--supply"] = ["iec60898", "iec61009"],
+        ["--ir"] = ["iec60947-electronic", "iec60947-thermal-magnetic"],
+        ["--tr"] = ["iec60947-electronic"],
+        ["--tr-ref"] = ["iec60947-electronic"],
+        ["--isd"] = ["iec60947-electronic"],
+        ["--tsd"] = ["iec60947-electronic"],
+        ["--i2t"] = ["iec60947-electronic"],
+        ["--ii"] = ["iec60947-electronic"],
+        ["--thermal-memory"] = ["iec60947-electronic"],
+        ["--im"] = ["iec60947-thermal-magnetic"],
+        ["--pickup"] = ["relay-idmt"],
+        ["--tms"] = ["relay-idmt"],
+        ["--highset"] = ["relay-idmt"],
+        ["--highset-delay"] = ["relay-idmt"],
+        ["--opening-time"] = ["relay-idmt"],
+        ["--table"] = ["curve-table"],
+    };
 
     public IEnumerable<Option> All => [_family, _curve, _rated, _ir, _tr, _trRef, _isd, _tsd, _i2t, _ii, _im, _pickup, _tms, _highSet, _highSetDelay, _opening, _table,
-        _poles, _supply, _thermalMemory, _start, _onePole, _asset, _db, _csv];
+        _poles, _supply, _thermalMemory, _start, _onePole, _asset, _on, _db, _csv];
 
     public EnvelopeRequest Read(ParseResult p)
     {
@@ -60,6 +86,7 @@ internal sealed class EnvelopeOptions
         return new EnvelopeRequest(FamilyCodes.TryParse(text, out var family) ? family : null, text, p.GetValue(_curve), p.GetValue(_rated), p.GetValue(_ir), p.GetValue(_tr), p.GetValue(_trRef),
             p.GetValue(_isd), p.GetValue(_tsd), p.GetValue(_i2t), p.GetValue(_ii), p.GetValue(_im), p.GetValue(_pickup), p.GetValue(_tms),
             p.GetValue(_highSet), p.GetValue(_highSetDelay), p.GetValue(_opening), p.GetValue(_table), p.GetValue(_asset), p.GetValue(_db)!, p.GetValue(_csv),
-            p.GetValue(_start)!, p.GetValue(_onePole), p.GetValue(_poles), p.GetValue(_supply), p.GetValue(_thermalMemory));
+            p.GetValue(_start)!, p.GetValue(_onePole), p.GetValue(_poles), p.GetValue(_supply), p.GetValue(_thermalMemory), p.GetValue(_on),
+            All.Where(o => p.GetResult(o) is { Implicit: false }).Select(o => o.Name).ToList());
     }
 }
