@@ -5,11 +5,14 @@ internal static class CliRun
 {
     public static readonly DateTimeOffset Now = new(2026, 12, 1, 9, 0, 0, TimeSpan.Zero);
 
-    public static (int Exit, string Out, string Error) Run(params string[] args)
+    public static (int Exit, string Out, string Error) Run(params string[] args) => RunAt(Now, args);
+
+    /// <summary>Runs with the clock at <paramref name="now"/>, as on a machine whose clock is set differently.</summary>
+    public static (int Exit, string Out, string Error) RunAt(DateTimeOffset now, params string[] args)
     {
         var output = new StringWriter();
         var error = new StringWriter();
-        var exit = CliApp.Run(args, new CliContext(output, error, new FixedClock(Now), false));
+        var exit = CliApp.Run(args, new CliContext(output, error, new FixedClock(now), false));
         return (exit, output.ToString(), error.ToString());
     }
 

@@ -25,15 +25,33 @@ internal static class DemoCommand
             DefaultValueFactory = _ => new DirectoryInfo("demo-output"),
             HelpName = "FOLDER",
         };
+        var asOf = new Option<string?>("--as-of")
+        {
+            Description = $"Judge as of this date (default: {SampleRecordsAsOf:yyyy-MM-dd}, the sample records' own date; today with --records)",
+            HelpName = "YYYY-MM-DD",
+        };
         var command = new Command("demo", "Build a fresh database from the sample records, check every trip test, and say where the results are")
         {
-            records, output,
+            records, output, asOf,
         };
-        command.SetAction(parse => Run(cli, parse.GetValue(records), parse.GetValue(output)!));
+        command.SetAction(parse =>
+        {
+            // The bundled records were written for one date; judging them on it gives the same answer on any machine's clock.
+            var date = parse.GetValue(records) is null ? SampleRecordsAsOf : cli.Today;
+            if (parse.GetValue(asOf) is { } text && !ConditionOptions.Date(text, "--as-of", cli, out date))
+            {
+                return ExitCodes.BadInput;
+            }
+
+            return Run(cli, parse.GetValue(records), parse.GetValue(output)!, date);
+        });
         return command;
     }
 
-    private static int Run(CliContext cli, DirectoryInfo? records, DirectoryInfo output)
+    /// <summary>The date the bundled sample records were written for: their tests lie before it, their calibrations span it.</summary>
+    public static readonly DateOnly SampleRecordsAsOf = new(2026, 12, 1);
+
+    private static int Run(CliContext cli, DirectoryInfo? records, DirectoryInfo output, DateOnly asOf)
     {
         var folder = records?.FullName ?? FindSampleRecords();
         if (folder is null || !Directory.Exists(folder))
@@ -82,7 +100,7 @@ internal static class DemoCommand
         using (var textWriter = new StreamWriter(text))
         using (var jsonWriter = new StreamWriter(json))
         {
-            outcomes = new ImportRunner(store, log, cli).Run(files, ImportOptions.Strict);
+            outcomes = new ImportRunner(store, log, cli).Run(files, ImportOptions.Strict, asOf);
             var writers = new VerdictWriters(new VerdictTable(textWriter), new VerdictJson(jsonWriter), counts);
             foreach (var judged in CheckPipeline.Run(store, null, policy.Policy.RequireRegisteredInstruments, cli.Cancel, policy.Policy.AmbientNoteKelvin))
             {
@@ -94,9 +112,9 @@ internal static class DemoCommand
             // One run of the findings writes the report, the findings files and the fleet summary the demo prints.
             using var findingsTextWriter = new StreamWriter(findingsText);
             using var findingsJsonWriter = new StreamWriter(findingsJson);
-            var findingsTable = new FindingText(findingsTextWriter, cli.Today.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture), policy.From);
+            var findingsTable = new FindingText(findingsTextWriter, asOf.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture), policy.From);
             using var findingsRows = new FindingJson(findingsJsonWriter);
-            var context = new Reports.ReportContext(db.FullName, ReportRun.ToolVersion, cli.Today, cli.Clock.GetUtcNow(), policy.Policy, policy.From, store.Instruments());
+            var context = new Reports.ReportContext(db.FullName, ReportRun.ToolVersion, asOf, cli.Clock.GetUtcNow(), policy.Policy, policy.From, store.Instruments());
             reportPage = ReportRun.Write(store, Path.Combine(output.FullName, "report"), context, new ReportRun.Selection(null, null, null, null, true), cli.Cancel,
                 device =>
                 {
@@ -114,7 +132,7 @@ internal static class DemoCommand
         cli.Out.WriteLine();
         cli.Out.WriteLine(counts.Summary("Checked"));
         cli.Out.WriteLine();
-        FleetText.Write(cli.Out, fleet, cli.Today.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture), policy.From);
+        FleetText.Write(cli.Out, fleet, asOf.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture), policy.From);
         cli.Out.WriteLine();
         cli.Out.WriteLine("Results:");
         cli.Out.WriteLine($"  database   {db.FullName}");

@@ -30,17 +30,28 @@ internal static class ImportCommand
         var profile = new Option<FileInfo?>("--profile") { Description = "A column-mapping profile (JSON) for another layout; applies to every file given", HelpName = "FILE" };
         var delimiter = new Option<string?>("--delimiter") { Description = "Field separator, e.g. ';' (default: recognised from the header)", HelpName = "CHAR" };
         var decimalMark = new Option<string?>("--decimal") { Description = "Decimal mark: '.' or ',' (default: '.' for comma files, ',' accepted in semicolon files)", HelpName = "CHAR" };
+        var asOf = new Option<string?>("--as-of") { Description = "Refuse records dated after this date (default: today)", HelpName = "YYYY-MM-DD" };
         var maxMb = new Option<int?>("--max-file-mb") { Description = "Refuse files larger than this (no limit by default: files stream through)", HelpName = "MB" };
         var command = new Command("import", "Import record files; a file with any bad row is refused whole (unless --accept-valid) and the summary says where and why")
         {
-            paths, db, acceptValid, replace, profile, delimiter, decimalMark, maxMb,
+            paths, db, acceptValid, replace, profile, delimiter, decimalMark, maxMb, asOf,
         };
-        command.SetAction(parse => Run(cli, parse.GetValue(paths)!, parse.GetValue(db)!, new ImportOptions(parse.GetValue(acceptValid), parse.GetValue(replace)),
-            parse.GetValue(profile), parse.GetValue(delimiter), parse.GetValue(decimalMark), parse.GetValue(maxMb)));
+        command.SetAction(parse =>
+        {
+            var today = cli.Today;
+            if (parse.GetValue(asOf) is { } text && !ConditionOptions.Date(text, "--as-of", cli, out today))
+            {
+                return ExitCodes.BadInput;
+            }
+
+            return Run(cli, parse.GetValue(paths)!, parse.GetValue(db)!, new ImportOptions(parse.GetValue(acceptValid), parse.GetValue(replace)),
+                parse.GetValue(profile), parse.GetValue(delimiter), parse.GetValue(decimalMark), parse.GetValue(maxMb), today);
+        });
         return command;
     }
 
-    private static int Run(CliContext cli, string[] paths, FileInfo db, ImportOptions options, FileInfo? profileFile, string? delimiter, string? decimalMark, int? maxMb)
+    private static int Run(CliContext cli, string[] paths, FileInfo db, ImportOptions options, FileInfo? profileFile, string? delimiter, string? decimalMark, int? maxMb,
+        DateOnly today)
     {
         if (delimiter is { Length: not 1 } || decimalMark is not (null or "." or ",") || maxMb is < 1 or > 100_000)
         {
@@ -83,7 +94,7 @@ internal static class ImportCommand
         IReadOnlyList<ImportOutcome> outcomes;
         try
         {
-            outcomes = new ImportRunner(store, log, cli).Run(files, options);
+            outcomes = new ImportRunner(store, log, cli).Run(files, options, today);
         }
         catch (OperationCanceledException)
         {

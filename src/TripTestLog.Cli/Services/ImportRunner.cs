@@ -53,13 +53,16 @@ internal sealed class ImportRunner(RecordStore store, ILogger log, CliContext cl
         return (files.DistinctBy(f => Path.GetFullPath(f.Path)).ToList(), problems.Distinct().ToList());
     }
 
-    /// <summary>Reads and stores every file, reporting progress; returns one outcome per file, in the order stored.</summary>
-    public IReadOnlyList<ImportOutcome> Run(IReadOnlyList<ImportFile> files, ImportOptions options)
+    /// <summary>
+    /// Reads and stores every file, reporting progress; returns one outcome per file, in the order stored. Records dated
+    /// after <paramref name="today"/> are refused.
+    /// </summary>
+    public IReadOnlyList<ImportOutcome> Run(IReadOnlyList<ImportFile> files, ImportOptions options, DateOnly today)
     {
         using var progress = Progress.For(cli, files.Count);
         var sources = files.Select(f => (IRecordFileSource)new CsvRecordFileSource(f.Path, f.Read)).ToList();
         var outcomes = new List<ImportOutcome>(files.Count);
-        foreach (var outcome in new ImportPipeline(store).Run(sources, options, cli.Today, cli.Clock.GetUtcNow, file => progress.Step(Path.GetFileName(file)), cli.Cancel))
+        foreach (var outcome in new ImportPipeline(store).Run(sources, options, today, cli.Clock.GetUtcNow, file => progress.Step(Path.GetFileName(file)), cli.Cancel))
         {
             Log(outcome);
             outcomes.Add(outcome);

@@ -161,7 +161,7 @@ internal sealed class RowFields
 
         if (when.Date > _today)
         {
-            Fail(column, $"'{text}' is in the future (today is {_today:yyyy-MM-dd})");
+            Fail(column, $"'{text}' is in the future: it is after {_today:yyyy-MM-dd}, the import's date (today, or --as-of)");
             return null;
         }
 
@@ -206,7 +206,7 @@ internal sealed class RowFields
 
         if (date > _today && !allowFuture)
         {
-            Fail(column, $"'{text}' is in the future (today is {_today:yyyy-MM-dd})");
+            Fail(column, $"'{text}' is in the future: it is after {_today:yyyy-MM-dd}, the import's date (today, or --as-of)");
             return null;
         }
 
