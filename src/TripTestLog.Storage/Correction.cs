@@ -17,11 +17,26 @@ internal sealed record Correction(MeasurementRow New, long StoredId, object[] Ol
 
     public RowProblem Problem(string path)
     {
-        var changes = Changes.ToList();
+        // The problem names the record file's columns, which the person fixing it sees, not the table's.
+        var changes = Changes.Select(c => (Column: RecordColumn(c.Column), c.Old, c.New)).ToList();
         var list = string.Join("; ", changes.Select(c => $"{c.Column} {Shown(c.Old)} -> {Shown(c.New)}"));
         return new RowProblem(path, New.Line, changes[0].Column,
             $"conflict: differs from line {New.Line} of the earlier import of {Path.GetFileName(OldFile)} ({list}); "
             + "if this is a correction, import again with --replace (the old values are kept in the audit table)");
+    }
+
+    private string RecordColumn(string column)
+    {
+        var tripped = Array.IndexOf(Columns, "tripped") is var i and >= 0 && New.Values[i] is true or 1L or 1;
+        return column switch
+        {
+            "device_id" => "asset_tag",
+            "time_s" => tripped ? "trip_time_s" : "held_s",
+            "tripped" => "trip_time_s/held_s",
+            "over_range" => "resistance_mohm",
+            _ when column.StartsWith("found_", StringComparison.Ordinal) => column["found_".Length..],
+            _ => column,
+        };
     }
 
     private static string Shown(string value) => value.Length == 0 ? "(blank)" : value;

@@ -20,9 +20,9 @@ public sealed partial class RecordStore
     {
         ArgumentNullException.ThrowIfNull(file);
         using var transaction = BeginWriting();
-        if (AlreadyImported(transaction, file.Sha256))
+        if (AlreadyImported(transaction, file.Sha256) is { } earlier)
         {
-            return new ImportOutcome(file.Path, file.Kind, ImportStatus.AlreadyImported, file.RowsRead, 0, 0, 0, []);
+            return new ImportOutcome(file.Path, file.Kind, ImportStatus.AlreadyImported, file.RowsRead, 0, 0, 0, []) { EarlierFile = earlier };
         }
 
         var outcome = StoreOther(transaction, file, now);
@@ -66,11 +66,12 @@ public sealed partial class RecordStore
         }
     }
 
-    internal bool AlreadyImported(SqliteTransaction transaction, string sha)
+    /// <summary>The name the file with <paramref name="sha"/> was first imported under, or null when it was not.</summary>
+    internal string? AlreadyImported(SqliteTransaction transaction, string sha)
     {
-        using var select = Command(transaction, "SELECT COUNT(*) FROM source_files WHERE sha256 = $sha");
+        using var select = Command(transaction, "SELECT file_name FROM source_files WHERE sha256 = $sha ORDER BY id LIMIT 1");
         select.Parameters.AddWithValue("$sha", sha);
-        return (long)select.ExecuteScalar()! > 0;
+        return select.ExecuteScalar() as string;
     }
 
     internal void RecordCounts(SqliteTransaction transaction, long sourceId, long added, long duplicates)

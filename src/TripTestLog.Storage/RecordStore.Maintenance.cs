@@ -45,8 +45,16 @@ public sealed partial class RecordStore
             }
         }
 
-        var files = _context.SourceFiles.AsNoTracking().OrderBy(f => f.Id).AsEnumerable().Select(f => new VerifiedFile(
-            f.FileName, f.Sha256, StateOf(f.FileName, f.Sha256), counts.GetValueOrDefault(f.Id))).ToList();
+        // Each path is hashed once. A file whose content now is that of a later import of the same path was corrected
+        // through the tool (import --replace, or a fixed rejects file), which is no fault.
+        var rows = _context.SourceFiles.AsNoTracking().OrderBy(f => f.Id).ToList();
+        var current = rows.Select(f => f.FileName).Distinct(StringComparer.Ordinal).ToDictionary(p => p, HashOf, StringComparer.Ordinal);
+        var files = rows.Select(f => new VerifiedFile(f.FileName, f.Sha256,
+            current[f.FileName] is not { } now ? SourceFileState.NotAtHand
+            : now == f.Sha256 ? SourceFileState.Matches
+            : rows.Any(later => later.Id > f.Id && later.FileName == f.FileName && later.Sha256 == now) ? SourceFileState.Superseded
+            : SourceFileState.Changed,
+            counts.GetValueOrDefault(f.Id))).ToList();
         return new VerifyReport(integrity, foreignKeys, untraced, files);
     }
 
@@ -64,16 +72,15 @@ public sealed partial class RecordStore
         _connection.BackupDatabase(target);
     }
 
-    private static SourceFileState StateOf(string path, string sha)
+    private static string? HashOf(string path)
     {
         if (!File.Exists(path))
         {
-            return SourceFileState.NotAtHand;
+            return null;
         }
 
         using var stream = File.OpenRead(path);
-        var now = Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(stream));
-        return now == sha ? SourceFileState.Matches : SourceFileState.Changed;
+        return Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(stream));
     }
 
     private List<string> Lines(string sql)

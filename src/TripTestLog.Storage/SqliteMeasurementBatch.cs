@@ -101,11 +101,11 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
     public BatchResult Complete(string sha256, long rowsRead, long replaced)
     {
         var duplicates = _stored - _added;
-        if (_store.AlreadyImported(_transaction, sha256))
+        if (_store.AlreadyImported(_transaction, sha256) is { } earlier)
         {
             _transaction.Rollback();
             _done = true;
-            return new BatchResult(false, 0, 0);
+            return new BatchResult(false, 0, 0) { EarlierFile = earlier };
         }
 
         using var update = _store.Command(_transaction,

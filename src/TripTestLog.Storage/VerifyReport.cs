@@ -11,6 +11,9 @@ public enum SourceFileState
 
     /// <summary>The file is not at its recorded path; it cannot be checked here.</summary>
     NotAtHand,
+
+    /// <summary>The file at the path was corrected and imported again (e.g. with --replace): its content is a later import's. Not a fault.</summary>
+    Superseded,
 }
 
 /// <summary>One imported file as verified.</summary>

@@ -18,6 +18,10 @@ public sealed class AsOfTests : IDisposable
         Assert.True(earlyExit == 0, earlyError + earlyOut);
         Assert.Equal(0, lateExit);
         Assert.Contains("as of 2026-12-01", earlyOut);
+
+        // The summary names what needs attention rather than sending the reader to a file.
+        Assert.Contains("Needs attention:\n  BPS-DB1-Q03: too-late on 2026-09-06", earlyOut.ReplaceLineEndings("\n"));
+        Assert.Contains("instrument INJ-BPS-1 calibration lapsed on 2025-08-31", earlyOut);
         Assert.Equal(earlyOut.Replace(early, "<out>", StringComparison.Ordinal), lateOut.Replace(late, "<out>", StringComparison.Ordinal));
     }
 

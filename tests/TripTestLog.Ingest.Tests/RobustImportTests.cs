@@ -85,14 +85,34 @@ public sealed class RobustImportTests
 
         Assert.Equal(ImportStatus.Refused, conflict.Status);
         var problem = Assert.Single(conflict.Problems);
-        Assert.Equal((4L, "time_s"), (problem.Line, problem.Column));
-        Assert.Contains("time_s 22.5 -> 25", problem.Reason);
+        Assert.Equal((4L, "trip_time_s"), (problem.Line, problem.Column));
+        Assert.Contains("trip_time_s 22.5 -> 25", problem.Reason);
         Assert.Contains("--replace", problem.Reason);
         Assert.Equal((ImportStatus.Imported, 1L, 0L, 2L), (replaced.Status, replaced.Replaced, replaced.Added, replaced.Duplicates));
         Assert.Equal(3, Count(db, "SELECT COUNT(*) FROM trip_tests"));
         Assert.Equal(1, Count(db, "SELECT COUNT(*) FROM trip_tests WHERE time_s = 25.0"));
         var audit = Assert.Single(store.AuditTrail());
         Assert.Equal(("trip_tests", "time_s", "22.5", "25"), (audit.Table, audit.Column, audit.Old, audit.New));
+
+        // A correction applied through the tool is no fault: the first import's file now holds the second's content.
+        var verified = store.Verify();
+        Assert.True(verified.Sound);
+        Assert.Equal([SourceFileState.Matches, SourceFileState.Superseded, SourceFileState.Matches], verified.Files.Select(f => f.State)); // register, trips, trips corrected
+    }
+
+    [Fact]
+    public void ACopyUnderAnotherName_IsAlreadyImported_AndNamesTheFileItRepeats()
+    {
+        using var temp = new TempFolder();
+        var (store, _) = Open(temp);
+        using var s = store;
+        var first = temp.Write("trips.csv", Records.Trips);
+        store.Import(RecordFileReader.Read(first, Records.Today), Now);
+
+        var copy = store.Import(RecordFileReader.Read(temp.Write("trips-copy.csv", Records.Trips), Records.Today), Now);
+
+        Assert.Equal(ImportStatus.AlreadyImported, copy.Status);
+        Assert.Equal(first, copy.EarlierFile);
     }
 
     [Fact]

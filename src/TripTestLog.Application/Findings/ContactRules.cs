@@ -104,7 +104,7 @@ internal static class ContactRules
         {
             ledger.Raise(subject, Make(FindingKind.ContactPoleSpread, Severity.Investigate, pole.At, pole,
                 "ANSI/NETA maintenance testing specifications: investigate a pole more than 50 % above the lowest (a customary guide, not a failure)",
-                Invariant($"pole {pole.Pole} reads {above:0}% above the device's lowest pole ({pole.Corrected:0} against {lowest:0} uOhm at 20 C); investigate the connections and contacts of that pole (pole resistance alone does not predict performance)"))
+                Invariant($"pole {pole.Pole} reads {above:0}% above the device's lowest pole ({pole.Corrected:0} against {lowest:0} uOhm at 20 °C); investigate the connections and contacts of that pole (pole resistance alone does not predict performance)"))
                 with { Value = new Reading(above, ReadingUnit.Percent), Limit = new Reading(policy.ContactSpreadPercent, ReadingUnit.Percent),
                     Policy = PolicyFile.Setting(policy, "contact_spread_percent") });
         }
@@ -126,7 +126,7 @@ internal static class ContactRules
         if (rise > policy.ContactRisePercent)
         {
             ledger.Raise(subject, Make(FindingKind.ContactRise, Severity.Plan, pole.At, pole, "lab policy: contact resistance rise over the pole's first as-found test",
-                Invariant($"pole {pole.Pole} has risen {rise:0}% since {first.At.Date:yyyy-MM-dd} ({first.Corrected:0} to {pole.Corrected:0} uOhm at 20 C); plan cleaning and re-torquing"))
+                Invariant($"pole {pole.Pole} has risen {rise:0}% since {first.At.Date:yyyy-MM-dd} ({first.Corrected:0} to {pole.Corrected:0} uOhm at 20 °C); plan cleaning and re-torquing"))
                 with { Value = new Reading(rise, ReadingUnit.Percent), Limit = new Reading(policy.ContactRisePercent, ReadingUnit.Percent),
                     Policy = PolicyFile.Setting(policy, "contact_rise_percent"), RestsOn = [.. first.Sources, .. pole.Sources] });
         }
@@ -241,7 +241,7 @@ internal static class ContactRules
         new(kind, severity, pole.Tag, at, basis, pole.Stage == TestStage.AsLeft ? "as-left: " + message : message, pole.Sources) { Pole = pole.Pole };
 
     private static string Describe(PoleResult pole) => pole.TemperatureKnown
-        ? Invariant($"{pole.Corrected:0} uOhm at 20 C ({pole.Measured:0} uOhm as measured)")
+        ? Invariant($"{pole.Corrected:0} uOhm at 20 °C ({pole.Measured:0} uOhm as measured)")
         : Invariant($"{pole.Measured:0} uOhm (no temperature recorded: not corrected)");
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);

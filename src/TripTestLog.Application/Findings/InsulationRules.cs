@@ -86,8 +86,8 @@ internal static class InsulationRules
             var reach = row is null ? null : line.Reaches(Math.Log10(row.Minimum.Value));
             var forecast = reach is { } year && year <= line.LastYear + policy.ForecastHorizonYears ? TrendPoint.DateOf(year) : (DateOnly?)null;
             ledger.Add(new Finding(FindingKind.InsulationFalling, Severity.Plan, last.Tag, last.At,
-                $"Theil–Sen trend (Sen 1968) of {line.Count} as-found readings referred to 20 C (halving per 10 K rule)",
-                Invariant($"path {last.Path} falls about {fall:0}% a year ({list[0].Corrected:0.#} to {last.Corrected:0.#} MOhm at 20 C since {list[0].At.Date:yyyy-MM-dd})")
+                $"Theil–Sen trend (Sen 1968) of {line.Count} as-found readings referred to 20 °C (halving per 10 K rule)",
+                Invariant($"path {last.Path} falls about {fall:0}% a year ({list[0].Corrected:0.#} to {last.Corrected:0.#} MOhm at 20 °C since {list[0].At.Date:yyyy-MM-dd})")
                     + (forecast is { } on ? Invariant($" and would reach the minimum of {row!.Minimum.Value:0.##} MOhm about {on:yyyy-MM-dd}") : "")
                     + "; look for moisture, contamination or tracking",
                 [.. list.Select(r => r.Source)])
@@ -115,7 +115,7 @@ internal static class InsulationRules
     }
 
     private static string Describe(PathResult r) => r.TemperatureKnown
-        ? Invariant($"{r.Corrected:0.##} MOhm at 20 C ({r.Measured:0.##} MOhm as measured)")
+        ? Invariant($"{r.Corrected:0.##} MOhm at 20 °C ({r.Measured:0.##} MOhm as measured)")
         : Invariant($"{r.Measured:0.##} MOhm (no temperature recorded: not corrected)");
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);

@@ -47,7 +47,11 @@ public interface IMeasurementBatch : IDisposable
 /// <param name="Committed">False when a file with the same hash was imported before, so nothing was kept.</param>
 /// <param name="Added">New records stored.</param>
 /// <param name="Duplicates">Rows identical to a record already stored, or to an earlier row of the file.</param>
-public sealed record BatchResult(bool Committed, long Added, long Duplicates);
+public sealed record BatchResult(bool Committed, long Added, long Duplicates)
+{
+    /// <summary>When not committed because the same content was imported before: the name it was imported under.</summary>
+    public string? EarlierFile { get; init; }
+}
 
 /// <summary>A measurement as a store will write it; what it holds is the store's own business.</summary>
 /// <param name="Line">The line of the file it was read from.</param>

@@ -35,6 +35,9 @@ public sealed record ImportOutcome(
     /// <summary>Stored rows replaced by a corrected file (with --replace); their old values are in the audit table.</summary>
     public long Replaced { get; init; }
 
+    /// <summary>For a file already imported: the name its content was first imported under (the same file, or a copy).</summary>
+    public string? EarlierFile { get; init; }
+
     /// <summary>Rows planned on a worksheet and left blank: tests not made, counted and never stored.</summary>
     public long NotTested { get; init; }
 

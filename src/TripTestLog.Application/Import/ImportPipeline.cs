@@ -127,7 +127,10 @@ public sealed class ImportPipeline(IImportStore store)
         var result = batch.Complete(summary.Sha256, summary.RowsRead, replaced);
         if (!result.Committed)
         {
-            return new ImportOutcome(file.Path, kind, ImportStatus.AlreadyImported, summary.RowsRead, 0, 0, 0, []) { NotTested = notTested };
+            return new ImportOutcome(file.Path, kind, ImportStatus.AlreadyImported, summary.RowsRead, 0, 0, 0, [])
+            {
+                NotTested = notTested, EarlierFile = result.EarlierFile,
+            };
         }
 
         return new ImportOutcome(file.Path, kind, ImportStatus.Imported, summary.RowsRead, result.Added, 0, result.Duplicates, log.Problems)

@@ -91,6 +91,7 @@ internal static class DemoCommand
         var text = Path.Combine(output.FullName, "verdicts.txt");
         var json = Path.Combine(output.FullName, "verdicts.json");
         var counts = new VerdictCounts();
+        var attention = new AttentionList(8);
         var findingsText = Path.Combine(output.FullName, "findings.txt");
         var findingsJson = Path.Combine(output.FullName, "findings.json");
         var fleet = new FleetSummary(5);
@@ -101,7 +102,7 @@ internal static class DemoCommand
         using (var jsonWriter = new StreamWriter(json))
         {
             outcomes = new ImportRunner(store, log, cli).Run(files, ImportOptions.Strict, asOf);
-            var writers = new VerdictWriters(new VerdictTable(textWriter), new VerdictJson(jsonWriter), counts);
+            var writers = new VerdictWriters(new VerdictTable(textWriter), new VerdictJson(jsonWriter), counts, attention);
             foreach (var judged in CheckPipeline.Run(store, null, policy.Policy.RequireRegisteredInstruments, cli.Cancel, policy.Policy.AmbientNoteKelvin))
             {
                 writers.Add(judged);
@@ -131,6 +132,7 @@ internal static class DemoCommand
         ImportReport.Write(cli.Out, outcomes, ImportCommand.LogPath(db));
         cli.Out.WriteLine();
         cli.Out.WriteLine(counts.Summary("Checked"));
+        attention.WriteTo(cli.Out);
         cli.Out.WriteLine();
         FleetText.Write(cli.Out, fleet, asOf.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture), policy.From);
         cli.Out.WriteLine();

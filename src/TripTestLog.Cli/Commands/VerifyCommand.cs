@@ -35,6 +35,7 @@ internal static class VerifyCommand
             {
                 SourceFileState.Matches => "unchanged",
                 SourceFileState.Changed => "CHANGED since import",
+                SourceFileState.Superseded => "corrected, imported again later",
                 _ => "not at hand",
             });
         }
@@ -46,7 +47,8 @@ internal static class VerifyCommand
         cli.Out.WriteLine($"Records without an imported file: {report.UntracedRecords}");
         var changed = report.Files.Count(f => f.State == SourceFileState.Changed);
         var away = report.Files.Count(f => f.State == SourceFileState.NotAtHand);
-        cli.Out.WriteLine($"Imported files: {report.Files.Count}, {changed} changed since import, {away} not at hand to check.");
+        var corrected = report.Files.Count(f => f.State == SourceFileState.Superseded);
+        cli.Out.WriteLine($"Imported files: {report.Files.Count}, {changed} changed since import, {corrected} corrected and imported again, {away} not at hand to check.");
         cli.Out.WriteLine(report.Sound ? "The database is sound." : "The database needs attention: see above.");
         return report.Sound ? ExitCodes.Ok : ExitCodes.Findings;
     }

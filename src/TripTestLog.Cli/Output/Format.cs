@@ -12,6 +12,19 @@ internal static class Format
 {
     public static string Number(double value, string format = "0.###") => value.ToString(format, CultureInfo.InvariantCulture);
 
+    /// <summary>
+    /// A measured value as it was read: twelve significant digits, more than any record file carries, which drops the
+    /// noise a unit conversion leaves (9.8 ms is 0.0098 s, not 0.009800000000000001).
+    /// </summary>
+    public static double Measured(double value) => double.Parse(value.ToString("G12", CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
+
+    /// <summary>A computed value rounded to <paramref name="digits"/> significant digits.</summary>
+    public static double Significant(double value, int digits) =>
+        value == 0 || !double.IsFinite(value) ? value : double.Parse(value.ToString("G" + digits, CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
+
+    /// <summary>A computed band edge: six significant digits.</summary>
+    public static double? Edge(double? seconds) => seconds is { } s ? Significant(s, 6) : null;
+
     /// <summary>A minimum edge: "0" where the release may act at once, "never" where it must not act at all.</summary>
     public static string Minimum(BandEdge edge) => edge.Limit is { } s ? (edge.IsOpen ? "0" : s.ToString()) : "never";
 

@@ -53,6 +53,12 @@ internal static class ImportReport
             writer.WriteLine($"{blank} planned {(blank == 1 ? "row was" : "rows were")} left blank on a worksheet: counted as not tested, not stored.");
         }
 
+        // A copy under another name is named with the file it repeats, so nobody looks for a missing import.
+        foreach (var o in outcomes.Where(o => o.Status == ImportStatus.AlreadyImported && o.EarlierFile is { } e && Path.GetFullPath(e) != Path.GetFullPath(o.File)))
+        {
+            writer.WriteLine($"{Path.GetFileName(o.File)} holds the same content as {o.EarlierFile}, imported before: nothing added.");
+        }
+
         foreach (var o in outcomes.Where(o => o.Status == ImportStatus.Imported && o.RefusedRows > 0))
         {
             writer.WriteLine();

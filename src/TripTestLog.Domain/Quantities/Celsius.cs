@@ -14,5 +14,5 @@ public readonly record struct Celsius
     public static Celsius Of(double celsius) => new(Guard.InRange(celsius, -60, 150, nameof(celsius), "C"));
 
     /// <inheritdoc />
-    public override string ToString() => Value.ToString("0.#", CultureInfo.InvariantCulture) + " C";
+    public override string ToString() => Value.ToString("0.#", CultureInfo.InvariantCulture) + " °C";
 }
