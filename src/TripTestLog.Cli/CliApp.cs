@@ -29,6 +29,7 @@ internal static class CliApp
     public static int Run(string[] args, CliContext cli)
     {
         var parse = Build(cli).Parse(args);
+        var clock = System.Diagnostics.Stopwatch.StartNew();
         int exit;
         try
         {
@@ -38,11 +39,35 @@ internal static class CliApp
         {
             // Whatever went wrong, a person gets one plain sentence, never a stack trace.
             cli.Error.WriteLine($"error: {Plain(e)}");
-            return ExitCodes.BadInput;
+            exit = ExitCodes.BadInput;
         }
 
         // System.CommandLine answers parse errors with 1; this tool keeps 1 for findings and uses 2 for bad usage.
-        return parse.Errors.Count > 0 ? ExitCodes.BadInput : exit;
+        exit = parse.Errors.Count > 0 ? ExitCodes.BadInput : exit;
+        LogRun(parse, args, exit, clock.Elapsed);
+        return exit;
+    }
+
+    // Every run against a database leaves one line in the log beside it: who ran what, and how it ended.
+    private static void LogRun(ParseResult parse, string[] args, int exit, TimeSpan took)
+    {
+        if (parse.Errors.Count > 0 || parse.CommandResult.Command.Options.FirstOrDefault(o => o.Name == "--db") is not Option<FileInfo> option
+            || parse.GetValue(option) is not { Exists: true } db)
+        {
+            return;
+        }
+
+        try
+        {
+            using var log = Logging.BesideDatabase(db);
+            log.Information("{User} on {Machine} ran: triptestlog {Command}; exit {Exit} ({Meaning}) after {Seconds:0.0} s",
+                Environment.UserName, Environment.MachineName, string.Join(' ', args.Select(a => a.Contains(' ', StringComparison.Ordinal) ? $"\"{a}\"" : a)),
+                exit, exit switch { ExitCodes.Ok => "done", ExitCodes.Findings => "findings", _ => "bad usage or input" }, took.TotalSeconds);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            // A log that cannot be written never turns a finished command into a failure.
+        }
     }
 
     // The innermost message on one line: what failed, in the words of the layer that knew.

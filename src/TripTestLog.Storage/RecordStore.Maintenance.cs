@@ -33,8 +33,9 @@ public sealed partial class RecordStore
             untraced += Scalar($"SELECT COUNT(*) FROM {table} t WHERE NOT EXISTS (SELECT 1 FROM source_files f WHERE f.id = t.source_file_id)");
         }
 
+        // Per file, the records it brought: a register's entries are its revisions (a devices row is a copy of the newest).
         var counts = new Dictionary<long, long>();
-        foreach (var table in RecordTables)
+        foreach (var table in RecordTables.Where(t => t != "devices"))
         {
             using var count = _connection.CreateCommand();
             count.CommandText = $"SELECT source_file_id, COUNT(*) FROM {table} GROUP BY source_file_id";

@@ -13,8 +13,8 @@ public sealed partial class RecordStore
     /// <summary>
     /// Adds new devices and keeps every new register entry as a revision. A register may list several entries for one
     /// device with different settings_from dates (its settings history). The `devices` row holds the entry with the
-    /// newest settings. Counts are per row: a row adds a device, adds an entry to a known one, repeats an earlier row of
-    /// the file, or matches a stored entry.
+    /// newest settings. Counts are per row: a row adds an entry of a device new to the database (added), adds an entry to a
+    /// device stored before (updated), repeats an earlier row of the file, or matches a stored entry.
     /// </summary>
     private (long Added, long Updated, long Duplicates) ImportRegister(SqliteTransaction transaction, ParsedFile file, long sourceId, DateTimeOffset now)
     {
@@ -23,6 +23,7 @@ public sealed partial class RecordStore
         var seen = new HashSet<Device>();
         var lines = new Dictionary<Device, long>();
         var touched = new HashSet<string>(StringComparer.Ordinal);
+        var newHere = new HashSet<string>(StringComparer.Ordinal);
 
         using var insert = Command(transaction,
             $"INSERT INTO devices (asset_tag, {RegisterColumns}, source_file_id, source_line) VALUES ($tag, {RegisterValues}, $source, $line) RETURNING id");
@@ -45,11 +46,17 @@ public sealed partial class RecordStore
                 Bind(insert, device, sourceId, line);
                 entries = ((long)insert.ExecuteScalar()!, []);
                 stored[tag] = entries;
+                newHere.Add(tag);
                 added++;
             }
             else if (entries.Revisions.Contains(device))
             {
                 continue;
+            }
+            else if (newHere.Contains(tag))
+            {
+                // A later entry of a device this file brings in (its settings history) is new too, not an update.
+                added++;
             }
             else
             {

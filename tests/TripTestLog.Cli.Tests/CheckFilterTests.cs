@@ -78,4 +78,20 @@ public sealed class CheckFilterTests(SampleFleetDatabase fleet) : IClassFixture<
         Assert.Contains("settings in force on 2022-06-01", then);
         Assert.Contains("Ir 500 A", now);
     }
+
+    [Fact]
+    public void EveryRunAgainstADatabase_LeavesALineInItsLog()
+    {
+        var marker = $"--from 2020-01-0{DateTime.UtcNow.Second % 9 + 1}";
+        var args = marker.Split(' ');
+
+        CliRun.Run(["check", "--db", fleet.Database, "--asset", "ARW-DB1-Q01", .. args]);
+        CliRun.Run(["verify", "--db", fleet.Database]);
+        CliRun.Run(["check", "--db", fleet.Database, "--verdict", "sideways"]);
+
+        var log = File.ReadAllText(Path.Combine(fleet.Folder, "triptestlog.log"));
+        Assert.Contains($"ran: triptestlog check --db {fleet.Database} --asset ARW-DB1-Q01 {marker}; exit 0 (done)", log);
+        Assert.Contains($"ran: triptestlog verify --db {fleet.Database}; exit", log);
+        Assert.Contains($"ran: triptestlog check --db {fleet.Database} --verdict sideways; exit 2 (bad usage or input)", log);
+    }
 }

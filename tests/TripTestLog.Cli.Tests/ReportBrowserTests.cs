@@ -25,17 +25,8 @@ public sealed class ReportBrowserTests(SampleFleetDatabase fleet) : IClassFixtur
         }
 
         using var playwright = await Playwright.CreateAsync();
-        await using var browser = await playwright.Chromium.LaunchAsync(new() { ExecutablePath = Chromium, Headless = true, Args = ["--no-sandbox"] });
-        var tab = await browser.NewPageAsync(new() { ViewportSize = new() { Width = 1200, Height = 1500 } });
-        var errors = new List<string>();
-        tab.Console += (_, message) =>
-        {
-            if (message.Type == "error")
-            {
-                errors.Add(message.Text);
-            }
-        };
-        tab.PageError += (_, error) => errors.Add(error);
+        await using var browser = await Launch(playwright);
+        var (tab, errors) = await Open(browser);
         var requests = new List<string>();
         tab.Request += (_, request) => requests.Add(request.Url);
 
@@ -64,17 +55,8 @@ public sealed class ReportBrowserTests(SampleFleetDatabase fleet) : IClassFixtur
         Assert.Equal(0, CliRun.Run("worksheet", "--db", fleet.Database, "--site", "Alder Ridge Works", "--out", folder).Exit);
 
         using var playwright = await Playwright.CreateAsync();
-        await using var browser = await playwright.Chromium.LaunchAsync(new() { ExecutablePath = Chromium, Headless = true, Args = ["--no-sandbox"] });
-        var tab = await browser.NewPageAsync(new() { ViewportSize = new() { Width = 1200, Height = 1500 } });
-        var errors = new List<string>();
-        tab.Console += (_, message) =>
-        {
-            if (message.Type == "error")
-            {
-                errors.Add(message.Text);
-            }
-        };
-        tab.PageError += (_, error) => errors.Add(error);
+        await using var browser = await Launch(playwright);
+        var (tab, errors) = await Open(browser);
 
         await tab.GotoAsync(new Uri(Path.Combine(folder, "worksheet.html")).AbsoluteUri);
 
@@ -94,6 +76,25 @@ public sealed class ReportBrowserTests(SampleFleetDatabase fleet) : IClassFixtur
         {
             await File.WriteAllBytesAsync(Path.Combine(Golden.RepositoryRoot(), "docs", "worksheet.png"), png);
         }
+    }
+
+    private static Task<IBrowser> Launch(IPlaywright playwright) =>
+        playwright.Chromium.LaunchAsync(new() { ExecutablePath = Chromium, Headless = true, Args = ["--no-sandbox"] });
+
+    // A tab that collects every console error and uncaught page error.
+    private static async Task<(IPage Tab, List<string> Errors)> Open(IBrowser browser)
+    {
+        var tab = await browser.NewPageAsync(new() { ViewportSize = new() { Width = 1200, Height = 1500 } });
+        var errors = new List<string>();
+        tab.Console += (_, message) =>
+        {
+            if (message.Type == "error")
+            {
+                errors.Add(message.Text);
+            }
+        };
+        tab.PageError += (_, error) => errors.Add(error);
+        return (tab, errors);
     }
 
     // Each page of a PDF is one "/Type /Page" object (the tree's root is "/Type /Pages").

@@ -9,8 +9,8 @@ namespace TripTestLog.Application.Import;
 /// <param name="Kind">The kind recognised, when it was.</param>
 /// <param name="Status">Imported, already imported, or refused.</param>
 /// <param name="RowsRead">Data rows in the file.</param>
-/// <param name="Added">New records stored (for a register: new devices).</param>
-/// <param name="Updated">Register only: devices whose entry changed (a revision was kept).</param>
+/// <param name="Added">New records stored (for a register: entries of devices new to the database, their settings history included).</param>
+/// <param name="Updated">Register only: entries added to devices stored before (a revision was kept).</param>
 /// <param name="Duplicates">Rows identical to a record already stored, or to an earlier row of the same file.</param>
 /// <param name="Problems">Why the file, or (with accept-valid) some of its rows, were refused.</param>
 public sealed record ImportOutcome(
