@@ -40,7 +40,7 @@ internal sealed partial class CsvRecordFile
             {
                 // Past a malformed record the rest of the file cannot be read, so its rows cannot be accounted for.
                 _unreadable = true;
-                _fileProblems.Add(new RowProblem(_path, e.LineNumber, "", $"the CSV is malformed here ({Describe(e)}); reading stopped, so the file is refused"));
+                _fileProblems.Add(new RowProblem(_name, e.LineNumber, "", $"the CSV is malformed here ({Describe(e)}); reading stopped, so the file is refused"));
                 yield break;
             }
 
@@ -52,13 +52,13 @@ internal sealed partial class CsvRecordFile
             _rows++;
             if (csv.FieldCount != csv.Headers.Count)
             {
-                yield return new ReadRow(csv.LineNumber, null, [new RowProblem(_path, csv.LineNumber, "",
+                yield return new ReadRow(csv.LineNumber, null, [new RowProblem(_name, csv.LineNumber, "",
                     $"this row has {csv.FieldCount} fields but the header has {csv.Headers.Count}; check for a missing or extra "
                     + $"'{layout.Separator}', or quote fields that hold one")], CurrentRaw);
                 continue;
             }
 
-            var fields = new RowFields(map, headers.Values(csv), _path, csv.LineNumber, _today, layout.DecimalComma, dateFormats);
+            var fields = new RowFields(map, headers.Values(csv), _name, csv.LineNumber, _today, layout.DecimalComma, dateFormats);
             if (IsNotTested(kind, fields))
             {
                 yield return new ReadRow(csv.LineNumber, null, [], CurrentRaw) { NotTested = true };

@@ -17,6 +17,7 @@ internal sealed partial class CsvRecordFile : IRecordFile
     private const int HeadBytes = 8192;
 
     private readonly string _path;
+    private readonly string _name;
     private readonly DateOnly _today;
     private readonly ReadOptions _options;
     private readonly HashingStream? _hashing;
@@ -31,9 +32,10 @@ internal sealed partial class CsvRecordFile : IRecordFile
     private bool _unreadable;
     private long _rows;
 
-    private CsvRecordFile(string path, DateOnly today, ReadOptions options)
+    private CsvRecordFile(string path, DateOnly today, ReadOptions options, string name)
     {
         _path = path;
+        _name = name;
         _today = today;
         _options = options;
         _tables = new RowSink(RecordKind.CurveTable);
@@ -67,7 +69,7 @@ internal sealed partial class CsvRecordFile : IRecordFile
         if (map is null)
         {
             _unreadable = true;
-            _fileProblems.AddRange(headerProblems.Select(p => new RowProblem(path, 1, p.Column, p.Reason)));
+            _fileProblems.AddRange(headerProblems.Select(p => new RowProblem(_name, 1, p.Column, p.Reason)));
             return;
         }
 
@@ -77,12 +79,14 @@ internal sealed partial class CsvRecordFile : IRecordFile
 
     public string Path => _path;
 
+    public string Name => _name;
+
     public RecordKind? Kind { get; }
 
     public FileSummary Summary => _summary ?? throw new InvalidOperationException("the summary is known once every row has been read");
 
-    /// <summary>Opens <paramref name="path"/>; an I/O error opening it is the caller's to report.</summary>
-    public static CsvRecordFile Open(string path, DateOnly today, ReadOptions options) => new(path, today, options);
+    /// <summary>Opens <paramref name="path"/>, cited as <paramref name="name"/> (the path itself when not given); an I/O error opening it is the caller's to report.</summary>
+    public static CsvRecordFile Open(string path, DateOnly today, ReadOptions options, string? name = null) => new(path, today, options, name ?? path);
 
     public IEnumerable<ReadRow> Rows()
     {
@@ -115,8 +119,9 @@ internal sealed partial class CsvRecordFile : IRecordFile
 
         var summary = Summary;
         problems.AddRange(summary.Problems);
-        return sink.ToParsedFile(_path, summary.Sha256, summary.RowsRead, problems) with
+        return sink.ToParsedFile(_name, summary.Sha256, summary.RowsRead, problems) with
         {
+            FullPath = _path,
             Kind = Kind,
             IsUnreadable = summary.IsUnreadable,
             NotTested = notTested,
@@ -132,7 +137,7 @@ internal sealed partial class CsvRecordFile : IRecordFile
     private void Refuse(string reason)
     {
         _unreadable = true;
-        _fileProblems.Add(new RowProblem(_path, 1, "", reason));
+        _fileProblems.Add(new RowProblem(_name, 1, "", reason));
     }
 
     private void Finish()
@@ -147,7 +152,7 @@ internal sealed partial class CsvRecordFile : IRecordFile
             Refuse($"the file has a {HeaderMap.Describe(_map.Schema.Kind)} header but no data rows");
         }
 
-        _fileProblems.AddRange(_tables.TableProblems(_path));
+        _fileProblems.AddRange(_tables.TableProblems(_name));
         var sha = _hashing?.Finish() ?? "";
         _summary = new FileSummary(sha, _rows, _fileProblems, _unreadable);
     }

@@ -9,8 +9,11 @@ namespace TripTestLog.Ingest;
 public sealed record CsvRecordFileSource(string Path, ReadOptions Options) : IRecordFileSource
 {
     /// <inheritdoc />
+    public string Name { get; init; } = Path;
+
+    /// <inheritdoc />
     public RecordKind? PeekKind() => RecordFileReader.KindOf(Path, Options);
 
     /// <inheritdoc />
-    public IRecordFile Open(DateOnly today) => CsvRecordFile.Open(Path, today, Options);
+    public IRecordFile Open(DateOnly today) => CsvRecordFile.Open(Path, today, Options, Name);
 }

@@ -12,7 +12,7 @@ public sealed partial class RecordStore
     /// </summary>
     internal (long Id, string Name)? EarlierFileOfTheSameName(SqliteTransaction transaction, string path, RecordKind kind)
     {
-        using var select = Command(transaction, "SELECT id, file_name FROM source_files WHERE kind = $kind ORDER BY id DESC");
+        using var select = Command(transaction, "SELECT id, full_path FROM source_files WHERE kind = $kind ORDER BY id DESC");
         select.Parameters.AddWithValue("$kind", kind.ToString());
         using var reader = select.ExecuteReader();
         var full = System.IO.Path.GetFullPath(path);

@@ -13,7 +13,7 @@ public sealed partial class RecordStore
     private static readonly TimeSpan LockPatience = TimeSpan.FromMinutes(10);
 
     /// <inheritdoc />
-    public IMeasurementBatch BeginMeasurements(RecordKind kind, string path, DateTimeOffset now) => new SqliteMeasurementBatch(this, kind, path, now);
+    public IMeasurementBatch BeginMeasurements(RecordKind kind, string name, string path, DateTimeOffset now) => new SqliteMeasurementBatch(this, kind, name, path, now);
 
     /// <inheritdoc />
     public ImportOutcome StoreSmallFile(ParsedFile file, DateTimeOffset now)
@@ -97,14 +97,15 @@ public sealed partial class RecordStore
     }
 
     private long InsertSourceFile(SqliteTransaction transaction, ParsedFile file, DateTimeOffset now) =>
-        InsertSourceFile(transaction, file.Path, file.Sha256, file.Kind!.Value, file.RowsRead, now);
+        InsertSourceFile(transaction, file.Path, file.FullPath, file.Sha256, file.Kind!.Value, file.RowsRead, now);
 
-    internal long InsertSourceFile(SqliteTransaction transaction, string path, string sha, RecordKind kind, long rows, DateTimeOffset now)
+    internal long InsertSourceFile(SqliteTransaction transaction, string name, string path, string sha, RecordKind kind, long rows, DateTimeOffset now)
     {
         using var insert = Command(transaction,
-            "INSERT INTO source_files (file_name, sha256, kind, rows_read, records_added, duplicates, imported_at) "
-            + "VALUES ($name, $sha, $kind, $rows, 0, 0, $at) RETURNING id");
-        insert.Parameters.AddWithValue("$name", System.IO.Path.GetFullPath(path));
+            "INSERT INTO source_files (file_name, full_path, sha256, kind, rows_read, records_added, duplicates, imported_at) "
+            + "VALUES ($name, $full, $sha, $kind, $rows, 0, 0, $at) RETURNING id");
+        insert.Parameters.AddWithValue("$name", name);
+        insert.Parameters.AddWithValue("$full", System.IO.Path.GetFullPath(path));
         insert.Parameters.AddWithValue("$sha", sha);
         insert.Parameters.AddWithValue("$kind", kind.ToString());
         insert.Parameters.AddWithValue("$rows", rows);

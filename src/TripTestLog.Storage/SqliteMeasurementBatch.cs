@@ -31,10 +31,10 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
     private long _added;
     private bool _done;
 
-    public SqliteMeasurementBatch(RecordStore store, RecordKind kind, string path, DateTimeOffset now)
+    public SqliteMeasurementBatch(RecordStore store, RecordKind kind, string name, string path, DateTimeOffset now)
     {
         _store = store;
-        _path = path;
+        _path = name;
         _now = now;
         _table = MeasurementTable.For(kind);
 
@@ -47,7 +47,7 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
         {
             _deviceIds = store.DeviceIds(_transaction);
             _earlier = store.EarlierFileOfTheSameName(_transaction, path, kind);
-            _sourceId = store.InsertSourceFile(_transaction, path, "pending:" + Guid.NewGuid().ToString("N"), kind, 0, now);
+            _sourceId = store.InsertSourceFile(_transaction, name, path, "pending:" + Guid.NewGuid().ToString("N"), kind, 0, now);
 
             // Most rows leave the trailing optional columns (settings found on the device) empty; statements without
             // them bind fewer parameters per row.

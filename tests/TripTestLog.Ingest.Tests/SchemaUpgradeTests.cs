@@ -38,7 +38,7 @@ public sealed class SchemaUpgradeTests
 
         using var store = RecordStore.Open(db);
 
-        Assert.EndsWith("_ReaderAndSourceIndexes", store.AppliedMigrations()[^1]);
+        Assert.EndsWith("_SourceFullPath", store.AppliedMigrations()[^1]);
         var histories = store.Histories();
         Assert.Equal(2, histories["TWO-01"].Entries.Count);
         Assert.Equal(500, Assert.IsType<ElectronicTripSettings>(histories["TWO-01"].InForceOn(new DateOnly(2024, 6, 1)).Settings).Ir.Value);
@@ -62,8 +62,11 @@ public sealed class SchemaUpgradeTests
         using var store = RecordStore.Open(db);
         var outcome = store.Import(again, DateTimeOffset.UtcNow);
 
-        Assert.EndsWith("_ReaderAndSourceIndexes", store.AppliedMigrations()[^1]);
+        Assert.EndsWith("_SourceFullPath", store.AppliedMigrations()[^1]);
         Assert.Equal(5, store.Trips().Count);
+
+        // The files imported before full paths were kept apart keep their full path, which was their name, to verify by.
+        Assert.Equal(0, Sql.Count(db, "SELECT COUNT(*) FROM source_files WHERE full_path = '' OR (id < 3 AND full_path <> file_name)"));
         Assert.Equal((0L, 4L), (outcome.Added, outcome.Duplicates));
         Assert.Null(store.Instruments().Check("INJ-1", new DateOnly(2022, 12, 1), requireRegistered: true));
         Assert.True(store.Verify().IntegrityErrors.Count == 0);

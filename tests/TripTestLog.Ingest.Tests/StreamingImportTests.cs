@@ -118,6 +118,8 @@ public sealed class StreamingImportTests
     {
         public string Path => inner.Path;
 
+        public string Name => inner.Name;
+
         public Application.Records.RecordKind? PeekKind() => inner.PeekKind();
 
         public IRecordFile Open(DateOnly today) => new CountingFile(inner.Open(today), after, cancel);
@@ -126,6 +128,8 @@ public sealed class StreamingImportTests
     private sealed class CountingFile(IRecordFile inner, int after, CancellationTokenSource cancel) : IRecordFile
     {
         public string Path => inner.Path;
+
+        public string Name => inner.Name;
 
         public Application.Records.RecordKind? Kind => inner.Kind;
 

@@ -583,6 +583,11 @@ namespace TripTestLog.Migrations.Migrations
                         .HasColumnType("TEXT")
                         .HasColumnName("file_name");
 
+                    b.Property<string>("FullPath")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("full_path");
+
                     b.Property<string>("ImportedAt")
                         .IsRequired()
                         .HasColumnType("TEXT")

@@ -67,7 +67,7 @@ public static class PolicyFile
     {
         var text = new StringBuilder()
             .Append("# TripTestLog lab policy. One \"key = value\" per line; a key left out keeps its default.\n")
-            .Append("# Per-family test intervals: due_months.FAMILY.GRADE = N, e.g. due_months.iec60947-electronic.sound = 24\n");
+            .Append("# Per-family test intervals: due_months.FAMILY.GRADE = N,\n#   e.g. due_months.iec60947-electronic.sound = 24\n");
         foreach (var key in Keys)
         {
             text.Append("\n# ").Append(key.Comment).Append('\n').Append(key.Name).Append(" = ").Append(key.Get(policy)).Append('\n');

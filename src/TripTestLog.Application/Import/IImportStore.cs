@@ -5,8 +5,11 @@ namespace TripTestLog.Application.Import;
 /// <summary>The write side of a store, as the import pipeline needs it (SQLite today; a server database later).</summary>
 public interface IImportStore
 {
-    /// <summary>Begins storing one measurement file in a transaction of its own; waits while another import holds the store.</summary>
-    IMeasurementBatch BeginMeasurements(RecordKind kind, string path, DateTimeOffset now);
+    /// <summary>
+    /// Begins storing one measurement file in a transaction of its own; waits while another import holds the store.
+    /// <paramref name="name"/> is how records will cite the file; <paramref name="path"/> where it was read from.
+    /// </summary>
+    IMeasurementBatch BeginMeasurements(RecordKind kind, string name, string path, DateTimeOffset now);
 
     /// <summary>
     /// Stores a small file read whole (a register, a curve or ambient table, the instrument register) in one transaction:

@@ -8,8 +8,11 @@ namespace TripTestLog.Application.Import;
 /// </summary>
 public interface IRecordFile : IDisposable
 {
-    /// <summary>The file's path as given.</summary>
+    /// <summary>The file's path, to read it from.</summary>
     string Path { get; }
+
+    /// <summary>How records and problems cite the file (see <see cref="IRecordFileSource.Name"/>).</summary>
+    string Name { get; }
 
     /// <summary>The kind recognised from the header; null when the file could not be read as a record file.</summary>
     RecordKind? Kind { get; }

@@ -22,12 +22,12 @@ public sealed class ImportPipeline(IImportStore store)
         foreach (var file in files.OrderBy(f => Order(f.PeekKind())))
         {
             cancel.ThrowIfCancellationRequested();
-            starting?.Invoke(file.Path);
+            starting?.Invoke(file.Name);
             yield return Import(file, options, today, now(), cancel);
         }
     }
 
-    /// <summary>Imports one file; see the class remarks.</summary>
+    /// <summary>Imports one file; see the class remarks. Outcomes and problems cite it by its name (<see cref="IRecordFileSource.Name"/>).</summary>
     public ImportOutcome Import(IRecordFileSource source, ImportOptions options, DateOnly today, DateTimeOffset now, CancellationToken cancel = default)
     {
         ArgumentNullException.ThrowIfNull(source);
@@ -40,7 +40,7 @@ public sealed class ImportPipeline(IImportStore store)
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
             // Gone, locked or unreadable since it was listed: refused with the system's reason, never a stack trace.
-            return Refused(source.Path, null, 0, [new RowProblem(source.Path, 1, "", $"the file cannot be opened ({e.Message}); check that it exists and can be read")]);
+            return Refused(source.Name, null, 0, [new RowProblem(source.Name, 1, "", $"the file cannot be opened ({e.Message}); check that it exists and can be read")]);
         }
 
         using var _ = file;
@@ -86,7 +86,7 @@ public sealed class ImportPipeline(IImportStore store)
 
     private ImportOutcome Measurements(IRecordFile file, RecordKind kind, ImportOptions options, DateTimeOffset now, CancellationToken cancel)
     {
-        using var batch = store.BeginMeasurements(kind, file.Path, now);
+        using var batch = store.BeginMeasurements(kind, file.Name, file.Path, now);
         using var rejects = options.AcceptValid ? file.Rejects() : null;
         var log = new ProblemLog();
         long replaced = 0;
@@ -106,8 +106,8 @@ public sealed class ImportPipeline(IImportStore store)
                 // Rows after a strict file's first bad row are still stored, inside the transaction that will be rolled
                 // back, so that every unknown tag and conflict in the file is reported in one go.
                 problems = prepared is null
-                    ? [ImportProblems.UnknownTag(file.Path, row.Line, TagOf(record))]
-                    : Store(batch, file.Path, prepared, options, ref replaced);
+                    ? [ImportProblems.UnknownTag(file.Name, row.Line, TagOf(record))]
+                    : Store(batch, file.Name, prepared, options, ref replaced);
             }
 
             if (problems.Count > 0)
@@ -121,19 +121,19 @@ public sealed class ImportPipeline(IImportStore store)
         log.Add(summary.Problems);
         if (summary.IsUnreadable || (log.Any && !options.AcceptValid))
         {
-            return Refused(file.Path, kind, summary.RowsRead, log.Problems) with { ProblemsOmitted = log.Omitted };
+            return Refused(file.Name, kind, summary.RowsRead, log.Problems) with { ProblemsOmitted = log.Omitted };
         }
 
         var result = batch.Complete(summary.Sha256, summary.RowsRead, replaced);
         if (!result.Committed)
         {
-            return new ImportOutcome(file.Path, kind, ImportStatus.AlreadyImported, summary.RowsRead, 0, 0, 0, [])
+            return new ImportOutcome(file.Name, kind, ImportStatus.AlreadyImported, summary.RowsRead, 0, 0, 0, [])
             {
                 NotTested = notTested, EarlierFile = result.EarlierFile,
             };
         }
 
-        return new ImportOutcome(file.Path, kind, ImportStatus.Imported, summary.RowsRead, result.Added, 0, result.Duplicates, log.Problems)
+        return new ImportOutcome(file.Name, kind, ImportStatus.Imported, summary.RowsRead, result.Added, 0, result.Duplicates, log.Problems)
         {
             Replaced = replaced,
             NotTested = notTested,

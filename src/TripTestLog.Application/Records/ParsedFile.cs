@@ -12,8 +12,11 @@ namespace TripTestLog.Application.Records;
 /// </summary>
 public sealed record ParsedFile
 {
-    /// <summary>The path as given.</summary>
+    /// <summary>How records and problems cite the file (relative to the folder given to import, or as given).</summary>
     public required string Path { get; init; }
+
+    /// <summary>Where the file was read from; the same as <see cref="Path"/> unless the import named it relative to a folder.</summary>
+    public string FullPath { get => field ?? Path; init; }
 
     /// <summary>SHA-256 of the file's bytes, lower-case hex.</summary>
     public required string Sha256 { get; init; }

@@ -28,13 +28,14 @@ internal static class CheckCommand
         var stage = new Option<string?>("--stage") { Description = $"Only this stage ({TextCodes.Stage.Choices})", HelpName = "STAGE" };
         var family = new Option<string?>("--family") { Description = $"Only this family ({string.Join(", ", FamilyCodes.All)})", HelpName = "FAMILY" };
         var json = new Option<bool>("--json") { Description = "Write a JSON array, one object per trip test (fields in the README)" };
+        var wide = new Option<bool>("--wide") { Description = "Write every column of the table (time, stage, pole, basis), however wide" };
         var csv = new Option<bool>("--csv") { Description = "Write CSV, the same fields as --json, with formula cells neutralised" };
         var failOnFindings = new Option<bool>("--fail-on-findings") { Description = "Exit with 1 when any test shown is too early or too late, or its instrument was not traceable" };
         var registered = new Option<bool>("--require-registered-instruments") { Description = "Report tests made with an instrument missing from the instrument register" };
         var policy = new Option<FileInfo?>("--policy") { Description = "Lab policy file (default: lab-policy.conf beside the database)", HelpName = "FILE" };
         var command = new Command("check", "Judge every trip test against the band its standard allows: pass, too-early, too-late or not-assessable")
         {
-            db, asset, site, from, to, verdict, stage, family, json, csv, failOnFindings, registered, policy,
+            db, asset, site, from, to, verdict, stage, family, json, csv, wide, failOnFindings, registered, policy,
         };
         command.SetAction(parse =>
         {
@@ -49,7 +50,7 @@ internal static class CheckCommand
                 return ExitCodes.BadInput;
             }
 
-            var format = parse.GetValue(json) ? "json" : parse.GetValue(csv) ? "csv" : "table";
+            var format = parse.GetValue(json) ? "json" : parse.GetValue(csv) ? "csv" : parse.GetValue(wide) ? "wide" : "table";
             return Run(cli, parse.GetValue(db)!, parse.GetValue(asset), filter, format, parse.GetValue(failOnFindings), parse.GetValue(registered), parse.GetValue(policy));
         });
         return command;
@@ -158,6 +159,7 @@ internal static class CheckCommand
         {
             "json" => new VerdictJson(cli.Out),
             "csv" => new VerdictCsv(cli.Out),
+            "wide" => new VerdictTable(cli.Out, wide: true),
             _ => new VerdictTable(cli.Out),
         };
         var output = new VerdictWriters(writer, counts);

@@ -30,11 +30,12 @@ internal static class ImportCommand
         var profile = new Option<FileInfo?>("--profile") { Description = "A column-mapping profile (JSON) for another layout; applies to every file given", HelpName = "FILE" };
         var delimiter = new Option<string?>("--delimiter") { Description = "Field separator, e.g. ';' (default: recognised from the header)", HelpName = "CHAR" };
         var decimalMark = new Option<string?>("--decimal") { Description = "Decimal mark: '.' or ',' (default: '.' for comma files, ',' accepted in semicolon files)", HelpName = "CHAR" };
+        var wide = new Option<bool>("--wide") { Description = "Show file names whole in the summary, however wide" };
         var asOf = new Option<string?>("--as-of") { Description = "Refuse records dated after this date (default: today)", HelpName = "YYYY-MM-DD" };
         var maxMb = new Option<int?>("--max-file-mb") { Description = "Refuse files larger than this (no limit by default: files stream through)", HelpName = "MB" };
         var command = new Command("import", "Import record files; a file with any bad row is refused whole (unless --accept-valid) and the summary says where and why")
         {
-            paths, db, acceptValid, replace, profile, delimiter, decimalMark, maxMb, asOf,
+            paths, db, acceptValid, replace, profile, delimiter, decimalMark, maxMb, asOf, wide,
         };
         command.SetAction(parse =>
         {
@@ -45,13 +46,14 @@ internal static class ImportCommand
             }
 
             return Run(cli, parse.GetValue(paths)!, parse.GetValue(db)!, new ImportOptions(parse.GetValue(acceptValid), parse.GetValue(replace)),
-                parse.GetValue(profile), parse.GetValue(delimiter), parse.GetValue(decimalMark), parse.GetValue(maxMb), today);
+                parse.GetValue(profile), parse.GetValue(delimiter), parse.GetValue(decimalMark), parse.GetValue(maxMb), today,
+                parse.GetValue(wide) ? int.MaxValue : Wrapped.Width);
         });
         return command;
     }
 
     private static int Run(CliContext cli, string[] paths, FileInfo db, ImportOptions options, FileInfo? profileFile, string? delimiter, string? decimalMark, int? maxMb,
-        DateOnly today)
+        DateOnly today, int width)
     {
         if (delimiter is { Length: not 1 } || decimalMark is not (null or "." or ",") || maxMb is < 1 or > 100_000)
         {
@@ -103,7 +105,7 @@ internal static class ImportCommand
             return ExitCodes.BadInput;
         }
 
-        ImportReport.Write(cli.Out, outcomes, LogPath(db));
+        ImportReport.Write(cli.Out, outcomes, LogPath(db), width);
         return outcomes.Any(o => o.Status == ImportStatus.Refused) ? ExitCodes.BadInput
             : outcomes.Any(o => o.RefusedRows > 0) ? ExitCodes.Findings
             : ExitCodes.Ok;

@@ -10,15 +10,16 @@ internal static class VerifyCommand
     public static Command Create(CliContext cli)
     {
         var db = CommonOptions.ExistingDatabase();
+        var wide = new Option<bool>("--wide") { Description = "Show file names whole, however wide" };
         var command = new Command("verify", "Check the database: SQLite integrity and foreign keys, every record traced to an imported file, and each file still at hand unchanged")
         {
-            db,
+            db, wide,
         };
-        command.SetAction(parse => Run(cli, parse.GetValue(db)!));
+        command.SetAction(parse => Run(cli, parse.GetValue(db)!, parse.GetValue(wide) ? int.MaxValue : Wrapped.Width));
         return command;
     }
 
-    private static int Run(CliContext cli, FileInfo db)
+    private static int Run(CliContext cli, FileInfo db, int width)
     {
         if (!db.Exists)
         {
@@ -40,7 +41,7 @@ internal static class VerifyCommand
             });
         }
 
-        table.WriteTo(cli.Out);
+        table.WriteTo(cli.Out, width);
         cli.Out.WriteLine();
         cli.Out.WriteLine($"SQLite integrity check: {(report.IntegrityErrors.Count == 0 ? "ok" : string.Join("; ", report.IntegrityErrors))}");
         cli.Out.WriteLine($"Foreign keys: {(report.ForeignKeyErrors == 0 ? "ok" : $"{report.ForeignKeyErrors} broken references")}");

@@ -103,7 +103,8 @@ internal static class WorksheetCommand
 
         cli.Out.WriteLine($"Planned {trips} trip, {contacts} contact and {insulation} insulation tests on {selected.Count} device{(selected.Count == 1 ? "" : "s")}.");
         cli.Out.WriteLine($"Worksheet: {page}");
-        cli.Out.WriteLine($"Fill in and import: {Path.Combine(folder, WorksheetCsv.TripFile)}, {WorksheetCsv.ContactFile}, {WorksheetCsv.InsulationFile}");
+        Wrapped.Write(cli.Out, $"Fill in {WorksheetCsv.TripFile}, {WorksheetCsv.ContactFile} and {WorksheetCsv.InsulationFile} beside it, "
+            + "then import the folder; rows left blank count as not tested.", 0);
         return ExitCodes.Ok;
     }
 }

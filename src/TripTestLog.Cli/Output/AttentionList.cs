@@ -51,18 +51,18 @@ internal sealed class AttentionList(int limit) : IVerdictWriter
         foreach (var (tag, j) in _failures.OrderBy(f => f.Key, StringComparer.Ordinal))
         {
             var m = j.Trip.Measurement;
-            writer.WriteLine($"  {tag}: {Format.Verdict(j.Assessment.Verdict)} on {m.TestedAt.Date:yyyy-MM-dd}, {Format.Outcome(m.Outcome)} at {Format.Multiple(j)}"
-                + $" (band {j.Assessment.Band.Range})");
+            Wrapped.Write(writer, $"{tag}: {Format.Verdict(j.Assessment.Verdict)} on {m.TestedAt.Date:yyyy-MM-dd}, {Format.Outcome(m.Outcome)} at {Format.Multiple(j)}"
+                + $" (band {j.Assessment.Band.Range})", 2, 4);
         }
 
         if (_moreFailures > 0)
         {
-            writer.WriteLine($"  ... and {_moreFailures} more tests outside their band (see the verdicts file)");
+            Wrapped.Write(writer, $"... and {_moreFailures} more tests outside their band (see the verdicts file)", 2, 4);
         }
 
         foreach (var (instrument, why) in _instruments.OrderBy(i => i.Key, StringComparer.Ordinal))
         {
-            writer.WriteLine($"  {why} (tests made with {instrument} cannot be traced)");
+            Wrapped.Write(writer, $"{why} (tests made with {instrument} cannot be traced)", 2, 4);
         }
     }
 }

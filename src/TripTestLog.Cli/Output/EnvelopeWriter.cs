@@ -22,7 +22,7 @@ internal static class EnvelopeWriter
 
     public static void WriteTable(TextWriter writer, ITripEnvelope envelope, string title, TestConditions conditions)
     {
-        writer.WriteLine(title);
+        Wrapped.Write(writer, title, 0, 2);
         writer.WriteLine($"Band for a test {conditions}.");
         writer.WriteLine();
         var table = new TextTable($"x {envelope.ReferenceName}>", "Current>", "Min>", "Max>", "Typical min>", "Typical max>", "Min from", "Max from", "Point");
@@ -55,12 +55,12 @@ internal static class EnvelopeWriter
             writer.WriteLine();
         }
 
-        writer.WriteLine("Min and Max are guaranteed edges: a trip outside them fails. Typical edges are drawn lines; a trip outside them");
-        writer.WriteLine("only raises an advisory. Edge sources: normative = the standard's own point, at its current or carried in the");
-        writer.WriteLine("direction physics gives it; derived = from a point by I²t; characteristic = the standard's formula; setting = the");
-        writer.WriteLine("device's settings with their tolerances; curve-table = the lab's table from the maker's curve. Min \"never\": must");
-        writer.WriteLine("not trip at all; max \"none\": no trip required.");
-        writer.WriteLine(Safety.Caution);
+        Wrapped.Write(writer, "Min and Max are guaranteed edges: a trip outside them fails. Typical edges are drawn lines; a trip outside them "
+            + "only raises an advisory. Edge sources: normative = the standard's own point, at its current or carried in the "
+            + "direction physics gives it; derived = from a point by I²t; characteristic = the standard's formula; setting = the "
+            + "device's settings with their tolerances; curve-table = the lab's table from the maker's curve. Min \"never\": must "
+            + "not trip at all; max \"none\": no trip required.", 0);
+        Wrapped.Write(writer, Safety.Caution, 0);
     }
 
     /// <summary>

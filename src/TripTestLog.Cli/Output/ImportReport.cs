@@ -12,7 +12,7 @@ internal static class ImportReport
     /// <summary>At most this many problems are printed per refused file; the log keeps them all.</summary>
     public const int ProblemsShownPerFile = 20;
 
-    public static void Write(TextWriter writer, IReadOnlyList<ImportOutcome> outcomes, string logPath)
+    public static void Write(TextWriter writer, IReadOnlyList<ImportOutcome> outcomes, string logPath, int maxWidth = Wrapped.Width)
     {
         // Columns that are zero for every file are left out, so the table stays narrow; the sentence below names them all.
         var counts = new (string Header, Func<ImportOutcome, long> Count, bool Always)[]
@@ -30,47 +30,47 @@ internal static class ImportReport
         foreach (var o in outcomes)
         {
             table.Add([
-                Path.GetRelativePath(Directory.GetCurrentDirectory(), o.File),
+                o.File,
                 o.Kind is { } k ? Kind(k) : "unknown",
                 o.Status switch { ImportStatus.Imported => "imported", ImportStatus.AlreadyImported => "already imported", _ => "REFUSED" },
                 .. counts.Select(c => c.Count(o).ToString(CultureInfo.InvariantCulture))]);
         }
 
-        table.WriteTo(writer);
+        table.WriteTo(writer, maxWidth);
         var imported = outcomes.Count(o => o.Status == ImportStatus.Imported);
         var again = outcomes.Count(o => o.Status == ImportStatus.AlreadyImported);
         var refused = outcomes.Where(o => o.Status == ImportStatus.Refused).ToList();
         writer.WriteLine();
-        writer.WriteLine($"{outcomes.Count} {(outcomes.Count == 1 ? "file" : "files")}: {imported} imported, {again} already imported, {refused.Count} refused; "
-            + $"{outcomes.Where(o => o.Status == ImportStatus.Imported).Sum(o => o.Added)} records added.");
+        Wrapped.Write(writer, $"{outcomes.Count} {(outcomes.Count == 1 ? "file" : "files")}: {imported} imported, {again} already imported, {refused.Count} refused; "
+            + $"{outcomes.Where(o => o.Status == ImportStatus.Imported).Sum(o => o.Added)} records added.", 0);
         if (outcomes.Any(o => o.RowsRead > 0))
         {
-            writer.WriteLine("Every row is accounted for: rows = added + updated + unchanged + duplicates + replaced + not tested + refused.");
+            Wrapped.Write(writer, "Every row is accounted for: rows = added + updated + unchanged + duplicates + replaced + not tested + refused.", 0);
         }
 
         if (outcomes.Sum(o => o.NotTested) is > 0 and var blank)
         {
-            writer.WriteLine($"{blank} planned {(blank == 1 ? "row was" : "rows were")} left blank on a worksheet: counted as not tested, not stored.");
+            Wrapped.Write(writer, $"{blank} planned {(blank == 1 ? "row was" : "rows were")} left blank on a worksheet: counted as not tested, not stored.", 0);
         }
 
         // A copy under another name is named with the file it repeats, so nobody looks for a missing import.
-        foreach (var o in outcomes.Where(o => o.Status == ImportStatus.AlreadyImported && o.EarlierFile is { } e && Path.GetFullPath(e) != Path.GetFullPath(o.File)))
+        foreach (var o in outcomes.Where(o => o.Status == ImportStatus.AlreadyImported && o.EarlierFile is { } e && e != o.File))
         {
-            writer.WriteLine($"{Path.GetFileName(o.File)} holds the same content as {o.EarlierFile}, imported before: nothing added.");
+            Wrapped.Write(writer, $"{o.File} holds the same content as {o.EarlierFile}, imported before: nothing added.", 0, 2);
         }
 
         foreach (var o in outcomes.Where(o => o.Status == ImportStatus.Imported && o.RefusedRows > 0))
         {
             writer.WriteLine();
-            writer.WriteLine($"{o.File}: {o.RefusedRows} rows refused, the rest stored."
-                + (o.RejectsFile is { } rejects ? $" The refused rows, with their reasons, are in {rejects}:" : ""));
+            Wrapped.Write(writer, $"{o.File}: {o.RefusedRows} rows refused, the rest stored."
+                + (o.RejectsFile is { } rejects ? $" The refused rows, with their reasons, are in {rejects}:" : ""), 0, 2);
             WriteProblems(writer, o, logPath);
         }
 
         foreach (var o in refused)
         {
             writer.WriteLine();
-            writer.WriteLine($"{o.File} was refused: nothing from it was stored. Fix these and import it again:");
+            Wrapped.Write(writer, $"{o.File} was refused: nothing from it was stored. Fix these and import it again:", 0, 2);
             WriteProblems(writer, o, logPath);
         }
     }
@@ -79,13 +79,13 @@ internal static class ImportReport
     {
         foreach (var p in o.Problems.Take(ProblemsShownPerFile))
         {
-            writer.WriteLine("  " + p);
+            Wrapped.Write(writer, p.ToString(), 2, 4);
         }
 
         if (o.Problems.Count + o.ProblemsOmitted > ProblemsShownPerFile)
         {
             var inLog = o.ProblemsOmitted > 0 ? $"the first {o.Problems.Count} are in {logPath}" : $"all are in {logPath}";
-            writer.WriteLine($"  ... and {o.Problems.Count + o.ProblemsOmitted - ProblemsShownPerFile} more ({inLog})");
+            Wrapped.Write(writer, $"... and {o.Problems.Count + o.ProblemsOmitted - ProblemsShownPerFile} more ({inLog})", 2, 4);
         }
     }
 

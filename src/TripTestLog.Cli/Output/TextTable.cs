@@ -31,14 +31,25 @@ internal sealed class TextTable
         _rows.Add(cells);
     }
 
-    public void WriteTo(TextWriter writer)
+    /// <summary>
+    /// Writes the table within <paramref name="maxWidth"/> columns (a 100-column terminal unless asked otherwise): when it
+    /// is wider, the first column (a file or a name) gives up the difference, its long cells shortened from the front
+    /// with '…', so the end of a path, the part that tells files apart, stays.
+    /// </summary>
+    public void WriteTo(TextWriter writer, int maxWidth = Wrapped.Width)
     {
         var widths = _headers.Select((h, i) => Math.Max(h.Length, _rows.Count == 0 ? 0 : _rows.Max(r => r[i].Length))).ToArray();
+        var total = widths.Sum() + 2 * (widths.Length - 1);
+        if (total > maxWidth)
+        {
+            widths[0] = Math.Max(Math.Max(_headers[0].Length, 12), widths[0] - (total - maxWidth));
+        }
+
         writer.WriteLine(Line(_headers, widths));
         writer.WriteLine(string.Join("  ", widths.Select(w => new string('-', w))));
         foreach (var row in _rows)
         {
-            writer.WriteLine(Line(row, widths));
+            writer.WriteLine(Line(row[0].Length > widths[0] ? [.. row.Skip(0).Take(0), "…" + row[0][^(widths[0] - 1)..], .. row.Skip(1)] : row, widths));
         }
     }
 

@@ -3,15 +3,27 @@ using TripTestLog.Domain.Verdicts;
 
 namespace TripTestLog.Cli.Output;
 
-/// <summary>The verdicts as a person reads them: a table, then what needs attention with the reasons, then the caution.</summary>
-internal sealed class VerdictTable(TextWriter writer) : IVerdictWriter
+/// <summary>
+/// The verdicts as a person reads them: a table, then what needs attention with the reasons, then the caution. The table
+/// fits a 100-column terminal (date, start, current, multiple, result, band, verdict); <c>wide</c> adds the time of day,
+/// stage, pole and basis, and splits the band into its two edges.
+/// </summary>
+internal sealed class VerdictTable(TextWriter writer, bool wide = false) : IVerdictWriter
 {
     // Fixed widths, so each row is written as it is judged; a longer cell pushes its row out rather than holding the table.
-    private static readonly (string Header, int Width, bool Right)[] Columns =
+    private static readonly (string Header, int Width, bool Right)[] WideColumns =
     [
         ("Asset", 12, false), ("Tested", 19, false), ("Stage", 8, false), ("Pole", 4, false), ("Start", 5, false), ("Current", 9, true),
         ("Multiple", 9, true), ("Result", 17, false), ("Band min", 8, true), ("Band max", 8, true), ("Verdict", 14, false), ("Basis", 9, false),
     ];
+
+    private static readonly (string Header, int Width, bool Right)[] NarrowColumns =
+    [
+        ("Asset", 12, false), ("Tested", 10, false), ("Start", 5, false), ("Current", 9, true), ("Multiple", 8, true), ("Result", 15, false),
+        ("Band", 13, false), ("Verdict", 14, false),
+    ];
+
+    private (string Header, int Width, bool Right)[] Columns => wide ? WideColumns : NarrowColumns;
 
     private readonly VerdictCounts _counts = new();
     private readonly List<JudgedTrip> _attention = [];
@@ -28,7 +40,21 @@ internal sealed class VerdictTable(TextWriter writer) : IVerdictWriter
 
         var m = r.Trip.Measurement;
         var a = r.Assessment;
-        Row(
+        if (!wide)
+        {
+            Row(
+                m.Tag.Value,
+                m.TestedAt.Date.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture),
+                Format.Start(m.Start),
+                m.Current.ToString(),
+                Format.Multiple(r),
+                Format.Outcome(m.Outcome),
+                a.Band.HasRequirement ? $"{Format.Minimum(a.Band.Minimum)}-{Format.Maximum(a.Band.Maximum)}" : "-",
+                Format.Verdict(a.Verdict));
+        }
+        else
+        {
+            Row(
             m.Tag.Value,
             m.TestedAt.ToString(),
             Format.Stage(m.Stage),
@@ -41,6 +67,8 @@ internal sealed class VerdictTable(TextWriter writer) : IVerdictWriter
             a.Band.HasRequirement ? Format.Maximum(a.Band.Maximum) : "-",
             Format.Verdict(a.Verdict),
             Format.Basis(a.Basis));
+        }
+
         _counts.Add(r);
 
         // Only what needs attention is kept for the lists after the table; a healthy fleet holds nothing.
@@ -59,7 +87,7 @@ internal sealed class VerdictTable(TextWriter writer) : IVerdictWriter
         WriteInstrumentFindings(writer, _attention.Where(r => r.InstrumentFinding is not null));
         WriteNotes(writer, _attention.Where(r => r.Assessment.Notes.Count > 0));
         writer.WriteLine();
-        writer.WriteLine(Safety.Caution);
+        Wrapped.Write(writer, Safety.Caution, 0);
     }
 
     private void Row(params string[] cells)
@@ -78,7 +106,7 @@ internal sealed class VerdictTable(TextWriter writer) : IVerdictWriter
         writer.WriteLine(sb.ToString().TrimEnd());
     }
 
-    private static void WriteInstrumentFindings(TextWriter writer, IEnumerable<JudgedTrip> results)
+    private void WriteInstrumentFindings(TextWriter writer, IEnumerable<JudgedTrip> results)
     {
         var list = results.ToList();
         if (list.Count == 0)
@@ -93,12 +121,12 @@ internal sealed class VerdictTable(TextWriter writer) : IVerdictWriter
             var tests = group.ToList();
             var dates = tests.Select(r => r.Trip.Measurement.TestedAt.Date).ToList();
             var devices = tests.Select(r => r.Trip.Measurement.Tag).Distinct().Count();
-            var files = string.Join(", ", tests.Select(r => Path.GetFileName(r.Trip.SourceFile)).Distinct());
-            writer.WriteLine($"  {group.Key}: {tests.Count} tests of {devices} devices, {dates.Min():yyyy-MM-dd} to {dates.Max():yyyy-MM-dd} [{files}]");
+            var files = string.Join(", ", tests.Select(r => r.Trip.SourceFile).Distinct());
+            Item(writer, $"{group.Key}: {tests.Count} tests of {devices} devices, {dates.Min():yyyy-MM-dd} to {dates.Max():yyyy-MM-dd} [{files}]");
         }
     }
 
-    private static void WriteNotes(TextWriter writer, IEnumerable<JudgedTrip> results)
+    private void WriteNotes(TextWriter writer, IEnumerable<JudgedTrip> results)
     {
         var list = results.ToList();
         if (list.Count == 0)
@@ -113,12 +141,12 @@ internal sealed class VerdictTable(TextWriter writer) : IVerdictWriter
             var m = r.Trip.Measurement;
             foreach (var note in r.Assessment.Notes)
             {
-                writer.WriteLine($"  {m.Tag} {m.TestedAt} at {m.Current}: {note}");
+                Item(writer, $"{m.Tag} {m.TestedAt} at {m.Current}: {note}");
             }
         }
     }
 
-    private static void WriteReasons(TextWriter writer, string heading, IEnumerable<JudgedTrip> results)
+    private void WriteReasons(TextWriter writer, string heading, IEnumerable<JudgedTrip> results)
     {
         var list = results.ToList();
         if (list.Count == 0)
@@ -131,8 +159,21 @@ internal sealed class VerdictTable(TextWriter writer) : IVerdictWriter
         foreach (var r in list)
         {
             var m = r.Trip.Measurement;
-            writer.WriteLine($"  {m.Tag} {m.TestedAt} {Format.Stage(m.Stage)} pole {m.Pole} at {m.Current} ({Format.Multiple(r)}): "
-                + $"{Format.Verdict(r.Assessment.Verdict)}: {r.Assessment.Reason} [{Path.GetFileName(r.Trip.SourceFile)}:{r.Trip.SourceLine}]");
+            Item(writer, $"{m.Tag} {m.TestedAt} {Format.Stage(m.Stage)} pole {m.Pole} at {m.Current} ({Format.Multiple(r)}): "
+                + $"{Format.Verdict(r.Assessment.Verdict)}: {r.Assessment.Reason} [{r.Trip.SourceFile}:{r.Trip.SourceLine}]");
+        }
+    }
+
+    // One entry of a list after the table: wrapped to the terminal, or on one line with --wide.
+    private void Item(TextWriter writer, string text)
+    {
+        if (wide)
+        {
+            writer.WriteLine("  " + text);
+        }
+        else
+        {
+            Wrapped.Write(writer, text, 2, 4);
         }
     }
 }

@@ -7,16 +7,20 @@ internal static class Wrapped
 {
     public const int Width = 100;
 
-    public static void Write(TextWriter writer, string text, int indent)
+    public static void Write(TextWriter writer, string text, int indent) => Write(writer, text, indent, indent);
+
+    /// <summary>A list item: the first line indented by <paramref name="first"/>, the lines it wraps onto by <paramref name="rest"/>.</summary>
+    public static void Write(TextWriter writer, string text, int first, int rest)
     {
-        var pad = new string(' ', indent);
-        var line = new StringBuilder(pad);
+        var indent = first;
+        var line = new StringBuilder(new string(' ', first));
         foreach (var word in text.Split(' ', StringSplitOptions.RemoveEmptyEntries))
         {
             if (line.Length > indent && line.Length + 1 + word.Length > Width)
             {
                 writer.WriteLine(line.ToString());
-                line.Clear().Append(pad);
+                indent = rest;
+                line.Clear().Append(' ', rest);
             }
 
             if (line.Length > indent)

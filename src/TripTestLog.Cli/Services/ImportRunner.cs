@@ -10,7 +10,14 @@ namespace TripTestLog.Cli.Services;
 /// <summary>A file to import and the way to read it.</summary>
 /// <param name="Path">The file.</param>
 /// <param name="Read">Separator, decimal mark, size limit, profile.</param>
-internal sealed record ImportFile(string Path, ReadOptions Read);
+internal sealed record ImportFile(string Path, ReadOptions Read)
+{
+    /// <summary>
+    /// How records cite the file: its path relative to the folder given to import (alder-ridge/2026-trip-tests.csv), or
+    /// for a file given by itself, the path as given. Always with '/' separators.
+    /// </summary>
+    public string Name { get; init; } = Path.Replace('\\', '/');
+}
 
 /// <summary>
 /// Imports files and folders: finds the CSV files, reads each, and stores it in its own transaction.
@@ -41,7 +48,10 @@ internal sealed class ImportRunner(RecordStore store, ILogger log, CliContext cl
                              .Where(f => !f.EndsWith(RejectsFile.Suffix, StringComparison.OrdinalIgnoreCase))
                              .Order(StringComparer.Ordinal))
                 {
-                    files.Add(new ImportFile(file, baseOptions.Profile is null ? baseOptions with { Profile = ProfileFor(file) } : baseOptions));
+                    files.Add(new ImportFile(file, baseOptions.Profile is null ? baseOptions with { Profile = ProfileFor(file) } : baseOptions)
+                    {
+                        Name = System.IO.Path.GetRelativePath(path, file).Replace('\\', '/'),
+                    });
                 }
             }
             else
@@ -60,7 +70,12 @@ internal sealed class ImportRunner(RecordStore store, ILogger log, CliContext cl
     public IReadOnlyList<ImportOutcome> Run(IReadOnlyList<ImportFile> files, ImportOptions options, DateOnly today)
     {
         using var progress = Progress.For(cli, files.Count);
-        var sources = files.Select(f => (IRecordFileSource)new CsvRecordFileSource(f.Path, f.Read)).ToList();
+        var sources = files.Select(f => (IRecordFileSource)new CsvRecordFileSource(f.Path, f.Read) { Name = f.Name }).ToList();
+        foreach (var f in files)
+        {
+            log.Information("Reading {Name} from {Path}", f.Name, System.IO.Path.GetFullPath(f.Path));
+        }
+
         var outcomes = new List<ImportOutcome>(files.Count);
         foreach (var outcome in new ImportPipeline(store).Run(sources, options, today, cli.Clock.GetUtcNow, file => progress.Step(Path.GetFileName(file)), cli.Cancel))
         {
