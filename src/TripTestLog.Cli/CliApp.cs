@@ -23,6 +23,9 @@ internal static class CliApp
             VerifyCommand.Create(cli),
             BackupCommand.Create(cli),
             WorksheetCommand.Create(cli),
+            DevicesCommand.Create(cli),
+            InstrumentsCommand.Create(cli),
+            HistoryCommand.Create(cli),
             DemoCommand.Create(cli),
         };
 

@@ -25,19 +25,8 @@ internal sealed record Correction(MeasurementRow New, long StoredId, object[] Ol
             + "if this is a correction, import again with --replace (the old values are kept in the audit table)");
     }
 
-    private string RecordColumn(string column)
-    {
-        var tripped = Array.IndexOf(Columns, "tripped") is var i and >= 0 && New.Values[i] is true or 1L or 1;
-        return column switch
-        {
-            "device_id" => "asset_tag",
-            "time_s" => tripped ? "trip_time_s" : "held_s",
-            "tripped" => "trip_time_s/held_s",
-            "over_range" => "resistance_mohm",
-            _ when column.StartsWith("found_", StringComparison.Ordinal) => column["found_".Length..],
-            _ => column,
-        };
-    }
+    private string RecordColumn(string column) =>
+        Storage.RecordColumn.Of(column, Array.IndexOf(Columns, "tripped") is var i and >= 0 && New.Values[i] is true or 1L or 1);
 
     private static string Shown(string value) => value.Length == 0 ? "(blank)" : value;
 }

@@ -15,6 +15,10 @@ public sealed class HelpTextTests
     [InlineData("fleet", new[] { "fleet" })]
     [InlineData("policy", new[] { "policy" })]
     [InlineData("report", new[] { "report" })]
+    [InlineData("worksheet", new[] { "worksheet" })]
+    [InlineData("devices", new[] { "devices" })]
+    [InlineData("instruments", new[] { "instruments" })]
+    [InlineData("history", new[] { "history" })]
     public void HelpText_MatchesTheGoldenFile(string name, string[] command)
     {
         var (exit, output, _) = CliRun.Run([.. command, "--help"]);

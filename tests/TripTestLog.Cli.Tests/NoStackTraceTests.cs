@@ -43,6 +43,16 @@ public sealed class NoStackTraceTests : IDisposable
         new[] { "envelope", "--curve", "C", "--rated", "-3" },
         new[] { "envelope", "--asset", "T-01", "--db", "{text}" },
         new[] { "demo", "--records", "{text}", "--out", "{dir}/demo" },
+        new[] { "worksheet", "--db", "{text}", "--asset", "T-01" },
+        new[] { "worksheet", "--db", "{good}", "--asset", "T-01", "--out", "{text}/inside" },
+        new[] { "worksheet", "--db", "/no/such.db", "--site", "Site" },
+        new[] { "devices", "--db", "{text}" },
+        new[] { "devices", "--db", "{good}", "--as-of", "2026-13-01" },
+        new[] { "instruments", "--db", "/no/such.db" },
+        new[] { "history", "--db", "{text}", "--asset", "T-01" },
+        new[] { "history", "--db", "{good}", "--asset", " padded " },
+        new[] { "check", "--db", "{good}", "--verdict", "maybe" },
+        new[] { "import", "{dir}", "--db", "{good}", "--as-of", "soon" },
         new[] { "no-such-command" },
     };
 

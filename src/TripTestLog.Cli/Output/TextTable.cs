@@ -32,24 +32,39 @@ internal sealed class TextTable
     }
 
     /// <summary>
+    /// The column that gives up width when the table is too wide: the first (a file name, shortened from the front so the
+    /// end of a path, the part that tells files apart, stays) unless set; any other is shortened at its end.
+    /// </summary>
+    public int Elastic { get; init; }
+
+    /// <summary>
     /// Writes the table within <paramref name="maxWidth"/> columns (a 100-column terminal unless asked otherwise): when it
-    /// is wider, the first column (a file or a name) gives up the difference, its long cells shortened from the front
-    /// with '…', so the end of a path, the part that tells files apart, stays.
+    /// is wider, the <see cref="Elastic"/> column gives up the difference, its long cells shortened with '…'.
     /// </summary>
     public void WriteTo(TextWriter writer, int maxWidth = Wrapped.Width)
     {
         var widths = _headers.Select((h, i) => Math.Max(h.Length, _rows.Count == 0 ? 0 : _rows.Max(r => r[i].Length))).ToArray();
         var total = widths.Sum() + 2 * (widths.Length - 1);
+        var e = Elastic;
         if (total > maxWidth)
         {
-            widths[0] = Math.Max(Math.Max(_headers[0].Length, 12), widths[0] - (total - maxWidth));
+            widths[e] = Math.Max(Math.Max(_headers[e].Length, 12), widths[e] - (total - maxWidth));
         }
 
         writer.WriteLine(Line(_headers, widths));
         writer.WriteLine(string.Join("  ", widths.Select(w => new string('-', w))));
         foreach (var row in _rows)
         {
-            writer.WriteLine(Line(row[0].Length > widths[0] ? [.. row.Skip(0).Take(0), "…" + row[0][^(widths[0] - 1)..], .. row.Skip(1)] : row, widths));
+            if (row[e].Length > widths[e])
+            {
+                var cells = (string[])row.Clone();
+                cells[e] = e == 0 ? "…" + row[e][^(widths[e] - 1)..] : row[e][..(widths[e] - 1)] + "…";
+                writer.WriteLine(Line(cells, widths));
+            }
+            else
+            {
+                writer.WriteLine(Line(row, widths));
+            }
         }
     }
 

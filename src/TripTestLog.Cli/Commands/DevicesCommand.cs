@@ -1,0 +1,139 @@
+using System.CommandLine;
+using System.Globalization;
+using System.Text.Json;
+using TripTestLog.Cli.Output;
+using TripTestLog.Domain.Devices;
+using TripTestLog.Storage;
+
+namespace TripTestLog.Cli.Commands;
+
+/// <summary>`devices`: the register with the settings in force, site by site, or as JSON.</summary>
+internal static class DevicesCommand
+{
+    public static Command Create(CliContext cli)
+    {
+        var db = CommonOptions.ExistingDatabase();
+        var site = new Option<string?>("--site") { Description = "Only devices at this site", HelpName = "SITE" };
+        var asOf = new Option<string?>("--as-of") { Description = "The settings in force on this date (default: today)", HelpName = "YYYY-MM-DD" };
+        var json = new Option<bool>("--json") { Description = "Write a JSON array, one object per device (fields in the README)" };
+        var wide = new Option<bool>("--wide") { Description = "Show the settings whole, however wide" };
+        var command = new Command("devices", "List the device register with the settings in force, site by site") { db, site, asOf, json, wide };
+        command.SetAction(parse =>
+        {
+            var date = cli.Today;
+            if (parse.GetValue(asOf) is { } text && !ConditionOptions.Date(text, "--as-of", cli, out date))
+            {
+                return ExitCodes.BadInput;
+            }
+
+            return Run(cli, parse.GetValue(db)!, parse.GetValue(site), date, parse.GetValue(json), parse.GetValue(wide));
+        });
+        return command;
+    }
+
+    private static int Run(CliContext cli, FileInfo db, string? site, DateOnly on, bool json, bool wide)
+    {
+        if (!db.Exists)
+        {
+            cli.Error.WriteLine($"error: no database at {db.FullName}; import a register first (triptestlog import PATH --db {db.FullName})");
+            return ExitCodes.BadInput;
+        }
+
+        using var store = RecordStore.Open(db.FullName);
+        var devices = store.Histories().Values
+            .Select(h => (Entry: h.InForceOn(on), Entries: h.Entries.Count))
+            .Where(d => site is null || string.Equals(d.Entry.Site, site, StringComparison.OrdinalIgnoreCase))
+            .OrderBy(d => d.Entry.Site, StringComparer.Ordinal).ThenBy(d => d.Entry.Tag.Value, StringComparer.Ordinal)
+            .ToList();
+        if (site is not null && devices.Count == 0)
+        {
+            cli.Error.WriteLine($"error: --site: no device in the register is at '{site}'");
+            return ExitCodes.BadInput;
+        }
+
+        if (json)
+        {
+            WriteJson(cli.Out, devices);
+            return ExitCodes.Ok;
+        }
+
+        cli.Out.WriteLine($"Settings in force on {on:yyyy-MM-dd}.");
+        foreach (var group in devices.GroupBy(d => d.Entry.Site))
+        {
+            cli.Out.WriteLine();
+            cli.Out.WriteLine($"{group.Key} ({group.Count()} device{(group.Count() == 1 ? "" : "s")})");
+            var table = new TextTable("Asset", "Family", "In>", "Poles>", "Settings") { Elastic = 4 };
+            foreach (var (d, _) in group)
+            {
+                table.Add(d.Tag.Value, FamilyCodes.Of(d.Family), d.RatedCurrent.ToString(), d.Poles.ToString(CultureInfo.InvariantCulture), d.Settings.Summary);
+            }
+
+            table.WriteTo(cli.Out, wide ? int.MaxValue : Wrapped.Width);
+        }
+
+        return ExitCodes.Ok;
+    }
+
+    private static void WriteJson(TextWriter output, IEnumerable<(Device Entry, int Entries)> devices)
+    {
+        using var stream = new MemoryStream();
+        using (var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true }))
+        {
+            json.WriteStartArray();
+            foreach (var (d, entries) in devices)
+            {
+                json.WriteStartObject();
+                json.WriteString("asset_tag", d.Tag.Value);
+                json.WriteString("site", d.Site);
+                json.WriteString("location", d.Location);
+                json.WriteString("family", FamilyCodes.Of(d.Family));
+                json.WriteNumber("rated_current_a", d.RatedCurrent.Value);
+                json.WriteNumber("poles", d.Poles);
+                json.WriteNumber("rated_voltage_v", d.RatedVoltage.Value);
+                json.WriteString("settings", d.Settings.Summary);
+                Date(json, "settings_from", d.SettingsFrom);
+                Date(json, "commissioned_on", d.CommissionedOn);
+                if (d.ContactLimit is { } limit)
+                {
+                    json.WriteNumber("contact_limit_uohm", limit.Value);
+                }
+                else
+                {
+                    json.WriteNull("contact_limit_uohm");
+                }
+
+                json.WriteString("make", d.Make);
+                json.WriteString("model", d.Model);
+                json.WriteString("serial", d.Serial);
+                json.WriteNumber("register_entries", entries);
+                json.WriteEndObject();
+                Drain(json, stream, output);
+            }
+
+            json.WriteEndArray();
+            Drain(json, stream, output);
+        }
+
+        output.WriteLine();
+    }
+
+    // Written out device by device, so a large register never sits whole in memory as JSON.
+    private static void Drain(Utf8JsonWriter json, MemoryStream stream, TextWriter output)
+    {
+        json.Flush();
+        output.Write(System.Text.Encoding.UTF8.GetString(stream.GetBuffer(), 0, (int)stream.Length));
+        stream.SetLength(0);
+    }
+
+    private static void Date(Utf8JsonWriter json, string name, DateOnly? date)
+    {
+        if (date is { } d)
+        {
+            json.WriteString(name, d.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture));
+        }
+        else
+        {
+            json.WriteNull(name);
+        }
+    }
+}

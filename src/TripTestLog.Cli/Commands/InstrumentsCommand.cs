@@ -1,0 +1,63 @@
+using System.CommandLine;
+using System.Globalization;
+using TripTestLog.Cli.Output;
+using TripTestLog.Domain.Instruments;
+using TripTestLog.Storage;
+
+namespace TripTestLog.Cli.Commands;
+
+/// <summary>`instruments`: each registered instrument's calibration and where it stands on a date.</summary>
+internal static class InstrumentsCommand
+{
+    /// <summary>A calibration due within this many days is called out (lab practice, so the next one can be booked).</summary>
+    public const int DueSoonDays = 30;
+
+    public static Command Create(CliContext cli)
+    {
+        var db = CommonOptions.ExistingDatabase();
+        var asOf = new Option<string?>("--as-of") { Description = "The state on this date (default: today)", HelpName = "YYYY-MM-DD" };
+        var command = new Command("instruments", "List the registered instruments: their calibration and whether it holds today") { db, asOf };
+        command.SetAction(parse =>
+        {
+            var date = cli.Today;
+            if (parse.GetValue(asOf) is { } text && !ConditionOptions.Date(text, "--as-of", cli, out date))
+            {
+                return ExitCodes.BadInput;
+            }
+
+            var file = parse.GetValue(db)!;
+            if (!file.Exists)
+            {
+                cli.Error.WriteLine($"error: no database at {file.FullName}; import an instrument register first (triptestlog import PATH --db {file.FullName})");
+                return ExitCodes.BadInput;
+            }
+
+            using var store = RecordStore.Open(file.FullName);
+            var register = store.Instruments();
+            var table = new TextTable("Instrument", "Kind", "Serial", "Calibrated", "Due", "State") { Elastic = 5 };
+            var lapsed = 0;
+            foreach (var name in register.Instruments)
+            {
+                var state = register.StateOn(name, date);
+                var p = state.Period!;
+                lapsed += state.State == CalibrationState.Lapsed ? 1 : 0;
+                table.Add(name, p.Kind, p.Serial, Day(p.CalibratedOn), Day(p.CalibrationDue), state.State switch
+                {
+                    CalibrationState.InCalibration when state.Days <= DueSoonDays => $"in calibration, due in {state.Days} days",
+                    CalibrationState.InCalibration => "in calibration",
+                    CalibrationState.Lapsed => $"LAPSED {state.Days} days ago",
+                    _ => $"not yet calibrated (from {Day(p.CalibratedOn)})",
+                });
+            }
+
+            cli.Out.WriteLine($"Instruments on {Day(date)}:");
+            table.WriteTo(cli.Out);
+            cli.Out.WriteLine();
+            cli.Out.WriteLine(lapsed == 0 ? "No instrument's calibration has lapsed." : $"{lapsed} instrument{(lapsed == 1 ? " is" : "s are")} out of calibration: tests made with {(lapsed == 1 ? "it" : "them")} cannot be traced.");
+            return ExitCodes.Ok;
+        });
+        return command;
+    }
+
+    private static string Day(DateOnly d) => d.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);
+}
