@@ -13,7 +13,7 @@ public sealed partial class RecordStore : IHistorySource
         select.CommandText =
             $"SELECT d.asset_tag, {string.Join(", ", RegisterColumns.Split(", ").Select(c => "r." + c))}, f.file_name, r.source_line, r.recorded_at "
             + "FROM device_revisions r JOIN devices d ON d.id = r.device_id JOIN source_files f ON f.id = r.source_file_id "
-            + "WHERE d.asset_tag = $tag ORDER BY r.id";
+            + "WHERE d.asset_tag = $tag COLLATE NOCASE ORDER BY r.id";
         select.Parameters.AddWithValue("$tag", tag.Value);
         using var reader = select.ExecuteReader();
         var list = new List<RegisterRevision>();
@@ -33,15 +33,15 @@ public sealed partial class RecordStore : IHistorySource
         const string Sql = """
             SELECT 'trip test ' || t.tested_at || ' at ' || t.current_a || ' A', a.column_name, a.old_value, a.new_value, fo.file_name, fn.file_name, a.changed_at, a.id, t.tripped
               FROM audit_changes a JOIN trip_tests t ON a.table_name = 'trip_tests' AND t.id = a.record_id JOIN devices d ON d.id = t.device_id
-              JOIN source_files fo ON fo.id = a.old_source_file_id JOIN source_files fn ON fn.id = a.new_source_file_id WHERE d.asset_tag = $tag
+              JOIN source_files fo ON fo.id = a.old_source_file_id JOIN source_files fn ON fn.id = a.new_source_file_id WHERE d.asset_tag = $tag COLLATE NOCASE
             UNION ALL
             SELECT 'contact test ' || t.tested_at || ' pole ' || t.pole, a.column_name, a.old_value, a.new_value, fo.file_name, fn.file_name, a.changed_at, a.id, 0
               FROM audit_changes a JOIN contact_tests t ON a.table_name = 'contact_tests' AND t.id = a.record_id JOIN devices d ON d.id = t.device_id
-              JOIN source_files fo ON fo.id = a.old_source_file_id JOIN source_files fn ON fn.id = a.new_source_file_id WHERE d.asset_tag = $tag
+              JOIN source_files fo ON fo.id = a.old_source_file_id JOIN source_files fn ON fn.id = a.new_source_file_id WHERE d.asset_tag = $tag COLLATE NOCASE
             UNION ALL
             SELECT 'insulation test ' || t.tested_at || ' path ' || t.path, a.column_name, a.old_value, a.new_value, fo.file_name, fn.file_name, a.changed_at, a.id, 0
               FROM audit_changes a JOIN insulation_tests t ON a.table_name = 'insulation_tests' AND t.id = a.record_id JOIN devices d ON d.id = t.device_id
-              JOIN source_files fo ON fo.id = a.old_source_file_id JOIN source_files fn ON fn.id = a.new_source_file_id WHERE d.asset_tag = $tag
+              JOIN source_files fo ON fo.id = a.old_source_file_id JOIN source_files fn ON fn.id = a.new_source_file_id WHERE d.asset_tag = $tag COLLATE NOCASE
             ORDER BY 8
             """;
         using var select = _connection.CreateCommand();

@@ -87,7 +87,7 @@ public sealed partial class RecordStore
     {
         using var select = Command(transaction, "SELECT asset_tag, id FROM devices");
         using var reader = select.ExecuteReader();
-        var ids = new Dictionary<string, long>(StringComparer.Ordinal);
+        var ids = new Dictionary<string, long>(AssetTag.Comparer);
         while (reader.Read())
         {
             ids[reader.GetString(0)] = reader.GetInt64(1);

@@ -52,7 +52,7 @@ public sealed partial class RecordStore
             $"SELECT d.asset_tag, {string.Join(", ", RegisterColumns.Split(", ").Select(c => "r." + c))} "
             + "FROM device_revisions r JOIN devices d ON d.id = r.device_id ORDER BY d.asset_tag, r.id";
         using var reader = select.ExecuteReader();
-        var entries = new Dictionary<string, List<Device>>(StringComparer.Ordinal);
+        var entries = new Dictionary<string, List<Device>>(AssetTag.Comparer);
         while (reader.Read())
         {
             var device = DeviceMapping.Read(reader);
@@ -64,7 +64,7 @@ public sealed partial class RecordStore
             list.Add(device);
         }
 
-        return entries.ToDictionary(kv => kv.Key, kv => new DeviceHistory(kv.Value), StringComparer.Ordinal);
+        return entries.ToDictionary(kv => kv.Key, kv => new DeviceHistory(kv.Value), AssetTag.Comparer);
     }
 
     /// <summary>Every curve table, each as the newest imported file defines it.</summary>

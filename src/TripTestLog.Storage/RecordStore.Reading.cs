@@ -22,27 +22,27 @@ public sealed partial class RecordStore : ITripSource
         "SELECT d.asset_tag, t.tested_at, t.stage, t.pole, t.current_a, t.tripped, t.time_s, t.start, t.ambient_c, t.instrument, t.technician, t.note, "
         + "t.source_file_id, t.source_line, t.found_ir_a, t.found_isd_a, t.found_ii_a, t.found_im_a, t.found_pickup_a, t.found_tms "
         + "FROM devices d CROSS JOIN trip_tests t ON t.device_id = d.id "
-        + "WHERE $tag IS NULL OR d.asset_tag = $tag "
+        + "WHERE $tag IS NULL OR d.asset_tag = $tag COLLATE NOCASE "
         + "ORDER BY d.asset_tag, t.tested_at, t.source_file_id, t.source_line";
 
     /// <summary>Contact readings by device, then test time: found by their (device_id, tested_at) index, as the trips are.</summary>
     internal const string ContactsInDeviceOrder =
         "SELECT d.asset_tag, c.tested_at, c.stage, c.pole, c.resistance_uohm, c.test_current_a, c.temperature_c, c.instrument, c.technician, "
         + "c.source_file_id, c.source_line FROM devices d CROSS JOIN contact_tests c ON c.device_id = d.id "
-        + "WHERE $tag IS NULL OR d.asset_tag = $tag ORDER BY d.asset_tag, c.tested_at, c.source_file_id, c.source_line";
+        + "WHERE $tag IS NULL OR d.asset_tag = $tag COLLATE NOCASE ORDER BY d.asset_tag, c.tested_at, c.source_file_id, c.source_line";
 
     /// <summary>Insulation readings by device, then test time.</summary>
     internal const string InsulationInDeviceOrder =
         "SELECT d.asset_tag, i.tested_at, i.stage, i.path, i.test_voltage_v, i.resistance_mohm, i.over_range, i.temperature_c, i.duration_s, "
         + "i.source_file_id, i.source_line FROM devices d CROSS JOIN insulation_tests i ON i.device_id = d.id "
-        + "WHERE $tag IS NULL OR d.asset_tag = $tag ORDER BY d.asset_tag, i.tested_at, i.source_file_id, i.source_line";
+        + "WHERE $tag IS NULL OR d.asset_tag = $tag COLLATE NOCASE ORDER BY d.asset_tag, i.tested_at, i.source_file_id, i.source_line";
 
     /// <inheritdoc />
     public IEnumerable<DeviceRecords> Devices(AssetTag? only = null, bool withResistance = false)
     {
         using var revisions = TagQuery(
             $"SELECT d.asset_tag, {string.Join(", ", RegisterColumns.Split(", ").Select(c => "r." + c))} "
-            + "FROM device_revisions r JOIN devices d ON d.id = r.device_id WHERE $tag IS NULL OR d.asset_tag = $tag ORDER BY d.asset_tag, r.id", only);
+            + "FROM device_revisions r JOIN devices d ON d.id = r.device_id WHERE $tag IS NULL OR d.asset_tag = $tag COLLATE NOCASE ORDER BY d.asset_tag, r.id", only);
         var files = SourceFileNames();
         var tags = new TagCache();
         using var entries = revisions.ExecuteReader();

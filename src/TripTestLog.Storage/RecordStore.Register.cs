@@ -22,8 +22,8 @@ public sealed partial class RecordStore
         long added = 0, updated = 0, duplicates = 0;
         var seen = new HashSet<Device>();
         var lines = new Dictionary<Device, long>();
-        var touched = new HashSet<string>(StringComparer.Ordinal);
-        var newHere = new HashSet<string>(StringComparer.Ordinal);
+        var touched = new HashSet<string>(AssetTag.Comparer);
+        var newHere = new HashSet<string>(AssetTag.Comparer);
 
         using var insert = Command(transaction,
             $"INSERT INTO devices (asset_tag, {RegisterColumns}, source_file_id, source_line) VALUES ($tag, {RegisterValues}, $source, $line) RETURNING id");
@@ -72,7 +72,7 @@ public sealed partial class RecordStore
         }
 
         using var update = Command(transaction,
-            $"UPDATE devices SET ({RegisterColumns}, source_file_id, source_line) = ({RegisterValues}, $source, $line) WHERE asset_tag=$tag");
+            $"UPDATE devices SET ({RegisterColumns}, source_file_id, source_line) = ({RegisterValues}, $source, $line) WHERE asset_tag = $tag COLLATE NOCASE");
         foreach (var tag in touched)
         {
             var latest = new DeviceHistory(stored[tag].Revisions).Latest;
@@ -92,7 +92,7 @@ public sealed partial class RecordStore
             $"SELECT d.id, d.asset_tag, {string.Join(", ", RegisterColumns.Split(", ").Select(c => "r." + c))} "
             + "FROM device_revisions r JOIN devices d ON d.id = r.device_id ORDER BY r.id");
         using var reader = select.ExecuteReader();
-        var entries = new Dictionary<string, (long Id, List<Device> Revisions)>(StringComparer.Ordinal);
+        var entries = new Dictionary<string, (long Id, List<Device> Revisions)>(AssetTag.Comparer);
         while (reader.Read())
         {
             var device = DeviceMapping.Read(reader, first: 1);

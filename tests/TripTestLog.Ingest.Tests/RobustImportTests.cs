@@ -1,3 +1,4 @@
+using TripTestLog.Domain.Devices;
 using TripTestLog.Application.Import;
 using TripTestLog.Application.Check;
 using Microsoft.Data.Sqlite;
@@ -113,6 +114,22 @@ public sealed class RobustImportTests
 
         Assert.Equal(ImportStatus.AlreadyImported, copy.Status);
         Assert.Equal(first, copy.EarlierFile);
+    }
+
+    [Fact]
+    public void ATagWrittenInOtherCase_IsTheSameDevice_InRecordsAndInTheRegister()
+    {
+        using var temp = new TempFolder();
+        var (store, db) = Open(temp);
+        using var s = store;
+
+        var trips = store.Import(RecordFileReader.Read(temp.Write("trips.csv", Records.Trips.Replace("T-01,", "t-01,", StringComparison.Ordinal)), Records.Today), Now);
+        var register = store.Import(RecordFileReader.Read(temp.Write("register-lower.csv", Records.Register.Replace("T-02,", "t-02,", StringComparison.Ordinal) + "\n"), Records.Today), Now);
+
+        Assert.Equal((ImportStatus.Imported, 0L), (trips.Status, trips.RefusedRows));
+        Assert.Equal((0L, 0L), (register.Added, register.Updated)); // the same entries, in other case: unchanged
+        Assert.Equal(2, Count(db, "SELECT COUNT(*) FROM devices"));
+        Assert.Equal("T-01", store.Trips(AssetTag.Of("t-01"))[0].Tag.Value);
     }
 
     [Fact]

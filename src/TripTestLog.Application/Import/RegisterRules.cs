@@ -12,11 +12,11 @@ internal static class RegisterRules
     /// </summary>
     public static List<RowProblem> Conflicts(ParsedFile file)
     {
-        var first = new Dictionary<(string, DateOnly?), Located<Device>>();
+        var first = new Dictionary<(AssetTag, DateOnly?), Located<Device>>();
         var problems = new List<RowProblem>();
         foreach (var row in file.Devices)
         {
-            var key = (row.Record.Tag.Value, row.Record.SettingsFrom);
+            var key = (row.Record.Tag, row.Record.SettingsFrom);
             if (!first.TryAdd(key, row) && first[key].Record != row.Record)
             {
                 problems.Add(ImportProblems.SameDateTwice(file.Path, row.Line, row.Record.Tag, first[key].Line));

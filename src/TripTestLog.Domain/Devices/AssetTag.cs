@@ -1,8 +1,15 @@
 namespace TripTestLog.Domain.Devices;
 
-/// <summary>The unique key of a device in the register: 1 to 64 printable characters, no surrounding spaces, compared exactly.</summary>
+/// <summary>
+/// The unique key of a device in the register: 1 to 64 printable characters, no surrounding spaces. Tags are compared
+/// without regard to the case of the letters A to Z, as labs mean them (arw-msb-q01 and ARW-MSB-Q01 are one device);
+/// other characters compare exactly, as SQLite's NOCASE does. A tag keeps the spelling it was first registered with.
+/// </summary>
 public readonly record struct AssetTag
 {
+    /// <summary>How tags compare and hash wherever they key a lookup: letters A to Z without regard to case, the rest exactly.</summary>
+    public static StringComparer Comparer { get; } = new TagComparer();
+
     /// <summary>The longest tag accepted.</summary>
     public const int MaxLength = 64;
 
@@ -37,6 +44,31 @@ public readonly record struct AssetTag
         return reason.Length == 0;
     }
 
+    /// <summary>Equal when the tags differ at most in the case of letters A to Z.</summary>
+    public bool Equals(AssetTag other) => Comparer.Equals(Value, other.Value);
+
+    /// <inheritdoc />
+    public override int GetHashCode() => Comparer.GetHashCode(Value ?? "");
+
     /// <inheritdoc />
     public override string ToString() => Value;
+
+    private sealed class TagComparer : StringComparer
+    {
+        public override int Compare(string? x, string? y) => string.CompareOrdinal(Fold(x), Fold(y));
+
+        public override bool Equals(string? x, string? y) => string.Equals(Fold(x), Fold(y), StringComparison.Ordinal);
+
+        public override int GetHashCode(string obj) => string.GetHashCode(Fold(obj), StringComparison.Ordinal);
+
+        // Only a to z fold, so the rule is the same here and in the database.
+        private static string? Fold(string? s) =>
+            s is null || !s.Any(c => c is >= 'a' and <= 'z') ? s : string.Create(s.Length, s, (span, text) =>
+            {
+                for (var i = 0; i < text.Length; i++)
+                {
+                    span[i] = text[i] is >= 'a' and <= 'z' ? (char)(text[i] - 32) : text[i];
+                }
+            });
+    }
 }
