@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using System.Globalization;
 
 using Microsoft.EntityFrameworkCore;

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using TripTestLog.Application.Import;
 using TripTestLog.Application.Check;
 using Microsoft.EntityFrameworkCore;

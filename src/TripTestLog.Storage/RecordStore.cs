@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using TripTestLog.Application.Import;
 using Microsoft.Data.Sqlite;
 using Microsoft.EntityFrameworkCore;
@@ -8,7 +9,7 @@ namespace TripTestLog.Storage;
 /// The SQLite store of devices and measurements. Opening applies any pending migrations (never EnsureCreated), so a
 /// database made by an older version is upgraded in place.
 /// </summary>
-public sealed partial class RecordStore : IDisposable, IImportStore
+public sealed partial class RecordStore : IRecordStore
 {
     private readonly SqliteConnection _connection;
     private readonly TripTestLogContext _context;
@@ -22,6 +23,9 @@ public sealed partial class RecordStore : IDisposable, IImportStore
 
     /// <summary>The database file.</summary>
     public string Path { get; }
+
+    /// <inheritdoc />
+    public string Location => Path;
 
     /// <summary>Opens, creating if need be, the database at <paramref name="path"/> and brings its schema up to date.</summary>
     public static RecordStore Open(string path)

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Application.Import;
 using TripTestLog.Application.Check;

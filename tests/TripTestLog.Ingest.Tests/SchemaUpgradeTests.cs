@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using Microsoft.Data.Sqlite;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Settings;

@@ -1,5 +1,5 @@
+using TripTestLog.Cli.Services;
 using System.CommandLine;
-using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Commands;
 
@@ -38,7 +38,7 @@ internal static class BackupCommand
             return ExitCodes.BadInput;
         }
 
-        using var store = RecordStore.Open(db.FullName);
+        using var store = Stores.Open(db.FullName);
         store.Backup(target.FullName);
         var counts = store.Counts();
         cli.Out.WriteLine($"Backed up {db.FullName} to {target.FullName}: {counts.Files} files, {counts.Devices} devices, "

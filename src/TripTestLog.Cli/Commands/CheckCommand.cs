@@ -6,7 +6,6 @@ using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Verdicts;
-using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Commands;
 
@@ -148,7 +147,7 @@ internal static class CheckCommand
             return Usage(cli, problem!);
         }
 
-        using var store = RecordStore.Open(db.FullName);
+        using var store = Stores.Open(db.FullName);
         if (only is { } tag && !store.Devices(tag).Any())
         {
             return Usage(cli, $"--asset: '{tag}' is not in the device register of {db.FullName}");

@@ -5,7 +5,6 @@ using System.CommandLine;
 using TripTestLog.Cli.Output;
 using TripTestLog.Cli.Services;
 using TripTestLog.Domain.Verdicts;
-using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Commands;
 
@@ -97,7 +96,7 @@ internal static class DemoCommand
         var fleet = new FleetSummary(5);
         string reportPage;
         using (var log = Logging.BesideDatabase(db))
-        using (var store = RecordStore.Open(db.FullName))
+        using (var store = Stores.Open(db.FullName))
         using (var textWriter = new StreamWriter(text))
         using (var jsonWriter = new StreamWriter(json))
         {

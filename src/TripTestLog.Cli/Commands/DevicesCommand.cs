@@ -1,9 +1,9 @@
+using TripTestLog.Cli.Services;
 using System.CommandLine;
 using System.Globalization;
 using System.Text.Json;
 using TripTestLog.Cli.Output;
 using TripTestLog.Domain.Devices;
-using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Commands;
 
@@ -39,7 +39,7 @@ internal static class DevicesCommand
             return ExitCodes.BadInput;
         }
 
-        using var store = RecordStore.Open(db.FullName);
+        using var store = Stores.Open(db.FullName);
         var devices = store.Histories().Values
             .Select(h => (Entry: h.InForceOn(on), Entries: h.Entries.Count))
             .Where(d => site is null || string.Equals(d.Entry.Site, site, StringComparison.OrdinalIgnoreCase))

@@ -1,3 +1,4 @@
+using TripTestLog.Cli.Services;
 using TripTestLog.Domain.Codes;
 using System.CommandLine;
 using TripTestLog.Cli.Output;
@@ -8,7 +9,6 @@ using TripTestLog.Domain.Quantities;
 using TripTestLog.Application.Records;
 using TripTestLog.Domain.Settings;
 using TripTestLog.Ingest;
-using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Commands;
 
@@ -76,7 +76,7 @@ internal static class EnvelopeCommand
                 return Usage(cli, $"--asset: no database at {request.Database.FullName}");
             }
 
-            using var store = RecordStore.Open(request.Database.FullName);
+            using var store = Stores.Open(request.Database.FullName);
             if (!store.Histories().TryGetValue(asset, out var history))
             {
                 return Usage(cli, $"--asset: '{asset}' is not in the device register");

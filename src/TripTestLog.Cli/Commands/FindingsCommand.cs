@@ -1,9 +1,9 @@
+using TripTestLog.Cli.Services;
 using System.CommandLine;
 using TripTestLog.Application.Findings;
 using TripTestLog.Cli.Output;
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Condition;
-using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Commands;
 
@@ -90,7 +90,7 @@ internal static class FindingsCommand
 
     private static int Run(CliContext cli, ConditionOptions.Resolved options, Filter filter, bool json, bool csv, bool failOnFindings)
     {
-        using var store = RecordStore.Open(options.Database.FullName);
+        using var store = Stores.Open(options.Database.FullName);
         if (options.Only is { } tag && !store.Devices(tag).Any())
         {
             cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {options.Database.FullName}");

@@ -1,8 +1,8 @@
+using TripTestLog.Cli.Services;
 using System.CommandLine;
 using System.Globalization;
 using TripTestLog.Application.Findings;
 using TripTestLog.Cli.Output;
-using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Commands;
 
@@ -41,7 +41,7 @@ internal static class FleetCommand
 
     private static int Run(CliContext cli, ConditionOptions.Resolved options, int top, bool json)
     {
-        using var store = RecordStore.Open(options.Database.FullName);
+        using var store = Stores.Open(options.Database.FullName);
         if (options.Only is { } tag && !store.Devices(tag).Any())
         {
             cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {options.Database.FullName}");

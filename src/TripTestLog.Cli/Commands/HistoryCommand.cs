@@ -1,8 +1,8 @@
+using TripTestLog.Cli.Services;
 using System.CommandLine;
 using System.Globalization;
 using TripTestLog.Cli.Output;
 using TripTestLog.Domain.Devices;
-using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Commands;
 
@@ -35,7 +35,7 @@ internal static class HistoryCommand
             return ExitCodes.BadInput;
         }
 
-        using var store = RecordStore.Open(db.FullName);
+        using var store = Stores.Open(db.FullName);
         var tag = AssetTag.Of(asset);
         var revisions = store.Revisions(tag);
         if (revisions.Count == 0)

@@ -4,7 +4,6 @@ using System.CommandLine;
 using TripTestLog.Cli.Output;
 using TripTestLog.Cli.Services;
 using TripTestLog.Ingest;
-using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Commands;
 
@@ -92,7 +91,7 @@ internal static class ImportCommand
         }
 
         using var log = Logging.BesideDatabase(db);
-        using var store = RecordStore.Open(db.FullName);
+        using var store = Stores.Open(db.FullName);
         IReadOnlyList<ImportOutcome> outcomes;
         try
         {

@@ -1,8 +1,8 @@
+using TripTestLog.Cli.Services;
 using System.CommandLine;
 using System.Globalization;
 using TripTestLog.Cli.Output;
 using TripTestLog.Domain.Instruments;
-using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Commands;
 
@@ -32,7 +32,7 @@ internal static class InstrumentsCommand
                 return ExitCodes.BadInput;
             }
 
-            using var store = RecordStore.Open(file.FullName);
+            using var store = Stores.Open(file.FullName);
             var register = store.Instruments();
             var table = new TextTable("Instrument", "Kind", "Serial", "Calibrated", "Due", "State") { Elastic = 5 };
             var lapsed = 0;

@@ -2,7 +2,6 @@ using System.CommandLine;
 using System.Diagnostics;
 using TripTestLog.Cli.Services;
 using TripTestLog.Reports;
-using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Commands;
 
@@ -77,7 +76,7 @@ internal static class ReportCommand
             return ExitCodes.BadInput;
         }
 
-        using var store = RecordStore.Open(options.Database.FullName);
+        using var store = Stores.Open(options.Database.FullName);
         if (options.Only is { } tag && !store.Devices(tag).Any())
         {
             cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {options.Database.FullName}");

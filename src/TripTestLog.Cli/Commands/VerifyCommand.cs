@@ -1,6 +1,7 @@
+using TripTestLog.Application.Stores;
+using TripTestLog.Cli.Services;
 using System.CommandLine;
 using TripTestLog.Cli.Output;
-using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Commands;
 
@@ -27,7 +28,7 @@ internal static class VerifyCommand
             return ExitCodes.BadInput;
         }
 
-        using var store = RecordStore.Open(db.FullName);
+        using var store = Stores.Open(db.FullName);
         var report = store.Verify();
         var table = new TextTable("File", "Records>", "State");
         foreach (var f in report.Files)

@@ -6,7 +6,6 @@ using TripTestLog.Cli.Services;
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Reports;
-using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Commands;
 
@@ -56,7 +55,7 @@ internal static class WorksheetCommand
 
     private static int Run(CliContext cli, ConditionOptions.Resolved options, TestStage stage, string folder)
     {
-        using var store = RecordStore.Open(options.Database.FullName);
+        using var store = Stores.Open(options.Database.FullName);
         var histories = store.Histories();
         var selected = histories.Values
             .Where(h => options.Only is { } tag ? h.Latest.Tag == tag : string.Equals(h.InForceOn(options.AsOf).Site, options.Site, StringComparison.OrdinalIgnoreCase))

@@ -2,7 +2,6 @@ using TripTestLog.Application.Import;
 using TripTestLog.Application.Check;
 using TripTestLog.Application.Records;
 using System.Globalization;
-using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Output;
 

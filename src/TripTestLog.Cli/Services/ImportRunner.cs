@@ -1,9 +1,9 @@
+using TripTestLog.Application.Stores;
 using TripTestLog.Application.Import;
 using TripTestLog.Application.Check;
 using Serilog;
 using TripTestLog.Application.Records;
 using TripTestLog.Ingest;
-using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Services;
 
@@ -23,7 +23,7 @@ internal sealed record ImportFile(string Path, ReadOptions Read)
 /// Imports files and folders: finds the CSV files, reads each, and stores it in its own transaction.
 /// Registers go first so that measurement files in the same run find their devices.
 /// </summary>
-internal sealed class ImportRunner(RecordStore store, ILogger log, CliContext cli)
+internal sealed class ImportRunner(IRecordStore store, ILogger log, CliContext cli)
 {
     /// <summary>
     /// Expands folders to the *.csv files inside them (recursively, sorted, rejects files skipped). A *.profile.json in a

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using System.Reflection;
 using System.Threading.Channels;
 using TripTestLog.Application.Check;
@@ -5,7 +6,6 @@ using TripTestLog.Application.Findings;
 using TripTestLog.Cli.Output;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Reports;
-using TripTestLog.Storage;
 
 namespace TripTestLog.Cli.Services;
 
@@ -33,7 +33,7 @@ internal static class ReportRun
     /// that writes its page and its rows in the data files: judging and writing overlap on two cores, and at most 16
     /// devices wait in between.
     /// </summary>
-    public static (string FleetPage, int DevicePages) Write(RecordStore store, string folder, ReportContext context, Selection selection, CancellationToken cancel,
+    public static (string FleetPage, int DevicePages) Write(IRecordStore store, string folder, ReportContext context, Selection selection, CancellationToken cancel,
         Action<DeviceReport>? alsoEach = null)
     {
         var writer = new ReportWriter(folder, context, selection.DevicePages);

@@ -1,4 +1,4 @@
-namespace TripTestLog.Storage;
+namespace TripTestLog.Application.Stores;
 
 /// <summary>What `verify` found about one imported file.</summary>
 public enum SourceFileState
@@ -23,9 +23,9 @@ public enum SourceFileState
 /// <param name="Records">How many stored records trace to it.</param>
 public sealed record VerifiedFile(string Path, string Sha256, SourceFileState State, long Records);
 
-/// <summary>The result of `verify`: SQLite's own checks and the project's traceability checks.</summary>
-/// <param name="IntegrityErrors">Lines from PRAGMA integrity_check other than "ok".</param>
-/// <param name="ForeignKeyErrors">Rows from PRAGMA foreign_key_check.</param>
+/// <summary>The result of `verify`: the database's own checks and the project's traceability checks.</summary>
+/// <param name="IntegrityErrors">What the database's own integrity check reported (SQLite: PRAGMA integrity_check lines other than "ok").</param>
+/// <param name="ForeignKeyErrors">Broken references the database's own check found (SQLite: PRAGMA foreign_key_check).</param>
 /// <param name="UntracedRecords">Records whose source file row is missing.</param>
 /// <param name="Files">Every imported file.</param>
 public sealed record VerifyReport(IReadOnlyList<string> IntegrityErrors, long ForeignKeyErrors, long UntracedRecords, IReadOnlyList<VerifiedFile> Files)

@@ -1,4 +1,4 @@
-namespace TripTestLog.Storage;
+namespace TripTestLog.Application.Stores;
 
 /// <summary>How many of each thing the store holds.</summary>
 /// <param name="Files">Imported files.</param>

@@ -1,0 +1,19 @@
+namespace TripTestLog.Cli.Tests;
+
+/// <summary>The executable reaches a database only through the store seam, so a second database plugs in at one place.</summary>
+public sealed class StoreSeamTests
+{
+    [Fact]
+    public void OnlyTheStoreOpener_NamesTheSqliteAdapter()
+    {
+        var cli = Path.Combine(Golden.RepositoryRoot(), "src", "TripTestLog.Cli");
+
+        var naming = Directory.EnumerateFiles(cli, "*.cs", SearchOption.AllDirectories)
+            .Where(f => !f.Contains($"{Path.DirectorySeparatorChar}obj{Path.DirectorySeparatorChar}", StringComparison.Ordinal))
+            .Where(f => File.ReadAllText(f).Contains("TripTestLog.Storage", StringComparison.Ordinal))
+            .Select(f => Path.GetRelativePath(cli, f))
+            .ToList();
+
+        Assert.Equal([Path.Combine("Services", "Stores.cs")], naming);
+    }
+}
