@@ -59,6 +59,13 @@ internal sealed class ConditionOptions
         return new Resolved(db, policy.Policy, policy.From, asOf, parse.GetValue(Site), only);
     }
 
+    /// <summary>The date an --as-of option gives, or <paramref name="otherwise"/> when it was not given; false after writing why a value is no date.</summary>
+    public static bool AsOfDate(string? text, DateOnly otherwise, CliContext cli, out DateOnly date)
+    {
+        date = otherwise;
+        return text is null || Date(text, "--as-of", cli, out date);
+    }
+
     /// <summary>Parses a YYYY-MM-DD option value, or writes why not.</summary>
     public static bool Date(string text, string option, CliContext cli, out DateOnly date)
     {

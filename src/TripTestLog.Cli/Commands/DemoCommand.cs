@@ -37,7 +37,7 @@ internal static class DemoCommand
         {
             // The bundled records were written for one date; judging them on it gives the same answer on any machine's clock.
             var date = parse.GetValue(records) is null ? SampleRecordsAsOf : cli.Today;
-            if (parse.GetValue(asOf) is { } text && !ConditionOptions.Date(text, "--as-of", cli, out date))
+            if (!ConditionOptions.AsOfDate(parse.GetValue(asOf), date, cli, out date))
             {
                 return ExitCodes.BadInput;
             }

@@ -39,7 +39,7 @@ internal static class ImportCommand
         command.SetAction(parse =>
         {
             var today = cli.Today;
-            if (parse.GetValue(asOf) is { } text && !ConditionOptions.Date(text, "--as-of", cli, out today))
+            if (!ConditionOptions.AsOfDate(parse.GetValue(asOf), today, cli, out today))
             {
                 return ExitCodes.BadInput;
             }

@@ -20,7 +20,7 @@ internal static class InstrumentsCommand
         command.SetAction(parse =>
         {
             var date = cli.Today;
-            if (parse.GetValue(asOf) is { } text && !ConditionOptions.Date(text, "--as-of", cli, out date))
+            if (!ConditionOptions.AsOfDate(parse.GetValue(asOf), date, cli, out date))
             {
                 return ExitCodes.BadInput;
             }
