@@ -15,6 +15,7 @@ namespace TripTestLog.Benchmarks;
 /// step's peak memory is its own) the raw SQLite insert floor, the project's import, a re-import, the raw read floor and
 /// check with JSON output, and prints rows per second, the ratios to the floors and peak memory.
 /// Usage: dotnet run -c Release --project tests/TripTestLog.Benchmarks -- [--rows 100000,300000,1000000] [--devices 10000] [--files 20] [--work DIR]
+/// With --pairs N, only the import against the insert floor at the largest --rows, N times alternated, and the median ratio.
 /// Diagnostic steps, run one at a time on a fleet written with --step generate: --step NAME --work DIR, where NAME is
 /// floor-schema (the raw insert into the project's own table), parse-only, rows-only, open-only, read-only, judge-only.
 /// </summary>
@@ -33,7 +34,7 @@ internal static class Program
                 return 0;
             }
 
-            return options.Step is { } step ? RunStep(step, options.Work) : RunAll(options);
+            return options.Step is { } step ? RunStep(step, options.Work) : options.Pairs > 0 ? RunPairs(options) : RunAll(options);
         }
         catch (ArgumentException e)
         {
@@ -95,6 +96,42 @@ internal static class Program
         Console.WriteLine("x floor: for import and re-import, rows/s over the insert floor's (higher is better); for check and findings,");
         Console.WriteLine("time over the read floor's (lower is better); for fleet-page and report, time over check's. fleet-page: the");
         Console.WriteLine("fleet page alone; report: the fleet page with the findings and verdicts as CSV and JSON beside it.");
+        return 0;
+    }
+
+    // The import against the insert floor, alternated so that both see the same state of a shared machine, then the median
+    // ratio: on a virtual machine whose speed drifts between runs, one pair says less than several.
+    private static int RunPairs(Options o)
+    {
+        var rows = o.Rows[^1];
+        var work = Path.Combine(o.Work, $"pairs{rows}");
+        if (Directory.Exists(work))
+        {
+            Directory.Delete(work, recursive: true);
+        }
+
+        Console.Error.WriteLine($"writing a fleet of {rows:N0} trip rows in {work} ...");
+        BenchmarkFleet.Write(Path.Combine(work, "records"), o.Devices, rows, o.Files);
+        Console.WriteLine($"TripTestLog import against the insert floor, {rows:N0} rows, {o.Pairs} alternated pairs, {Environment.ProcessorCount} cores, {DateTime.UtcNow:yyyy-MM-dd}");
+        Console.WriteLine("pair  floor s  import s  x floor");
+        var ratios = new List<double>();
+        for (var i = 1; i <= o.Pairs; i++)
+        {
+            foreach (var stale in Directory.GetFiles(work, "*.db*"))
+            {
+                File.Delete(stale);
+            }
+
+            var floor = Child("floor-insert", work);
+            var import = Child("import", work);
+            ratios.Add(floor.Seconds / import.Seconds);
+            Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{i,4}  {floor.Seconds,7:0.00}  {import.Seconds,8:0.00}  {ratios[^1],7:0.00}"));
+        }
+
+        ratios.Sort();
+        var median = ratios.Count % 2 == 1 ? ratios[ratios.Count / 2] : (ratios[ratios.Count / 2 - 1] + ratios[ratios.Count / 2]) / 2;
+        Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"median x floor {median:0.00} (lowest {ratios[0]:0.00}, highest {ratios[^1]:0.00})"));
+        Directory.Delete(work, recursive: true);
         return 0;
     }
 
@@ -309,7 +346,7 @@ internal static class Program
 
     private sealed record StepResult(double Seconds, long Rows, double PeakMb);
 
-    private sealed record Options(IReadOnlyList<long> Rows, int Devices, int Files, string Work, string? Step)
+    private sealed record Options(IReadOnlyList<long> Rows, int Devices, int Files, string Work, string? Step, int Pairs = 0)
     {
         public static Options Parse(string[] args)
         {
@@ -317,6 +354,7 @@ internal static class Program
             int devices = 10_000, files = 20;
             var work = Path.Combine(Path.GetTempPath(), "triptestlog-bench");
             string? step = null;
+            var pairs = 0;
             for (var i = 0; i < args.Length; i++)
             {
                 var value = i + 1 < args.Length ? args[i + 1] : throw new ArgumentException($"{args[i]} needs a value");
@@ -337,14 +375,17 @@ internal static class Program
                     case "--step":
                         step = value;
                         break;
+                    case "--pairs":
+                        pairs = int.TryParse(value, out var n2) && n2 is > 0 and <= 20 ? n2 : throw new ArgumentException("--pairs takes a whole number from 1 to 20");
+                        break;
                     default:
-                        throw new ArgumentException($"unknown option {args[i]}; use --rows, --devices, --files, --work");
+                        throw new ArgumentException($"unknown option {args[i]}; use --rows, --devices, --files, --work, --pairs");
                 }
 
                 i++;
             }
 
-            return new Options(rows, devices, files, work, step);
+            return new Options(rows, devices, files, work, step, pairs);
         }
     }
 }

@@ -48,5 +48,12 @@ public sealed class ReportEscapingTests : IDisposable
         // The device page's file name keeps only safe characters; the link to it is escaped.
         var device = Assert.Single(Directory.GetFiles(Path.Combine(_folder, "report", "devices")));
         Assert.Matches("^_b_X-01-[0-9a-f]{8}\\.html$", Path.GetFileName(device));
+
+        // The worksheet shows the same register fields (tag, site, location) and escapes them alike.
+        Assert.Equal(0, CliRun.Run("worksheet", "--db", db, "--asset", tag, "--out", Path.Combine(_folder, "sheet")).Exit);
+        var sheet = File.ReadAllText(Path.Combine(_folder, "sheet", "worksheet.html"));
+        Assert.DoesNotContain("<script", sheet, StringComparison.OrdinalIgnoreCase);
+        Assert.DoesNotContain("<img", sheet, StringComparison.OrdinalIgnoreCase);
+        Assert.Contains("&lt;b&gt;X-01", sheet);
     }
 }
