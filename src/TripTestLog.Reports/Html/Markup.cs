@@ -36,11 +36,11 @@ internal static class Markup
     /// <summary>A link target for a page name, escaped for an attribute.</summary>
     public static string Href(string folder, string page) => H($"{folder}/{Uri.EscapeDataString(page)}");
 
-    /// <summary>A cell left empty for a person to write in, boxed on screen and in print.</summary>
-    public const string EntryCell = "\u0000entry";
-
-    /// <summary>Writes a table of <paramref name="rows"/> whose cells are already escaped markup (or <see cref="EntryCell"/>).</summary>
-    public static void Table(StringBuilder html, string[] headers, IEnumerable<string[]> rows, string? cssClass = null)
+    /// <summary>
+    /// Writes a table of <paramref name="rows"/> whose cells are already escaped markup; a null cell is left empty for a
+    /// person to write in, boxed on screen and in print.
+    /// </summary>
+    public static void Table(StringBuilder html, string[] headers, IEnumerable<string?[]> rows, string? cssClass = null)
     {
         html.Append(cssClass is null ? "<table>" : $"<table class=\"{cssClass}\">").Append("<thead><tr>");
         foreach (var h in headers)
@@ -56,7 +56,7 @@ internal static class Markup
             html.Append("<tr>");
             foreach (var cell in row)
             {
-                html.Append(ReferenceEquals(cell, EntryCell) || cell == EntryCell ? "<td class=\"entry\"></td>" : $"<td>{cell}</td>");
+                html.Append(cell is null ? "<td class=\"entry\"></td>" : $"<td>{cell}</td>");
             }
 
             html.Append("</tr>");

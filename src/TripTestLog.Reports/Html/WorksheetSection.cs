@@ -39,7 +39,7 @@ internal static class WorksheetSection
 
         html.Append("<h3>Contact resistance</h3>\n");
         Table(html, ["Row", "Pole", "Test current (DC)", "Limit", "Basis", "Reading", "Temperature"],
-            sheet.Contacts.Select((c, i) => new[]
+            sheet.Contacts.Select((c, i) => new string?[]
             {
                 H(DeviceWorksheet.RowLabel('C', i)), H(c.Pole.Code), H(c.TestCurrent.ToString()),
                 c.Limit is { } l ? H(l.ToString()) : "<span class=\"none\">none in the register</span>", Small(c.Basis), Entry, Entry,
@@ -47,7 +47,7 @@ internal static class WorksheetSection
 
         html.Append("<h3>Insulation resistance</h3>\n");
         Table(html, ["Row", "Path", "Test voltage (DC)", "Minimum", "Reading after", "Basis", "Reading", "Temperature"],
-            sheet.Insulation.Select((p, i) => new[]
+            sheet.Insulation.Select((p, i) => new string?[]
             {
                 H(DeviceWorksheet.RowLabel('I', i)), H(p.Path), p.TestVoltage is { } v ? H(v.ToString()) : "<span class=\"none\">from the maker</span>",
                 p.Minimum is { } m ? H(m.ToString()) : "<span class=\"none\">from the maker</span>", H(PlannedTrip.Duration(PlannedInsulation.Duration)),
@@ -59,9 +59,10 @@ internal static class WorksheetSection
         return html.ToString();
     }
 
-    private const string Entry = EntryCell;
+    // A box to write a result in.
+    private const string? Entry = null;
 
-    private static string[] Trip(DeviceWorksheet sheet, PlannedTrip t, int index)
+    private static string?[] Trip(DeviceWorksheet sheet, PlannedTrip t, int index)
     {
         var start = t.Conditions.Start == StartCondition.Warm
             ? t.StraightAfterPrevious ? $"warm: straight after {DeviceWorksheet.RowLabel('T', index - 1)}, no cooling" : "warm"
