@@ -13,6 +13,21 @@ internal static class CommonOptions
         HelpName = "PATH",
     };
 
+    /// <summary>
+    /// True, after writing the one sentence every reading command gives, when <paramref name="db"/> does not exist (only
+    /// import creates a database).
+    /// </summary>
+    public static bool Missing(CliContext cli, FileInfo db)
+    {
+        if (db.Exists)
+        {
+            return false;
+        }
+
+        cli.Error.WriteLine($"error: no database at {db.FullName}; import records first (triptestlog import PATH --db {db.FullName})");
+        return true;
+    }
+
     /// <summary>The database file of a command that reads an existing database and refuses a missing one.</summary>
     public static Option<FileInfo> ExistingDatabase() => new("--db")
     {

@@ -50,11 +50,12 @@ public sealed partial class RecordStore
         // Each path is hashed once. A file whose content now is that of a later import of the same path was corrected
         // through the tool (import --replace, or a fixed rejects file), which is no fault.
         var rows = _context.SourceFiles.AsNoTracking().OrderBy(f => f.Id).ToList();
-        var current = rows.Select(f => f.FullPath).Distinct(StringComparer.Ordinal).ToDictionary(p => p, HashOf, StringComparer.Ordinal);
+        var byPath = rows.ToLookup(f => f.FullPath, StringComparer.Ordinal);
+        var current = byPath.ToDictionary(g => g.Key, g => HashOf(g.Key), StringComparer.Ordinal);
         var files = rows.Select(f => new VerifiedFile(f.FileName, f.Sha256,
             current[f.FullPath] is not { } now ? SourceFileState.NotAtHand
             : now == f.Sha256 ? SourceFileState.Matches
-            : rows.Any(later => later.Id > f.Id && later.FullPath == f.FullPath && later.Sha256 == now) ? SourceFileState.Superseded
+            : byPath[f.FullPath].Any(later => later.Id > f.Id && later.Sha256 == now) ? SourceFileState.Superseded
             : SourceFileState.Changed,
             counts.GetValueOrDefault(f.Id))).ToList();
         return new VerifyReport(integrity, foreignKeys, untraced, files);

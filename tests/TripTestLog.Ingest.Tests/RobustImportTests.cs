@@ -134,6 +134,22 @@ public sealed class RobustImportTests
     }
 
     [Fact]
+    public void ATagWrittenSpreadsheetSafe_ReadsAsTheTagItself()
+    {
+        // A CSV this tool writes puts an apostrophe before a tag that starts like a formula, so a spreadsheet shows it as
+        // text (OWASP, "CSV Injection"); importing that file again must find the device.
+        using var temp = new TempFolder();
+        var (store, db) = Open(temp);
+        using var s = store;
+        store.Import(RecordFileReader.Read(temp.Write("register-2.csv", Records.Register.Replace("T-01,", "=T-01,", StringComparison.Ordinal) + "\n"), Records.Today), Now);
+
+        var trips = store.Import(RecordFileReader.Read(temp.Write("trips.csv", Records.Trips.Replace("T-01,", "'=T-01,", StringComparison.Ordinal)), Records.Today), Now);
+
+        Assert.Equal((ImportStatus.Imported, 0L), (trips.Status, trips.RefusedRows));
+        Assert.Equal(Sql.Count(db, "SELECT COUNT(*) FROM trip_tests"), store.Trips(AssetTag.Of("=T-01")).Count);
+    }
+
+    [Fact]
     public void TheSameFileUnderAnotherPath_IsNotACorrection()
     {
         using var temp = new TempFolder();

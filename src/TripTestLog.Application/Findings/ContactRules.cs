@@ -138,8 +138,7 @@ internal static class ContactRules
 
     private static void TestCurrent(Device device, List<PoleResult> session, FindingLedger ledger, FindingPolicy policy)
     {
-        var large = device.RatedCurrent.Value >= policy.ContactLargeRating;
-        var least = large ? policy.ContactCurrentLargeAmperes : policy.ContactCurrentSmallAmperes;
+        var (least, setting) = policy.ContactTestCurrent(device.RatedCurrent.Value);
         var low = session.Where(p => p.TestCurrent < least).ToList();
         if (low.Count == 0)
         {
@@ -155,7 +154,7 @@ internal static class ContactRules
             Pole = null,
             Value = new Reading(current, ReadingUnit.Amperes),
             Limit = new Reading(least, ReadingUnit.Amperes),
-            Policy = PolicyFile.Setting(policy, large ? "contact_current_large_a" : "contact_current_small_a"),
+            Policy = PolicyFile.Setting(policy, setting),
             RestsOn = [.. low.SelectMany(p => p.Sources)],
         });
     }

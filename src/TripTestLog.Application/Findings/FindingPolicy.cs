@@ -57,6 +57,14 @@ public sealed record FindingPolicy
     /// <summary>The rating from which the larger test current applies (common practice: 100 A).</summary>
     public double ContactLargeRating { get; init; } = 100;
 
+    /// <summary>
+    /// The DC test current for a contact resistance test on a breaker rated <paramref name="rated"/> A, and the policy
+    /// setting it comes from: the larger current at and above <see cref="ContactLargeRating"/>, else the smaller.
+    /// </summary>
+    public (double Amperes, string Setting) ContactTestCurrent(double rated) => rated >= ContactLargeRating
+        ? (ContactCurrentLargeAmperes, "contact_current_large_a")
+        : (ContactCurrentSmallAmperes, "contact_current_small_a");
+
     /// <summary>insulation-below-minimum: the table of minimums (default: the ANSI/NETA maintenance table).</summary>
     public InsulationTable InsulationTable { get; init; } = InsulationTable.NetaMaintenance;
 

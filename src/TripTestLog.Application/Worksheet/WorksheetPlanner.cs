@@ -31,9 +31,8 @@ public static class WorksheetPlanner
 
     private static List<PlannedContact> Contacts(Device device, FindingPolicy policy)
     {
-        var large = device.RatedCurrent.Value >= policy.ContactLargeRating;
-        var current = Amperes.Of(large ? policy.ContactCurrentLargeAmperes : policy.ContactCurrentSmallAmperes);
-        var setting = large ? "contact_current_large_a" : "contact_current_small_a";
+        var (amperes, setting) = policy.ContactTestCurrent(device.RatedCurrent.Value);
+        var current = Amperes.Of(amperes);
         var basis = Invariant($"test current: lab policy {setting} (common practice from makers' maintenance guides) for a {device.RatedCurrent} breaker; ")
             + (device.ContactLimit is { } limit ? $"limit {limit} from the maker's data in the register" : "no limit in the register: the reading is trended against the device's own history and its poles");
         return Enumerable.Range(1, device.Poles)

@@ -20,9 +20,8 @@ internal static class BackupCommand
 
     private static int Run(CliContext cli, FileInfo target, FileInfo db)
     {
-        if (!db.Exists)
+        if (CommonOptions.Missing(cli, db))
         {
-            cli.Error.WriteLine($"error: no database at {db.FullName}");
             return ExitCodes.BadInput;
         }
 

@@ -125,9 +125,9 @@ internal static class CheckCommand
 
     private static int Run(CliContext cli, FileInfo db, string? asset, CheckFilter filter, string format, bool failOnFindings, bool requireRegistered, FileInfo? policyFile)
     {
-        if (!db.Exists)
+        if (CommonOptions.Missing(cli, db))
         {
-            return Usage(cli, $"no database at {db.FullName}; import records first (triptestlog import PATH --db {db.FullName})");
+            return ExitCodes.BadInput;
         }
 
         AssetTag? only = null;

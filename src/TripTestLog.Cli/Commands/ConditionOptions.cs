@@ -29,13 +29,7 @@ internal sealed class ConditionOptions
     public Resolved? Resolve(ParseResult parse, CliContext cli)
     {
         var db = parse.GetValue(Database)!;
-        if (!db.Exists)
-        {
-            return Fail(cli, $"no database at {db.FullName}; import records first (triptestlog import PATH --db {db.FullName})");
-        }
-
-        var asOf = cli.Today;
-        if (parse.GetValue(AsOf) is { } text && !Date(text, "--as-of", cli, out asOf))
+        if (CommonOptions.Missing(cli, db) || !AsOfDate(parse.GetValue(AsOf), cli.Today, cli, out var asOf))
         {
             return null;
         }

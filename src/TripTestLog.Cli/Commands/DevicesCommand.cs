@@ -33,9 +33,8 @@ internal static class DevicesCommand
 
     private static int Run(CliContext cli, FileInfo db, string? site, DateOnly on, bool json, bool wide)
     {
-        if (!db.Exists)
+        if (CommonOptions.Missing(cli, db))
         {
-            cli.Error.WriteLine($"error: no database at {db.FullName}; import a register first (triptestlog import PATH --db {db.FullName})");
             return ExitCodes.BadInput;
         }
 

@@ -71,9 +71,9 @@ internal static class EnvelopeCommand
         string title;
         if (request.Asset is { } asset)
         {
-            if (!request.Database.Exists)
+            if (CommonOptions.Missing(cli, request.Database))
             {
-                return Usage(cli, $"--asset: no database at {request.Database.FullName}");
+                return ExitCodes.BadInput;
             }
 
             using var store = Stores.Open(request.Database.FullName);

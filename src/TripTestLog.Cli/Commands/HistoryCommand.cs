@@ -23,9 +23,8 @@ internal static class HistoryCommand
 
     private static int Run(CliContext cli, FileInfo db, string asset)
     {
-        if (!db.Exists)
+        if (CommonOptions.Missing(cli, db))
         {
-            cli.Error.WriteLine($"error: no database at {db.FullName}; import records first (triptestlog import PATH --db {db.FullName})");
             return ExitCodes.BadInput;
         }
 

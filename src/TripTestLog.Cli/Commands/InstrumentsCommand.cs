@@ -26,9 +26,8 @@ internal static class InstrumentsCommand
             }
 
             var file = parse.GetValue(db)!;
-            if (!file.Exists)
+            if (CommonOptions.Missing(cli, file))
             {
-                cli.Error.WriteLine($"error: no database at {file.FullName}; import an instrument register first (triptestlog import PATH --db {file.FullName})");
                 return ExitCodes.BadInput;
             }
 

@@ -22,9 +22,8 @@ internal static class VerifyCommand
 
     private static int Run(CliContext cli, FileInfo db, int width)
     {
-        if (!db.Exists)
+        if (CommonOptions.Missing(cli, db))
         {
-            cli.Error.WriteLine($"error: no database at {db.FullName}");
             return ExitCodes.BadInput;
         }
 

@@ -16,7 +16,7 @@ internal sealed record ImportFile(string Path, ReadOptions Read)
     /// How records cite the file: its path relative to the folder given to import (alder-ridge/2026-trip-tests.csv), or
     /// for a file given by itself, the path as given. Always with '/' separators.
     /// </summary>
-    public string Name { get; init; } = Path.Replace('\\', '/');
+    public string Name { get; init; } = Path.Replace(System.IO.Path.DirectorySeparatorChar, '/');
 }
 
 /// <summary>
@@ -50,7 +50,7 @@ internal sealed class ImportRunner(IRecordStore store, ILogger log, CliContext c
                 {
                     files.Add(new ImportFile(file, baseOptions.Profile is null ? baseOptions with { Profile = ProfileFor(file) } : baseOptions)
                     {
-                        Name = System.IO.Path.GetRelativePath(path, file).Replace('\\', '/'),
+                        Name = System.IO.Path.GetRelativePath(path, file).Replace(System.IO.Path.DirectorySeparatorChar, '/'),
                     });
                 }
             }
