@@ -54,7 +54,7 @@ internal static class CliApp
     // Every run against a database leaves one line in the log beside it: who ran what, and how it ended.
     private static void LogRun(ParseResult parse, string[] args, int exit, TimeSpan took)
     {
-        if (parse.Errors.Count > 0 || parse.CommandResult.Command.Options.FirstOrDefault(o => o.Name == "--db") is not Option<FileInfo> option
+        if (parse.Errors.Count > 0 || parse.CommandResult.Command.Options.FirstOrDefault(o => o.Name == "--db") is not Option<Services.StoreAddress> option
             || parse.GetValue(option) is not { Exists: true } db)
         {
             return;
@@ -76,12 +76,12 @@ internal static class CliApp
     // The innermost message on one line: what failed, in the words of the layer that knew.
     private static string Plain(Exception e)
     {
-        while (e.InnerException is { } inner)
+        while (e is not Storage.Postgres.StoreUnavailableException && e.InnerException is { } inner)
         {
             e = inner;
         }
 
-        var message = e.Message.ReplaceLineEndings(" ").Trim();
-        return e is Microsoft.Data.Sqlite.SqliteException ? $"the database could not be used ({message})" : message;
+        var message = (e is Npgsql.PostgresException p ? p.MessageText : e.Message).ReplaceLineEndings(" ").Trim();
+        return e is Microsoft.Data.Sqlite.SqliteException or Npgsql.NpgsqlException ? $"the database could not be used ({message})" : message;
     }
 }

@@ -6,9 +6,9 @@ namespace TripTestLog.Cli;
 /// <summary>The log file beside the database: everything a later reader needs to trace an import, nothing on the console.</summary>
 internal static class Logging
 {
-    public static Logger BesideDatabase(FileInfo database)
+    public static Logger BesideDatabase(Services.StoreAddress database)
     {
-        var folder = database.Directory?.FullName ?? Directory.GetCurrentDirectory();
+        var folder = database.Folder;
         Directory.CreateDirectory(folder);
         return new LoggerConfiguration()
             .MinimumLevel.Information()

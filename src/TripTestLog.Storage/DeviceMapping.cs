@@ -41,6 +41,24 @@ internal static class DeviceMapping
         AmbientTable = r.IsDBNull(first + 17) ? null : r.GetString(first + 17),
     };
 
+    /// <summary>Register entries ordered by asset tag, then age (tag first, then <see cref="Columns"/>), as each device's history.</summary>
+    public static IReadOnlyDictionary<string, DeviceHistory> Histories(DbDataReader r)
+    {
+        var entries = new Dictionary<string, List<Device>>(AssetTag.Comparer);
+        while (r.Read())
+        {
+            var device = DeviceMapping.Read(r);
+            if (!entries.TryGetValue(device.Tag.Value, out var list))
+            {
+                entries[device.Tag.Value] = list = [];
+            }
+
+            list.Add(device);
+        }
+
+        return entries.ToDictionary(kv => kv.Key, kv => new DeviceHistory(kv.Value), AssetTag.Comparer);
+    }
+
     /// <summary>The values for <see cref="Parameters"/>, in order, with their names.</summary>
     public static IEnumerable<(string Name, object Value)> Values(Device d)
     {

@@ -47,17 +47,7 @@ public sealed partial class RecordStore
             }
         }
 
-        // Each path is hashed once. A file whose content now is that of a later import of the same path was corrected
-        // through the tool (import --replace, or a fixed rejects file), which is no fault.
-        var rows = _context.SourceFiles.AsNoTracking().OrderBy(f => f.Id).ToList();
-        var byPath = rows.ToLookup(f => f.FullPath, StringComparer.Ordinal);
-        var current = byPath.ToDictionary(g => g.Key, g => HashOf(g.Key), StringComparer.Ordinal);
-        var files = rows.Select(f => new VerifiedFile(f.FileName, f.Sha256,
-            current[f.FullPath] is not { } now ? SourceFileState.NotAtHand
-            : now == f.Sha256 ? SourceFileState.Matches
-            : byPath[f.FullPath].Any(later => later.Id > f.Id && later.Sha256 == now) ? SourceFileState.Superseded
-            : SourceFileState.Changed,
-            counts.GetValueOrDefault(f.Id))).ToList();
+        var files = ImportedFiles.Check(_context.SourceFiles.AsNoTracking().OrderBy(f => f.Id).ToList(), counts);
         return new VerifyReport(integrity, foreignKeys, untraced, files);
     }
 
@@ -73,17 +63,6 @@ public sealed partial class RecordStore
         using var target = StoreOptions.Connect(destination);
         target.Open();
         _connection.BackupDatabase(target);
-    }
-
-    private static string? HashOf(string path)
-    {
-        if (!File.Exists(path))
-        {
-            return null;
-        }
-
-        using var stream = File.OpenRead(path);
-        return Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(stream));
     }
 
     private List<string> Lines(string sql)

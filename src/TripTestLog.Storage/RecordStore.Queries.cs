@@ -53,50 +53,19 @@ public sealed partial class RecordStore
             $"SELECT d.asset_tag, {string.Join(", ", RegisterColumns.Split(", ").Select(c => "r." + c))} "
             + "FROM device_revisions r JOIN devices d ON d.id = r.device_id ORDER BY d.asset_tag, r.id";
         using var reader = select.ExecuteReader();
-        var entries = new Dictionary<string, List<Device>>(AssetTag.Comparer);
-        while (reader.Read())
-        {
-            var device = DeviceMapping.Read(reader);
-            if (!entries.TryGetValue(device.Tag.Value, out var list))
-            {
-                entries[device.Tag.Value] = list = [];
-            }
-
-            list.Add(device);
-        }
-
-        return entries.ToDictionary(kv => kv.Key, kv => new DeviceHistory(kv.Value), AssetTag.Comparer);
+        return DeviceMapping.Histories(reader);
     }
 
     /// <summary>Every curve table, each as the newest imported file defines it.</summary>
     public IReadOnlyDictionary<string, CurveTable> CurveTables()
     {
-        var rows = _context.CurveTableRows.AsNoTracking().ToList();
-        return rows.GroupBy(r => r.TableName, StringComparer.Ordinal).ToDictionary(
-            g => g.Key,
-            g =>
-            {
-                var newest = g.Max(r => r.SourceFileId);
-                return CurveTable.Create(g.Key, g.Where(r => r.SourceFileId == newest).OrderBy(r => r.SourceLine)
-                    .Select(r => new CurveTablePoint(CurrentMultiple.Of(r.Multiple), Seconds.Of(r.MinS), r.MaxS is { } m ? Seconds.Of(m) : null)).ToList());
-            },
-            StringComparer.Ordinal);
+        return StoredTables.Curves(_context.CurveTableRows.AsNoTracking().AsEnumerable());
     }
 
     /// <summary>Every ambient table, each as the newest imported file defines it.</summary>
     public IReadOnlyDictionary<string, AmbientTable> AmbientTables()
     {
-        var rows = _context.AmbientTableRows.AsNoTracking().ToList();
-        return rows.GroupBy(r => r.TableName, StringComparer.Ordinal).ToDictionary(
-            g => g.Key,
-            g =>
-            {
-                var newest = g.Max(r => r.SourceFileId);
-                return AmbientTable.Create(g.Key, g.Where(r => r.SourceFileId == newest).OrderBy(r => r.SourceLine)
-                    .Select(r => new AmbientPoint(Celsius.Of(r.AmbientC), r.CurrentFactor)).ToList());
-            },
-            StringComparer.Ordinal);
+        return StoredTables.Ambients(_context.AmbientTableRows.AsNoTracking().AsEnumerable());
     }
 
-    private static Amperes? A(System.Data.Common.DbDataReader r, int i) => r.IsDBNull(i) ? null : Amperes.Of(r.GetDouble(i));
 }

@@ -44,27 +44,14 @@ public sealed partial class RecordStore : ITripSource
             $"SELECT d.asset_tag, {string.Join(", ", RegisterColumns.Split(", ").Select(c => "r." + c))} "
             + "FROM device_revisions r JOIN devices d ON d.id = r.device_id WHERE $tag IS NULL OR d.asset_tag = $tag COLLATE NOCASE ORDER BY d.asset_tag, r.id", only);
         var files = SourceFileNames();
-        var tags = new TagCache();
+        var rows = new StoredRows(files, r => TestedAt.Parse(r.GetString(1)));
         using var entries = revisions.ExecuteReader();
-        using var trips = new TagStream<StoredTrip>(TagQuery(TripsInDeviceOrder, only), r => ReadTrip(r, tags, files));
-        using var contacts = withResistance ? new TagStream<StoredMeasurement<ContactMeasurement>>(TagQuery(ContactsInDeviceOrder, only), r => ReadContact(r, tags, files)) : null;
-        using var insulation = withResistance ? new TagStream<StoredMeasurement<InsulationMeasurement>>(TagQuery(InsulationInDeviceOrder, only), r => ReadInsulation(r, tags, files)) : null;
-        var moreEntries = entries.Read();
-        while (moreEntries)
+        using var trips = new TagStream<StoredTrip>(TagQuery(TripsInDeviceOrder, only), rows.Trip);
+        using var contacts = withResistance ? new TagStream<StoredMeasurement<ContactMeasurement>>(TagQuery(ContactsInDeviceOrder, only), rows.Contact) : null;
+        using var insulation = withResistance ? new TagStream<StoredMeasurement<InsulationMeasurement>>(TagQuery(InsulationInDeviceOrder, only), rows.Insulation) : null;
+        foreach (var device in DeviceWalk.Merge(entries, trips, contacts, insulation))
         {
-            var tag = entries.GetString(0);
-            var history = new List<Device>();
-            while (moreEntries && string.Equals(entries.GetString(0), tag, StringComparison.Ordinal))
-            {
-                history.Add(DeviceMapping.Read(entries));
-                moreEntries = entries.Read();
-            }
-
-            yield return new DeviceRecords(new DeviceHistory(history), trips.Take(tag))
-            {
-                Contacts = contacts?.Take(tag) ?? [],
-                Insulation = insulation?.Take(tag) ?? [],
-            };
+            yield return device;
         }
     }
 
@@ -88,75 +75,5 @@ public sealed partial class RecordStore : ITripSource
         }
 
         return names;
-    }
-
-    private static StoredTrip ReadTrip(SqliteDataReader r, TagCache tags, Dictionary<long, string> files)
-    {
-        var assetTag = tags.Of(r.GetString(0));
-        var time = Seconds.Of(r.GetDouble(6));
-        var anyFound = false;
-        for (var i = 14; i <= 19 && !anyFound; i++)
-        {
-            anyFound = !r.IsDBNull(i);
-        }
-
-        var found = anyFound ? new SettingsFound(A(r, 14), A(r, 15), A(r, 16), A(r, 17), A(r, 18), r.IsDBNull(19) ? null : r.GetDouble(19)) : null;
-        var measurement = new TripMeasurement(
-            assetTag,
-            TestedAt.Parse(r.GetString(1)),
-            Codes.Stage(r.GetString(2)),
-            Pole.Parse(r.GetString(3)),
-            Amperes.Of(r.GetDouble(4)),
-            r.GetBoolean(5) ? TripOutcome.TrippedAfter(time) : TripOutcome.HeldFor(time),
-            Codes.Start(r.GetString(7)),
-            r.IsDBNull(8) ? null : Celsius.Of(r.GetDouble(8)),
-            r.GetString(9),
-            r.GetString(10),
-            r.GetString(11))
-        {
-            FoundSettings = found is { IsEmpty: false } ? found : null,
-        };
-        return new StoredTrip(assetTag, measurement, files[r.GetInt64(12)], r.GetInt64(13));
-    }
-
-    private static StoredMeasurement<ContactMeasurement> ReadContact(SqliteDataReader r, TagCache tags, Dictionary<long, string> files) =>
-        new(new ContactMeasurement(
-            tags.Of(r.GetString(0)),
-            TestedAt.Parse(r.GetString(1)),
-            Codes.Stage(r.GetString(2)),
-            Pole.Parse(r.GetString(3)),
-            MicroOhms.Of(r.GetDouble(4)),
-            Amperes.Of(r.GetDouble(5)),
-            r.IsDBNull(6) ? null : Celsius.Of(r.GetDouble(6)),
-            r.GetString(7),
-            r.GetString(8)), files[r.GetInt64(9)], r.GetInt64(10));
-
-    private static StoredMeasurement<InsulationMeasurement> ReadInsulation(SqliteDataReader r, TagCache tags, Dictionary<long, string> files) =>
-        new(new InsulationMeasurement(
-            tags.Of(r.GetString(0)),
-            TestedAt.Parse(r.GetString(1)),
-            Codes.Stage(r.GetString(2)),
-            r.GetString(3),
-            Volts.Of(r.GetDouble(4)),
-            new InsulationReading(MegaOhms.Of(r.GetDouble(5)), r.GetBoolean(6)),
-            r.IsDBNull(7) ? null : Celsius.Of(r.GetDouble(7)),
-            r.IsDBNull(8) ? null : Seconds.Of(r.GetDouble(8))), files[r.GetInt64(9)], r.GetInt64(10));
-
-    // A device's tests share one tag value instead of each allocating its own.
-    private sealed class TagCache
-    {
-        private string? _text;
-        private AssetTag _tag;
-
-        public AssetTag Of(string text)
-        {
-            if (!string.Equals(text, _text, StringComparison.Ordinal))
-            {
-                _text = text;
-                _tag = AssetTag.Of(text);
-            }
-
-            return _tag;
-        }
     }
 }

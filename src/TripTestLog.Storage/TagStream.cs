@@ -1,4 +1,4 @@
-using Microsoft.Data.Sqlite;
+using System.Data.Common;
 
 namespace TripTestLog.Storage;
 
@@ -9,12 +9,12 @@ namespace TripTestLog.Storage;
 /// <typeparam name="T">What a row becomes.</typeparam>
 internal sealed class TagStream<T> : IDisposable
 {
-    private readonly SqliteCommand _command;
-    private readonly SqliteDataReader _reader;
-    private readonly Func<SqliteDataReader, T> _read;
+    private readonly DbCommand _command;
+    private readonly DbDataReader _reader;
+    private readonly Func<DbDataReader, T> _read;
     private bool _more;
 
-    public TagStream(SqliteCommand command, Func<SqliteDataReader, T> read)
+    public TagStream(DbCommand command, Func<DbDataReader, T> read)
     {
         _command = command;
         _reader = command.ExecuteReader();

@@ -38,14 +38,12 @@ internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> op
         {
             e.ToTable("devices");
             e.HasIndex(x => x.AssetTag).IsUnique();
-            e.Property(x => x.SettingsJson).HasDefaultValue("");
             e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
         });
         modelBuilder.Entity<DeviceRevisionRow>(e =>
         {
             e.ToTable("device_revisions");
             e.HasIndex(x => x.DeviceId);
-            e.Property(x => x.SettingsJson).HasDefaultValue("");
             e.HasOne<DeviceRow>().WithMany().HasForeignKey(x => x.DeviceId).OnDelete(DeleteBehavior.Restrict);
             e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
         });
@@ -108,6 +106,17 @@ internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> op
             e.HasIndex(x => x.Fingerprint).IsUnique();
             e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
         });
+
+        if (Database.ProviderName == ServerColumnTypes.Provider)
+        {
+            ServerColumnTypes.Apply(modelBuilder);
+        }
+        else
+        {
+            // SQLite rows written before settings were stored had none.
+            modelBuilder.Entity<DeviceRow>().Property(x => x.SettingsJson).HasDefaultValue("");
+            modelBuilder.Entity<DeviceRevisionRow>().Property(x => x.SettingsJson).HasDefaultValue("");
+        }
 
         foreach (var entity in modelBuilder.Model.GetEntityTypes())
         {

@@ -30,6 +30,12 @@ public sealed record VerifiedFile(string Path, string Sha256, SourceFileState St
 /// <param name="Files">Every imported file.</param>
 public sealed record VerifyReport(IReadOnlyList<string> IntegrityErrors, long ForeignKeyErrors, long UntracedRecords, IReadOnlyList<VerifiedFile> Files)
 {
+    /// <summary>
+    /// The database's own page-level check as the report names it, or null when the store leaves that check to the
+    /// server's administrator (a server database's own tools run it, not this one).
+    /// </summary>
+    public string? IntegrityCheck { get; init; } = "SQLite integrity check";
+
     /// <summary>True when nothing is wrong (files not at hand are not faults).</summary>
     public bool Sound => IntegrityErrors.Count == 0 && ForeignKeyErrors == 0 && UntracedRecords == 0 && Files.All(f => f.State != SourceFileState.Changed);
 }

@@ -18,7 +18,7 @@ internal static class BackupCommand
         return command;
     }
 
-    private static int Run(CliContext cli, FileInfo target, FileInfo db)
+    private static int Run(CliContext cli, FileInfo target, StoreAddress db)
     {
         if (CommonOptions.Missing(cli, db))
         {
@@ -37,10 +37,10 @@ internal static class BackupCommand
             return ExitCodes.BadInput;
         }
 
-        using var store = Stores.Open(db.FullName);
+        using var store = Stores.Open(db);
         store.Backup(target.FullName);
         var counts = store.Counts();
-        cli.Out.WriteLine($"Backed up {db.FullName} to {target.FullName}: {counts.Files} files, {counts.Devices} devices, "
+        cli.Out.WriteLine($"Backed up {db.Display} to {target.FullName}: {counts.Files} files, {counts.Devices} devices, "
             + $"{counts.TripTests} trip tests, {counts.ContactTests} contact and {counts.InsulationTests} insulation readings.");
         return ExitCodes.Ok;
     }

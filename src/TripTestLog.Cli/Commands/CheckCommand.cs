@@ -123,7 +123,7 @@ internal static class CheckCommand
         return new CheckFilter(site, from, to, verdicts, stage, family);
     }
 
-    private static int Run(CliContext cli, FileInfo db, string? asset, CheckFilter filter, string format, bool failOnFindings, bool requireRegistered, FileInfo? policyFile)
+    private static int Run(CliContext cli, StoreAddress db, string? asset, CheckFilter filter, string format, bool failOnFindings, bool requireRegistered, FileInfo? policyFile)
     {
         if (CommonOptions.Missing(cli, db))
         {
@@ -147,10 +147,10 @@ internal static class CheckCommand
             return Usage(cli, problem!);
         }
 
-        using var store = Stores.Open(db.FullName);
+        using var store = Stores.Open(db);
         if (only is { } tag && !store.Devices(tag).Any())
         {
-            return Usage(cli, $"--asset: '{tag}' is not in the device register of {db.FullName}");
+            return Usage(cli, $"--asset: '{tag}' is not in the device register of {db.Display}");
         }
 
         var counts = new VerdictCounts();

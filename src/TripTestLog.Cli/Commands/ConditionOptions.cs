@@ -9,7 +9,7 @@ namespace TripTestLog.Cli.Commands;
 /// <summary>The options `findings` and `fleet` share: the database, the lab policy, the date judged, and which devices.</summary>
 internal sealed class ConditionOptions
 {
-    public Option<FileInfo> Database { get; } = CommonOptions.ExistingDatabase();
+    public Option<StoreAddress> Database { get; } = CommonOptions.ExistingDatabase();
 
     public Option<FileInfo?> Policy { get; } = new("--policy")
     {
@@ -79,7 +79,7 @@ internal sealed class ConditionOptions
     }
 
     /// <summary>The checked values.</summary>
-    public sealed record Resolved(FileInfo Database, FindingPolicy Policy, string PolicyFrom, DateOnly AsOf, string? Site, AssetTag? Only)
+    public sealed record Resolved(StoreAddress Database, FindingPolicy Policy, string PolicyFrom, DateOnly AsOf, string? Site, AssetTag? Only)
     {
         public bool AtSite(DeviceCondition device) => Site is null || string.Equals(device.Device.Site, Site, StringComparison.OrdinalIgnoreCase);
     }

@@ -60,8 +60,8 @@ internal static class DemoCommand
         }
 
         output.Create();
-        var db = new FileInfo(Path.Combine(output.FullName, "triptestlog.db"));
-        foreach (var stale in new[] { db.FullName, db.FullName + "-wal", db.FullName + "-shm" })
+        var db = StoreAddress.OfFile(Path.Combine(output.FullName, "triptestlog.db"));
+        foreach (var stale in new[] { db.Display, db.Display + "-wal", db.Display + "-shm" })
         {
             File.Delete(stale);
         }
@@ -96,7 +96,7 @@ internal static class DemoCommand
         var fleet = new FleetSummary(5);
         string reportPage;
         using (var log = Logging.BesideDatabase(db))
-        using (var store = Stores.Open(db.FullName))
+        using (var store = Stores.Open(db))
         using (var textWriter = new StreamWriter(text))
         using (var jsonWriter = new StreamWriter(json))
         {
@@ -114,7 +114,7 @@ internal static class DemoCommand
             using var findingsJsonWriter = new StreamWriter(findingsJson);
             var findingsTable = new FindingText(findingsTextWriter, asOf.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture), policy.From);
             using var findingsRows = new FindingJson(findingsJsonWriter);
-            var context = new Reports.ReportContext(db.FullName, ReportRun.ToolVersion, asOf, cli.Clock.GetUtcNow(), policy.Policy, policy.From, store.Instruments());
+            var context = new Reports.ReportContext(db.Display, ReportRun.ToolVersion, asOf, cli.Clock.GetUtcNow(), policy.Policy, policy.From, store.Instruments());
             reportPage = ReportRun.Write(store, Path.Combine(output.FullName, "report"), context, new ReportRun.Selection(null, null, null, null, true), cli.Cancel,
                 device =>
                 {
@@ -136,16 +136,16 @@ internal static class DemoCommand
         FleetText.Write(cli.Out, fleet, asOf.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture), policy.From);
         cli.Out.WriteLine();
         cli.Out.WriteLine("Results:");
-        cli.Out.WriteLine($"  database   {db.FullName}");
+        cli.Out.WriteLine($"  database   {db.Display}");
         cli.Out.WriteLine($"  verdicts   {text}");
         cli.Out.WriteLine($"  json       {json}");
         cli.Out.WriteLine($"  findings   {findingsText}");
         cli.Out.WriteLine($"  json       {findingsJson}");
         cli.Out.WriteLine($"  log        {ImportCommand.LogPath(db)}");
         cli.Out.WriteLine($"  report     {reportPage}");
-        cli.Out.WriteLine($"Next: triptestlog check --db {db.FullName}");
-        cli.Out.WriteLine($"      triptestlog findings --db {db.FullName}");
-        cli.Out.WriteLine($"      triptestlog fleet --db {db.FullName}");
+        cli.Out.WriteLine($"Next: triptestlog check --db {db.Display}");
+        cli.Out.WriteLine($"      triptestlog findings --db {db.Display}");
+        cli.Out.WriteLine($"      triptestlog fleet --db {db.Display}");
         return outcomes.Any(o => o.Status == ImportStatus.Refused) ? ExitCodes.BadInput : ExitCodes.Ok;
     }
 

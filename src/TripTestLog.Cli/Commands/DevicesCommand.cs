@@ -31,14 +31,14 @@ internal static class DevicesCommand
         return command;
     }
 
-    private static int Run(CliContext cli, FileInfo db, string? site, DateOnly on, bool json, bool wide)
+    private static int Run(CliContext cli, StoreAddress db, string? site, DateOnly on, bool json, bool wide)
     {
         if (CommonOptions.Missing(cli, db))
         {
             return ExitCodes.BadInput;
         }
 
-        using var store = Stores.Open(db.FullName);
+        using var store = Stores.Open(db);
         var devices = store.Histories().Values
             .Select(h => (Entry: h.InForceOn(on), Entries: h.Entries.Count))
             .Where(d => site is null || string.Equals(d.Entry.Site, site, StringComparison.OrdinalIgnoreCase))

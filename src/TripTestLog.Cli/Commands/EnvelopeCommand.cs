@@ -76,7 +76,7 @@ internal static class EnvelopeCommand
                 return ExitCodes.BadInput;
             }
 
-            using var store = Stores.Open(request.Database.FullName);
+            using var store = Stores.Open(request.Database);
             if (!store.Histories().TryGetValue(asset, out var history))
             {
                 return Usage(cli, $"--asset: '{asset}' is not in the device register");

@@ -1,4 +1,5 @@
 using System.CommandLine;
+using TripTestLog.Cli.Services;
 using TripTestLog.Domain.Devices;
 
 namespace TripTestLog.Cli.Commands;
@@ -7,7 +8,7 @@ namespace TripTestLog.Cli.Commands;
 internal sealed record EnvelopeRequest(
     DeviceFamily? Family, string FamilyText, string? Curve, double? Rated, double? Ir, double? Tr, double? TrReference, double? Isd, double? Tsd, bool I2t,
     double? Ii, double? Im, double? Pickup, double? Tms, double? HighSet, double? HighSetDelay, double? OpeningTime, FileInfo? Table,
-    string? Asset, FileInfo Database, bool Csv, string Start, bool OnePole, int? Poles, string? Supply, bool ThermalMemory, string? On,
+    string? Asset, StoreAddress Database, bool Csv, string Start, bool OnePole, int? Poles, string? Supply, bool ThermalMemory, string? On,
     IReadOnlyList<string> Given);
 
 /// <summary>The options of `envelope`, declared once and read into an <see cref="EnvelopeRequest"/>.</summary>
@@ -37,7 +38,7 @@ internal sealed class EnvelopeOptions
     private readonly Option<double?> _opening = new("--opening-time") { Description = "relay-idmt: breaker opening time added to the latest time, s", HelpName = "SECONDS" };
     private readonly Option<FileInfo?> _table = new("--table") { Description = "curve-table: a curve table CSV file", HelpName = "FILE" };
     private readonly Option<string?> _asset = new("--asset") { Description = "Draw a registered device's band instead, from --db", HelpName = "TAG" };
-    private readonly Option<FileInfo> _db = CommonOptions.ExistingDatabase();
+    private readonly Option<StoreAddress> _db = CommonOptions.ExistingDatabase();
     private readonly Option<bool> _csv = new("--csv") { Description = "Write CSV: multiple,current_a,min_s,max_s,min_source,max_source,point,typical_min_s,typical_max_s" };
 
     private readonly Option<string> _start = new("--start")

@@ -90,10 +90,10 @@ internal static class FindingsCommand
 
     private static int Run(CliContext cli, ConditionOptions.Resolved options, Filter filter, bool json, bool csv, bool failOnFindings)
     {
-        using var store = Stores.Open(options.Database.FullName);
+        using var store = Stores.Open(options.Database);
         if (options.Only is { } tag && !store.Devices(tag).Any())
         {
-            cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {options.Database.FullName}");
+            cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {options.Database.Display}");
             return ExitCodes.BadInput;
         }
 

@@ -21,7 +21,7 @@ internal static class HistoryCommand
         return command;
     }
 
-    private static int Run(CliContext cli, FileInfo db, string asset)
+    private static int Run(CliContext cli, StoreAddress db, string asset)
     {
         if (CommonOptions.Missing(cli, db))
         {
@@ -34,12 +34,12 @@ internal static class HistoryCommand
             return ExitCodes.BadInput;
         }
 
-        using var store = Stores.Open(db.FullName);
+        using var store = Stores.Open(db);
         var tag = AssetTag.Of(asset);
         var revisions = store.Revisions(tag);
         if (revisions.Count == 0)
         {
-            cli.Error.WriteLine($"error: --asset: '{asset}' is not in the device register of {db.FullName}");
+            cli.Error.WriteLine($"error: --asset: '{asset}' is not in the device register of {db.Display}");
             return ExitCodes.BadInput;
         }
 

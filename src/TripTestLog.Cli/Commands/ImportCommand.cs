@@ -51,7 +51,7 @@ internal static class ImportCommand
         return command;
     }
 
-    private static int Run(CliContext cli, string[] paths, FileInfo db, ImportOptions options, FileInfo? profileFile, string? delimiter, string? decimalMark, int? maxMb,
+    private static int Run(CliContext cli, string[] paths, StoreAddress db, ImportOptions options, FileInfo? profileFile, string? delimiter, string? decimalMark, int? maxMb,
         DateOnly today, int width)
     {
         if (delimiter is { Length: not 1 } || decimalMark is not (null or "." or ",") || maxMb is < 1 or > 100_000)
@@ -91,7 +91,7 @@ internal static class ImportCommand
         }
 
         using var log = Logging.BesideDatabase(db);
-        using var store = Stores.Open(db.FullName);
+        using var store = Stores.Open(db);
         IReadOnlyList<ImportOutcome> outcomes;
         try
         {
@@ -110,5 +110,5 @@ internal static class ImportCommand
             : ExitCodes.Ok;
     }
 
-    public static string LogPath(FileInfo db) => Path.Combine(db.Directory?.FullName ?? ".", "triptestlog.log");
+    public static string LogPath(StoreAddress db) => Path.Combine(db.Folder, "triptestlog.log");
 }

@@ -31,7 +31,7 @@ internal static class InstrumentsCommand
                 return ExitCodes.BadInput;
             }
 
-            using var store = Stores.Open(file.FullName);
+            using var store = Stores.Open(file);
             var register = store.Instruments();
             var table = new TextTable("Instrument", "Kind", "Serial", "Calibrated", "Due", "State") { Elastic = 5 };
             var lapsed = 0;

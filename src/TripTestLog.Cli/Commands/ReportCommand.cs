@@ -58,7 +58,7 @@ internal static class ReportCommand
                 return ExitCodes.BadInput;
             }
 
-            var folder = parse.GetValue(output)?.FullName ?? Path.Combine(options.Database.DirectoryName ?? ".", "report");
+            var folder = parse.GetValue(output)?.FullName ?? Path.Combine(options.Database.Folder, "report");
             return Run(cli, options, folder, new ReportRun.Selection(options.Site, options.Only, first, last, parse.GetValue(pages) == "all"));
         });
         return command;
@@ -76,14 +76,14 @@ internal static class ReportCommand
             return ExitCodes.BadInput;
         }
 
-        using var store = Stores.Open(options.Database.FullName);
+        using var store = Stores.Open(options.Database);
         if (options.Only is { } tag && !store.Devices(tag).Any())
         {
-            cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {options.Database.FullName}");
+            cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {options.Database.Display}");
             return ExitCodes.BadInput;
         }
 
-        var context = new ReportContext(options.Database.FullName, ReportRun.ToolVersion, options.AsOf, cli.Clock.GetUtcNow(), options.Policy,
+        var context = new ReportContext(options.Database.Display, ReportRun.ToolVersion, options.AsOf, cli.Clock.GetUtcNow(), options.Policy,
             options.PolicyFrom, store.Instruments());
         var clock = Stopwatch.StartNew();
         try

@@ -5,14 +5,14 @@ using TripTestLog.Cli.Output;
 
 namespace TripTestLog.Cli.Commands;
 
-/// <summary>`verify`: SQLite's integrity check plus the project's own traceability checks.</summary>
+/// <summary>`verify`: the database's own integrity check (SQLite) plus the project's own traceability checks.</summary>
 internal static class VerifyCommand
 {
     public static Command Create(CliContext cli)
     {
         var db = CommonOptions.ExistingDatabase();
         var wide = new Option<bool>("--wide") { Description = "Show file names whole, however wide" };
-        var command = new Command("verify", "Check the database: SQLite integrity and foreign keys, every record traced to an imported file, and each file still at hand unchanged")
+        var command = new Command("verify", "Check the database: its integrity and references, every record traced to an imported file, and each file still at hand unchanged")
         {
             db, wide,
         };
@@ -20,14 +20,14 @@ internal static class VerifyCommand
         return command;
     }
 
-    private static int Run(CliContext cli, FileInfo db, int width)
+    private static int Run(CliContext cli, StoreAddress db, int width)
     {
         if (CommonOptions.Missing(cli, db))
         {
             return ExitCodes.BadInput;
         }
 
-        using var store = Stores.Open(db.FullName);
+        using var store = Stores.Open(db);
         var report = store.Verify();
         var table = new TextTable("File", "Records>", "State");
         foreach (var f in report.Files)
@@ -43,7 +43,9 @@ internal static class VerifyCommand
 
         table.WriteTo(cli.Out, width);
         cli.Out.WriteLine();
-        cli.Out.WriteLine($"SQLite integrity check: {(report.IntegrityErrors.Count == 0 ? "ok" : string.Join("; ", report.IntegrityErrors))}");
+        cli.Out.WriteLine(report.IntegrityCheck is { } check
+            ? $"{check}: {(report.IntegrityErrors.Count == 0 ? "ok" : string.Join("; ", report.IntegrityErrors))}"
+            : "Page checks: left to the server's administrator (PostgreSQL's amcheck and data checksums)");
         cli.Out.WriteLine($"Foreign keys: {(report.ForeignKeyErrors == 0 ? "ok" : $"{report.ForeignKeyErrors} broken references")}");
         cli.Out.WriteLine($"Records without an imported file: {report.UntracedRecords}");
         var changed = report.Files.Count(f => f.State == SourceFileState.Changed);

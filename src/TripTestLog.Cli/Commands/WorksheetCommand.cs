@@ -47,7 +47,7 @@ internal static class WorksheetCommand
                 return ExitCodes.BadInput;
             }
 
-            var folder = parse.GetValue(output)?.FullName ?? Path.Combine(options.Database.DirectoryName ?? ".", "worksheet");
+            var folder = parse.GetValue(output)?.FullName ?? Path.Combine(options.Database.Folder, "worksheet");
             return Run(cli, options, testStage, folder);
         });
         return command;
@@ -55,7 +55,7 @@ internal static class WorksheetCommand
 
     private static int Run(CliContext cli, ConditionOptions.Resolved options, TestStage stage, string folder)
     {
-        using var store = Stores.Open(options.Database.FullName);
+        using var store = Stores.Open(options.Database);
         var histories = store.Histories();
         var selected = histories.Values
             .Where(h => options.Only is { } tag ? h.Latest.Tag == tag : string.Equals(h.InForceOn(options.AsOf).Site, options.Site, StringComparison.OrdinalIgnoreCase))
@@ -64,7 +64,7 @@ internal static class WorksheetCommand
         if (selected.Count == 0)
         {
             cli.Error.WriteLine(options.Only is { } t
-                ? $"error: --asset: '{t}' is not in the device register of {options.Database.FullName}"
+                ? $"error: --asset: '{t}' is not in the device register of {options.Database.Display}"
                 : $"error: --site: no device in the register is at '{options.Site}'");
             return ExitCodes.BadInput;
         }
@@ -96,7 +96,7 @@ internal static class WorksheetCommand
                 (trips, contacts, insulation) = (trips + plan.Trips.Count, contacts + plan.Contacts.Count, insulation + plan.Insulation.Count);
             }
 
-            sheet.Finish($"TripTestLog {ReportRun.ToolVersion}; database {options.Database.FullName}; policy: {options.PolicyFrom}; "
+            sheet.Finish($"TripTestLog {ReportRun.ToolVersion}; database {options.Database.Display}; policy: {options.PolicyFrom}; "
                 + $"written {cli.Clock.GetUtcNow():yyyy-MM-dd HH:mm} UTC");
         }
 

@@ -9,9 +9,9 @@ namespace TripTestLog.Cli.Services;
 internal static class PolicyLoader
 {
     /// <summary>The policy and where it came from; null with <paramref name="problem"/> set when the file cannot be used.</summary>
-    public static (FindingPolicy Policy, string From)? Load(FileInfo? explicitFile, FileInfo database, out string? problem)
+    public static (FindingPolicy Policy, string From)? Load(FileInfo? explicitFile, StoreAddress database, out string? problem)
     {
-        var file = explicitFile ?? new FileInfo(Path.Combine(database.DirectoryName ?? ".", PolicyFile.BesideDatabase));
+        var file = explicitFile ?? new FileInfo(Path.Combine(database.Folder, PolicyFile.BesideDatabase));
         if (explicitFile is null && !file.Exists)
         {
             problem = null;

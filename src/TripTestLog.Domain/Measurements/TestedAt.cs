@@ -39,6 +39,13 @@ public readonly record struct TestedAt : IComparable<TestedAt>
     /// <summary>A local date and time with no offset.</summary>
     public static TestedAt At(DateTime local) => new(DateTime.SpecifyKind(local, DateTimeKind.Unspecified), null, true);
 
+    /// <summary>A test time from its parts, as a store that keeps them apart gives them back.</summary>
+    /// <param name="local">The date and time as written.</param>
+    /// <param name="offset">The UTC offset, when the record gave one.</param>
+    /// <param name="hasTime">Whether the record gave a time of day; without one, only the date of <paramref name="local"/> counts.</param>
+    public static TestedAt Of(DateTime local, TimeSpan? offset, bool hasTime) =>
+        hasTime ? new(DateTime.SpecifyKind(local, DateTimeKind.Unspecified), offset, true) : OnDate(DateOnly.FromDateTime(local));
+
     /// <summary>Reads an ISO 8601 date or date-time; returns false for anything else.</summary>
     public static bool TryParse(string text, out TestedAt value)
     {

@@ -1,0 +1,47 @@
+using TripTestLog.Storage.Postgres;
+
+namespace TripTestLog.Cli.Services;
+
+/// <summary>
+/// What `--db` names: a SQLite database file (the default, triptestlog.db), or a PostgreSQL server by URL or
+/// connection string. Without `--db`, the environment variable TRIPTESTLOG_DB names it. The log and the lab policy
+/// live in <see cref="Folder"/>: beside a database file, or the current folder for a server.
+/// </summary>
+internal sealed class StoreAddress
+{
+    /// <summary>The environment variable that names the database when `--db` is not given.</summary>
+    public const string Variable = "TRIPTESTLOG_DB";
+
+    private StoreAddress(FileInfo? file, ServerAddress? server)
+    {
+        File = file;
+        Server = server;
+    }
+
+    /// <summary>The database file, when the store is SQLite.</summary>
+    public FileInfo? File { get; }
+
+    /// <summary>The server, when the store is PostgreSQL.</summary>
+    public ServerAddress? Server { get; }
+
+    /// <summary>How messages and logs name the store: the file's full path, or the server without any password.</summary>
+    public string Display => File?.FullName ?? Server!.Display;
+
+    /// <summary>Where the log and the lab policy are: the database file's folder, or the current folder for a server.</summary>
+    public string Folder => File?.DirectoryName ?? Directory.GetCurrentDirectory();
+
+    /// <summary>True for a file that exists, and always for a server (opening it creates the schema).</summary>
+    public bool Exists => File?.Exists ?? true;
+
+    /// <summary>A database file.</summary>
+    public static StoreAddress OfFile(string path) => new(new FileInfo(path), null);
+
+    /// <summary>Reads what `--db` (or the environment) says; a server address from a command line may not hold a password.</summary>
+    /// <exception cref="FormatException">When a server address cannot be read; the message says what to fix.</exception>
+    public static StoreAddress Parse(string text, bool fromCommandLine) =>
+        ServerAddress.Names(text) ? new(null, ServerAddress.Parse(text, fromCommandLine)) : OfFile(text);
+
+    /// <summary>The store named by TRIPTESTLOG_DB, else triptestlog.db in the current folder.</summary>
+    public static StoreAddress Default() =>
+        Environment.GetEnvironmentVariable(Variable) is { Length: > 0 } named ? Parse(named, fromCommandLine: false) : OfFile("triptestlog.db");
+}

@@ -1,0 +1,97 @@
+using Microsoft.EntityFrameworkCore;
+using Npgsql;
+using NpgsqlTypes;
+using TripTestLog.Application.Stores;
+
+namespace TripTestLog.Storage.Postgres;
+
+/// <summary>
+/// The store on a PostgreSQL server, shared by many machines: the same model and contract as the SQLite file, with the
+/// server's column types. Opening applies pending migrations, one process at a time. Imports run side by side; each
+/// file's final write is one transaction under a server-wide lock, so two copies of one file end as one.
+/// </summary>
+public sealed partial class PostgresRecordStore : IRecordStore
+{
+    // Advisory lock keys: one for schema changes, one for the final write of every import. Any two distinct numbers do;
+    // these spell "TTLmigr" and "TTLimpt" so they are recognisable in pg_locks.
+    private const long MigrationLock = 0x54544C6D696772;
+    private const long ImportLock = 0x54544C696D7074;
+
+    private readonly NpgsqlDataSource _source;
+    private readonly NpgsqlConnection _connection;
+
+    private PostgresRecordStore(ServerAddress address, NpgsqlDataSource source, NpgsqlConnection connection)
+    {
+        Location = address.Display;
+        _source = source;
+        _connection = connection;
+    }
+
+    /// <inheritdoc />
+    public string Location { get; }
+
+    /// <summary>Connects to the server and brings the schema up to date.</summary>
+    /// <exception cref="StoreUnavailableException">When the server cannot be reached or refuses the login: the message says which.</exception>
+    public static PostgresRecordStore Open(ServerAddress address)
+    {
+        ArgumentNullException.ThrowIfNull(address);
+        var source = NpgsqlDataSource.Create(address.Builder);
+        NpgsqlConnection? connection = null;
+        try
+        {
+            connection = source.OpenConnection();
+            Execute(connection, $"SELECT pg_advisory_lock({MigrationLock})");
+            try
+            {
+                using var context = new TripTestLogContext(ServerStoreOptions.For(connection));
+                context.Database.Migrate();
+            }
+            finally
+            {
+                Execute(connection, $"SELECT pg_advisory_unlock({MigrationLock})");
+            }
+
+            return new PostgresRecordStore(address, source, connection);
+        }
+        catch (Exception e) when (e is NpgsqlException or TimeoutException)
+        {
+            connection?.Dispose();
+            source.Dispose();
+            throw new StoreUnavailableException($"the database server {address.Display} could not be used ({Plain(e)})", e);
+        }
+    }
+
+    /// <summary>The migrations applied to this database, oldest first.</summary>
+    public IReadOnlyList<string> AppliedMigrations()
+    {
+        using var context = new TripTestLogContext(ServerStoreOptions.For(_connection));
+        return context.Database.GetAppliedMigrations().ToList();
+    }
+
+    /// <inheritdoc />
+    public void Dispose()
+    {
+        _connection.Dispose();
+        _source.Dispose();
+    }
+
+    internal NpgsqlCommand Command(string sql, NpgsqlTransaction? transaction = null) => new(sql, _connection, transaction);
+
+    /// <summary>A new connection of the same server, for a reader that runs beside another.</summary>
+    internal NpgsqlConnection Connect() => _source.OpenConnection();
+
+    internal static NpgsqlParameter Text(string name, object? value) =>
+        new(name, NpgsqlDbType.Text) { Value = value ?? DBNull.Value };
+
+    private static void Execute(NpgsqlConnection connection, string sql)
+    {
+        using var command = new NpgsqlCommand(sql, connection);
+        command.ExecuteNonQuery();
+    }
+
+    private static string Plain(Exception e) => e switch
+    {
+        PostgresException p => p.MessageText,
+        _ => (e.InnerException ?? e).Message.ReplaceLineEndings(" ").Trim().TrimEnd('.'),
+    };
+}
