@@ -2,6 +2,7 @@ using TripTestLog.Application.Check;
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Verdicts;
 using TripTestLog.Storage;
+using TripTestLog.Ingest.Tests.Stores;
 
 namespace TripTestLog.Ingest.Tests;
 
@@ -10,11 +11,13 @@ public sealed class CheckPipelineTests
 {
     private static readonly DateTimeOffset Now = new(2026, 12, 1, 9, 0, 0, TimeSpan.Zero);
 
-    [Fact]
-    public void AFailureAndALapsedInstrument_AreTypedFindings_ThatNameTheirRecords()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void AFailureAndALapsedInstrument_AreTypedFindings_ThatNameTheirRecords(Provider provider)
     {
         using var temp = new TempFolder();
-        using var store = RecordStore.Open(temp.Database);
+        using var db = TestDatabase.Create(provider, temp.Path);
+        using var store = db.Open();
         store.Import(temp.Write("register.csv", Records.Register), Now);
         store.Import(temp.Write("instruments.csv", "instrument,kind,serial,calibrated_on,calibration_due\nINJ-1,primary injection set,PI-0042,2023-01-10,2024-01-09\n"), Now);
 
@@ -36,11 +39,13 @@ public sealed class CheckPipelineTests
         Assert.Equal("trip-out-of-band", TextCodes.FindingKind.Of(outOfBand.Kind));
     }
 
-    [Fact]
-    public void OneDeviceOnly_IsReadWhenAsked_AndAnUnknownTagGivesNothing()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void OneDeviceOnly_IsReadWhenAsked_AndAnUnknownTagGivesNothing(Provider provider)
     {
         using var temp = new TempFolder();
-        using var store = RecordStore.Open(temp.Database);
+        using var db = TestDatabase.Create(provider, temp.Path);
+        using var store = db.Open();
         store.Import(temp.Write("register.csv", Records.Register), Now);
         store.Import(temp.Write("trips.csv", Records.Trips), Now);
 

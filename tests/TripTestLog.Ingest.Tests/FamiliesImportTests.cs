@@ -1,8 +1,10 @@
+using TripTestLog.Application.Stores;
 using TripTestLog.Application.Import;
 using TripTestLog.Application.Check;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Settings;
 using TripTestLog.Storage;
+using TripTestLog.Ingest.Tests.Stores;
 
 namespace TripTestLog.Ingest.Tests;
 
@@ -21,13 +23,15 @@ public sealed class FamiliesImportTests
         M-1,S,L,iec60898,C,16,1,230,,,,,,,,,,,,,,,
         """;
 
-    private static ImportOutcome Import(RecordStore store, string path) => store.Import(RecordFileReader.Read(path, Records.Today), Now);
+    private static ImportOutcome Import(IRecordStore store, string path) => store.Import(RecordFileReader.Read(path, Records.Today), Now);
 
-    [Fact]
-    public void EveryFamily_IsRegisteredWithItsSettings_AndHistory()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void EveryFamily_IsRegisteredWithItsSettings_AndHistory(Provider provider)
     {
         using var temp = new TempFolder();
-        using var store = RecordStore.Open(temp.Database);
+        using var db = TestDatabase.Create(provider, temp.Path);
+        using var store = db.Open();
 
         var outcome = Import(store, temp.Write("register.csv", Register));
         var histories = store.Histories();
@@ -48,11 +52,13 @@ public sealed class FamiliesImportTests
         Assert.Equal(TripCurve.C, Assert.IsType<Iec60898Settings>(histories["M-1"].Latest.Settings).Curve);
     }
 
-    [Fact]
-    public void ReimportingTheSameRegisterContent_AddsNoRevision()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void ReimportingTheSameRegisterContent_AddsNoRevision(Provider provider)
     {
         using var temp = new TempFolder();
-        using var store = RecordStore.Open(temp.Database);
+        using var db = TestDatabase.Create(provider, temp.Path);
+        using var store = db.Open();
         Import(store, temp.Write("register.csv", Register));
 
         var again = Import(store, temp.Write("register-copy.csv", Register + "\n"));
@@ -88,12 +94,14 @@ public sealed class FamiliesImportTests
         E-3,S,L,iec60947-electronic,,630,3,400,,400,10,yes
         """;
 
-    [Fact]
-    public void DcBreakers_Rcbos_AndThermalMemory_AreRegistered_AndStoredAsRead()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void DcBreakers_Rcbos_AndThermalMemory_AreRegistered_AndStoredAsRead(Provider provider)
     {
         // IEC 60898-2 (d.c.), IEC 61009-1 (RCBO) and an electronic unit with a thermal image, read back from the database.
         using var temp = new TempFolder();
-        using var store = RecordStore.Open(temp.Database);
+        using var db = TestDatabase.Create(provider, temp.Path);
+        using var store = db.Open();
 
         var outcome = Import(store, temp.Write("register.csv", MiniatureFamilies));
         var again = Import(store, temp.Write("register-again.csv", MiniatureFamilies + "\n"));
@@ -122,11 +130,13 @@ public sealed class FamiliesImportTests
         Assert.Empty(parsed.Devices);
     }
 
-    [Fact]
-    public void TwoEntriesForOneDeviceWithTheSameDate_RefuseTheFile()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void TwoEntriesForOneDeviceWithTheSameDate_RefuseTheFile(Provider provider)
     {
         using var temp = new TempFolder();
-        using var store = RecordStore.Open(temp.Database);
+        using var db = TestDatabase.Create(provider, temp.Path);
+        using var store = db.Open();
 
         var outcome = Import(store, temp.Write("register.csv", Register + "\nE-1,S,L,iec60947-electronic,,630,3,400,2023-02-01,450,10,3000,0.2,yes,6000,,,,,,,,\n"));
 
@@ -134,11 +144,13 @@ public sealed class FamiliesImportTests
         Assert.Contains(outcome.Problems, p => p.Line == 8 && p.Reason.Contains("same settings_from", StringComparison.Ordinal));
     }
 
-    [Fact]
-    public void CurveAndAmbientTables_AreStored_AndTheNewestFileDefinesATable()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void CurveAndAmbientTables_AreStored_AndTheNewestFileDefinesATable(Provider provider)
     {
         using var temp = new TempFolder();
-        using var store = RecordStore.Open(temp.Database);
+        using var db = TestDatabase.Create(provider, temp.Path);
+        using var store = db.Open();
 
         Import(store, temp.Write("curves-1.csv", "table,multiple,min_s,max_s\nSPECIAL,1.5,60,3600\nSPECIAL,3,4,120\n"));
         Import(store, temp.Write("curves-2.csv", "table,multiple,min_s,max_s\nSPECIAL,1.5,50,3000\nSPECIAL,3,4,120\nSPECIAL,10,0,0.1\n"));
@@ -162,11 +174,13 @@ public sealed class FamiliesImportTests
         Assert.Contains("minimum time must not rise", problem.Reason);
     }
 
-    [Fact]
-    public void SettingsFoundOnATripRecord_AreStoredAndReadBack()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void SettingsFoundOnATripRecord_AreStoredAndReadBack(Provider provider)
     {
         using var temp = new TempFolder();
-        using var store = RecordStore.Open(temp.Database);
+        using var db = TestDatabase.Create(provider, temp.Path);
+        using var store = db.Open();
         Import(store, temp.Write("register.csv", Register));
 
         Import(store, temp.Write("trips.csv", "asset_tag,tested_at,stage,pole,current_a,trip_time_s,start,ir_a\nE-1,2025-03-10,as-found,all,1500,28.1,cold,420\n"));

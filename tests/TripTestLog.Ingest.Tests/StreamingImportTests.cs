@@ -3,6 +3,7 @@ using System.Text;
 using Microsoft.Data.Sqlite;
 using TripTestLog.Application.Import;
 using TripTestLog.Storage;
+using TripTestLog.Ingest.Tests.Stores;
 
 namespace TripTestLog.Ingest.Tests;
 
@@ -28,11 +29,13 @@ public sealed class StreamingImportTests
 
     private static long Count(string db, string sql) => Sql.Count(db, sql);
 
-    [Fact]
-    public void AStrictFileWithOneBadRowNearItsEnd_StoresNothing_AndNamesTheRow()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void AStrictFileWithOneBadRowNearItsEnd_StoresNothing_AndNamesTheRow(Provider provider)
     {
         using var temp = new TempFolder();
-        using (var store = RecordStore.Open(temp.Database))
+        using var db = TestDatabase.Create(provider, temp.Path);
+        using (var store = db.Open())
         {
             store.Import(temp.Write("register.csv", Records.Register), Now);
             var path = BigTripFile(temp, 30_000, badLine: 29_500);
@@ -44,15 +47,17 @@ public sealed class StreamingImportTests
             Assert.Equal((29_500L, "current_a"), (problem.Line, problem.Column));
         }
 
-        Assert.Equal(0, Count(temp.Database, "SELECT COUNT(*) FROM trip_tests"));
-        Assert.Equal(1, Count(temp.Database, "SELECT COUNT(*) FROM source_files"));
+        Assert.Equal(0, db.Count("SELECT COUNT(*) FROM trip_tests"));
+        Assert.Equal(1, db.Count("SELECT COUNT(*) FROM source_files"));
     }
 
-    [Fact]
-    public void AFileIsHashedWhileItIsRead_AndTheHashIsTheFilesOwn()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void AFileIsHashedWhileItIsRead_AndTheHashIsTheFilesOwn(Provider provider)
     {
         using var temp = new TempFolder();
-        using var store = RecordStore.Open(temp.Database);
+        using var db = TestDatabase.Create(provider, temp.Path);
+        using var store = db.Open();
         store.Import(temp.Write("register.csv", Records.Register), Now);
         var path = BigTripFile(temp, 5_000, badLine: null);
 
@@ -66,11 +71,13 @@ public sealed class StreamingImportTests
         Assert.Equal(FileHash.Sha256(path), file.Summary.Sha256);
     }
 
-    [Fact]
-    public void ACancelledImport_StoresNothing()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void ACancelledImport_StoresNothing(Provider provider)
     {
         using var temp = new TempFolder();
-        using (var store = RecordStore.Open(temp.Database))
+        using var db = TestDatabase.Create(provider, temp.Path);
+        using (var store = db.Open())
         {
             store.Import(temp.Write("register.csv", Records.Register), Now);
             var path = BigTripFile(temp, 20_000, badLine: null);
@@ -80,14 +87,16 @@ public sealed class StreamingImportTests
             Assert.Throws<OperationCanceledException>(() => new ImportPipeline(store).Import(source, ImportOptions.Strict, Records.Today, Now, cancel.Token));
         }
 
-        Assert.Equal(0, Count(temp.Database, "SELECT COUNT(*) FROM trip_tests"));
+        Assert.Equal(0, db.Count("SELECT COUNT(*) FROM trip_tests"));
     }
 
-    [Fact]
-    public void TheSameFileImportedTwice_IsStoredOnce()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void TheSameFileImportedTwice_IsStoredOnce(Provider provider)
     {
         using var temp = new TempFolder();
-        using var store = RecordStore.Open(temp.Database);
+        using var db = TestDatabase.Create(provider, temp.Path);
+        using var store = db.Open();
         store.Import(temp.Write("register.csv", Records.Register), Now);
         var path = BigTripFile(temp, 2_000, badLine: null);
 
@@ -96,14 +105,16 @@ public sealed class StreamingImportTests
 
         Assert.Equal((ImportStatus.Imported, 2_000L), (first.Status, first.Added));
         Assert.Equal((ImportStatus.AlreadyImported, 0L), (second.Status, second.Added));
-        Assert.Equal(2_000, Count(temp.Database, "SELECT COUNT(*) FROM trip_tests"));
+        Assert.Equal(2_000, db.Count("SELECT COUNT(*) FROM trip_tests"));
     }
 
-    [Fact]
-    public void AFileGoneBeforeItIsOpened_IsRefusedWithAPlainReason()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void AFileGoneBeforeItIsOpened_IsRefusedWithAPlainReason(Provider provider)
     {
         using var temp = new TempFolder();
-        using var store = RecordStore.Open(temp.Database);
+        using var db = TestDatabase.Create(provider, temp.Path);
+        using var store = db.Open();
         var path = temp.Write("gone.csv", Records.Trips);
         File.Delete(path);
 

@@ -1,5 +1,6 @@
 using TripTestLog.Application.Findings;
 using TripTestLog.Domain.Codes;
+using TripTestLog.Ingest.Tests.Stores;
 
 namespace TripTestLog.Ingest.Tests.Findings;
 
@@ -8,11 +9,12 @@ public sealed class ContactFindingsTests
 {
     private const string Instrument = ",OHM-1,A. Tester";
 
-    [Fact]
-    public void PoleSpread_FiresJustAbove50Percent_AndNotJustBelow()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void PoleSpread_FiresJustAbove50Percent_AndNotJustBelow(Provider provider)
     {
         // ANSI/NETA customary guide: investigate a pole more than 50 % above the lowest. At 20.0 C no correction applies.
-        using var fleet = new FindingsStore()
+        using var fleet = new FindingsStore(provider)
             .Register("S-49,Site,Way 1,iec60898,C,16,3,400,2019-01-01,10000,,,", "S-51,Site,Way 2,iec60898,C,16,3,400,2019-01-01,10000,,,")
             .Contacts(
                 "S-49,2026-03-01,as-found,1,4000,10,20.0" + Instrument, "S-49,2026-03-01,as-found,2,5960,10,20.0" + Instrument, "S-49,2026-03-01,as-found,3,4000,10,20.0" + Instrument,
@@ -29,12 +31,13 @@ public sealed class ContactFindingsTests
         Assert.Contains("investigate", spread.Message);
     }
 
-    [Fact]
-    public void ALimit_CrossedOnlyAfterCorrection_IsOver_AndOneUncrossedByIt_IsNot()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void ALimit_CrossedOnlyAfterCorrection_IsOver_AndOneUncrossedByIt_IsNot(Provider provider)
     {
         // Copper, alpha 0.00393 /K (IEC 60228). 7800 uOhm at 5 C: 7800 / (1 - 0.05895) = 8288.6 > 8000.
         // 8200 uOhm at 30 C: 8200 / 1.0393 = 7889.9 < 8000.
-        using var fleet = new FindingsStore()
+        using var fleet = new FindingsStore(provider)
             .Register("COLD,Site,Way 1,iec60898,C,16,1,230,2019-01-01,8000,,,", "WARM,Site,Way 2,iec60898,C,16,1,230,2019-01-01,8000,,,")
             .Contacts("COLD,2026-03-01,as-found,1,7800,10,5" + Instrument, "WARM,2026-03-01,as-found,1,8200,10,30" + Instrument);
 
@@ -46,11 +49,12 @@ public sealed class ContactFindingsTests
         Assert.DoesNotContain(fleet.Device("WARM").Findings, f => f.Kind == FindingKind.ContactOverLimit);
     }
 
-    [Fact]
-    public void ThreeReadingsOfAPole_AreJudgedByTheirMedian()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void ThreeReadingsOfAPole_AreJudgedByTheirMedian(Provider provider)
     {
         // 5000, 9000 (a poor reading) and 5100: the median is 5100, over a limit of 5050 by the median, not by 9000.
-        using var fleet = new FindingsStore()
+        using var fleet = new FindingsStore(provider)
             .Register("M-01,Site,Way 1,iec60898,C,16,1,230,2019-01-01,5050,,,")
             .Contacts("M-01,2026-03-01,as-found,1,5000,10,20" + Instrument, "M-01,2026-03-01,as-found,1,9000,10,20" + Instrument,
                 "M-01,2026-03-01,as-found,1,5100,10,20" + Instrument);
@@ -61,11 +65,12 @@ public sealed class ContactFindingsTests
         Assert.Equal(3, over.RestsOn.Count);
     }
 
-    [Fact]
-    public void LowTestCurrent_IsJudgedByTheRating()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void LowTestCurrent_IsJudgedByTheRating(Provider provider)
     {
         // Common practice (lab policy): about 10 A under 100 A rating, 100 A at and above.
-        using var fleet = new FindingsStore()
+        using var fleet = new FindingsStore(provider)
             .Register("L-16,Site,Way 1,iec60898,C,16,1,230,2019-01-01,,,,", "OK-16,Site,Way 2,iec60898,C,16,1,230,2019-01-01,,,,",
                 "L-125,Site,Way 3,iec60898,D,125,3,400,2019-01-01,,,,")
             .Contacts("L-16,2026-03-01,as-found,1,5000,5,20" + Instrument, "OK-16,2026-03-01,as-found,1,5000,10,20" + Instrument,
@@ -79,12 +84,13 @@ public sealed class ContactFindingsTests
         Assert.Empty(fleet.Device("OK-16").Findings);
     }
 
-    [Fact]
-    public void ARisingPole_IsForecastToReachItsLimit_BeforeItsNextTest()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void ARisingPole_IsForecastToReachItsLimit_BeforeItsNextTest(Provider provider)
     {
         // 5000, 5700, 6400, 7100 uOhm on 1 March 2021-2024: Theil–Sen slope ~700 uOhm a year (the years are not quite
         // equal); 8000 is reached about 1.3 years after 2024-03-01, before the next test (sound: 36 months, 2027-03-01).
-        using var fleet = new FindingsStore()
+        using var fleet = new FindingsStore(provider)
             .Register("R-01,Site,Way 1,iec60898,C,16,1,230,2019-01-01,8000,,,")
             .Contacts("R-01,2021-03-01,as-found,1,5000,10,20" + Instrument, "R-01,2022-03-01,as-found,1,5700,10,20" + Instrument,
                 "R-01,2023-03-01,as-found,1,6400,10,20" + Instrument, "R-01,2024-03-01,as-found,1,7100,10,20" + Instrument);

@@ -1,3 +1,5 @@
+using TripTestLog.Application.Stores;
+using TripTestLog.Ingest.Tests.Stores;
 using TripTestLog.Application.Findings;
 using TripTestLog.Application.Import;
 using TripTestLog.Storage;
@@ -13,10 +15,15 @@ internal sealed class FindingsStore : IDisposable
     public static readonly DateOnly AsOf = new(2026, 12, 1);
     private static readonly DateTimeOffset Now = new(2026, 12, 1, 9, 0, 0, TimeSpan.Zero);
     private readonly TempFolder _temp = new();
-    private readonly RecordStore _store;
+    private readonly TestDatabase _database;
+    private readonly IRecordStore _store;
     private int _files;
 
-    public FindingsStore() => _store = RecordStore.Open(_temp.Database);
+    public FindingsStore(Provider provider)
+    {
+        _database = TestDatabase.Create(provider, _temp.Path);
+        _store = _database.Open();
+    }
 
     public FindingsStore Register(params string[] rows) => Import(
         "asset_tag,site,location,family,curve,rated_current_a,poles,rated_voltage_v,commissioned_on,contact_limit_uohm,make,model,serial", rows);
@@ -51,6 +58,7 @@ internal sealed class FindingsStore : IDisposable
     public void Dispose()
     {
         _store.Dispose();
+        _database.Dispose();
         _temp.Dispose();
     }
 }

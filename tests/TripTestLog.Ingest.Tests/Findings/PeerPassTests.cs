@@ -1,17 +1,20 @@
 using TripTestLog.Application.Check;
 using TripTestLog.Application.Findings;
 using TripTestLog.Storage;
+using TripTestLog.Ingest.Tests.Stores;
 
 namespace TripTestLog.Ingest.Tests.Findings;
 
 /// <summary>The cheap first pass judges only each point's latest test, and must give the peer groups full judging gives.</summary>
 public sealed class PeerPassTests
 {
-    [Fact]
-    public void OnTheSampleFleet_ThePeerPass_GivesTheSameGroupsAsJudgingEveryTest()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void OnTheSampleFleet_ThePeerPass_GivesTheSameGroupsAsJudgingEveryTest(Provider provider)
     {
         using var temp = new TempFolder();
-        using var store = RecordStore.Open(temp.Database);
+        using var db = TestDatabase.Create(provider, temp.Path);
+        using var store = db.Open();
         var samples = Path.GetFullPath(Path.Combine(AppContext.BaseDirectory, "..", "..", "..", "..", "..", "sample-records"));
         foreach (var file in new[] { "device-register.csv", "curve-tables.csv", "ambient-tables.csv", "instruments.csv" }
             .Select(f => Path.Combine(samples, f))

@@ -1,6 +1,7 @@
 using TripTestLog.Application.Findings;
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Condition;
+using TripTestLog.Ingest.Tests.Stores;
 
 namespace TripTestLog.Ingest.Tests.Findings;
 
@@ -14,10 +15,11 @@ public sealed class TripFindingsTests
     private static string RowC(string tag, string at, double seconds, string stage = "as-found", double ambient = 30) =>
         $"{tag},{at},{stage},all,40.9,{seconds},,cold,{ambient}{Tail}";
 
-    [Fact]
-    public void AsLeftPass_AfterAnAsFoundFailure_KeepsTheFailureOpenInTheHistory_UntilAnAsFoundPass()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void AsLeftPass_AfterAnAsFoundFailure_KeepsTheFailureOpenInTheHistory_UntilAnAsFoundPass(Provider provider)
     {
-        using var fleet = new FindingsStore().Register("F-01,Site,Way 1," + C16)
+        using var fleet = new FindingsStore(provider).Register("F-01,Site,Way 1," + C16)
             .Trips(RowC("F-01", "2024-03-18T12:00", 75), RowC("F-01", "2024-03-18T14:00", 22, "as-left"));
 
         var repaired = Assert.Single(fleet.Device("F-01").Findings, f => f.Kind == FindingKind.TripOutOfBand);
@@ -36,10 +38,11 @@ public sealed class TripFindingsTests
         Assert.Equal(new DateOnly(2024, 3, 18), closed.FirstSeen);
     }
 
-    [Fact]
-    public void ATooLateTrip_WithoutRepair_TakesTheDeviceOutOfService()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void ATooLateTrip_WithoutRepair_TakesTheDeviceOutOfService(Provider provider)
     {
-        using var fleet = new FindingsStore().Register("F-02,Site,Way 1," + C16).Trips(RowC("F-02", "2026-03-18T12:00", 75));
+        using var fleet = new FindingsStore(provider).Register("F-02,Site,Way 1," + C16).Trips(RowC("F-02", "2026-03-18T12:00", 75));
 
         var device = fleet.Device("F-02");
 
@@ -51,13 +54,14 @@ public sealed class TripFindingsTests
         Assert.Contains("before it returns to service", overdue.Message);
     }
 
-    [Fact]
-    public void ATimeRisingEachYear_DriftsFromItsBaseline_AndIsForecastToLeaveTheBandBeforeItsNextTest()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void ATimeRisingEachYear_DriftsFromItsBaseline_AndIsForecastToLeaveTheBandBeforeItsNextTest(Provider provider)
     {
         // 20, 25, 31, 39, 48 s at row c, 2021-2025: +140 % on the baseline (log10(48/20) = 0.380 decades), past the 50 %
         // drift policy. The log trend rises ~0.095 decades a year; 60 s is log10(60/48) = 0.097 decades above the last,
         // so about a year on, before the next test (graded watch for the drift: 24 months).
-        using var fleet = new FindingsStore().Register("D-01,Site,Way 1," + C16)
+        using var fleet = new FindingsStore(provider).Register("D-01,Site,Way 1," + C16)
             .Trips(RowC("D-01", "2021-03-01T12:00", 20), RowC("D-01", "2022-03-01T12:00", 25), RowC("D-01", "2023-03-01T12:00", 31),
                 RowC("D-01", "2024-03-01T12:00", 39), RowC("D-01", "2025-03-01T12:00", 48));
 
@@ -75,10 +79,11 @@ public sealed class TripFindingsTests
         Assert.Equal(ConditionGrade.PlanWork, device.Grade);
     }
 
-    [Fact]
-    public void TwoTests_AreTooFewForATrend()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void TwoTests_AreTooFewForATrend(Provider provider)
     {
-        using var fleet = new FindingsStore().Register("D-02,Site,Way 1," + C16)
+        using var fleet = new FindingsStore(provider).Register("D-02,Site,Way 1," + C16)
             .Trips(RowC("D-02", "2024-03-01T12:00", 30), RowC("D-02", "2025-03-01T12:00", 55));
 
         var device = fleet.Device("D-02", asOf: new DateOnly(2025, 6, 1));
@@ -87,13 +92,14 @@ public sealed class TripFindingsTests
         Assert.DoesNotContain(device.Findings, f => f.Kind == FindingKind.TripTrendExit);
     }
 
-    [Fact]
-    public void APeerFarFromItsGroup_IsAnOutlier_OnlyWithEnoughPeers()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void APeerFarFromItsGroup_IsAnOutlier_OnlyWithEnoughPeers(Provider provider)
     {
         // Eight C16 breakers at row c: seven trip at 19-21.5 s, one at 50 s. Positions on the log band 1-60 s:
         // log10(t) / log10(60); the seven sit near 0.73-0.75, the eighth at 0.955, a modified z-score far above 3.5.
         double[] times = [20, 21, 19, 20.5, 19.5, 20, 21.5, 50];
-        var store = new FindingsStore().Register([.. times.Select((_, i) => $"P-{i + 1:00},Site,Way {i + 1}," + C16)]);
+        var store = new FindingsStore(provider).Register([.. times.Select((_, i) => $"P-{i + 1:00},Site,Way {i + 1}," + C16)]);
         using var fleet = store.Trips([.. times.Select((t, i) => RowC($"P-{i + 1:00}", "2026-03-01T12:00", t, ambient: 30))]);
 
         var conditions = fleet.Conditions();
@@ -107,10 +113,11 @@ public sealed class TripFindingsTests
         Assert.DoesNotContain(fleet.Conditions(FindingPolicy.Default with { PeerMinimumDevices = 9 }).SelectMany(c => c.Findings), f => f.Kind == FindingKind.PeerOutlier);
     }
 
-    [Fact]
-    public void ADeviceNotTestedWithinItsInterval_IsOverdue_AndAFamilyIntervalCanSayOtherwise()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void ADeviceNotTestedWithinItsInterval_IsOverdue_AndAFamilyIntervalCanSayOtherwise(Provider provider)
     {
-        using var fleet = new FindingsStore().Register("O-01,Site,Way 1," + C16).Trips(RowC("O-01", "2021-03-01T12:00", 20));
+        using var fleet = new FindingsStore(provider).Register("O-01,Site,Way 1," + C16).Trips(RowC("O-01", "2021-03-01T12:00", 20));
 
         var device = fleet.Device("O-01");
         var overdue = Assert.Single(device.Findings, f => f.Kind == FindingKind.TestOverdue);
