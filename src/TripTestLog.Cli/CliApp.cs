@@ -26,6 +26,7 @@ internal static class CliApp
             DevicesCommand.Create(cli),
             InstrumentsCommand.Create(cli),
             HistoryCommand.Create(cli),
+            TransferCommand.Create(cli),
             DemoCommand.Create(cli),
         };
 

@@ -40,6 +40,15 @@ internal static class CommonOptions
         HelpName = "PATH|URL",
     };
 
+    /// <summary>A required database option other than --db (e.g. transfer's --from and --to).</summary>
+    public static Option<StoreAddress> Store(string name, string description) => new(name)
+    {
+        Description = description,
+        Required = true,
+        CustomParser = Address,
+        HelpName = "PATH|URL",
+    };
+
     // A server address that cannot be read, or that holds a password, is a usage error with one sentence.
     private static StoreAddress? Address(ArgumentResult result)
     {
@@ -50,7 +59,7 @@ internal static class CommonOptions
         }
         catch (FormatException e)
         {
-            result.AddError($"--db: {e.Message}");
+            result.AddError($"{(result.Parent as OptionResult)?.Option.Name ?? "--db"}: {e.Message}");
             return null;
         }
     }

@@ -14,20 +14,16 @@ public sealed partial class PostgresRecordStore : ITripSource
     private static readonly string OnlyTag = $"WHERE @tag IS NULL OR {ServerSql.TagKey("d.asset_tag")} = {ServerSql.TagKey("@tag")}";
 
     private static readonly string TripsInDeviceOrder =
-        "SELECT d.asset_tag, t.tested_at, t.stage, t.pole, t.current_a, t.tripped, t.time_s, t.start, t.ambient_c, t.instrument, t.technician, t.note, "
-        + "t.source_file_id, t.source_line, t.found_ir_a, t.found_isd_a, t.found_ii_a, t.found_im_a, t.found_pickup_a, t.found_tms, "
-        + $"{TestTime("t")} FROM devices d JOIN trip_tests t ON t.device_id = d.id {OnlyTag} "
+        $"SELECT {StoredColumns.Trips}, {TestTime("t")} FROM devices d JOIN trip_tests t ON t.device_id = d.id {OnlyTag} "
         + "ORDER BY d.asset_tag, t.tested_at, t.source_file_id, t.source_line";
 
     private static readonly string ContactsInDeviceOrder =
-        "SELECT d.asset_tag, c.tested_at, c.stage, c.pole, c.resistance_uohm, c.test_current_a, c.temperature_c, c.instrument, c.technician, "
-        + $"c.source_file_id, c.source_line, {TestTime("c")} "
-        + $"FROM devices d JOIN contact_tests c ON c.device_id = d.id {OnlyTag} ORDER BY d.asset_tag, c.tested_at, c.source_file_id, c.source_line";
+        $"SELECT {StoredColumns.Contacts}, {TestTime("c")} FROM devices d JOIN contact_tests c ON c.device_id = d.id {OnlyTag} "
+        + "ORDER BY d.asset_tag, c.tested_at, c.source_file_id, c.source_line";
 
     private static readonly string InsulationInDeviceOrder =
-        "SELECT d.asset_tag, i.tested_at, i.stage, i.path, i.test_voltage_v, i.resistance_mohm, i.over_range, i.temperature_c, i.duration_s, "
-        + $"i.source_file_id, i.source_line, {TestTime("i")} "
-        + $"FROM devices d JOIN insulation_tests i ON i.device_id = d.id {OnlyTag} ORDER BY d.asset_tag, i.tested_at, i.source_file_id, i.source_line";
+        $"SELECT {StoredColumns.Insulation}, {TestTime("i")} FROM devices d JOIN insulation_tests i ON i.device_id = d.id {OnlyTag} "
+        + "ORDER BY d.asset_tag, i.tested_at, i.source_file_id, i.source_line";
 
     /// <inheritdoc />
     public IEnumerable<DeviceRecords> Devices(AssetTag? only = null, bool withResistance = false)

@@ -19,22 +19,18 @@ public sealed partial class RecordStore : ITripSource
     /// tests are found by IX_trip_tests_device and only they are sorted by time: never a sort of the whole table.
     /// </summary>
     internal const string TripsInDeviceOrder =
-        "SELECT d.asset_tag, t.tested_at, t.stage, t.pole, t.current_a, t.tripped, t.time_s, t.start, t.ambient_c, t.instrument, t.technician, t.note, "
-        + "t.source_file_id, t.source_line, t.found_ir_a, t.found_isd_a, t.found_ii_a, t.found_im_a, t.found_pickup_a, t.found_tms "
-        + "FROM devices d CROSS JOIN trip_tests t ON t.device_id = d.id "
+        "SELECT " + StoredColumns.Trips + " FROM devices d CROSS JOIN trip_tests t ON t.device_id = d.id "
         + "WHERE $tag IS NULL OR d.asset_tag = $tag COLLATE NOCASE "
         + "ORDER BY d.asset_tag, t.tested_at, t.source_file_id, t.source_line";
 
     /// <summary>Contact readings by device, then test time: found by their (device_id, tested_at) index, as the trips are.</summary>
     internal const string ContactsInDeviceOrder =
-        "SELECT d.asset_tag, c.tested_at, c.stage, c.pole, c.resistance_uohm, c.test_current_a, c.temperature_c, c.instrument, c.technician, "
-        + "c.source_file_id, c.source_line FROM devices d CROSS JOIN contact_tests c ON c.device_id = d.id "
+        "SELECT " + StoredColumns.Contacts + " FROM devices d CROSS JOIN contact_tests c ON c.device_id = d.id "
         + "WHERE $tag IS NULL OR d.asset_tag = $tag COLLATE NOCASE ORDER BY d.asset_tag, c.tested_at, c.source_file_id, c.source_line";
 
     /// <summary>Insulation readings by device, then test time.</summary>
     internal const string InsulationInDeviceOrder =
-        "SELECT d.asset_tag, i.tested_at, i.stage, i.path, i.test_voltage_v, i.resistance_mohm, i.over_range, i.temperature_c, i.duration_s, "
-        + "i.source_file_id, i.source_line FROM devices d CROSS JOIN insulation_tests i ON i.device_id = d.id "
+        "SELECT " + StoredColumns.Insulation + " FROM devices d CROSS JOIN insulation_tests i ON i.device_id = d.id "
         + "WHERE $tag IS NULL OR d.asset_tag = $tag COLLATE NOCASE ORDER BY d.asset_tag, i.tested_at, i.source_file_id, i.source_line";
 
     /// <inheritdoc />

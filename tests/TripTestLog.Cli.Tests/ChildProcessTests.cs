@@ -2,52 +2,75 @@ using System.Diagnostics;
 using System.Globalization;
 using System.Text;
 using Microsoft.Data.Sqlite;
+using TripTestLog.Ingest.Tests.Stores;
 
 namespace TripTestLog.Cli.Tests;
 
 /// <summary>
-/// Real processes against one real database: an import killed halfway leaves the database consistent and the next
-/// import completes it, and two imports at once both finish. These take a few seconds each.
+/// Real processes against one real database, on each store: an import killed halfway leaves the database consistent
+/// and the next import completes it; two imports at once both finish; two machines importing the same file at the same
+/// moment end with one copy. These take a few seconds each.
 /// </summary>
 public sealed class ChildProcessTests : IDisposable
 {
     private readonly string _folder = Path.Combine(Path.GetTempPath(), "ttl-proc-" + Guid.NewGuid().ToString("N")[..12]);
+    private readonly string _application = "ttl-proc-" + Guid.NewGuid().ToString("N")[..12];
+    private TestDatabase? _database;
 
     public ChildProcessTests() => Directory.CreateDirectory(_folder);
 
-    private string Db => Path.Combine(_folder, "shared.db");
+    private TestDatabase Database => _database!;
+
+    // What the child processes are given: on the server, a connection string that names this test's sessions.
+    private string Db => Database.Provider == Provider.Sqlite ? Database.Address : Database.Address + ";Application Name=" + _application;
 
     public void Dispose()
     {
+        _database?.Dispose();
         SqliteConnection.ClearAllPools();
         Directory.Delete(_folder, recursive: true);
     }
 
-    [Fact]
-    public void AnImportKilledHalfway_LeavesNothingHalfDone_AndTheNextImportCompletesIt()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void AnImportKilledHalfway_LeavesNothingHalfDone_AndTheNextImportCompletesIt(Provider provider)
     {
+        _database = TestDatabase.Create(provider, _folder);
         Assert.Equal(0, Cli("import", Register(), "--db", Db).WaitForExitCode());
         var big = Trips("big.csv", 300_000, 0);
 
         using (var child = Cli("import", big, "--db", Db))
         {
-            // Kill once the transaction has spilled pages into the write-ahead log: mid-write, not before or after.
-            Assert.True(WaitFor(() => WalBytes() > 2_000_000 || child.HasExited, TimeSpan.FromSeconds(120)), "the import never started writing");
+            // Kill mid-write, not before or after: SQLite once the transaction has spilled pages into the write-ahead
+            // log; the server once the import's transaction has written and its rows are being copied in.
+            Assert.True(WaitFor(() => Writing() || child.HasExited, TimeSpan.FromSeconds(120)), "the import never started writing");
             Assert.False(child.HasExited, "the import finished before it could be killed; make the file larger");
             child.Kill(entireProcessTree: true);
             child.WaitForExit();
         }
 
-        Assert.Equal(("ok", 0L, 1L), (Scalar<string>("PRAGMA integrity_check"), Scalar<long>("SELECT COUNT(*) FROM trip_tests"), Scalar<long>("SELECT COUNT(*) FROM source_files")));
+        if (provider == Provider.Sqlite)
+        {
+            Assert.Equal("ok", Database.Scalar("PRAGMA integrity_check"));
+        }
+        else
+        {
+            Assert.True(WaitFor(() => Database.Count($"SELECT COUNT(*) FROM pg_stat_activity WHERE application_name = '{_application}'") == 0, TimeSpan.FromSeconds(30)),
+                "the killed import's session never ended");
+        }
+
+        Assert.Equal((0L, 1L), (Database.Count("SELECT COUNT(*) FROM trip_tests"), Database.Count("SELECT COUNT(*) FROM source_files")));
 
         var again = Cli("import", big, "--db", Db);
         Assert.Equal(0, again.WaitForExitCode());
-        Assert.Equal((300_000L, 2L), (Scalar<long>("SELECT COUNT(*) FROM trip_tests"), Scalar<long>("SELECT COUNT(*) FROM source_files")));
+        Assert.Equal((300_000L, 2L), (Database.Count("SELECT COUNT(*) FROM trip_tests"), Database.Count("SELECT COUNT(*) FROM source_files")));
     }
 
-    [Fact]
-    public void TwoImportsAtOnce_BothFinish_AndBothFilesAreStored()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void TwoImportsAtOnce_BothFinish_AndBothFilesAreStored(Provider provider)
     {
+        _database = TestDatabase.Create(provider, _folder);
         Assert.Equal(0, Cli("import", Register(), "--db", Db).WaitForExitCode());
         var a = Trips("a.csv", 100_000, 0);
         var b = Trips("b.csv", 100_000, 1_000_000);
@@ -56,8 +79,30 @@ public sealed class ChildProcessTests : IDisposable
         using var second = Cli("import", b, "--db", Db);
 
         Assert.Equal((0, 0), (first.WaitForExitCode(), second.WaitForExitCode()));
-        Assert.Equal((200_000L, 3L), (Scalar<long>("SELECT COUNT(*) FROM trip_tests"), Scalar<long>("SELECT COUNT(*) FROM source_files")));
-        Assert.Equal("ok", Scalar<string>("PRAGMA integrity_check"));
+        Assert.Equal((200_000L, 3L), (Database.Count("SELECT COUNT(*) FROM trip_tests"), Database.Count("SELECT COUNT(*) FROM source_files")));
+        if (provider == Provider.Sqlite)
+        {
+            Assert.Equal("ok", Database.Scalar("PRAGMA integrity_check"));
+        }
+    }
+
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void TwoLabsImportingTheSameFileAtOnce_EndWithOneCopy(Provider provider)
+    {
+        _database = TestDatabase.Create(provider, _folder);
+        Assert.Equal(0, Cli("import", Register(), "--db", Db).WaitForExitCode());
+        var original = Trips("lab-a.csv", 100_000, 0);
+        var copy = Path.Combine(_folder, "lab-b.csv");
+        File.Copy(original, copy);
+
+        using var first = Cli("import", original, "--db", Db);
+        using var second = Cli("import", copy, "--db", Db);
+
+        // Both succeed: one stores the file, the other finds it already imported.
+        Assert.Equal((0, 0), (first.WaitForExitCode(), second.WaitForExitCode()));
+        Assert.Equal((100_000L, 2L), (Database.Count("SELECT COUNT(*) FROM trip_tests"), Database.Count("SELECT COUNT(*) FROM source_files")));
+        Assert.Equal(0L, Database.Count("SELECT COUNT(*) FROM source_files WHERE sha256 LIKE 'pending:%'"));
     }
 
     private string Register()
@@ -100,7 +145,10 @@ public sealed class ChildProcessTests : IDisposable
         return process;
     }
 
-    private long WalBytes() => File.Exists(Db + "-wal") ? new FileInfo(Db + "-wal").Length : 0;
+    private bool Writing() => Database.Provider == Provider.Sqlite
+        ? File.Exists(Db + "-wal") && new FileInfo(Db + "-wal").Length > 2_000_000
+        : Database.Count("SELECT COUNT(*) FROM pg_stat_activity WHERE application_name = '" + _application
+            + "' AND backend_xid IS NOT NULL AND query LIKE 'COPY%'") > 0;
 
     private static bool WaitFor(Func<bool> condition, TimeSpan limit)
     {
@@ -116,15 +164,6 @@ public sealed class ChildProcessTests : IDisposable
         }
 
         return true;
-    }
-
-    private T Scalar<T>(string sql)
-    {
-        using var connection = new SqliteConnection($"Data Source={Db};Pooling=False");
-        connection.Open();
-        using var command = connection.CreateCommand();
-        command.CommandText = sql;
-        return (T)command.ExecuteScalar()!;
     }
 }
 

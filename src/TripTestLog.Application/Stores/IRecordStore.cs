@@ -1,6 +1,7 @@
 using TripTestLog.Application.Check;
 using TripTestLog.Application.Import;
 using TripTestLog.Application.Register;
+using TripTestLog.Application.Transfer;
 using TripTestLog.Domain.Devices;
 
 namespace TripTestLog.Application.Stores;
@@ -10,7 +11,7 @@ namespace TripTestLog.Application.Stores;
 /// a device's history, and the housekeeping commands. SQLite implements it today; a server database implements the
 /// same contract, and nothing above it changes.
 /// </summary>
-public interface IRecordStore : IImportStore, ITripSource, IHistorySource, IDisposable
+public interface IRecordStore : IImportStore, ITripSource, IHistorySource, IRecordExport, IDisposable
 {
     /// <summary>Where the store is, for messages and logs (a file path, or a server and database; never a password).</summary>
     string Location { get; }

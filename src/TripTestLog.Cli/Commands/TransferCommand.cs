@@ -1,0 +1,62 @@
+using System.CommandLine;
+using TripTestLog.Application.Transfer;
+using TripTestLog.Cli.Services;
+
+namespace TripTestLog.Cli.Commands;
+
+/// <summary>`transfer --from DB --to DB`: copies a lab's database into another (a SQLite file into the server, or back).</summary>
+internal static class TransferCommand
+{
+    public static Command Create(CliContext cli)
+    {
+        var from = CommonOptions.Store("--from", "The database to copy from (it must exist): a file, or a server postgres://user@host/dbname");
+        var to = CommonOptions.Store("--to", "The database to copy into (created if missing): a file, or a server");
+        var command = new Command("transfer",
+            "Copy every imported file's records, register history and corrections from one database into another; files already there are skipped, so running it again adds nothing")
+        {
+            from, to,
+        };
+        command.SetAction(parse => Run(cli, parse.GetValue(from)!, parse.GetValue(to)!));
+        return command;
+    }
+
+    private static int Run(CliContext cli, StoreAddress from, StoreAddress to)
+    {
+        if (CommonOptions.Missing(cli, from))
+        {
+            return ExitCodes.BadInput;
+        }
+
+        if (string.Equals(from.Display, to.Display, StringComparison.Ordinal))
+        {
+            cli.Error.WriteLine($"error: --from and --to both name {from.Display}; give two different databases");
+            return ExitCodes.BadInput;
+        }
+
+        using var source = Stores.Open(from);
+        using var target = Stores.Open(to);
+        var total = source.Files().Count();
+        using var log = Logging.BesideDatabase(to);
+        IReadOnlyList<TransferredFile> files;
+        long changes;
+        using (var progress = Progress.For(cli, total))
+        {
+            (files, changes) = new TransferPipeline(source, target).Run(f =>
+            {
+                progress.Step(f.File.Name);
+                log.Information("Transfer {From} -> {To}: {File} ({Sha}) {State}, {Added} of {Records} records added",
+                    from.Display, to.Display, f.File.Name, f.File.Sha256, f.Copied ? "copied" : "already there", f.Added, f.Records);
+            });
+        }
+
+        var copied = files.Count(f => f.Copied);
+        cli.Out.WriteLine($"Transferred {from.Display}");
+        cli.Out.WriteLine($"       into {to.Display}:");
+        cli.Out.WriteLine($"  {files.Count} files: {copied} copied, {files.Count - copied} already there; "
+            + $"{files.Sum(f => f.Added)} records added; {changes} corrections copied.");
+        var counts = target.Counts();
+        cli.Out.WriteLine($"  {to.Display} now holds {counts.Files} files, {counts.Devices} devices, {counts.TripTests} trip tests, "
+            + $"{counts.ContactTests} contact and {counts.InsulationTests} insulation readings.");
+        return ExitCodes.Ok;
+    }
+}

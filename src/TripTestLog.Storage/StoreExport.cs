@@ -1,0 +1,105 @@
+using System.Data.Common;
+using System.Globalization;
+using TripTestLog.Application.Check;
+using TripTestLog.Application.Records;
+using TripTestLog.Application.Transfer;
+using TripTestLog.Domain.Envelopes;
+using TripTestLog.Domain.Instruments;
+using TripTestLog.Domain.Measurements;
+using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Settings;
+
+namespace TripTestLog.Storage;
+
+/// <summary>
+/// The queries and readers a store's export shares with the other store: one file's records by line, and the trail of
+/// corrections. A store says how it writes a register column list, a test time and a date as text; the rest is common.
+/// </summary>
+/// <param name="registerSelect">The register columns of an alias, readable by <see cref="DeviceMapping.Read"/>.</param>
+/// <param name="testTime">What follows a measurement's columns for its test time (empty when tested_at says it all).</param>
+/// <param name="text">A date, timestamp or fingerprint column as text: yyyy-MM-dd, ISO 8601 UTC, lower-case hex.</param>
+/// <param name="testedAt">Reads a measurement row's test time.</param>
+internal sealed class StoreExport(Func<string, string> registerSelect, Func<string, string> testTime, Func<string, string> text, Func<DbDataReader, TestedAt> testedAt)
+{
+    /// <summary>The records of one file, by line (then as stored), with the file's id bound as @id.</summary>
+    public string RecordsSql(RecordKind kind) => kind switch
+    {
+        RecordKind.DeviceRegister =>
+            $"SELECT d.asset_tag, {registerSelect("r")}, r.source_line FROM device_revisions r JOIN devices d ON d.id = r.device_id "
+            + "WHERE r.source_file_id = @id ORDER BY r.source_line, r.id",
+        RecordKind.TripTests or RecordKind.ContactResistance or RecordKind.InsulationResistance => Measurements(MeasurementTable.For(kind)),
+        RecordKind.CurveTable => "SELECT table_name, multiple, min_s, max_s, source_line FROM curve_table_rows WHERE source_file_id = @id ORDER BY source_line, id",
+        RecordKind.AmbientTable => "SELECT table_name, ambient_c, current_factor, source_line FROM ambient_table_rows WHERE source_file_id = @id ORDER BY source_line, id",
+        _ => $"SELECT instrument, kind, serial, {text("calibrated_on")}, {text("calibration_due")}, source_line FROM instruments WHERE source_file_id = @id ORDER BY source_line, id",
+    };
+
+    /// <summary>Every correction, oldest first: table, record fingerprint, column, old, new, old and new file hashes, time.</summary>
+    public string ChangesSql => string.Join(" UNION ALL ", new[] { "trip_tests", "contact_tests", "insulation_tests" }.Select(table =>
+            $"SELECT a.id, a.table_name, {text("t.fingerprint")}, a.column_name, a.old_value, a.new_value, fo.sha256, fn.sha256, {text("a.changed_at")} "
+            + $"FROM audit_changes a JOIN {table} t ON a.table_name = '{table}' AND t.id = a.record_id "
+            + "JOIN source_files fo ON fo.id = a.old_source_file_id JOIN source_files fn ON fn.id = a.new_source_file_id"))
+        + " ORDER BY 1";
+
+    /// <summary>Reads the rows of <see cref="RecordsSql"/> as records with their lines; the reader is walked lazily.</summary>
+    public IEnumerable<Located<object>> Records(DbDataReader r, StoredFile file)
+    {
+        var rows = new StoredRows(new Dictionary<long, string> { [file.Id] = file.Name }, testedAt);
+        while (r.Read())
+        {
+            yield return file.Kind switch
+            {
+                RecordKind.DeviceRegister => new Located<object>(DeviceMapping.Read(r), r.GetInt64(DeviceMapping.Columns.Split(", ").Length + 1)),
+                RecordKind.TripTests => rows.Trip(r) is var t ? Located(t.Measurement, t.SourceLine) : default,
+                RecordKind.ContactResistance => Located(rows.Contact(r)),
+                RecordKind.InsulationResistance => Located(rows.Insulation(r)),
+                RecordKind.CurveTable => new(new CurveTableRow(r.GetString(0), new CurveTablePoint(CurrentMultiple.Of(r.GetDouble(1)), Seconds.Of(r.GetDouble(2)),
+                    r.IsDBNull(3) ? null : Seconds.Of(r.GetDouble(3)))), r.GetInt64(4)),
+                RecordKind.AmbientTable => new(new AmbientTableRow(r.GetString(0), new AmbientPoint(Celsius.Of(r.GetDouble(1)), r.GetDouble(2))), r.GetInt64(3)),
+                _ => new(new InstrumentCalibration(r.GetString(0), r.GetString(1), r.GetString(2), Date(r.GetString(3)), Date(r.GetString(4))), r.GetInt64(5)),
+            };
+        }
+    }
+
+    /// <summary>Reads the rows of <see cref="ChangesSql"/>.</summary>
+    public static List<StoredChange> Changes(DbDataReader r)
+    {
+        var list = new List<StoredChange>();
+        while (r.Read())
+        {
+            list.Add(new StoredChange(r.GetString(1), r.GetString(2), r.GetString(3), r.GetString(4), r.GetString(5), r.GetString(6), r.GetString(7),
+                DateTimeOffset.Parse(r.GetString(8), CultureInfo.InvariantCulture, DateTimeStyles.AssumeUniversal | DateTimeStyles.AdjustToUniversal)));
+        }
+
+        return list;
+    }
+
+    /// <summary>Reads `source_files` rows (id, file_name, full_path, sha256, kind, rows_read, imported_at as text) as files.</summary>
+    public static List<StoredFile> Files(DbDataReader r)
+    {
+        var list = new List<StoredFile>();
+        while (r.Read())
+        {
+            list.Add(new StoredFile(r.GetInt64(0), r.GetString(1), r.GetString(2), r.GetString(3), Enum.Parse<RecordKind>(r.GetString(4)), r.GetInt64(5),
+                DateTimeOffset.Parse(r.GetString(6), CultureInfo.InvariantCulture, DateTimeStyles.AssumeUniversal | DateTimeStyles.AdjustToUniversal)));
+        }
+
+        return list;
+    }
+
+    /// <summary>Every committed imported file, oldest first (an import in progress has a placeholder hash and is left out).</summary>
+    public string FilesSql => $"SELECT id, file_name, full_path, sha256, kind, rows_read, {text("imported_at")} FROM source_files WHERE sha256 NOT LIKE 'pending:%' ORDER BY id";
+
+    private string Measurements(MeasurementTable table)
+    {
+        var (alias, columns) = StoredColumns.Of(table);
+        return $"SELECT {columns}{testTime(alias)} FROM {table.Table} {alias} JOIN devices d ON d.id = {alias}.device_id "
+            + $"WHERE {alias}.source_file_id = @id ORDER BY {alias}.source_line, {alias}.id";
+    }
+
+    private static Located<object> Located<T>(StoredMeasurement<T> m)
+        where T : IMeasurement => new(m.Measurement, m.SourceLine);
+
+    private static Located<object> Located(object record, long line) => new(record, line);
+
+    private static DateOnly Date(string text) => DateOnly.ParseExact(text, "yyyy-MM-dd", CultureInfo.InvariantCulture);
+}
