@@ -5,6 +5,7 @@ using TripTestLog.Application.Check;
 using Microsoft.Data.Sqlite;
 using TripTestLog.Application.Records;
 using TripTestLog.Storage;
+using TripTestLog.Ingest.Tests.Stores;
 
 namespace TripTestLog.Ingest.Tests;
 
@@ -23,20 +24,27 @@ public sealed class RobustImportTests
         "T-01","2024-03-18T13:00",as-found,all,80.1,0.02,,cold,"INJ-1"
         """;
 
-    private static (RecordStore Store, string Db) Open(TempFolder temp)
+    private static (IRecordStore Store, TestDatabase Db) Open(TempFolder temp, TestDatabase database)
+    {
+        var store = database.Open();
+        store.Import(RecordFileReader.Read(temp.Write("register.csv", Records.Register), Records.Today), Now);
+        return (store, database);
+    }
+
+    private static (IRecordStore Store, string Db) Open(TempFolder temp)
     {
         var store = RecordStore.Open(temp.Database);
         store.Import(RecordFileReader.Read(temp.Write("register.csv", Records.Register), Records.Today), Now);
         return (store, temp.Database);
     }
 
-    private static long Count(string db, string sql) => Sql.Count(db, sql);
-
-    [Fact]
-    public void AcceptValid_StoresTheGoodRows_AccountsForEveryRow_AndWritesTheRefusedOnesUnchanged()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void AcceptValid_StoresTheGoodRows_AccountsForEveryRow_AndWritesTheRefusedOnesUnchanged(Provider provider)
     {
         using var temp = new TempFolder();
-        var (store, db) = Open(temp);
+        using var database = TestDatabase.Create(provider, temp.Path);
+        var (store, db) = Open(temp, database);
         using var _ = store;
         var path = temp.Write("mixed.csv", Trips);
         var parsed = RecordFileReader.Read(path, Records.Today);
@@ -47,7 +55,7 @@ public sealed class RobustImportTests
         // Six rows: three stored, one duplicate of an earlier row, two refused (a bad number, an unknown tag).
         Assert.Equal((ImportStatus.Imported, 6L, 3L, 1L, 2L), (outcome.Status, outcome.RowsRead, outcome.Added, outcome.Duplicates, outcome.RefusedRows));
         Assert.Equal(outcome.RowsRead, outcome.Added + outcome.Duplicates + outcome.RefusedRows);
-        Assert.Equal(3, Count(db, "SELECT COUNT(*) FROM trip_tests"));
+        Assert.Equal(3, db.Count("SELECT COUNT(*) FROM trip_tests"));
         var lines = File.ReadAllLines(rejects!);
         Assert.Equal("asset_tag,tested_at,stage,pole,current_a,trip_time_s,held_s,start,instrument,reject_reasons", lines[0]);
         Assert.StartsWith("T-01,2024-03-18T10:00,as-found,all,abc,1500,,warm,INJ-1,\"current_a: 'abc' is not a number", lines[1]);
@@ -55,11 +63,13 @@ public sealed class RobustImportTests
         Assert.Equal(3, lines.Length);
     }
 
-    [Fact]
-    public void ARejectsFile_OnceFixed_ImportsAsItIs()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void ARejectsFile_OnceFixed_ImportsAsItIs(Provider provider)
     {
         using var temp = new TempFolder();
-        var (store, db) = Open(temp);
+        using var database = TestDatabase.Create(provider, temp.Path);
+        var (store, db) = Open(temp, database);
         using var _ = store;
         var path = temp.Write("mixed.csv", Trips);
         var outcome = store.Import(RecordFileReader.Read(path, Records.Today), Now, new ImportOptions(AcceptValid: true));
@@ -69,14 +79,16 @@ public sealed class RobustImportTests
         var fixedUp = store.Import(RecordFileReader.Read(rejects, Records.Today), Now);
 
         Assert.Equal((ImportStatus.Imported, 2L), (fixedUp.Status, fixedUp.Added));
-        Assert.Equal(5, Count(db, "SELECT COUNT(*) FROM trip_tests"));
+        Assert.Equal(5, db.Count("SELECT COUNT(*) FROM trip_tests"));
     }
 
-    [Fact]
-    public void ACorrectedFile_IsAConflict_UntilReplaceAppliesIt_KeepingTheOldValue()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void ACorrectedFile_IsAConflict_UntilReplaceAppliesIt_KeepingTheOldValue(Provider provider)
     {
         using var temp = new TempFolder();
-        var (store, db) = Open(temp);
+        using var database = TestDatabase.Create(provider, temp.Path);
+        var (store, db) = Open(temp, database);
         using var _ = store;
         var path = temp.Write("trips.csv", Records.Trips);
         store.Import(RecordFileReader.Read(path, Records.Today), Now);
@@ -91,9 +103,9 @@ public sealed class RobustImportTests
         Assert.Contains("trip_time_s 22.5 -> 25", problem.Reason);
         Assert.Contains("--replace", problem.Reason);
         Assert.Equal((ImportStatus.Imported, 1L, 0L, 2L), (replaced.Status, replaced.Replaced, replaced.Added, replaced.Duplicates));
-        Assert.Equal(3, Count(db, "SELECT COUNT(*) FROM trip_tests"));
-        Assert.Equal(1, Count(db, "SELECT COUNT(*) FROM trip_tests WHERE time_s = 25.0"));
-        var audit = Assert.Single(store.AuditTrail());
+        Assert.Equal(3, db.Count("SELECT COUNT(*) FROM trip_tests"));
+        Assert.Equal(1, db.Count("SELECT COUNT(*) FROM trip_tests WHERE time_s = 25.0"));
+        var audit = Assert.Single(store.Changes());
         Assert.Equal(("trip_tests", "time_s", "22.5", "25"), (audit.Table, audit.Column, audit.Old, audit.New));
 
         // A correction applied through the tool is no fault: the first import's file now holds the second's content.
@@ -102,11 +114,13 @@ public sealed class RobustImportTests
         Assert.Equal([SourceFileState.Matches, SourceFileState.Superseded, SourceFileState.Matches], verified.Files.Select(f => f.State)); // register, trips, trips corrected
     }
 
-    [Fact]
-    public void ACopyUnderAnotherName_IsAlreadyImported_AndNamesTheFileItRepeats()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void ACopyUnderAnotherName_IsAlreadyImported_AndNamesTheFileItRepeats(Provider provider)
     {
         using var temp = new TempFolder();
-        var (store, _) = Open(temp);
+        using var database = TestDatabase.Create(provider, temp.Path);
+        var (store, _) = Open(temp, database);
         using var s = store;
         var first = temp.Write("trips.csv", Records.Trips);
         store.Import(RecordFileReader.Read(first, Records.Today), Now);
@@ -117,11 +131,13 @@ public sealed class RobustImportTests
         Assert.Equal(first, copy.EarlierFile);
     }
 
-    [Fact]
-    public void ATagWrittenInOtherCase_IsTheSameDevice_InRecordsAndInTheRegister()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void ATagWrittenInOtherCase_IsTheSameDevice_InRecordsAndInTheRegister(Provider provider)
     {
         using var temp = new TempFolder();
-        var (store, db) = Open(temp);
+        using var database = TestDatabase.Create(provider, temp.Path);
+        var (store, db) = Open(temp, database);
         using var s = store;
 
         var trips = store.Import(RecordFileReader.Read(temp.Write("trips.csv", Records.Trips.Replace("T-01,", "t-01,", StringComparison.Ordinal)), Records.Today), Now);
@@ -129,31 +145,35 @@ public sealed class RobustImportTests
 
         Assert.Equal((ImportStatus.Imported, 0L), (trips.Status, trips.RefusedRows));
         Assert.Equal((0L, 0L), (register.Added, register.Updated)); // the same entries, in other case: unchanged
-        Assert.Equal(2, Count(db, "SELECT COUNT(*) FROM devices"));
+        Assert.Equal(2, db.Count("SELECT COUNT(*) FROM devices"));
         Assert.Equal("T-01", store.Trips(AssetTag.Of("t-01"))[0].Tag.Value);
     }
 
-    [Fact]
-    public void ATagWrittenSpreadsheetSafe_ReadsAsTheTagItself()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void ATagWrittenSpreadsheetSafe_ReadsAsTheTagItself(Provider provider)
     {
         // A CSV this tool writes puts an apostrophe before a tag that starts like a formula, so a spreadsheet shows it as
         // text (OWASP, "CSV Injection"); importing that file again must find the device.
         using var temp = new TempFolder();
-        var (store, db) = Open(temp);
+        using var database = TestDatabase.Create(provider, temp.Path);
+        var (store, db) = Open(temp, database);
         using var s = store;
         store.Import(RecordFileReader.Read(temp.Write("register-2.csv", Records.Register.Replace("T-01,", "=T-01,", StringComparison.Ordinal) + "\n"), Records.Today), Now);
 
         var trips = store.Import(RecordFileReader.Read(temp.Write("trips.csv", Records.Trips.Replace("T-01,", "'=T-01,", StringComparison.Ordinal)), Records.Today), Now);
 
         Assert.Equal((ImportStatus.Imported, 0L), (trips.Status, trips.RefusedRows));
-        Assert.Equal(Sql.Count(db, "SELECT COUNT(*) FROM trip_tests"), store.Trips(AssetTag.Of("=T-01")).Count);
+        Assert.Equal(db.Count("SELECT COUNT(*) FROM trip_tests"), store.Trips(AssetTag.Of("=T-01")).Count);
     }
 
-    [Fact]
-    public void TheSameFileUnderAnotherPath_IsNotACorrection()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void TheSameFileUnderAnotherPath_IsNotACorrection(Provider provider)
     {
         using var temp = new TempFolder();
-        var (store, _) = Open(temp);
+        using var database = TestDatabase.Create(provider, temp.Path);
+        var (store, _) = Open(temp, database);
         using var s = store;
         store.Import(RecordFileReader.Read(temp.Write("trips.csv", Records.Trips), Records.Today), Now);
         Directory.CreateDirectory(Path.Combine(temp.Path, "copy"));
@@ -163,11 +183,13 @@ public sealed class RobustImportTests
         Assert.Equal((ImportStatus.Imported, 1L, 2L), (other.Status, other.Added, other.Duplicates));
     }
 
-    [Fact]
-    public void AnInstrumentRegister_IsStored_AndLapsedCalibrationsAreFound()
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void AnInstrumentRegister_IsStored_AndLapsedCalibrationsAreFound(Provider provider)
     {
         using var temp = new TempFolder();
-        var (store, _) = Open(temp);
+        using var database = TestDatabase.Create(provider, temp.Path);
+        var (store, _) = Open(temp, database);
         using var s = store;
 
         var outcome = store.Import(RecordFileReader.Read(temp.Write("instruments.csv", """
