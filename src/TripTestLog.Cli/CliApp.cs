@@ -8,7 +8,7 @@ internal static class CliApp
 {
     // A named command rather than RootCommand, whose name follows the host process (e.g. a test runner's).
     public static Command Build(CliContext cli) =>
-        new("triptestlog", "Keep breaker test records (trip times, contact and insulation resistance) in one SQLite database and judge every trip time against the band its standard allows.")
+        new("triptestlog", "Keep breaker test records (trip times, contact and insulation resistance) in one database, a SQLite file or a shared PostgreSQL server, and judge every trip time against the band its standard allows.")
         {
             // Help wraps at 100 columns whatever the terminal, so it reads the same everywhere (and in golden files).
             new System.CommandLine.Help.HelpOption { Action = new System.CommandLine.Help.HelpAction { MaxWidth = 100 } },
@@ -75,14 +75,15 @@ internal static class CliApp
     }
 
     // The innermost message on one line: what failed, in the words of the layer that knew.
-    private static string Plain(Exception e)
+    private static string Plain(Exception e) => Services.Stores.Plain(e) ?? Innermost(e).Message.ReplaceLineEndings(" ").Trim();
+
+    private static Exception Innermost(Exception e)
     {
-        while (e is not Storage.Postgres.StoreUnavailableException && e.InnerException is { } inner)
+        while (e.InnerException is { } inner)
         {
             e = inner;
         }
 
-        var message = (e is Npgsql.PostgresException p ? p.MessageText : e.Message).ReplaceLineEndings(" ").Trim();
-        return e is Microsoft.Data.Sqlite.SqliteException or Npgsql.NpgsqlException ? $"the database could not be used ({message})" : message;
+        return e;
     }
 }

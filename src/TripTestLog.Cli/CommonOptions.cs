@@ -10,7 +10,7 @@ internal static class CommonOptions
     /// <summary>The database: a SQLite file, created on first use, with the log beside it; or a PostgreSQL server.</summary>
     public static Option<StoreAddress> Database() => new("--db")
     {
-        Description = $"Database file (created if missing), the log beside it; or a server, postgres://user@host/dbname (default: ${StoreAddress.Variable}, else triptestlog.db)",
+        Description = $"Database file (created if missing), the log beside it; or a server, postgres://user@host/dbname ({StoreAddress.Variable} names it when --db is not given)",
         DefaultValueFactory = _ => StoreAddress.Default(),
         CustomParser = Address,
         HelpName = "PATH|URL",
@@ -34,7 +34,7 @@ internal static class CommonOptions
     /// <summary>The database file of a command that reads an existing database and refuses a missing one.</summary>
     public static Option<StoreAddress> ExistingDatabase() => new("--db")
     {
-        Description = $"Database file to read (it must exist; import creates it), or a server, postgres://user@host/dbname (default: ${StoreAddress.Variable}, else triptestlog.db)",
+        Description = $"Database file to read (it must exist; import creates it), or a server, postgres://user@host/dbname ({StoreAddress.Variable} names it when --db is not given)",
         DefaultValueFactory = _ => StoreAddress.Default(),
         CustomParser = Address,
         HelpName = "PATH|URL",

@@ -6,7 +6,9 @@ using TripTestLog.Application.Findings;
 using TripTestLog.Application.Import;
 using TripTestLog.Cli.Output;
 using TripTestLog.Ingest;
+using TripTestLog.Application.Stores;
 using TripTestLog.Storage;
+using TripTestLog.Storage.Postgres;
 
 namespace TripTestLog.Benchmarks;
 
@@ -15,13 +17,19 @@ namespace TripTestLog.Benchmarks;
 /// step's peak memory is its own) the raw SQLite insert floor, the project's import, a re-import, the raw read floor and
 /// check with JSON output, and prints rows per second, the ratios to the floors and peak memory.
 /// Usage: dotnet run -c Release --project tests/TripTestLog.Benchmarks -- [--rows 100000,300000,1000000] [--devices 10000] [--files 20] [--work DIR]
+/// [--server CONNECTION]. With --server (a PostgreSQL connection string; the password from PGPASSWORD or a .pgpass file),
+/// the same fleet is also imported into, checked and judged on the server, against the server's own COPY and read floors.
 /// With --pairs N, only the import against the insert floor at the largest --rows, N times alternated, and the median ratio.
 /// Diagnostic steps, run one at a time on a fleet written with --step generate: --step NAME --work DIR, where NAME is
 /// floor-schema (the raw insert into the project's own table), parse-only, rows-only, open-only, read-only, judge-only.
 /// </summary>
 internal static class Program
 {
+    private static string? server;
+
     private static readonly string[] Steps = ["floor-insert", "import", "reimport", "floor-read", "check", "findings", "fleet-page", "report", "pages"];
+
+    private static readonly string[] ServerSteps = ["server-floor-insert", "server-import", "server-floor-read", "server-check", "server-findings"];
 
     private static int Main(string[] args)
     {
@@ -34,6 +42,7 @@ internal static class Program
                 return 0;
             }
 
+            server = options.Server;
             return options.Step is { } step ? RunStep(step, options.Work) : options.Pairs > 0 ? RunPairs(options) : RunAll(options);
         }
         catch (ArgumentException e)
@@ -81,6 +90,25 @@ internal static class Program
             Print(rows, "report", results["report"], results["check"], slower: true);
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
                 $"{rows,8}  device pages: {results["pages"].Rows} written in {results["pages"].Seconds:0.00} s, {results["pages"].Rows / results["pages"].Seconds:0} pages/s ({results["pages"].PeakMb:0} MB peak)"));
+            if (o.Server is { } connection)
+            {
+                ServerFloors.Reset(connection);
+                foreach (var step in ServerSteps)
+                {
+                    Console.Error.WriteLine($"  {step} ...");
+                    results[step] = Child(step, work);
+                }
+
+                Print(rows, "pg floor-ins", results["server-floor-insert"], null);
+                Print(rows, "pg import", results["server-import"], results["server-floor-insert"]);
+                Print(rows, "pg floor-read", results["server-floor-read"], null);
+                Print(rows, "pg check", results["server-check"], results["server-floor-read"], slower: true);
+                Print(rows, "pg findings", results["server-findings"], results["server-floor-read"], slower: true);
+                Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                    $"{rows,8}  server against SQLite on this machine: import x{results["import"].Seconds / results["server-import"].Seconds:0.00} the speed, "
+                    + $"check x{results["check"].Seconds / results["server-check"].Seconds:0.00}, findings x{results["findings"].Seconds / results["server-findings"].Seconds:0.00}"));
+            }
+
             perRow.Add((rows, results["import"].Seconds, results["check"].Seconds));
             Directory.Delete(work, recursive: true);
         }
@@ -96,6 +124,12 @@ internal static class Program
         Console.WriteLine("x floor: for import and re-import, rows/s over the insert floor's (higher is better); for check and findings,");
         Console.WriteLine("time over the read floor's (lower is better); for fleet-page and report, time over check's. fleet-page: the");
         Console.WriteLine("fleet page alone; report: the fleet page with the findings and verdicts as CSV and JSON beside it.");
+        if (o.Server is not null)
+        {
+            Console.WriteLine("pg: the same steps on the PostgreSQL server, against its own floors: binary COPY of the raw rows into a plain");
+            Console.WriteLine("table with a unique 16-byte key, and one ordered read of the stored rows written as JSON lines.");
+        }
+
         return 0;
     }
 
@@ -149,6 +183,12 @@ internal static class Program
         foreach (var a in new[] { "--step", step, "--work", work })
         {
             info.ArgumentList.Add(a);
+        }
+
+        if (server is not null)
+        {
+            info.ArgumentList.Add("--server");
+            info.ArgumentList.Add(server);
         }
 
         using var process = Process.Start(info)!;
@@ -253,19 +293,44 @@ internal static class Program
             case "floor-read":
                 rows = Floors.ReadAsJson(project, Path.Combine(work, "floor.jsonl"));
                 break;
+            case "server-floor-insert":
+                rows = ServerFloors.Insert(Server(), trips);
+                break;
+            case "server-floor-read":
+                rows = ServerFloors.ReadAsJson(Server(), Path.Combine(work, "server-floor.jsonl"));
+                break;
+            case "server-import":
+                using (var store = ServerStore())
+                {
+                    var pipeline = new ImportPipeline(store);
+                    pipeline.Import(new CsvRecordFileSource(Path.Combine(records, "register.csv"), ReadOptions.Default), ImportOptions.Strict, today, now);
+                    clock.Restart();
+                    rows = 0;
+                    foreach (var outcome in pipeline.Run(trips.Select(t => (IRecordFileSource)new CsvRecordFileSource(t, ReadOptions.Default)).ToList(), ImportOptions.Strict, today, () => now))
+                    {
+                        rows += outcome.Status == ImportStatus.Imported ? outcome.Added : outcome.RowsRead;
+                    }
+                }
+
+                break;
+            case "server-check":
+                using (var store = ServerStore())
+                {
+                    rows = WriteVerdicts(store, Path.Combine(work, "server-check.json"));
+                }
+
+                break;
+            case "server-findings":
+                using (var store = ServerStore())
+                {
+                    rows = WriteFindings(store, Path.Combine(work, "server-findings.json"), today);
+                }
+
+                break;
             case "check":
                 using (var store = RecordStore.Open(project))
-                using (var writer = new StreamWriter(Path.Combine(work, "check.json"), false, new System.Text.UTF8Encoding(false), 1 << 16))
                 {
-                    var json = new VerdictJson(writer);
-                    rows = 0;
-                    foreach (var judged in CheckPipeline.Run(store))
-                    {
-                        json.Add(judged);
-                        rows++;
-                    }
-
-                    json.Finish();
+                    rows = WriteVerdicts(store, Path.Combine(work, "check.json"));
                 }
 
                 break;
@@ -321,17 +386,8 @@ internal static class Program
                 // Both passes of the findings pipeline over every device, every finding written as JSON; rows here are
                 // the devices, the trip rows they rest on are the fleet's.
                 using (var store = RecordStore.Open(project))
-                using (var writer = new StreamWriter(Path.Combine(work, "findings.json"), false, new System.Text.UTF8Encoding(false), 1 << 16))
-                using (var json = new FindingJson(writer))
                 {
-                    rows = 0;
-                    foreach (var device in FindingsPipeline.Run(store, FindingPolicy.Default, today))
-                    {
-                        json.Add(device, device.Findings);
-                        rows++;
-                    }
-
-                    json.Finish();
+                    rows = WriteFindings(store, Path.Combine(work, "findings.json"), today);
                 }
 
                 break;
@@ -344,9 +400,46 @@ internal static class Program
         return 0;
     }
 
+    private static string Server() => server ?? throw new ArgumentException("the server steps need --server CONNECTION");
+
+    private static IRecordStore ServerStore() =>
+        PostgresRecordStore.Open(ServerAddress.Parse(ServerFloors.In(Server(), ServerFloors.ProjectSchema), fromCommandLine: false));
+
+    // check --json's work: every trip judged with its history and written as a JSON object.
+    private static long WriteVerdicts(IRecordStore store, string path)
+    {
+        using var writer = new StreamWriter(path, false, new System.Text.UTF8Encoding(false), 1 << 16);
+        var json = new VerdictJson(writer);
+        long rows = 0;
+        foreach (var judged in CheckPipeline.Run(store))
+        {
+            json.Add(judged);
+            rows++;
+        }
+
+        json.Finish();
+        return rows;
+    }
+
+    // Both passes of the findings pipeline over every device, every finding written as JSON; rows are the devices.
+    private static long WriteFindings(IRecordStore store, string path, DateOnly today)
+    {
+        using var writer = new StreamWriter(path, false, new System.Text.UTF8Encoding(false), 1 << 16);
+        using var json = new FindingJson(writer);
+        long rows = 0;
+        foreach (var device in FindingsPipeline.Run(store, FindingPolicy.Default, today))
+        {
+            json.Add(device, device.Findings);
+            rows++;
+        }
+
+        json.Finish();
+        return rows;
+    }
+
     private sealed record StepResult(double Seconds, long Rows, double PeakMb);
 
-    private sealed record Options(IReadOnlyList<long> Rows, int Devices, int Files, string Work, string? Step, int Pairs = 0)
+    private sealed record Options(IReadOnlyList<long> Rows, int Devices, int Files, string Work, string? Step, int Pairs = 0, string? Server = null)
     {
         public static Options Parse(string[] args)
         {
@@ -355,6 +448,7 @@ internal static class Program
             var work = Path.Combine(Path.GetTempPath(), "triptestlog-bench");
             string? step = null;
             var pairs = 0;
+            string? server = null;
             for (var i = 0; i < args.Length; i++)
             {
                 var value = i + 1 < args.Length ? args[i + 1] : throw new ArgumentException($"{args[i]} needs a value");
@@ -375,17 +469,20 @@ internal static class Program
                     case "--step":
                         step = value;
                         break;
+                    case "--server":
+                        server = value;
+                        break;
                     case "--pairs":
                         pairs = int.TryParse(value, out var n2) && n2 is > 0 and <= 20 ? n2 : throw new ArgumentException("--pairs takes a whole number from 1 to 20");
                         break;
                     default:
-                        throw new ArgumentException($"unknown option {args[i]}; use --rows, --devices, --files, --work, --pairs");
+                        throw new ArgumentException($"unknown option {args[i]}; use --rows, --devices, --files, --work, --pairs, --server");
                 }
 
                 i++;
             }
 
-            return new Options(rows, devices, files, work, step, pairs);
+            return new Options(rows, devices, files, work, step, pairs, server);
         }
     }
 }

@@ -19,6 +19,7 @@ public sealed class HelpTextTests
     [InlineData("devices", new[] { "devices" })]
     [InlineData("instruments", new[] { "instruments" })]
     [InlineData("history", new[] { "history" })]
+    [InlineData("transfer", new[] { "transfer" })]
     public void HelpText_MatchesTheGoldenFile(string name, string[] command)
     {
         var (exit, output, _) = CliRun.Run([.. command, "--help"]);

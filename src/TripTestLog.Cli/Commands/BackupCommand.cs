@@ -10,7 +10,7 @@ internal static class BackupCommand
     {
         var target = new Argument<FileInfo>("PATH") { Description = "The new file to write the copy to (must not exist)" };
         var db = CommonOptions.ExistingDatabase();
-        var command = new Command("backup", "Write a consistent copy of the database, safe while other imports run (SQLite online backup)")
+        var command = new Command("backup", "Write a consistent copy of a database file, safe while other imports run (SQLite online backup; a server database is backed up with pg_dump)")
         {
             target, db,
         };

@@ -12,10 +12,13 @@ internal sealed class StoreAddress
     /// <summary>The environment variable that names the database when `--db` is not given.</summary>
     public const string Variable = "TRIPTESTLOG_DB";
 
-    private StoreAddress(FileInfo? file, ServerAddress? server)
+    private readonly string _given;
+
+    private StoreAddress(FileInfo? file, ServerAddress? server, string given)
     {
         File = file;
         Server = server;
+        _given = given;
     }
 
     /// <summary>The database file, when the store is SQLite.</summary>
@@ -34,12 +37,15 @@ internal sealed class StoreAddress
     public bool Exists => File?.Exists ?? true;
 
     /// <summary>A database file.</summary>
-    public static StoreAddress OfFile(string path) => new(new FileInfo(path), null);
+    public static StoreAddress OfFile(string path) => new(new FileInfo(path), null, path);
 
     /// <summary>Reads what `--db` (or the environment) says; a server address from a command line may not hold a password.</summary>
     /// <exception cref="FormatException">When a server address cannot be read; the message says what to fix.</exception>
     public static StoreAddress Parse(string text, bool fromCommandLine) =>
-        ServerAddress.Names(text) ? new(null, ServerAddress.Parse(text, fromCommandLine)) : OfFile(text);
+        ServerAddress.Names(text) ? new(null, ServerAddress.Parse(text, fromCommandLine), "") : OfFile(text);
+
+    /// <summary>A file as it was given (help shows the default so); a server as <see cref="Display"/>, never with a password.</summary>
+    public override string ToString() => File is null ? Display : _given;
 
     /// <summary>The store named by TRIPTESTLOG_DB, else triptestlog.db in the current folder.</summary>
     public static StoreAddress Default() =>
