@@ -9,7 +9,8 @@
 # run as root, so as root the cluster runs as the `postgres` user the package creates. The role's password is random,
 # kept in a .pgpass file of the cluster's folder (PGPASSFILE points at it): it never appears on a command line.
 #
-# Settings (environment): TRIPTESTLOG_PG_DIR (default /tmp/triptestlog-pg), TRIPTESTLOG_PG_PORT (default 55432).
+# Settings (environment): TRIPTESTLOG_PG_DIR (default /tmp/triptestlog-pg), TRIPTESTLOG_PG_PORT (default 55432),
+# TRIPTESTLOG_PG_FSYNC (default off: a throwaway server need not survive a power cut; on for the benchmark).
 set -euo pipefail
 
 dir=${TRIPTESTLOG_PG_DIR:-/tmp/triptestlog-pg}
@@ -59,7 +60,7 @@ start() {
   as_owner "$bin/initdb" -D "$dir/data" -U postgres -E UTF8 --locale=C.UTF-8 \
     --auth-local=trust --auth-host=scram-sha-256 --pwfile="$dir/superuser-password" >"$dir/initdb.log"
   as_owner "$bin/pg_ctl" -D "$dir/data" -l "$dir/server.log" -w -t 60 \
-    -o "-p $port -k $dir/socket -c listen_addresses=127.0.0.1 -c max_connections=200 -c fsync=off" start >/dev/null
+    -o "-p $port -k $dir/socket -c listen_addresses=127.0.0.1 -c max_connections=200 -c fsync=${TRIPTESTLOG_PG_FSYNC:-off}" start >/dev/null
 
   # Over the Unix socket (trust, the cluster owner only): a role and its database. The password goes in on stdin.
   as_owner "$bin/psql" -q -v ON_ERROR_STOP=1 -h "$dir/socket" -p "$port" -U postgres -d postgres >/dev/null <<SQL

@@ -128,6 +128,12 @@ internal static class Floors
         select.CommandText = "SELECT d.asset_tag, t.tested_at, t.stage, t.pole, t.current_a, t.tripped, t.time_s, t.start, t.ambient_c, t.instrument, t.technician, t.note "
             + "FROM devices d CROSS JOIN trip_tests t ON t.device_id = d.id ORDER BY d.asset_tag, t.tested_at, t.source_file_id, t.source_line";
         using var reader = select.ExecuteReader();
+        return WriteJsonLines(reader, output, r => r.GetString(1));
+    }
+
+    /// <summary>Writes each row of a read floor's query (tag, time, stage, pole, current, tripped, time, start, ambient, instrument, technician, note) as a JSON line.</summary>
+    public static long WriteJsonLines(System.Data.Common.DbDataReader reader, string output, Func<System.Data.Common.DbDataReader, string> testedAt)
+    {
         using var stream = new FileStream(output, FileMode.Create, FileAccess.Write, FileShare.None, 1 << 16);
         using var json = new Utf8JsonWriter(stream);
         var newline = "\n"u8.ToArray();
@@ -136,7 +142,7 @@ internal static class Floors
         {
             json.WriteStartObject();
             json.WriteString("asset_tag", reader.GetString(0));
-            json.WriteString("tested_at", reader.GetString(1));
+            json.WriteString("tested_at", testedAt(reader));
             json.WriteString("stage", reader.GetString(2));
             json.WriteString("pole", reader.GetString(3));
             json.WriteNumber("current_a", reader.GetDouble(4));

@@ -1,7 +1,6 @@
 using System.Globalization;
 using System.Security.Cryptography;
 using System.Text;
-using System.Text.Json;
 using Npgsql;
 using NpgsqlTypes;
 
@@ -91,40 +90,6 @@ internal static class ServerFloors
             "SELECT d.asset_tag, t.tested_at, t.stage, t.pole, t.current_a, t.tripped, t.time_s, t.start, t.ambient_c, t.instrument, t.technician, t.note "
             + "FROM devices d JOIN trip_tests t ON t.device_id = d.id ORDER BY d.asset_tag, t.tested_at, t.source_file_id, t.source_line", connection);
         using var reader = select.ExecuteReader();
-        using var stream = new FileStream(output, FileMode.Create, FileAccess.Write, FileShare.None, 1 << 16);
-        using var json = new Utf8JsonWriter(stream);
-        var newline = "\n"u8.ToArray();
-        long rows = 0;
-        while (reader.Read())
-        {
-            json.WriteStartObject();
-            json.WriteString("asset_tag", reader.GetString(0));
-            json.WriteString("tested_at", reader.GetDateTime(1).ToString("yyyy-MM-ddTHH:mm:ss", CultureInfo.InvariantCulture));
-            json.WriteString("stage", reader.GetString(2));
-            json.WriteString("pole", reader.GetString(3));
-            json.WriteNumber("current_a", reader.GetDouble(4));
-            json.WriteBoolean("tripped", reader.GetBoolean(5));
-            json.WriteNumber("time_s", reader.GetDouble(6));
-            json.WriteString("start", reader.GetString(7));
-            if (reader.IsDBNull(8))
-            {
-                json.WriteNull("ambient_c");
-            }
-            else
-            {
-                json.WriteNumber("ambient_c", reader.GetDouble(8));
-            }
-
-            json.WriteString("instrument", reader.GetString(9));
-            json.WriteString("technician", reader.GetString(10));
-            json.WriteString("note", reader.GetString(11));
-            json.WriteEndObject();
-            json.Flush();
-            stream.Write(newline);
-            json.Reset();
-            rows++;
-        }
-
-        return rows;
+        return Floors.WriteJsonLines(reader, output, r => r.GetDateTime(1).ToString("yyyy-MM-ddTHH:mm:ss", CultureInfo.InvariantCulture));
     }
 }

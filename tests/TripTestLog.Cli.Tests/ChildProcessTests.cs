@@ -68,18 +68,22 @@ public sealed class ChildProcessTests : IDisposable
 
     [Theory]
     [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
-    public void TwoImportsAtOnce_BothFinish_AndBothFilesAreStored(Provider provider)
+    public void TwoImportsAtOnce_OfOverlappingFiles_BothFinish_WithNoRowLostOrStoredTwice(Provider provider)
     {
         _database = TestDatabase.Create(provider, _folder);
         Assert.Equal(0, Cli("import", Register(), "--db", Db).WaitForExitCode());
+
+        // The second file's first half is the first file's second half: 150,000 distinct measurements in all.
         var a = Trips("a.csv", 100_000, 0);
-        var b = Trips("b.csv", 100_000, 1_000_000);
+        var b = Trips("b.csv", 100_000, 50_000);
 
         using var first = Cli("import", a, "--db", Db);
         using var second = Cli("import", b, "--db", Db);
 
         Assert.Equal((0, 0), (first.WaitForExitCode(), second.WaitForExitCode()));
-        Assert.Equal((200_000L, 3L), (Database.Count("SELECT COUNT(*) FROM trip_tests"), Database.Count("SELECT COUNT(*) FROM source_files")));
+        Assert.Equal((150_000L, 3L), (Database.Count("SELECT COUNT(*) FROM trip_tests"), Database.Count("SELECT COUNT(*) FROM source_files")));
+        Assert.Equal((150_000L, 50_000L), (Database.Count("SELECT CAST(SUM(records_added) AS BIGINT) FROM source_files WHERE kind = 'TripTests'"),
+            Database.Count("SELECT CAST(SUM(duplicates) AS BIGINT) FROM source_files WHERE kind = 'TripTests'")));
         if (provider == Provider.Sqlite)
         {
             Assert.Equal("ok", Database.Scalar("PRAGMA integrity_check"));
@@ -121,7 +125,7 @@ public sealed class ChildProcessTests : IDisposable
         for (var i = 0; i < rows; i++)
         {
             var at = start.AddSeconds(offsetSeconds + i).ToString("yyyy-MM-ddTHH:mm:ss", CultureInfo.InvariantCulture);
-            sb.Append("P-01,").Append(at).Append(",as-found,all,40.9,").Append((10 + i % 40).ToString(CultureInfo.InvariantCulture)).Append(",,cold\n");
+            sb.Append("P-01,").Append(at).Append(",as-found,all,40.9,").Append((10 + (offsetSeconds + i) % 40).ToString(CultureInfo.InvariantCulture)).Append(",,cold\n");
         }
 
         File.WriteAllText(path, sb.ToString());
