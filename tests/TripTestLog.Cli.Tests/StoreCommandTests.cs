@@ -28,15 +28,28 @@ public sealed class StoreCommandTests(CopiedFleet fleet) : IClassFixture<CopiedF
     [Fact]
     public void AServerThatCannotBeReached_GetsOneSentence_AndTheEnvironmentsPasswordStaysHidden()
     {
-        // Port 1 on loopback: nothing listens there. A password may come from the environment, never shown.
-        var (exit, output, error) = Child(
-            new Dictionary<string, string> { [Services.StoreAddress.Variable] = "Host=127.0.0.1;Port=1;Database=records;Username=lab;Password=hunter2;Timeout=3" },
-            "devices");
+        // Port 1 on loopback: nothing listens there. A password may come from the environment, never shown or logged.
+        var folder = Directory.CreateTempSubdirectory("ttl-env-").FullName;
+        try
+        {
+            var (exit, output, error) = Child(
+                new Dictionary<string, string> { [Services.StoreAddress.Variable] = "Host=127.0.0.1;Port=1;Database=records;Username=lab;Password=hunter2;Timeout=3" },
+                folder, "devices");
 
-        Assert.Equal(ExitCodes.BadInput, exit);
-        Assert.StartsWith("error: the database server postgres://lab@127.0.0.1:1/records could not be used (", error, StringComparison.Ordinal);
-        Assert.Single(error.TrimEnd().Split('\n'));
-        Assert.DoesNotContain("hunter2", output + error, StringComparison.Ordinal);
+            Assert.Equal(ExitCodes.BadInput, exit);
+            Assert.StartsWith("error: the database server postgres://lab@127.0.0.1:1/records could not be used (", error, StringComparison.Ordinal);
+            Assert.Single(error.TrimEnd().Split('\n'));
+            Assert.DoesNotContain("hunter2", output + error, StringComparison.Ordinal);
+
+            // The run is logged in the working folder (a server has no folder of its own), without the password.
+            var log = File.ReadAllText(Path.Combine(folder, "triptestlog.log"));
+            Assert.Contains("ran: triptestlog devices; exit 2", log, StringComparison.Ordinal);
+            Assert.DoesNotContain("hunter2", log, StringComparison.Ordinal);
+        }
+        finally
+        {
+            Directory.Delete(folder, recursive: true);
+        }
     }
 
     [Theory]
@@ -45,7 +58,7 @@ public sealed class StoreCommandTests(CopiedFleet fleet) : IClassFixture<CopiedF
     {
         var copy = fleet.Copy(provider);
 
-        var (exit, output, error) = Child(new Dictionary<string, string> { [Services.StoreAddress.Variable] = copy.Address }, "devices", "--json");
+        var (exit, output, error) = Child(new Dictionary<string, string> { [Services.StoreAddress.Variable] = copy.Address }, AppContext.BaseDirectory, "devices", "--json");
 
         Assert.True(exit == 0, error);
         Assert.Contains("\"asset_tag\": \"BPS-DB1-Q03\"", output, StringComparison.Ordinal);
@@ -133,9 +146,9 @@ public sealed class StoreCommandTests(CopiedFleet fleet) : IClassFixture<CopiedF
     private string PolicyBesideOriginal() => Path.Combine(Path.GetDirectoryName(fleet.Original)!, "lab-policy.conf");
 
     // A real process, so an environment variable is the child's alone.
-    private static (int Exit, string Out, string Error) Child(Dictionary<string, string> environment, params string[] args)
+    private static (int Exit, string Out, string Error) Child(Dictionary<string, string> environment, string folder, params string[] args)
     {
-        var info = new ProcessStartInfo("dotnet") { RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false };
+        var info = new ProcessStartInfo("dotnet") { RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false, WorkingDirectory = folder };
         info.ArgumentList.Add(Path.Combine(AppContext.BaseDirectory, "triptestlog.dll"));
         foreach (var arg in args)
         {

@@ -54,4 +54,53 @@ public sealed class StoreParityTests(CopiedFleet fleet) : IClassFixture<CopiedFl
             copied.Out.Replace(CopiedFleet.Shown(copy), "<db>", StringComparison.Ordinal));
         Assert.Equal(original.Error, copied.Error);
     }
+
+    public static TheoryData<Provider, string> ProvidersAndFolderCommands()
+    {
+        var data = new TheoryData<Provider, string>();
+        foreach (var provider in TestDatabase.Providers)
+        {
+            data.Add(provider, "report");
+            data.Add(provider, "worksheet --site Copperwell Depot");
+        }
+
+        return data;
+    }
+
+    [Theory]
+    [MemberData(nameof(ProvidersAndFolderCommands))]
+    public void ACopyInEitherStore_WritesTheSameReportAndWorksheet_AsTheOriginal(Provider provider, string command)
+    {
+        var copy = fleet.Copy(provider);
+        string[] args = command == "report" ? ["report", "--policy", Path.Combine(Path.GetDirectoryName(fleet.Original)!, "lab-policy.conf")] : ["worksheet", "--site", "Copperwell Depot", "--policy", Path.Combine(Path.GetDirectoryName(fleet.Original)!, "lab-policy.conf")];
+        var folders = new[] { "original", "copy" }.Select(n => Path.Combine(Path.GetTempPath(), $"ttl-parity-{n}-{Guid.NewGuid():N}")).ToArray();
+
+        try
+        {
+            var original = CliRun.Run([.. args, "--db", fleet.Original, "--out", folders[0]]);
+            var copied = CliRun.Run([.. args, "--db", copy.Address, "--out", folders[1]]);
+
+            Assert.Equal((0, 0), (original.Exit, copied.Exit));
+            var files = Directory.GetFiles(folders[0], "*", SearchOption.AllDirectories).Select(f => Path.GetRelativePath(folders[0], f)).Order(StringComparer.Ordinal).ToList();
+            Assert.NotEmpty(files);
+            Assert.Equal(files, Directory.GetFiles(folders[1], "*", SearchOption.AllDirectories).Select(f => Path.GetRelativePath(folders[1], f)).Order(StringComparer.Ordinal));
+            foreach (var file in files)
+            {
+                var a = Steady(File.ReadAllText(Path.Combine(folders[0], file)).Replace(Path.GetFullPath(fleet.Original), "<db>", StringComparison.Ordinal));
+                var b = Steady(File.ReadAllText(Path.Combine(folders[1], file)).Replace(CopiedFleet.Shown(copy), "<db>", StringComparison.Ordinal));
+                var line = a.Split('\n').Zip(b.Split('\n')).FirstOrDefault(p => p.First != p.Second);
+                Assert.True(a == b, $"{file} differs between the original and the copy: {line.First} | {line.Second}");
+            }
+        }
+        finally
+        {
+            foreach (var folder in folders.Where(Directory.Exists))
+            {
+                Directory.Delete(folder, recursive: true);
+            }
+        }
+    }
+
+    // The chart library names each SVG clip path at random; the names say nothing about the data.
+    private static string Steady(string text) => System.Text.RegularExpressions.Regex.Replace(text, "cl_[0-9a-f]+", "cl_");
 }
