@@ -7,7 +7,7 @@ namespace TripTestLog.Storage.Postgres;
 /// (<c>Host=...;Database=...</c>). The password never travels in it from a command line: it comes from PGPASSWORD or a
 /// .pgpass file (PGPASSFILE), which Npgsql reads itself, and it is never part of <see cref="Display"/>.
 /// </summary>
-public sealed class ServerAddress
+public sealed partial class ServerAddress
 {
     private ServerAddress(NpgsqlConnectionStringBuilder builder)
     {
@@ -29,7 +29,7 @@ public sealed class ServerAddress
         var t = text.TrimStart();
         return t.StartsWith("postgres://", StringComparison.OrdinalIgnoreCase)
             || t.StartsWith("postgresql://", StringComparison.OrdinalIgnoreCase)
-            || (t.Contains('=', StringComparison.Ordinal) && t.Contains("host", StringComparison.OrdinalIgnoreCase) && !File.Exists(t));
+            || (HostKeyword().IsMatch(t) && !File.Exists(t));
     }
 
     /// <summary>
@@ -56,6 +56,10 @@ public sealed class ServerAddress
         builder.ApplicationName ??= "triptestlog";
         return new ServerAddress(builder);
     }
+
+    // A connection string names its host as Host=... (or Server=...), first or after a semicolon.
+    [System.Text.RegularExpressions.GeneratedRegex(@"(^|;)\s*(host|server)\s*=", System.Text.RegularExpressions.RegexOptions.IgnoreCase)]
+    private static partial System.Text.RegularExpressions.Regex HostKeyword();
 
     private static NpgsqlConnectionStringBuilder FromKeywords(string text)
     {
