@@ -11,7 +11,7 @@ internal static class CommonOptions
     public static Option<StoreAddress> Database() => new("--db")
     {
         Description = $"Database file (created if missing), the log beside it; or a server, postgres://user@host/dbname ({StoreAddress.Variable} names it when --db is not given)",
-        DefaultValueFactory = _ => StoreAddress.Default(),
+        DefaultValueFactory = DefaultAddress,
         CustomParser = Address,
         HelpName = "PATH|URL",
     };
@@ -35,7 +35,7 @@ internal static class CommonOptions
     public static Option<StoreAddress> ExistingDatabase() => new("--db")
     {
         Description = $"Database file to read (it must exist; import creates it), or a server, postgres://user@host/dbname ({StoreAddress.Variable} names it when --db is not given)",
-        DefaultValueFactory = _ => StoreAddress.Default(),
+        DefaultValueFactory = DefaultAddress,
         CustomParser = Address,
         HelpName = "PATH|URL",
     };
@@ -48,6 +48,20 @@ internal static class CommonOptions
         CustomParser = Address,
         HelpName = "PATH|URL",
     };
+
+    // TRIPTESTLOG_DB that cannot be read is a usage error too, named as the variable, not a failure of the parser.
+    private static StoreAddress DefaultAddress(ArgumentResult result)
+    {
+        try
+        {
+            return StoreAddress.Default();
+        }
+        catch (FormatException e)
+        {
+            result.AddError($"{StoreAddress.Variable}: {e.Message}");
+            return StoreAddress.OfFile("triptestlog.db");
+        }
+    }
 
     // A server address that cannot be read, or that holds a password, is a usage error with one sentence.
     private static StoreAddress? Address(ArgumentResult result)

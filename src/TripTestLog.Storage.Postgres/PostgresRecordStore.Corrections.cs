@@ -31,7 +31,7 @@ public sealed partial class PostgresRecordStore
         var values = correction.New.Values;
         for (var i = 0; i < values.Length; i++)
         {
-            update.Parameters.Add(i == 1
+            update.Parameters.Add(i == MeasurementTable.TestedAtColumn
                 ? new NpgsqlParameter($"p{i}", NpgsqlDbType.Timestamp) { Value = DateTime.SpecifyKind(when.Local, DateTimeKind.Unspecified) }
                 : new NpgsqlParameter($"p{i}", values[i] switch { string => NpgsqlDbType.Text, long => NpgsqlDbType.Bigint, bool => NpgsqlDbType.Boolean, _ => NpgsqlDbType.Double })
                 {

@@ -170,7 +170,7 @@ internal sealed class ServerMeasurementBatch : IMeasurementBatch
                 var values = row.Row.Values;
                 for (var i = 0; i < values.Length; i++)
                 {
-                    Write(writer, i == 1 ? row.When.Local : values[i]);
+                    Write(writer, i == MeasurementTable.TestedAtColumn ? row.When.Local : values[i]);
                 }
 
                 Write(writer, row.When.Offset is { } offset ? (short)offset.TotalMinutes : DBNull.Value);
@@ -236,8 +236,8 @@ internal sealed class ServerMeasurementBatch : IMeasurementBatch
             values[i] = reader.GetValue(i + 1);
         }
 
-        var n = _table.Columns.Length;
-        values[1] = ServerRows.TestedAt(reader, 2, n + 1).ToString();
+        // The lookup selects id first and the test time's two other parts last.
+        values[MeasurementTable.TestedAtColumn] = ServerRows.TestedAt(reader, MeasurementTable.TestedAtColumn + 1, _table.Columns.Length + 1).ToString();
         var correction = new Correction(row, reader.GetInt64(0), values, earlier.Id, earlier.Name, _table.Columns);
         return correction.Changes.Any() ? correction : null;
     }

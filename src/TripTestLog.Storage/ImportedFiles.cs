@@ -13,13 +13,12 @@ internal static class ImportedFiles
         // through the tool (import --replace, or a fixed rejects file), which is no fault.
         var byPath = rows.ToLookup(f => f.FullPath, StringComparer.Ordinal);
         var current = byPath.ToDictionary(g => g.Key, g => HashOf(g.Key), StringComparer.Ordinal);
-        var files = rows.Select(f => new VerifiedFile(f.FileName, f.Sha256,
+        return [.. rows.Select(f => new VerifiedFile(f.FileName, f.Sha256,
             current[f.FullPath] is not { } now ? SourceFileState.NotAtHand
             : now == f.Sha256 ? SourceFileState.Matches
             : byPath[f.FullPath].Any(later => later.Id > f.Id && later.Sha256 == now) ? SourceFileState.Superseded
             : SourceFileState.Changed,
-            counts.GetValueOrDefault(f.Id))).ToList();
-        return files;
+            counts.GetValueOrDefault(f.Id)))];
     }
 
     private static string? HashOf(string path)

@@ -16,6 +16,9 @@ internal sealed record MeasurementRow(object[] Values, string Fingerprint, long 
 /// <param name="TrailingOptional">How many of the last columns are usually empty, so an insert may leave them out.</param>
 internal sealed record MeasurementTable(string Table, string[] Columns, int TrailingOptional = 0)
 {
+    /// <summary>Where every measurement table holds its test time among <see cref="Columns"/>: second, after the device.</summary>
+    public const int TestedAtColumn = 1;
+
     public static MeasurementTable Trips { get; } = new("trip_tests",
     [
         "device_id", "tested_at", "stage", "pole", "current_a", "tripped", "time_s", "start", "ambient_c", "instrument", "technician", "note",

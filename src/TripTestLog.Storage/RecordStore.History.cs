@@ -58,6 +58,7 @@ public sealed partial class RecordStore : IHistorySource
         return list;
     }
 
-    private static DateTimeOffset Moment(string utc) =>
+    /// <summary>A moment the store wrote as ISO 8601 UTC text.</summary>
+    internal static DateTimeOffset Moment(string utc) =>
         DateTimeOffset.Parse(utc, CultureInfo.InvariantCulture, DateTimeStyles.AssumeUniversal | DateTimeStyles.AdjustToUniversal);
 }

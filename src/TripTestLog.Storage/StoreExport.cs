@@ -49,7 +49,7 @@ internal sealed class StoreExport(Func<string, string> registerSelect, Func<stri
             yield return file.Kind switch
             {
                 RecordKind.DeviceRegister => new Located<object>(DeviceMapping.Read(r), r.GetInt64(DeviceMapping.Columns.Split(", ").Length + 1)),
-                RecordKind.TripTests => rows.Trip(r) is var t ? Located(t.Measurement, t.SourceLine) : default,
+                RecordKind.TripTests => Located(rows.Trip(r)),
                 RecordKind.ContactResistance => Located(rows.Contact(r)),
                 RecordKind.InsulationResistance => Located(rows.Insulation(r)),
                 RecordKind.CurveTable => new(new CurveTableRow(r.GetString(0), new CurveTablePoint(CurrentMultiple.Of(r.GetDouble(1)), Seconds.Of(r.GetDouble(2)),
@@ -67,7 +67,7 @@ internal sealed class StoreExport(Func<string, string> registerSelect, Func<stri
         while (r.Read())
         {
             list.Add(new StoredChange(r.GetString(1), r.GetString(2), r.GetString(3), r.GetString(4), r.GetString(5), r.GetString(6), r.GetString(7),
-                DateTimeOffset.Parse(r.GetString(8), CultureInfo.InvariantCulture, DateTimeStyles.AssumeUniversal | DateTimeStyles.AdjustToUniversal)));
+                RecordStore.Moment(r.GetString(8))));
         }
 
         return list;
@@ -80,7 +80,7 @@ internal sealed class StoreExport(Func<string, string> registerSelect, Func<stri
         while (r.Read())
         {
             list.Add(new StoredFile(r.GetInt64(0), r.GetString(1), r.GetString(2), r.GetString(3), Enum.Parse<RecordKind>(r.GetString(4)), r.GetInt64(5),
-                DateTimeOffset.Parse(r.GetString(6), CultureInfo.InvariantCulture, DateTimeStyles.AssumeUniversal | DateTimeStyles.AdjustToUniversal)));
+                RecordStore.Moment(r.GetString(6))));
         }
 
         return list;
@@ -99,7 +99,7 @@ internal sealed class StoreExport(Func<string, string> registerSelect, Func<stri
     private static Located<object> Located<T>(StoredMeasurement<T> m)
         where T : IMeasurement => new(m.Measurement, m.SourceLine);
 
-    private static Located<object> Located(object record, long line) => new(record, line);
+    private static Located<object> Located(StoredTrip t) => new(t.Measurement, t.SourceLine);
 
     private static DateOnly Date(string text) => DateOnly.ParseExact(text, "yyyy-MM-dd", CultureInfo.InvariantCulture);
 }

@@ -52,6 +52,18 @@ public sealed class StoreCommandTests(CopiedFleet fleet) : IClassFixture<CopiedF
         }
     }
 
+    [Fact]
+    public void AnEnvironmentVariableThatCannotBeRead_IsNamed_InOneSentence()
+    {
+        var (exit, _, error) = Child(new Dictionary<string, string> { [Services.StoreAddress.Variable] = "postgres://lab@db.example.invalid" },
+            AppContext.BaseDirectory, "devices");
+
+        Assert.Equal(ExitCodes.BadInput, exit);
+        Assert.Contains("TRIPTESTLOG_DB: a server address needs a host and a database", error, StringComparison.Ordinal);
+        Assert.DoesNotContain("   at ", error, StringComparison.Ordinal);
+        Assert.DoesNotContain("Unhandled exception", error, StringComparison.Ordinal);
+    }
+
     [Theory]
     [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
     public void TheEnvironmentVariable_NamesTheStore_WhenDbIsNotGiven(Provider provider)

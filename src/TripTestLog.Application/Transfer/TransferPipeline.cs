@@ -22,19 +22,24 @@ public sealed record TransferredFile(StoredFile File, bool Copied, long Records,
 /// </summary>
 public sealed class TransferPipeline(IRecordStore source, IRecordStore target)
 {
-    /// <summary>Runs the copy; <paramref name="progress"/> hears of each file as it is done.</summary>
-    public (IReadOnlyList<TransferredFile> Files, long Changes) Run(Action<TransferredFile>? progress = null, CancellationToken cancel = default)
+    /// <summary>
+    /// Copies <paramref name="files"/> (the source's <see cref="IRecordExport.Files"/>, read once by the caller, which
+    /// may count them for progress; every file when null), then the corrections; <paramref name="progress"/> hears of
+    /// each file as it is done.
+    /// </summary>
+    public (IReadOnlyList<TransferredFile> Files, long Changes) Run(
+        IReadOnlyList<StoredFile>? files = null, Action<TransferredFile>? progress = null, CancellationToken cancel = default)
     {
-        var files = new List<TransferredFile>();
-        foreach (var file in source.Files())
+        var done = new List<TransferredFile>();
+        foreach (var file in files ?? [.. source.Files()])
         {
             cancel.ThrowIfCancellationRequested();
-            var done = IsMeasurement(file.Kind) ? Measurements(file, cancel) : SmallFile(file);
-            files.Add(done);
-            progress?.Invoke(done);
+            var copied = IsMeasurement(file.Kind) ? Measurements(file, cancel) : SmallFile(file);
+            done.Add(copied);
+            progress?.Invoke(copied);
         }
 
-        return (files, target.AddChanges(source.Changes()));
+        return (done, target.AddChanges(source.Changes()));
     }
 
     private static bool IsMeasurement(RecordKind kind) => kind is RecordKind.TripTests or RecordKind.ContactResistance or RecordKind.InsulationResistance;

@@ -35,13 +35,13 @@ internal static class TransferCommand
 
         using var source = Stores.Open(from);
         using var target = Stores.Open(to);
-        var total = source.Files().Count();
+        var toCopy = source.Files().ToList();
         using var log = Logging.BesideDatabase(to);
         IReadOnlyList<TransferredFile> files;
         long changes;
-        using (var progress = Progress.For(cli, total))
+        using (var progress = Progress.For(cli, toCopy.Count))
         {
-            (files, changes) = new TransferPipeline(source, target).Run(f =>
+            (files, changes) = new TransferPipeline(source, target).Run(toCopy, f =>
             {
                 progress.Step(f.File.Name);
                 log.Information("Transfer {From} -> {To}: {File} ({Sha}) {State}, {Added} of {Records} records added",
