@@ -5,7 +5,7 @@ namespace TripTestLog.Cli.Tests;
 /// <summary>`findings`, `fleet` and `policy` on the sample fleet's real database.</summary>
 public sealed class FindingsCommandTests(SampleFleetDatabase fleet) : IClassFixture<SampleFleetDatabase>
 {
-    // Which invented device shows which finding: the README's table says the same, and a test below holds them together.
+    // Which invented device shows which finding: docs/findings.md says the same, and a test below holds them together.
     public static readonly TheoryData<string, string> KindsAndDevices = new()
     {
         { "trip-out-of-band", "BPS-DB1-Q03" },
@@ -37,7 +37,7 @@ public sealed class FindingsCommandTests(SampleFleetDatabase fleet) : IClassFixt
         Assert.Equal(0, exit);
         Assert.Contains(findings, f => f.GetProperty("asset_tag").GetString() == asset);
         Assert.All(findings, f => Assert.Equal(kind, f.GetProperty("kind").GetString()));
-        var readme = File.ReadLines(Path.Combine(Golden.RepositoryRoot(), "README.md"));
+        var readme = File.ReadLines(Path.Combine(Golden.RepositoryRoot(), "docs", "findings.md"));
         Assert.Contains(readme, line => line.Contains($"`{kind}`", StringComparison.Ordinal) && line.Contains(asset, StringComparison.Ordinal));
     }
 

@@ -15,7 +15,7 @@ internal static class DevicesCommand
         var db = CommonOptions.ExistingDatabase();
         var site = new Option<string?>("--site") { Description = "Only devices at this site", HelpName = "SITE" };
         var asOf = new Option<string?>("--as-of") { Description = "The settings in force on this date (default: today)", HelpName = "YYYY-MM-DD" };
-        var json = new Option<bool>("--json") { Description = "Write a JSON array, one object per device (fields in the README)" };
+        var json = new Option<bool>("--json") { Description = "Write a JSON array, one object per device (fields in docs/commands.md)" };
         var wide = new Option<bool>("--wide") { Description = "Show the settings whole, however wide" };
         var command = new Command("devices", "List the device register with the settings in force, site by site") { db, site, asOf, json, wide };
         command.SetAction(parse =>

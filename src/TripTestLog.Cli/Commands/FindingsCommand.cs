@@ -13,7 +13,7 @@ internal static class FindingsCommand
     public static Command Create(CliContext cli)
     {
         var shared = new ConditionOptions();
-        var kind = new Option<string?>("--kind") { Description = "Only this kind of finding (codes in the README)", HelpName = "KIND" };
+        var kind = new Option<string?>("--kind") { Description = "Only this kind of finding (codes in docs/findings.md)", HelpName = "KIND" };
         var grade = new Option<string?>("--grade") { Description = "Only devices of this grade: sound ... take-out-of-service", HelpName = "GRADE" };
         var dueBefore = new Option<string?>("--due-before") { Description = "Only devices whose next test is due before this date", HelpName = "YYYY-MM-DD" };
         var closed = new Option<bool>("--include-closed") { Description = "Also list findings a later as-found test has closed" };

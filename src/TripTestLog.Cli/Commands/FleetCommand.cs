@@ -13,7 +13,7 @@ internal static class FleetCommand
     {
         var shared = new ConditionOptions();
         var top = new Option<int>("--top") { Description = "How many devices the priority list shows", DefaultValueFactory = _ => 15, HelpName = "N" };
-        var json = new Option<bool>("--json") { Description = "Write one JSON object (fields in the README)" };
+        var json = new Option<bool>("--json") { Description = "Write one JSON object (fields in docs/findings.md)" };
         var command = new Command("fleet", "The fleet by site and condition grade, and what to act on first");
         foreach (var option in shared.All.Concat<Option>([top, json]))
         {
