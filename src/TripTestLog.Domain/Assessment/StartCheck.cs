@@ -46,7 +46,7 @@ public static class StartCheck
         var multiple = previous.Current.Value / envelope.Reference.Value;
         var completedHold = !previous.Outcome.Tripped
             && previous.Outcome.Time >= point.MustHoldFor!.Value
-            && multiple >= point.Multiple.Value * (1 - TripJudge.PointTolerance);
+            && multiple >= point.Multiple.Value * (1 - Settings.LabPolicy.PointWindow);
         if (!completedHold)
         {
             return $"it is marked warm, but the test before it ({Describe(previous, envelope)}) is not {needed}";

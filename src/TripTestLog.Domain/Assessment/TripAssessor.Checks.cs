@@ -31,50 +31,39 @@ public sealed partial class TripAssessor
         return assessment with
         {
             Verdict = Verdict.NotAssessable,
+            Proved = null,
             Reason = $"{doubt}; the verdict would be {Word(assessment.Verdict)} {claimed} and {Word(otherVerdict)} {unclaimed}: "
                 + $"repeat the test with the start the standard asks for ({assessment.Reason})",
         };
     }
 
-    // Without a derating table a bimetal release may shift by up to LabPolicy.AmbientShiftPerKelvin per kelvin; a verdict
-    // that the shift would change is the ambient's as much as the breaker's. An electronic unit computes its time from the
-    // measured current, so the ambient does not move it.
-    private TripAssessment? CheckAmbient(TripAssessment assessment, Device device, DeviceSettings settings, bool thermal, TestConditions conditions)
+    // A curve table has no standard points to move, so for a device judged by a curve table alone the ambient is checked
+    // the older way: judged again with the table's currents shifted as far as the ambient can move them; a verdict that
+    // the shift would change is the ambient's as much as the breaker's.
+    private TripAssessment? CheckCurveTableAmbient(TripAssessment assessment, Device device, DeviceSettings settings, bool thermal, ITripEnvelope envelope, TestConditions conditions)
     {
         var m = assessment.Measurement;
-        var reference = device.ReferenceAmbient ?? EnvelopeFactory.DefaultReferenceAmbient(device.Family);
-        if (!thermal || settings is ElectronicTripSettings or RelaySettings || device.AmbientTable is not null || m.Ambient is not { } ambient || reference is not { } r)
+        if (!thermal || envelope.Points.Count > 0 || AmbientDelta(device, settings, m) is not { } d || Math.Abs(d.Kelvin) <= LabPolicy.AmbientCheckKelvin)
         {
             return null;
         }
 
-        var delta = ambient.Value - r.Value;
-        if (Math.Abs(delta) <= LabPolicy.AmbientCheckKelvin)
-        {
-            return null;
-        }
-
-        // Warmer than the reference, the release acts at a lower current: its thresholds scale by (1 - k dT). dT is
-        // rounded away from zero to whole half kelvins: a slightly larger shift (stricter), and few distinct envelopes.
-        var rounded = Math.Sign(delta) * Math.Ceiling(Math.Abs(delta) * 2) / 2;
+        var rounded = Math.Sign(d.Kelvin) * Math.Ceiling(Math.Abs(d.Kelvin) * 2) / 2;
         var factor = Math.Clamp(1 - LabPolicy.AmbientShiftPerKelvin * rounded, 0.5, 1.5);
-        var shifted = TripJudge.Assess(Envelope(device, settings, factor), m, conditions).Verdict;
-        var k = (LabPolicy.AmbientShiftPerKelvin * 100).ToString("0.#", CultureInfo.InvariantCulture);
+        var shifted = TripJudge.Assess(Envelope(device, settings, factor, AmbientShift.None), m, conditions).Verdict;
         if (!Changes(assessment.Verdict, shifted))
         {
-            return Math.Abs(delta) <= ambientNoteKelvin ? null : assessment with
-            {
-                Notes = [.. assessment.Notes, $"ambient {ambient} is {Math.Abs(delta):0.#} K from the {r} reference and the device has no derating table; "
-                    + $"the verdict holds with a shift of up to {k} % of current per K"],
-            };
+            return null;
         }
 
+        var k = (LabPolicy.AmbientShiftPerKelvin * 100).ToString("0.#", CultureInfo.InvariantCulture);
         return assessment with
         {
             Verdict = Verdict.NotAssessable,
-            Reason = $"ambient {ambient} is {Math.Abs(delta):0.#} K {(delta > 0 ? "above" : "below")} the {r} reference and the device has no derating table; "
-                + $"a thermal release may shift by up to {k} % of current per K (from memory), and with that shift this test would be {Word(shifted)} "
-                + $"rather than {Word(assessment.Verdict)}: repeat nearer {r} or register the maker's derating table ({assessment.Reason})",
+            Proved = null,
+            Reason = $"ambient {d.Ambient} is {Math.Abs(d.Kelvin):0.#} K {(d.Kelvin > 0 ? "above" : "below")} the {d.Reference} reference and the device has no derating table; "
+                + $"a thermal release may shift by up to {k} % of current per K (from memory), and with that shift its curve table would judge this test {Word(shifted)} "
+                + $"rather than {Word(assessment.Verdict)}: repeat nearer {d.Reference} or register the maker's derating table ({assessment.Reason})",
         };
     }
 
@@ -96,6 +85,7 @@ public sealed partial class TripAssessor
         return assessment with
         {
             Verdict = Verdict.NotAssessable,
+            Proved = null,
             Reason = $"tripped after {outcome.Time} with one pole of an RCBO loaded: that current is a residual current, and the residual-current "
                 + $"release trips within {LabPolicy.ResidualBreakTime} (IEC 61009-1, from memory), so this says nothing of the overcurrent release; "
                 + "inject through line and neutral in series so no residual current flows, or as the maker directs",

@@ -16,11 +16,12 @@ namespace TripTestLog.Domain.Assessment;
 /// </summary>
 /// <param name="curveTables">Curve tables by name.</param>
 /// <param name="ambientTables">Ambient tables by name.</param>
-/// <param name="ambientNoteKelvin">How far from the reference ambient a surviving thermal verdict still carries a note, in kelvin.</param>
+/// <param name="ambientNoteKelvin">How far from the reference ambient a thermal verdict carries a note, in kelvin.</param>
+/// <param name="pointWindow">The lab's test-current tolerance within which a test is a test of a standard's point.</param>
 public sealed partial class TripAssessor(IReadOnlyDictionary<string, CurveTable> curveTables, IReadOnlyDictionary<string, AmbientTable> ambientTables,
-    double ambientNoteKelvin = LabPolicy.AmbientNoteKelvin)
+    double ambientNoteKelvin = LabPolicy.AmbientNoteKelvin, double pointWindow = LabPolicy.PointWindow)
 {
-    private readonly Dictionary<(Device, DeviceSettings, double), ITripEnvelope> _envelopes = [];
+    private readonly Dictionary<(Device, DeviceSettings, double, AmbientShift), ITripEnvelope> _envelopes = [];
 
     /// <summary>The result of judging one test: the envelope used and the assessment.</summary>
     /// <param name="Device">The register entry in force on the test date.</param>
@@ -38,7 +39,7 @@ public sealed partial class TripAssessor(IReadOnlyDictionary<string, CurveTable>
         var conditions = TestConditions.Of(measurement, device.Poles);
         var assessment = TripJudge.Assess(envelope, measurement, conditions);
         assessment = CheckStart(assessment, envelope, previous, conditions)
-            ?? CheckAmbient(assessment, device, settings, thermal, conditions)
+            ?? CheckCurveTableAmbient(assessment, device, settings, thermal, envelope, conditions)
             ?? CheckResidual(assessment, device, conditions)
             ?? assessment;
         return new Result(device, envelope, assessment with { Notes = [.. notes, .. assessment.Notes] });
@@ -67,7 +68,7 @@ public sealed partial class TripAssessor(IReadOnlyDictionary<string, CurveTable>
             notes.AddRange(settingNotes);
         }
 
-        var uncorrected = Envelope(device, settings, 1.0);
+        var uncorrected = Envelope(device, settings, 1.0, AmbientShift.None);
         var factor = 1.0;
         var thermal = uncorrected.IsThermal(measurement.Current);
         if (thermal && measurement.Ambient is { } ambient && device.AmbientTable is not null)
@@ -76,7 +77,19 @@ public sealed partial class TripAssessor(IReadOnlyDictionary<string, CurveTable>
             notes.Add(ambientNote);
         }
 
-        return (device, settings, factor == 1.0 ? uncorrected : Envelope(device, settings, factor), thermal, notes);
+        // Without a derating table the ambient moves the thermal points' limits by what it can do, in the test's favour.
+        var shift = AmbientShift.None;
+        if (thermal && factor == 1.0 && AmbientDelta(device, settings, measurement) is { } d && Math.Abs(d.Kelvin) > LabPolicy.AmbientCheckKelvin)
+        {
+            shift = AmbientShift.For(d.Kelvin, LabPolicy.AmbientShiftPerKelvin, d.Ambient.ToString(), d.Reference.ToString());
+            if (Math.Abs(d.Kelvin) > ambientNoteKelvin)
+            {
+                notes.Add($"ambient {d.Ambient} is {Math.Abs(d.Kelvin):0.#} K from the {d.Reference} reference and the device has no derating table; "
+                    + $"the thermal limits were moved by up to {LabPolicy.AmbientShiftPerKelvin * 100:0.#} % of current per K (from memory), in the test's favour");
+            }
+        }
+
+        return (device, settings, Envelope(device, settings, factor, shift), thermal, notes);
     }
 
     private (double Factor, string Note) TableFactor(Device device, Quantities.Celsius ambient)
@@ -92,15 +105,29 @@ public sealed partial class TripAssessor(IReadOnlyDictionary<string, CurveTable>
             : (1.0, $"ambient {ambient} is outside ambient table {name}; no correction applied");
     }
 
-    private ITripEnvelope Envelope(Device device, DeviceSettings settings, double factor)
+    private ITripEnvelope Envelope(Device device, DeviceSettings settings, double factor, AmbientShift shift)
     {
-        if (!_envelopes.TryGetValue((device, settings, factor), out var envelope))
+        if (!_envelopes.TryGetValue((device, settings, factor, shift), out var envelope))
         {
-            envelope = EnvelopeFactory.For(device, settings, factor, curveTables);
-            _envelopes[(device, settings, factor)] = envelope;
+            envelope = PointWindowEnvelope.Of(EnvelopeFactory.For(device, settings, factor, curveTables), pointWindow, shift);
+            _envelopes[(device, settings, factor, shift)] = envelope;
         }
 
         return envelope;
+    }
+
+    // The ambient's distance from the thermal release's reference, where it can move a bimetal release: not an
+    // electronic unit or a relay (they time from the measured current), and not where a derating table corrects it.
+    private static (double Kelvin, Quantities.Celsius Ambient, Quantities.Celsius Reference)? AmbientDelta(Device device, DeviceSettings settings, TripMeasurement m)
+    {
+        var reference = device.ReferenceAmbient ?? EnvelopeFactory.DefaultReferenceAmbient(device.Family);
+        if (settings is ElectronicTripSettings or RelaySettings || device.AmbientTable is not null || m.Ambient is not { } ambient || reference is not { } r
+            || ambient.Value == r.Value)
+        {
+            return null;
+        }
+
+        return (ambient.Value - r.Value, ambient, r);
     }
 
     // A verdict changes in kind when it turns into, or out of, a failure, or from one failure into the other.

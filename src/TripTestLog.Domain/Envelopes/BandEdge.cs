@@ -33,6 +33,18 @@ public readonly record struct BandEdge(Seconds? Limit, EdgeSource Source, string
     /// <summary>The label of the standard's point this edge is, or is carried from; null for other edges.</summary>
     public string? PointLabel { get; init; }
 
+    /// <summary>
+    /// True when the requirement is stated at another current and carried here in the direction physics gives it: it
+    /// may fail a breaker, but a result within it proves nothing about the requirement at its own current.
+    /// </summary>
+    public bool Carried { get; init; }
+
+    /// <summary>For a curve-table row, the multiple the row is stated at: a test within the point window of it proves it.</summary>
+    public double? Anchor { get; init; }
+
+    /// <summary>For a "must not operate at all" minimum, how long a hold must last to show it; null when a hold cannot.</summary>
+    public Seconds? ProvenByHolding { get; init; }
+
     /// <summary>True when the edge sets no limit: a minimum of zero or an unbounded maximum.</summary>
     public bool IsOpen => Source == EdgeSource.None;
 

@@ -84,7 +84,7 @@ public sealed class CurveTableEnvelope : ITripEnvelope
         new(limit, EdgeSource.CurveTable,
             $"curve table {_table.Name}, row {row.Multiple} In {side}{(carried ? $", carried to {direction} currents" : "")}", StartCondition.Cold)
         {
-            Loading = PoleLoading.AllPoles,
+            Loading = PoleLoading.AllPoles, Anchor = row.Multiple.Value * _thermalFactor, Carried = carried,
         };
 
     private static BandEdge Typical(double seconds, string why) =>

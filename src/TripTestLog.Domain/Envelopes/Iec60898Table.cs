@@ -113,14 +113,17 @@ internal sealed record Iec60898Table
         var f = ThermalFactor;
         var corrected = f == 1.0 ? "" : $" (x{f:0.###} for ambient)";
         var all = PoleLoading.AllPoles;
+
+        // Row b is the conventional tripping current: a compliant release's ultimate tripping current lies below it.
+        var ultimate = TrippingMultiple * f;
         var points = new List<NormativePoint>
         {
             new("a", CurrentMultiple.Of(NonTrippingMultiple * f), StartCondition.Cold, ConventionalTime, null,
-                $"{Name} a: 1.13 In{corrected} from cold, no trip at t ≤ {hours:0} h") { HoldStrict = true, Loading = all },
+                $"{Name} a: 1.13 In{corrected} from cold, no trip at t ≤ {hours:0} h") { HoldStrict = true, Loading = all, HighestUltimate = ultimate },
             new("b", CurrentMultiple.Of(TrippingMultiple * f), StartCondition.Warm, null, ConventionalTime,
-                $"{Name} b: 1.45 In{corrected} straight after a, trip at t < {hours:0} h") { TripStrict = true, Loading = all },
+                $"{Name} b: 1.45 In{corrected} straight after a, trip at t < {hours:0} h") { TripStrict = true, Loading = all, HighestUltimate = ultimate },
             new("c", CurrentMultiple.Of(ThermalMultiple * f), StartCondition.Cold, Seconds.Of(ThermalMinimumSeconds), ThermalMaximum,
-                $"{Name} c: 2.55 In{corrected} from cold, trip at 1 s < t < {th:0} s") { HoldStrict = true, TripStrict = true, Loading = all },
+                $"{Name} c: 2.55 In{corrected} from cold, trip at 1 s < t < {th:0} s") { HoldStrict = true, TripStrict = true, Loading = all, HighestUltimate = ultimate },
 
             // Each pole has its own magnetic release, so rows d and e hold whichever poles carry the current.
             new("d", CurrentMultiple.Of(InstantaneousLow), StartCondition.Cold, inst, null,
@@ -134,6 +137,9 @@ internal sealed record Iec60898Table
                 $"IEC 60898-1 9.10.3 (from memory): one pole of {Poles} loaded from cold at {sp:0.###} In{corrected}, trip within {hours:0} h")
             {
                 Loading = PoleLoading.OnePole,
+
+                // One pole alone must trip at this point: its ultimate tripping current may lie just below it.
+                HighestUltimate = sp * f,
             });
         }
 

@@ -40,9 +40,9 @@ internal static class Iec60947Conventions
         return
         [
             new("1.05Ir", CurrentMultiple.Of(NonTrippingMultiple * thermalFactor), StartCondition.Cold, conventional, null,
-                $"IEC 60947-2 8.3.3: 1.05 Ir from cold, no trip within {h}") { HoldStrict = true, AnyStart = anyStart, Loading = loading },
+                $"IEC 60947-2 8.3.3: 1.05 Ir from cold, no trip within {h}") { HoldStrict = true, AnyStart = anyStart, Loading = loading, HighestUltimate = TrippingMultiple * thermalFactor },
             new("1.30Ir", CurrentMultiple.Of(TrippingMultiple * thermalFactor), StartCondition.Warm, null, conventional,
-                $"IEC 60947-2 8.3.3: 1.30 Ir straight after the 1.05 Ir test, trip within {h}") { AnyStart = anyStart, Loading = loading },
+                $"IEC 60947-2 8.3.3: 1.30 Ir straight after the 1.05 Ir test, trip within {h}") { AnyStart = anyStart, Loading = loading, HighestUltimate = TrippingMultiple * thermalFactor },
         ];
     }
 }

@@ -34,6 +34,13 @@ public sealed record NormativePoint(
     /// <summary>The poles the point assumes loaded; null when any.</summary>
     public PoleLoading? Loading { get; init; }
 
+    /// <summary>
+    /// For a thermal point, the highest ultimate tripping multiple a compliant release may have (the standard's
+    /// conventional tripping current); null for a magnetic point, whose threshold may sit anywhere past it. Bounds how
+    /// far the point's limits move for a test a little off its current (<see cref="OffsetBound"/>).
+    /// </summary>
+    public double? HighestUltimate { get; init; }
+
     /// <summary>True when the point only forbids a trip: a hold long enough at or above its current proves it.</summary>
     public bool IsNoTripPoint => MustHoldFor is not null && MustTripWithin is null;
 
@@ -41,13 +48,23 @@ public sealed record NormativePoint(
     public BandEdge HoldEdge(bool carried) => new(MustHoldFor, EdgeSource.NormativePoint,
         carried ? $"{Requirement}, carried to lower currents" : Requirement, Start)
     {
-        Strict = HoldStrict, AnyStart = AnyStart, Loading = Loading, PointLabel = Label,
+        Strict = HoldStrict, AnyStart = AnyStart, Loading = Loading, PointLabel = Label, Carried = carried,
     };
 
     /// <summary>The point's trip-by limit as a maximum edge; <paramref name="carried"/> when used above the point's current.</summary>
     public BandEdge TripEdge(bool carried) => new(MustTripWithin, EdgeSource.NormativePoint,
         carried ? $"{Requirement}, carried to higher currents" : Requirement, Start)
     {
-        Strict = TripStrict, AnyStart = AnyStart, Loading = Loading, PointLabel = Label,
+        Strict = TripStrict, AnyStart = AnyStart, Loading = Loading, PointLabel = Label, Carried = carried,
     };
+
+    /// <summary>Whether <paramref name="multiple"/> lies within <paramref name="window"/> (relative) of the point's current.</summary>
+    public bool Within(double multiple, double window) => Math.Abs(multiple / Multiple.Value - 1.0) <= window + 1e-12;
+
+    /// <summary>The point in words for a reason: e.g. "c (2.55 In from cold)".</summary>
+    public string Brief(string referenceName) => $"{Label} ({Where(referenceName)})";
+
+    /// <summary>Where the point is tested, e.g. "2.55 In from cold".</summary>
+    public string Where(string referenceName) =>
+        $"{Multiple.Value.ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)} {referenceName}{(AnyStart ? "" : Start == StartCondition.Cold ? " from cold" : " from warm")}";
 }

@@ -75,7 +75,7 @@ public sealed class RelayEnvelope : ITripEnvelope
             var earliest = Earliest(Math.Max(m, 1 + p));
             if (m < AccuracyFrom)
             {
-                guaranteed.CouldAct(Edge(Earliest(AccuracyFrom), EdgeSource.Characteristic, $"{why}; the minimum at {AccuracyFrom:0} x Is, carried to lower currents"));
+                guaranteed.CouldAct(Edge(Earliest(AccuracyFrom), EdgeSource.Characteristic, $"{why}; the minimum at {AccuracyFrom:0} x Is, carried to lower currents") with { Carried = true });
                 typical.CouldAct(Edge(earliest, EdgeSource.Extrapolated, $"{why} (formula below {AccuracyFrom:0} x Is)"));
             }
             else if (m <= AccuracyTo)
@@ -85,7 +85,10 @@ public sealed class RelayEnvelope : ITripEnvelope
             }
             else
             {
-                guaranteed.CouldAct(BandEdge.NoMinimum($"{why}: no declared accuracy above {AccuracyTo:0} x Is"));
+                // Above 20 x Is a dependent-time stage follows its formula or turns definite-time (from memory, IEC
+                // 60255-151), which is slower: the formula's earliest time is the soonest it can act, though it has no
+                // declared accuracy to prove.
+                guaranteed.CouldAct(Edge(earliest, EdgeSource.Characteristic, $"{why}; the formula above {AccuracyTo:0} x Is, the soonest the stage acts") with { Carried = true });
                 typical.CouldAct(Edge(earliest, EdgeSource.Extrapolated, $"{why} (formula above {AccuracyTo:0} x Is)"));
             }
         }
@@ -95,7 +98,7 @@ public sealed class RelayEnvelope : ITripEnvelope
             var latest = Latest(m);
             if (m > AccuracyTo)
             {
-                guaranteed.MustAct(Edge(Latest(AccuracyTo), EdgeSource.Characteristic, $"{why}; the maximum at {AccuracyTo:0} x Is, carried to higher currents"));
+                guaranteed.MustAct(Edge(Latest(AccuracyTo), EdgeSource.Characteristic, $"{why}; the maximum at {AccuracyTo:0} x Is, carried to higher currents") with { Carried = true });
                 typical.MustAct(Edge(latest, EdgeSource.Extrapolated, $"{why} (formula above {AccuracyTo:0} x Is)"));
             }
             else if (m >= AccuracyFrom)
@@ -105,6 +108,10 @@ public sealed class RelayEnvelope : ITripEnvelope
             }
             else
             {
+                // The relay must operate here, though the standard bounds no time below 2 x Is: a hold past the lab's bound
+                // is too late, and a trip within it shows the start.
+                guaranteed.MustAct(Edge(StartBound(m), EdgeSource.Setting,
+                    $"{why}; must operate from {MustOperateFrom:0.###} x Is, within {LabPolicy.RelayStartBoundFactor:0.#} x the curve time at M / (1 + p) with its tolerance (lab bound below {AccuracyFrom:0} x Is)"));
                 typical.MustAct(Edge(latest, EdgeSource.Extrapolated, $"{why} (formula below {AccuracyFrom:0} x Is)"));
             }
         }
@@ -130,7 +137,8 @@ public sealed class RelayEnvelope : ITripEnvelope
         var maximums = new List<BandEdge>();
         if (m < 1 - p)
         {
-            minimums.Add(BandEdge.NeverTrip($"below the pickup {_s.Pickup} less its {p * 100:0.#} % start accuracy the relay must not operate"));
+            minimums.Add(BandEdge.NeverTrip($"below the pickup {_s.Pickup} less its {p * 100:0.#} % start accuracy the relay must not operate")
+                with { ProvenByHolding = StartBound(MustOperateFrom) });
         }
 
         Add(minimums, guaranteed.Minimum(), EdgeStrength.Guaranteed);
@@ -150,6 +158,15 @@ public sealed class RelayEnvelope : ITripEnvelope
 
     private static BandEdge Edge(Seconds limit, EdgeSource source, string why) =>
         new(limit, source, why, StartCondition.Cold) { AnyStart = true };
+
+    // The lab's bound where the relay must operate but no accuracy is declared: the curve time at the multiple less the
+    // start accuracy, with the time tolerance, times the policy factor, plus the breaker's opening time.
+    private Seconds StartBound(double multiple)
+    {
+        var effective = Math.Max(multiple / (1 + _s.PickupTolerance), LabPolicy.RelayOperateThreshold);
+        var curve = _s.TimeTolerance.Latest(_k.OperateSeconds(effective, _s.Tms)!.Value).Value;
+        return Seconds.Of(LabPolicy.RelayStartBoundFactor * curve + _s.OpeningTime.Value);
+    }
 
     private Seconds Earliest(double multiple) => _s.TimeTolerance.Earliest(_k.OperateSeconds(multiple, _s.Tms)!.Value);
 

@@ -23,6 +23,9 @@ public sealed record TripAssessment(
     /// <summary>Remarks beside the verdict: settings found at the test, ambient corrections or warnings.</summary>
     public IReadOnlyList<string> Notes { get; init; } = [];
 
+    /// <summary>For a pass, the requirement (or requirements) the test proved, in words; null for any other verdict.</summary>
+    public string? Proved { get; init; }
+
     /// <summary>Results outside a typical edge: never a failure, but worth a look.</summary>
     public IReadOnlyList<Advisory> Advisories { get; init; } = [];
 

@@ -1,16 +1,26 @@
+using System.Globalization;
 using TripTestLog.Domain.Envelopes;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Quantities;
 
 namespace TripTestLog.Domain.Verdicts;
 
-/// <summary>The verdict rules: conclusive failures first, then failures the test's conditions cannot support, then what it shows.</summary>
+/// <summary>The verdict rules: failures first, then failures the test's conditions cannot support, then what it proves.</summary>
 public static partial class TripJudge
 {
-    private sealed record Judged(Verdict Verdict, string Reason, BandEdge? Edge, IReadOnlyList<string> Notes);
-
-    private static Judged Decide(TripBand band, AppliedBand applied, TripOutcome outcome, TestConditions conditions, ITripEnvelope envelope, Amperes current)
+    private sealed record Case(PointWindowEnvelope Envelope, TripBand Band, AppliedBand Applied, TripOutcome Outcome, TestConditions Conditions, double Multiple,
+        NormativePoint? AimedAt)
     {
+        public string At => $"{Multiple.ToString("0.###", CultureInfo.InvariantCulture)} {Envelope.ReferenceName}";
+    }
+
+    private sealed record Proof(string Requirement, BandEdge Edge, NormativePoint? Point);
+
+    private sealed record Judged(Verdict Verdict, string Reason, BandEdge? Edge, IReadOnlyList<string> Notes, IReadOnlyList<Proof> Proved, AppliedBand? Band);
+
+    private static Judged Decide(Case c)
+    {
+        var (band, applied, outcome, conditions) = (c.Band, c.Applied, c.Outcome, c.Conditions);
         var t = outcome.Time;
         var min = applied.Minimum;
         var max = applied.Maximum;
@@ -19,108 +29,214 @@ public static partial class TripJudge
         // 0. Requirements that contradict each other (a registered curve table against the settings, say) judge nothing.
         if (max.Limit is { } cap && (min.Limit is null || min.Limit.Value > cap))
         {
-            return new(Verdict.NotAssessable,
-                $"the requirements at this current contradict each other: {min.Requirement} against {max.Requirement}; check the register and its tables", null, []);
+            return NotAssessable($"the requirements at this current contradict each other: {min.Requirement} against {max.Requirement}; check the register and its tables");
         }
 
         // 1. A guaranteed edge the test can speak to is broken.
         if (outcome.Tripped && !min.IsOpen && min.TripIsBefore(t))
         {
             var limit = min.Limit is { } m ? $"the {m} minimum" : "a current where it must not operate at all";
-            return new(Verdict.TooEarly, $"{what}, before {limit} ({min.Requirement})", min, []);
+            return new(Verdict.TooEarly, $"{what}, before {limit} ({min.Requirement})", min, [], [], null);
         }
 
         if (max.Limit is { } latest && (outcome.Tripped ? max.TripIsAfter(t) : t >= latest))
         {
             var must = max.Strict ? $"trip in less than {latest}" : $"trip within {latest}";
-            return new(Verdict.TooLate, $"{what}; it must {must} ({max.Requirement})", max, []);
+            return new(Verdict.TooLate, $"{what}; it must {must} ({max.Requirement})", max, [], [], null);
         }
 
-        // 2. A guaranteed edge is broken, but it assumes conditions the test did not meet.
+        // 2. A guaranteed edge is broken, but it assumes conditions the test did not meet: the band reported is the one cited.
         var guaranteedMins = band.Minimums.Where(e => e.Strength == EdgeStrength.Guaranteed).ToList();
         var guaranteedMaxs = band.Maximums.Where(e => e.Strength == EdgeStrength.Guaranteed).ToList();
         if (outcome.Tripped && guaranteedMins.FirstOrDefault(e => !e.IsOpen && e.TripIsBefore(t)) is { Requirement: not null } early)
         {
             return new(Verdict.NotAssessable,
                 $"{what}, before the {early.Limit} minimum, but that limit assumes {early.Assumes()} and this test ({conditions}) trips sooner, so it proves nothing ({early.Requirement}); repeat {Repeat(early)}",
-                early, []);
+                early, [], [], applied with { Minimum = early });
         }
 
         if (guaranteedMaxs.FirstOrDefault(e => e.Limit is { } l && (outcome.Tripped ? e.TripIsAfter(t) : t >= l)) is { Requirement: not null } late)
         {
             return new(Verdict.NotAssessable,
                 $"{what}, past the {late.Limit} maximum, but that limit assumes {late.Assumes()} and this test ({conditions}) trips later, so it proves nothing ({late.Requirement}); repeat {Repeat(late)}",
-                late, []);
+                late, [], [], applied with { Maximum = late });
         }
 
-        return outcome.Tripped
-            ? TripShows(guaranteedMins, guaranteedMaxs, applied, conditions, t, envelope.IsThermal(current))
-            : HoldShows(guaranteedMins, applied, conditions, envelope, current, t);
+        // 3. Nothing broken: a pass needs a requirement the test proves.
+        // A test aimed at a point (within its window, same start and loading) passes only by proving that point.
+        var proofs = outcome.Tripped ? TripProofs(c, guaranteedMins, guaranteedMaxs) : HoldProofs(c, guaranteedMins, guaranteedMaxs);
+        if (c.AimedAt is { } aimed && proofs.All(p => p.Point != aimed))
+        {
+            proofs.Clear();
+        }
+
+        if (proofs.Count > 0)
+        {
+            var inside = max.Limit is null && min.IsOpen ? "" : $", inside {applied.Range}";
+            return new(Verdict.Pass, $"{what}{inside}; proves {proofs[0].Requirement}", proofs[0].Edge, PassNotes(c, guaranteedMins, guaranteedMaxs), proofs, null);
+        }
+
+        if (!band.HasRequirement && (outcome.Tripped || guaranteedMaxs.Count == 0))
+        {
+            return NotAssessable($"{what} at {c.At}: {band.NoRequirement}; {Hint(c)}");
+        }
+
+        return NotAssessable(outcome.Tripped ? UnprovedTrip(c) : UnprovedHold(c, guaranteedMaxs));
     }
 
-    private static Judged TripShows(List<BandEdge> mins, List<BandEdge> maxs, AppliedBand applied, TestConditions conditions, Seconds t, bool thermal)
+    private static Judged NotAssessable(string reason) => new(Verdict.NotAssessable, reason, null, [], [], null);
+
+    // A trip proves a trip-by limit it came within at a current no higher than the limit's (within the window above it),
+    // run no hotter than assumed; and a no-trip limit it came after at a current no lower (within the window below),
+    // run at least as hot. Settings, the relay formula in its range and curve-table rows prove at their own current.
+    private static List<Proof> TripProofs(Case c, List<BandEdge> mins, List<BandEdge> maxs)
     {
-        // The trip shows an edge when the test ran no cooler than a minimum assumes (it would trip no sooner under the
-        // minimum's own conditions) or no hotter than a maximum assumes (it would trip no later).
-        var shown = mins.Where(e => !e.IsOpen && e.TestAtLeastAsHot(conditions))
-            .Concat(maxs.Where(e => e.TestAtMostAsHot(conditions)))
-            .ToList();
-        if (shown.Count == 0)
+        var t = c.Outcome.Time;
+        var w = c.Envelope.Window;
+        var proofs = new List<Proof>();
+        foreach (var p in c.Envelope.Points)
         {
-            return new(Verdict.NotAssessable, $"tripped after {t}; no requirement at this current can be shown by a test run {conditions}", null, []);
+            // A point with both limits (IEC 60898-1 row c) is proved inside its window only by a trip within both; below
+            // the window a trip within its trip-by limit proves that limit a fortiori, above it a trip after its no-trip one.
+            var mp = p.Multiple.Value;
+            var tripSide = c.Multiple <= mp * (1 + w) && p.TripEdge(carried: false) is { Limit: not null } trip && !trip.TripIsAfter(t) && trip.TestAtMostAsHot(c.Conditions);
+            var holdSide = c.Multiple >= mp * (1 - w) && p.HoldEdge(carried: false) is { Limit: not null } hold && !hold.TripIsBefore(t) && hold.TestAtLeastAsHot(c.Conditions);
+            var both = p.MustTripWithin is not null && p.MustHoldFor is not null;
+            if (both ? (p.Within(c.Multiple, w) ? tripSide && holdSide : tripSide || holdSide) : tripSide || holdSide)
+            {
+                var half = !both || p.Within(c.Multiple, w) ? "" : tripSide ? ", its trip-by limit, a fortiori at a lower current" : ", its no-trip limit, a fortiori at a higher current";
+                proofs.Add(new Proof(p.Requirement + half, tripSide ? p.TripEdge(carried: false) : p.HoldEdge(carried: false), p));
+            }
         }
 
+        proofs.AddRange(maxs.Where(e => Proves(e, c) && !e.TripIsAfter(t) && e.TestAtMostAsHot(c.Conditions)).Select(e => new Proof(e.Requirement, e, null)));
+        proofs.AddRange(mins.Where(e => Proves(e, c) && !e.IsOpen && e.Limit is not null && !e.TripIsBefore(t) && e.TestAtLeastAsHot(c.Conditions))
+            .Select(e => new Proof(e.Requirement, e, null)));
+        return Nearest(proofs, c);
+    }
+
+    // A hold proves a no-trip limit it lasted at a current no lower than the limit's (within the window below it), run at
+    // least as hot. Where the device must operate a hold is a trip not yet seen: it proves only a no-trip point whose own
+    // test it is (within the point's window, e.g. row d's short hold), never a limit a fortiori or a setting's minimum.
+    private static List<Proof> HoldProofs(Case c, List<BandEdge> mins, List<BandEdge> maxs)
+    {
+        var mustOperate = maxs.Count > 0;
+        var held = c.Outcome.Time;
+        var w = c.Envelope.Window;
+        var proofs = new List<Proof>();
+        foreach (var p in c.Envelope.Points)
+        {
+            if (p.IsNoTripPoint && p.MustHoldFor is { } h && held >= h && c.Multiple >= p.Multiple.Value * (1 - w) && (!mustOperate || p.Within(c.Multiple, w))
+                && p.HoldEdge(carried: false) is var edge && edge.TestAtLeastAsHot(c.Conditions))
+            {
+                proofs.Add(new Proof(p.Requirement, edge, p));
+            }
+        }
+
+        if (mustOperate)
+        {
+            return Nearest(proofs, c);
+        }
+
+        proofs.AddRange(mins.Where(e => Proves(e, c) && e.TestAtLeastAsHot(c.Conditions)
+                && (e.Limit is { } l ? !e.IsOpen && held >= l : e.ProvenByHolding is { } need && held >= need))
+            .Select(e => new Proof(e.Requirement, e, null)));
+        return Nearest(proofs, c);
+    }
+
+    // A requirement stated at this current: a setting, the relay formula in its range, or a curve-table row within the window.
+    private static bool Proves(BandEdge e, Case c) =>
+        !e.Carried && e.Source is EdgeSource.Setting or EdgeSource.Characteristic or EdgeSource.CurveTable or EdgeSource.Instantaneous
+        && (e.Anchor is not { } anchor || Math.Abs(c.Multiple / anchor - 1.0) <= c.Envelope.Window + 1e-12);
+
+    // The point nearest the test current first: it is the one the test was most likely aimed at.
+    private static List<Proof> Nearest(List<Proof> proofs, Case c) =>
+        proofs.OrderBy(p => p.Point is { } pt ? Math.Abs(Math.Log(c.Multiple / pt.Multiple.Value)) : 0.0).ToList();
+
+    private static List<string> PassNotes(Case c, List<BandEdge> mins, List<BandEdge> maxs)
+    {
         var notes = maxs
-            .Where(e => !e.TestAtMostAsHot(conditions) && e.Start == StartCondition.Cold && !e.AnyStart && conditions.Start == StartCondition.Warm)
+            .Where(e => !e.TestAtMostAsHot(c.Conditions) && e.Start == StartCondition.Cold && !e.AnyStart && c.Conditions.Start == StartCondition.Warm)
             .Select(e => $"a warm start trips sooner: this test does not show {e.Requirement}; repeat from cold to show it")
             .ToList();
-        if (thermal && mins.All(e => e.IsOpen))
+        if (c.Outcome.Tripped && c.Envelope.IsThermal(c.Band.Current) && mins.All(e => e.IsOpen || e.Source == EdgeSource.Derived))
         {
-            notes.Add("the standard sets no minimum at this current, so only the trip-by limit was checked; enter the maker's curve as a curve table to judge the time itself");
+            notes.Add("the standard sets no minimum at this current, only an I²t floor; enter the maker's curve as a curve table to judge an early trip");
         }
 
-        var decisive = shown.FirstOrDefault(e => e.Source is EdgeSource.NormativePoint or EdgeSource.Characteristic);
-        var edge = decisive.Requirement is null ? shown[0] : decisive;
-        var inside = applied.Maximum.Limit is null && applied.Minimum.IsOpen
-            ? $"meets {edge.Requirement}"
-            : $"inside {applied.Range}";
-        return new(Verdict.Pass, $"tripped after {t}, {inside}", edge, notes);
+        return notes;
     }
 
-    private static Judged HoldShows(List<BandEdge> mins, AppliedBand applied, TestConditions conditions, ITripEnvelope envelope, Amperes current, Seconds held)
+    private static string UnprovedTrip(Case c)
     {
-        var max = applied.Maximum;
+        var t = c.Outcome.Time;
 
-        // A hold long enough at or above a no-trip point's current proves the point: a lower current trips later still.
-        var proved = envelope.Points
-            .Where(p => p.IsNoTripPoint && held >= p.MustHoldFor!.Value && current.Value >= p.Multiple.Value * envelope.Reference.Value * (1 - 1e-9))
-            .Where(p => p.HoldEdge(carried: false).TestAtLeastAsHot(conditions))
-            .OrderByDescending(p => p.Multiple)
-            .FirstOrDefault();
-        if (proved is not null)
+        // Aimed at a point, past its limit but within what the current offset or the ambient can explain: neither broken nor proved.
+        if (c.AimedAt is { } p)
         {
-            return new(Verdict.Pass, $"held {held} without tripping, as required ({proved.Requirement})", proved.HoldEdge(carried: false), []);
+            var side = p.MustTripWithin is { } lim && t.Value >= lim.Value ? $"past {p.Label}'s {lim}"
+                : p.MustHoldFor is { } hold && t.Value <= hold.Value ? $"before {p.Label}'s {hold}" : null;
+            if (side is not null)
+            {
+                var offset = Math.Abs(c.Multiple / p.Multiple.Value - 1) > 1e-9 ? $"the current {Pct(c.Multiple, p)} {(c.Multiple < p.Multiple.Value ? "below" : "above")} its point" : "";
+                var ambient = c.Envelope.AmbientWords is { Length: > 0 } a && p.HighestUltimate is not null ? $"the ambient ({a})" : "";
+                var cause = string.Join(" and ", new[] { offset, ambient }.Where(x => x.Length > 0));
+                return $"tripped after {t} at {c.At}, {side}, but within what {(cause.Length > 0 ? cause : "the test's conditions")} can explain "
+                    + $"({p.Requirement}); repeat at {p.Where(c.Envelope.ReferenceName)}{(ambient.Length > 0 ? " nearer the reference ambient" : "")}";
+            }
         }
 
+        return $"tripped after {t} at {c.At}; no requirement is proved by a trip here: {Hint(c)}";
+    }
+
+    private static string UnprovedHold(Case c, List<BandEdge> maxs)
+    {
+        var held = c.Outcome.Time;
+        var max = c.Applied.Maximum;
         if (max.Limit is { } latest)
         {
-            return new(Verdict.NotAssessable, $"held {held} and stopped before the {latest} trip-by limit ({max.Requirement}); a hold here shows no trip: run the test to a trip", null, []);
+            return $"held {held} and stopped before the {latest} trip-by limit ({max.Requirement}); a hold here shows no trip: run the test to a trip";
         }
 
-        // Elsewhere the hold must reach the latest minimum it can prove: one that assumes a start and loading no hotter than
-        // the test's (a hotter test that held shows a cooler one would hold too).
-        if (TripBand.Tightest(mins, EdgeStrength.Guaranteed, e => !e.IsOpen && e.TestAtLeastAsHot(conditions), minimum: true) is not { } provable)
+        if (maxs.Count > 0)
         {
-            return new(Verdict.NotAssessable, $"held {held}; a hold proves nothing where the release may act at once", null, []);
+            var must = maxs[0];
+            return $"held {held} at {c.At}; the device must operate here ({must.Requirement}), and that limit assumes {must.Assumes()}, "
+                + $"so a hold shows nothing: run the test to a trip {Repeat(must)}";
         }
 
-        if (provable.Limit is null || held >= provable.Limit.Value)
+        var w = c.Envelope.Window;
+        var needed = c.Envelope.Points
+            .Where(p => p.MustHoldFor is not null && c.Multiple >= p.Multiple.Value * (1 - w))
+            .OrderBy(p => Math.Abs(Math.Log(c.Multiple / p.Multiple.Value)))
+            .FirstOrDefault();
+        if (needed is not null)
         {
-            return new(Verdict.Pass, $"held {held} without tripping, as required ({provable.Requirement})", provable, []);
+            return $"held {held}; {needed.Label} needs {Long(needed.MustHoldFor!.Value)} at {needed.Where(c.Envelope.ReferenceName)} ({needed.Requirement})";
         }
 
-        return new(Verdict.NotAssessable, $"held only {held}; the no-trip requirement here runs to {provable.Limit} ({provable.Requirement})", null, []);
+        return $"held {held} at {c.At}; no requirement states a hold time here: {Hint(c)}";
     }
+
+    // Which test would decide: the standard's nearest point, or for a band without points where its limits are stated.
+    private static string Hint(Case c)
+    {
+        // A trip is decided at a trip-by point, a hold at a no-trip one.
+        var nearest = c.Envelope.Points
+            .OrderBy(p => (c.Outcome.Tripped ? p.MustTripWithin : p.MustHoldFor) is null ? 1 : 0)
+            .ThenBy(p => Math.Abs(Math.Log(c.Multiple / p.Multiple.Value)))
+            .FirstOrDefault();
+        return nearest is not null
+            ? $"the standard's nearest point is {nearest.Brief(c.Envelope.ReferenceName)}: {nearest.Requirement}"
+            : $"test at a current where {c.Envelope.Standard} states a limit of its own";
+    }
+
+    // A conventional time reads better in hours.
+    private static string Long(Seconds s) =>
+        s.Value >= 3600 && s.Value % 3600 == 0 ? $"{(s.Value / 3600).ToString("0", CultureInfo.InvariantCulture)} h" : s.ToString();
+
+    private static string Pct(double multiple, NormativePoint p) =>
+        $"{Math.Abs(multiple / p.Multiple.Value - 1) * 100:0.0} %";
 
     private static string Repeat(BandEdge edge) => edge.Assumes() is { Length: > 0 } a ? a : "under the standard's conditions";
 }

@@ -5,20 +5,16 @@ using TripTestLog.Domain.Quantities;
 namespace TripTestLog.Domain.Verdicts;
 
 /// <summary>
-/// Judges a trip test against the requirements at its measured current. A failure rests only on a guaranteed edge that
-/// the test can speak to: a minimum it ran no hotter than (a warm start, or every pole loaded, trips sooner), or a
-/// maximum it ran at least as hot as. A guaranteed edge broken by a test run under other conditions makes the verdict
-/// not assessable, with the reason; a typical (drawn) edge broken raises an advisory and never a failure.
+/// Judges a trip test against the requirements at its measured current. Every verdict rests on a requirement: a failure
+/// on one the test broke, a pass on one it proved. A failure rests only on a guaranteed edge the test can speak to: a
+/// minimum it ran no hotter than (a warm start, or every pole loaded, trips sooner), or a maximum it ran at least as hot
+/// as. A pass needs a requirement shown at its own current: a standard point within the lab's test-current window (or
+/// beyond it on the side physics makes a fortiori), a setting's band, the relay formula in its accuracy range, or a
+/// curve-table row. A test that neither breaks nor proves a requirement is not assessable, and its reason names the
+/// test that would decide. A typical (drawn) edge broken raises an advisory and never decides a verdict.
 /// </summary>
 public static partial class TripJudge
 {
-    /// <summary>
-    /// How close, relative, the measured multiple must be to one of the standard's points for the test to be named as
-    /// aimed at it: ±3 %. It only names the point (for findings and reports); it never decides a verdict, which follows
-    /// each point's limit in the direction physics gives it. A lab policy of this tool, not a figure from a standard.
-    /// </summary>
-    public const double PointTolerance = 0.03;
-
     /// <summary>Judges <paramref name="measurement"/> with all poles loaded unless its pole says one.</summary>
     public static TripAssessment Assess(ITripEnvelope envelope, TripMeasurement measurement)
     {
@@ -26,56 +22,59 @@ public static partial class TripJudge
         return Assess(envelope, measurement, new TestConditions(measurement.Start, measurement.Pole == Pole.All ? PoleLoading.AllPoles : PoleLoading.OnePole));
     }
 
-    /// <summary>Judges <paramref name="measurement"/> against <paramref name="envelope"/> as run under <paramref name="conditions"/>.</summary>
+    /// <summary>
+    /// Judges <paramref name="measurement"/> against <paramref name="envelope"/> as run under <paramref name="conditions"/>.
+    /// An envelope not already read through a <see cref="PointWindowEnvelope"/> is read through one at the default window.
+    /// </summary>
     public static TripAssessment Assess(ITripEnvelope envelope, TripMeasurement measurement, TestConditions conditions)
     {
         ArgumentNullException.ThrowIfNull(envelope);
         ArgumentNullException.ThrowIfNull(measurement);
 
-        var band = envelope.At(measurement.Current);
+        var windowed = envelope as PointWindowEnvelope ?? PointWindowEnvelope.Of(envelope);
+        var band = windowed.At(measurement.Current);
         var applied = band.For(conditions);
         var outcome = measurement.Outcome;
-        var margin = MarginOf(applied, outcome.Time);
-        var advisories = Advisories(applied, outcome);
-        var aimedAt = AimedAt(envelope, applied.Multiple, conditions);
-        var judged = band.HasRequirement
-            ? Decide(band, applied, outcome, conditions, envelope, measurement.Current)
-            : new Judged(Verdict.NotAssessable, band.NoRequirement!, null, []);
+        var multiple = (measurement.Current / windowed.Reference).Value;
+        var aimedAt = AimedAt(windowed, multiple, conditions);
+        var judged = Decide(new Case(windowed, band, applied, outcome, conditions, multiple, aimedAt));
 
-        // A failure names the point it broke; otherwise the point the test was aimed at names it, for findings and reports.
-        var edgePoint = judged.Edge?.PointLabel is { } label ? envelope.Points.FirstOrDefault(p => p.Label == label) : null;
-        var point = judged.Verdict is Verdict.TooEarly or Verdict.TooLate ? edgePoint ?? aimedAt : aimedAt ?? edgePoint;
-        return new TripAssessment(measurement, applied, judged.Verdict, BasisOf(judged, applied), point, margin, judged.Reason)
+        // The point is named only within its window: the one a failure broke, or the one a pass proved.
+        var point = judged.Verdict switch
+        {
+            Verdict.Pass => judged.Proved.Any(p => p.Point is { } pp && pp == aimedAt) ? aimedAt : null,
+            _ => judged.Edge?.PointLabel is { } label && windowed.Points.FirstOrDefault(p => p.Label == label) is { } broken
+                && broken.Within(multiple, windowed.Window) ? broken : aimedAt,
+        };
+        var margin = MarginOf(applied, outcome.Time);
+        return new TripAssessment(measurement, judged.Band ?? applied, judged.Verdict, BasisOf(judged), point, margin, judged.Reason)
         {
             Notes = judged.Notes,
+            Proved = judged.Verdict == Verdict.Pass ? string.Join("; ", judged.Proved.Select(p => p.Requirement).Distinct()) : null,
 
             // An advisory qualifies a pass; on a failure or an open question it would only repeat the reason.
-            Advisories = judged.Verdict == Verdict.Pass ? advisories : [],
+            Advisories = judged.Verdict == Verdict.Pass ? Advisories(applied, outcome) : [],
         };
     }
 
-    // Normative when what decided rests on the standard's points or formula: the broken edge for a failure, every closed
-    // edge of the band for a pass (or the edge it met where the band is open on both sides).
-    private static VerdictBasis BasisOf(Judged judged, AppliedBand applied)
+    // Normative when what decided rests on the standard's points or formula: the broken edge for a failure, the proved
+    // requirements for a pass.
+    private static VerdictBasis BasisOf(Judged judged)
     {
         static bool Normative(BandEdge e) => e.Source is EdgeSource.NormativePoint or EdgeSource.Characteristic;
         if (judged.Verdict == Verdict.Pass)
         {
-            var closed = new[] { applied.Minimum, applied.Maximum }.Where(e => !e.IsOpen && e.Source != EdgeSource.None).ToList();
-            if (closed.Count > 0)
-            {
-                return closed.All(Normative) ? VerdictBasis.Normative : VerdictBasis.Band;
-            }
+            return judged.Proved.Any(p => p.Point is not null || Normative(p.Edge)) ? VerdictBasis.Normative : VerdictBasis.Band;
         }
 
         return judged.Edge is { } edge && Normative(edge) ? VerdictBasis.Normative : VerdictBasis.Band;
     }
 
-    private static NormativePoint? AimedAt(ITripEnvelope envelope, CurrentMultiple multiple, TestConditions conditions) =>
+    private static NormativePoint? AimedAt(PointWindowEnvelope envelope, double multiple, TestConditions conditions) =>
         envelope.Points
-            .Where(p => p.Start == conditions.Start && (p.Loading is null || p.Loading == conditions.Loading))
-            .Where(p => Math.Abs(multiple.Value / p.Multiple.Value - 1.0) <= PointTolerance)
-            .OrderBy(p => Math.Abs(multiple.Value / p.Multiple.Value - 1.0))
+            .Where(p => (p.AnyStart || p.Start == conditions.Start) && (p.Loading is null || p.Loading == conditions.Loading))
+            .Where(p => p.Within(multiple, envelope.Window))
+            .OrderBy(p => Math.Abs(multiple / p.Multiple.Value - 1.0))
             .FirstOrDefault();
 
     private static IReadOnlyList<Advisory> Advisories(AppliedBand band, TripOutcome outcome)

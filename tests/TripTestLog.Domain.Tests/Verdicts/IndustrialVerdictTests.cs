@@ -82,8 +82,9 @@ public sealed class IndustrialVerdictTests
     // Thermal-magnetic, In 160 A, Ir 125 A: the 1.30 Ir trip-by limit of 2 h carries upward for a warm start.
     [InlineData(375, true, 9000, StartCondition.Warm, Verdict.TooLate)]        // held 2.5 h at 3 Ir after the 1.05 Ir test
     [InlineData(375, true, 9000, StartCondition.Cold, Verdict.NotAssessable)]  // a cold release may take longer
-    [InlineData(375, false, 40, StartCondition.Cold, Verdict.Pass)]            // a cold trip within 2 h meets it a fortiori
-    [InlineData(150, false, 40, StartCondition.Cold, Verdict.NotAssessable)]   // 1.2 Ir: no requirement at all
+    [InlineData(375, false, 40, StartCondition.Cold, Verdict.NotAssessable)]   // meets the carried limit, proves no point
+    [InlineData(160, false, 40, StartCondition.Cold, Verdict.Pass)]            // 1.28 Ir, in 1.30 Ir's window: a cold trip within 2 h proves it
+    [InlineData(150, false, 40, StartCondition.Cold, Verdict.Pass)]            // 1.2 Ir: a cold trip within 2 h proves 1.30 Ir a fortiori
     [InlineData(130, false, 3600, StartCondition.Cold, Verdict.TooEarly)]      // at and below 1.05 Ir: no trip within 2 h
     public void AThermalMagneticRelease_IsJudgedByItsConventionalPoints(double amps, bool held, double seconds, StartCondition start, Verdict expected)
     {
@@ -113,7 +114,8 @@ public sealed class IndustrialVerdictTests
     {
         var a = Judge(new ThermalMagneticEnvelope(Amperes.Of(160), Tm), 375, Tripped(40), StartCondition.Cold);
 
-        Assert.Contains(a.Notes, n => n.Contains("no minimum", StringComparison.Ordinal));
+        Assert.Equal(Verdict.NotAssessable, a.Verdict);
+        Assert.Contains("nearest point is 1.30Ir", a.Reason);
     }
 
     [Fact]

@@ -41,8 +41,10 @@ public sealed class MiniatureFamiliesTests
     [Theory]
     // d.c. curve C: no trip within 0.1 s up to 7 In, trip within 0.1 s from 15 In. On a.c. 7 In is above row d (5 In).
     [InlineData(6.9, 0.05, Verdict.TooEarly)]
-    [InlineData(7.1, 0.05, Verdict.Pass)]
-    [InlineData(14.9, 0.5, Verdict.Pass)]
+    [InlineData(7.1, 0.05, Verdict.NotAssessable)]   // just above d: the threshold may sit there; d not proved
+    [InlineData(7.1, 0.15, Verdict.Pass)]            // after 0.1 s within d's window: proves it
+    [InlineData(14.9, 0.5, Verdict.NotAssessable)]   // just below e: no trip required yet, e not proved
+    [InlineData(15.2, 0.05, Verdict.Pass)]
     [InlineData(15.0, 0.5, Verdict.TooLate)]
     public void ADcBreaker_HasItsOwnInstantaneousRange(double multiple, double tripSeconds, Verdict expected)
     {

@@ -75,9 +75,12 @@ public sealed class TripJudgeTests
     }
 
     [Theory]
-    // The instantaneous release may act anywhere above row d's current, and a 0.1 s trip is required only from row e's.
-    [InlineData(5.10, 0.020, Verdict.Pass)]    // C16 above 5 In: no minimum is left
-    [InlineData(9.75, 0.5, Verdict.Pass)]      // C16 below 10 In: no 0.1 s trip is required yet
+    // The instantaneous release may act anywhere above row d's current, and a 0.1 s trip is required only from row e's;
+    // a test 2 % off either row, on the side where the threshold may sit, neither breaks nor proves the row.
+    [InlineData(5.10, 0.020, Verdict.NotAssessable)]  // C16 2 % above 5 In: no minimum is left, row d not proved
+    [InlineData(9.75, 0.5, Verdict.NotAssessable)]    // C16 2.5 % below 10 In: no 0.1 s trip is required yet
+    [InlineData(7.00, 0.020, Verdict.Pass)]           // a trip within 0.1 s below row e proves e a fortiori
+    [InlineData(10.2, 0.020, Verdict.Pass)]           // 2 % above row e, within its window: proves it
     [InlineData(4.90, 0.020, Verdict.TooEarly)] // below 5 In row d's "no trip within 0.1 s" still holds
     [InlineData(10.2, 0.5, Verdict.TooLate)]   // above 10 In row e's "trip in less than 0.1 s" holds
     public void AroundTheInstantaneousRange_EachRowHoldsOnItsOwnSide(double multiple, double tripSeconds, Verdict expected)
@@ -88,9 +91,10 @@ public sealed class TripJudgeTests
     [Theory]
     // Rows a and b carried in their own direction only.
     [InlineData(1.12, 1800, false, StartCondition.Cold, Verdict.TooEarly)]   // below 1.13 In: no trip within 1 h
-    [InlineData(1.15, 1800, false, StartCondition.Cold, Verdict.Pass)]       // above 1.13 In row a says nothing of a trip
+    [InlineData(1.15, 1800, false, StartCondition.Cold, Verdict.NotAssessable)] // 1.8 % above row a: its limit may fall away
+    [InlineData(1.25, 1800, false, StartCondition.Cold, Verdict.Pass)]       // cold trip within 1 h below 1.45 In proves row b
     [InlineData(1.15, 3600, true, StartCondition.Cold, Verdict.Pass)]        // a hold at or above 1.13 In proves row a
-    [InlineData(1.44, 3600, true, StartCondition.Warm, Verdict.Pass)]        // below 1.45 In row b requires nothing
+    [InlineData(1.44, 3600, true, StartCondition.Warm, Verdict.NotAssessable)] // just below 1.45 In a release may never trip
     [InlineData(1.46, 3600, true, StartCondition.Warm, Verdict.TooLate)]     // at or above 1.45 In row b requires a trip
     [InlineData(1.44, 1200, false, StartCondition.Warm, Verdict.Pass)]
     public void TheConventionalRows_HoldOnTheirOwnSideOnly(double multiple, double seconds, bool held, StartCondition start, Verdict expected)
@@ -101,12 +105,20 @@ public sealed class TripJudgeTests
     }
 
     [Theory]
-    // Row c on both sides of 2.55 In (C16, from cold): its "1 s < t" carries down only (as I²t: at 2.50 In, 1 s x
-    // (2.55 / 2.5)² = 1.0404 s), its "t < 60 s" up only; at 2.60 In the minimum left is row d's 0.1 s.
+    // Row c on both sides of 2.55 In (C16, from cold): its "1 s < t" carries down (as I²t: at 2.50 In, 1 s x
+    // (2.55 / 2.5)² = 1.0404 s), its "t < 60 s" up. Within the ±3 % window the row's own limits hold too, moved by the
+    // first-order thermal bound with Mc = 1.45 In (worked by hand: at 2.50 In, -ln(1 - (1.45/2.5)²) / -ln(1 - (1.45/2.55)²)
+    // = 0.4101 / 0.3906 = 1.050, so 63.0 s; at 2.60 In the 1 s minimum x 0.3725/0.3906 = 0.954 s). Outside the window
+    // (2.70 In) only the carried limits and row d's 0.1 s remain, and a trip there proves nothing.
     [InlineData(2.50, 1.03, Verdict.TooEarly)]
-    [InlineData(2.50, 70, Verdict.Pass)]
-    [InlineData(2.60, 0.5, Verdict.Pass)]
+    [InlineData(2.50, 70, Verdict.TooLate)]
+    [InlineData(2.50, 62, Verdict.NotAssessable)]
+    [InlineData(2.50, 30, Verdict.Pass)]
+    [InlineData(2.60, 0.5, Verdict.TooEarly)]
+    [InlineData(2.60, 0.97, Verdict.NotAssessable)]
+    [InlineData(2.60, 1.2, Verdict.Pass)]
     [InlineData(2.60, 61, Verdict.TooLate)]
+    [InlineData(2.70, 0.5, Verdict.NotAssessable)]
     public void RowC_HoldsEachLimitOnItsOwnSide(double multiple, double tripSeconds, Verdict expected)
     {
         Assert.Equal(expected, Judge(TripCurve.C, 16, 16 * multiple, Tripped(tripSeconds), StartCondition.Cold).Verdict);
@@ -180,11 +192,13 @@ public sealed class TripJudgeTests
     [Fact]
     public void BelowTheTable_RowAStillForbidsATripWithinTheHour()
     {
-        // 1.05 In: row a ("no tripping within 1 h at 1.13 In") holds at every lower current.
+        // 1.05 In: row a ("no tripping within 1 h at 1.13 In") holds at every lower current, but a hold there, 7 % below
+        // the point and outside its window, does not prove it: a lower current trips later.
         var held = Judge(TripCurve.C, 16, 16.8, Held(3600), StartCondition.Cold);
         var tripped = Judge(TripCurve.C, 16, 16.8, Tripped(600), StartCondition.Cold);
 
-        Assert.Equal(Verdict.Pass, held.Verdict);
+        Assert.Equal(Verdict.NotAssessable, held.Verdict);
+        Assert.Contains("a needs 1 h", held.Reason);
         Assert.Equal(Verdict.TooEarly, tripped.Verdict);
         Assert.Contains("carried to lower currents", tripped.Reason);
     }

@@ -30,10 +30,16 @@ public sealed class VerdictPropertyTests
             var (envelope, m, conditions, outcome) = t;
             var test = Test(envelope, m, outcome, conditions);
 
-            var judged = TripJudge.Assess(envelope, test, conditions).Band;
-            var printed = envelope.At(test.Current).For(conditions);
+            var assessment = TripJudge.Assess(envelope, test, conditions);
+            var printed = PointWindowEnvelope.Of(envelope).At(test.Current).For(conditions);
 
-            Assert.Equal(printed, judged);
+            // The band differs only where the verdict cites a limit for other conditions, and then by that one edge.
+            if (assessment.Band != printed)
+            {
+                Assert.Equal(Verdict.NotAssessable, assessment.Verdict);
+                Assert.Contains("assumes", assessment.Reason);
+                Assert.True(assessment.Band == printed with { Minimum = assessment.Band.Minimum } || assessment.Band == printed with { Maximum = assessment.Band.Maximum });
+            }
         }, iter: 5_000);
     }
 

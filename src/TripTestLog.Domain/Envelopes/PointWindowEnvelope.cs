@@ -1,0 +1,132 @@
+using System.Globalization;
+using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Settings;
+
+namespace TripTestLog.Domain.Envelopes;
+
+/// <summary>
+/// A family's envelope with its standard points judged at the lab's test-current tolerance: a test within
+/// <see cref="Window"/> of a point's current is a test of that point, and the point's limits hold there too, moved by
+/// what the current offset can explain (<see cref="OffsetBound"/>) and only in the test's favour. An ambient away from
+/// the release's reference moves the thermal points' limits the same way, as the current shift it can cause. Both
+/// <c>check</c> and <c>envelope</c> read bands through this, so they agree.
+/// </summary>
+public sealed class PointWindowEnvelope : ITripEnvelope
+{
+    private readonly ITripEnvelope _inner;
+    private readonly AmbientShift _ambient;
+
+    private PointWindowEnvelope(ITripEnvelope inner, double window, AmbientShift ambient)
+    {
+        _inner = inner;
+        Window = Guard.InRange(window, 0, 0.1, nameof(window), "(fraction)");
+        _ambient = ambient;
+    }
+
+    /// <summary>The relative test-current tolerance within which a test is a test of a point.</summary>
+    public double Window { get; }
+
+    /// <summary>The ambient's shift in words, or empty when the ambient moves nothing.</summary>
+    public string AmbientWords => _ambient.Words;
+
+    /// <inheritdoc />
+    public string Standard => _inner.Standard;
+
+    /// <inheritdoc />
+    public string ReferenceName => _inner.ReferenceName;
+
+    /// <inheritdoc />
+    public Amperes Reference => _inner.Reference;
+
+    /// <inheritdoc />
+    public IReadOnlyList<NormativePoint> Points => _inner.Points;
+
+    /// <summary>
+    /// <paramref name="envelope"/> with its points judged at <paramref name="window"/> (default the lab policy's) and,
+    /// when given, the ambient's current shift on its thermal points. An envelope already wrapped is re-wrapped around
+    /// its inner one.
+    /// </summary>
+    public static PointWindowEnvelope Of(ITripEnvelope envelope, double window = LabPolicy.PointWindow, AmbientShift? ambient = null)
+    {
+        ArgumentNullException.ThrowIfNull(envelope);
+        var inner = envelope is PointWindowEnvelope w ? w._inner : envelope;
+        return new PointWindowEnvelope(inner, window, ambient ?? AmbientShift.None);
+    }
+
+    /// <inheritdoc />
+    public bool IsThermal(Amperes current) => _inner.IsThermal(current);
+
+    /// <inheritdoc />
+    public TripBand At(Amperes current)
+    {
+        var band = _inner.At(current);
+        var m = (current / Reference).Value;
+        var minimums = band.Minimums.Select(e => Moved(e, m, minimum: true)).Where(e => e is not null).Select(e => e!.Value).ToList();
+        var maximums = band.Maximums.Select(e => Moved(e, m, minimum: false)).Where(e => e is not null).Select(e => e!.Value).ToList();
+        foreach (var p in Points.Where(p => p.Within(m, Window)))
+        {
+            var u = p.HighestUltimate;
+            var mp = p.Multiple.Value;
+            if (p.MustTripWithin is { } t && m < mp && OffsetBound.Stretch(m * Lo(p), mp, u) is var s && !double.IsInfinity(s))
+            {
+                maximums.Add(p.TripEdge(carried: false) with { Limit = Seconds.Of(t.Value * s), Requirement = Offset(p, m, s) });
+            }
+
+            if (p.MustHoldFor is { } h && m > mp && OffsetBound.Shrink(m * Hi(p), mp, u) is var k && k > 0)
+            {
+                minimums.Add(p.HoldEdge(carried: false) with { Limit = Seconds.Of(h.Value * k), Requirement = Offset(p, m, k) });
+            }
+        }
+
+        return band.HasRequirement || minimums.Count + maximums.Count > band.Minimums.Count + band.Maximums.Count
+            ? TripBand.Of(current, band.Multiple, minimums, maximums, band.NoRequirement ?? "no requirement here")
+            : band;
+    }
+
+    // The ambient moves only thermal points: a magnetic threshold does not follow the room.
+    private double Lo(NormativePoint p) => p.HighestUltimate is null ? 1.0 : _ambient.Lower;
+
+    private double Hi(NormativePoint p) => p.HighestUltimate is null ? 1.0 : _ambient.Upper;
+
+    // A point's own edge carried here keeps its limit unless the ambient moves the current it acts at past the point.
+    private BandEdge? Moved(BandEdge e, double m, bool minimum)
+    {
+        if (_ambient.IsNone || e.Strength != EdgeStrength.Guaranteed || e.PointLabel is not { } label
+            || Points.FirstOrDefault(p => p.Label == label) is not { HighestUltimate: { } u } p || e.Limit is not { } limit)
+        {
+            return e;
+        }
+
+        var mp = p.Multiple.Value;
+        var note = $", moved for the ambient ({_ambient.Words})";
+        if (e.Source == EdgeSource.Derived)
+        {
+            var hi = m * _ambient.Upper;
+            var floor = hi < mp ? limit.Value / (_ambient.Upper * _ambient.Upper) : (p.MustHoldFor?.Value ?? 0) * OffsetBound.Shrink(hi, mp, u);
+            return floor > 0 ? e with { Limit = Seconds.Of(floor), Requirement = e.Requirement + note } : null;
+        }
+
+        if (minimum && p.MustHoldFor is { } h)
+        {
+            var k = OffsetBound.Shrink(m * _ambient.Upper, mp, u);
+            return k > 0 ? e with { Limit = Seconds.Of(Math.Min(limit.Value, h.Value * k)), Requirement = k < 1 ? e.Requirement + note : e.Requirement } : null;
+        }
+
+        if (!minimum && p.MustTripWithin is { } t)
+        {
+            var s = OffsetBound.Stretch(m * _ambient.Lower, mp, u);
+            return double.IsInfinity(s) ? null : e with { Limit = Seconds.Of(Math.Max(limit.Value, t.Value * s)), Requirement = s > 1 ? e.Requirement + note : e.Requirement };
+        }
+
+        return e;
+    }
+
+    private string Offset(NormativePoint p, double m, double factor)
+    {
+        var pct = (m / p.Multiple.Value - 1) * 100;
+        var f = factor.ToString("0.###", CultureInfo.InvariantCulture);
+        var amb = _ambient.IsNone || p.HighestUltimate is null ? "" : $" and the ambient ({_ambient.Words})";
+        return $"{p.Requirement}; tested {Math.Abs(pct).ToString("0.0", CultureInfo.InvariantCulture)} % {(pct < 0 ? "below" : "above")} its current, "
+            + $"limit x{f} for the offset{amb} (first-order thermal bound)";
+    }
+}
