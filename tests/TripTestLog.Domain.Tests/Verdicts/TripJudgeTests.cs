@@ -198,7 +198,7 @@ public sealed class TripJudgeTests
         var tripped = Judge(TripCurve.C, 16, 16.8, Tripped(600), StartCondition.Cold);
 
         Assert.Equal(Verdict.NotAssessable, held.Verdict);
-        Assert.Contains("a needs 1 h", held.Reason);
+        Assert.Contains("nearest point is a (1.13 In from cold)", held.Reason);
         Assert.Equal(Verdict.TooEarly, tripped.Verdict);
         Assert.Contains("carried to lower currents", tripped.Reason);
     }

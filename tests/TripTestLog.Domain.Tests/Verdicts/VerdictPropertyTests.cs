@@ -3,6 +3,7 @@ using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Envelopes;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Settings;
 using TripTestLog.Domain.Tests.Envelopes;
 using TripTestLog.Domain.Verdicts;
 
@@ -83,6 +84,60 @@ public sealed class VerdictPropertyTests
                 Assert.True(a.Band.Maximum.TestAtLeastAsHot(conditions));
             }
         }, iter: 5_000);
+    }
+
+    [Fact]
+    public void EveryPass_NamesTheRequirementItProved()
+    {
+        Gen.Select(AllFamiliesPropertyTests.Any, Gen.Double[0.5, 60], AllFamiliesPropertyTests.Conditions, Outcomes).Sample(t =>
+        {
+            var (envelope, m, conditions, outcome) = t;
+            var a = TripJudge.Assess(envelope, Test(envelope, m, outcome, conditions), conditions);
+
+            Assert.Equal(a.Verdict == Verdict.Pass, !string.IsNullOrEmpty(a.Proved));
+            if (a.Point is { } p)
+            {
+                Assert.True(p.Within(m, LabPolicy.PointWindow), $"{p.Label} named at {m}");
+            }
+        }, iter: 5_000);
+    }
+
+    [Fact]
+    public void TheCurrentOffsetAlone_NeverFailsATripThePointPasses_NorPassesOneFarPastTheMovedLimit()
+    {
+        // A trip at a trip-by point's own current that passes is never too late a little off it; one past the limit moved
+        // for the largest offset in the window is never a pass there. Holds: one that passes at a no-trip point passes
+        // anywhere at or above it within the window.
+        Gen.Select(AllFamiliesPropertyTests.Any, Gen.Double[-1, 1], Gen.Double[-2.5, 4.2]).Sample(t =>
+        {
+            var (envelope, frac, logT) = t;
+            foreach (var p in envelope.Points)
+            {
+                var c = new TestConditions(p.AnyStart ? StartCondition.Cold : p.Start, p.Loading ?? PoleLoading.AllPoles);
+                var m = p.Multiple.Value * (1 + (frac * LabPolicy.PointWindow));
+                var trip = TripOutcome.TrippedAfter(Seconds.Of(Math.Pow(10, logT)));
+                var atPoint = TripJudge.Assess(envelope, Test(envelope, p.Multiple.Value, trip, c), c);
+                var off = TripJudge.Assess(envelope, Test(envelope, m, trip, c), c);
+                if (p.MustTripWithin is { } limit && atPoint.Verdict == Verdict.Pass)
+                {
+                    Assert.NotEqual(Verdict.TooLate, off.Verdict);
+                }
+
+                var widest = OffsetBound.Stretch(p.Multiple.Value * (1 - LabPolicy.PointWindow), p.Multiple.Value, p.HighestUltimate);
+                if (p.MustTripWithin is { } lim && !double.IsInfinity(widest) && trip.Time.Value > lim.Value * widest * 1.0001)
+                {
+                    Assert.Equal(Verdict.TooLate, off.Verdict);
+                }
+
+                if (p.IsNoTripPoint && frac >= 0)
+                {
+                    var hold = TripOutcome.HeldFor(p.MustHoldFor!.Value);
+                    var heldAt = TripJudge.Assess(envelope, Test(envelope, p.Multiple.Value, hold, c), c).Verdict;
+                    var heldOff = TripJudge.Assess(envelope, Test(envelope, m, hold, c), c).Verdict;
+                    Assert.True(heldAt != Verdict.Pass || heldOff == Verdict.Pass, $"{p.Label}: {heldAt} at the point, {heldOff} at {m}");
+                }
+            }
+        }, iter: 2_000);
     }
 
     private sealed class GuaranteedOnly(ITripEnvelope inner) : ITripEnvelope
