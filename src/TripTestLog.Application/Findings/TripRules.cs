@@ -43,10 +43,45 @@ internal static class TripRules
                 }
             }
 
+            Retest(judged, point, ledger);
+
             Settings(judged, ledger);
             Instrument(judged, ledger);
         }
     }
+
+    // A not-assessable verdict never vanishes: one open finding per device and point until a test there decides.
+    private static void Retest(JudgedTrip judged, TripPoint point, FindingLedger ledger)
+    {
+        var m = judged.Trip.Measurement;
+        var a = judged.Assessment;
+        if (a.Verdict != Verdict.NotAssessable)
+        {
+            // A test that decides clears the retest at its own point, and at the standard's point it proved or broke.
+            ledger.Clear("retest|" + point.Key, m.TestedAt, $"{Format(a.Verdict)} at {point.Label}");
+            if (a.Point is { } decided)
+            {
+                ledger.Clear("retest|point|" + decided.Label, m.TestedAt, $"{Format(a.Verdict)} at {point.Label}");
+            }
+
+            return;
+        }
+
+        var subject = a.RetestAt is { } at ? "retest|point|" + at.Label : "retest|" + point.Key;
+        ledger.Raise(subject, new Finding(FindingKind.RetestNeeded, Severity.Investigate, m.Tag, m.TestedAt,
+            "every verdict rests on a requirement: this test neither broke nor proved one",
+            $"{TextCodes.Stage.Of(m.Stage)} at {point.Label} is not assessable: {a.Reason}", [Source(judged)])
+        {
+            Point = point.Label,
+        });
+    }
+
+    private static string Format(Verdict v) => v switch
+    {
+        Verdict.Pass => "pass",
+        Verdict.TooEarly => "too early",
+        _ => "too late",
+    };
 
     private static void Settings(JudgedTrip judged, FindingLedger ledger)
     {

@@ -61,7 +61,8 @@ internal sealed class VerdictJson(TextWriter writer) : IVerdictWriter
             r.InstrumentFinding,
             Format.Edge(band.TypicalMinimum?.Limit?.Value),
             Format.Edge(band.TypicalMaximum?.Limit?.Value),
-            a.Advisories.Select(x => x.Message).ToList());
+            a.Advisories.Select(x => x.Message).ToList(),
+            a.Proved);
     }
 
     // A test held without a trip to or past the band's maximum has no known trip time (only a later one), so no margin.
@@ -102,7 +103,8 @@ internal sealed class VerdictJson(TextWriter writer) : IVerdictWriter
         string? InstrumentFinding,
         double? TypicalMinS,
         double? TypicalMaxS,
-        IReadOnlyList<string> Advisories);
+        IReadOnlyList<string> Advisories,
+        string? Proved);
 }
 
 /// <summary>Serialisation of verdict rows generated at build time: no reflection per row on a million-row check.</summary>

@@ -72,7 +72,7 @@ internal sealed class VerdictTable(TextWriter writer, bool wide = false) : IVerd
         _counts.Add(r);
 
         // Only what needs attention is kept for the lists after the table; a healthy fleet holds nothing.
-        if (a.Verdict != Verdict.Pass || r.InstrumentFinding is not null || a.Notes.Count > 0)
+        if (a.Verdict != Verdict.Pass || r.InstrumentFinding is not null || a.Notes.Count > 0 || a.Advisories.Count > 0)
         {
             _attention.Add(r);
         }
@@ -86,6 +86,7 @@ internal sealed class VerdictTable(TextWriter writer, bool wide = false) : IVerd
         WriteReasons(writer, "Not assessable (repeat or complete the test):", _attention.Where(r => r.Assessment.Verdict == Verdict.NotAssessable));
         WriteInstrumentFindings(writer, _attention.Where(r => r.InstrumentFinding is not null));
         WriteNotes(writer, _attention.Where(r => r.Assessment.Notes.Count > 0));
+        WriteAdvisories(writer, _attention.Where(r => r.Assessment.Advisories.Count > 0));
         writer.WriteLine();
         Wrapped.Write(writer, Safety.Caution, 0);
     }
@@ -142,6 +143,26 @@ internal sealed class VerdictTable(TextWriter writer, bool wide = false) : IVerd
             foreach (var note in r.Assessment.Notes)
             {
                 Item(writer, $"{m.Tag} {m.TestedAt} at {m.Current}: {note}");
+            }
+        }
+    }
+
+    private void WriteAdvisories(TextWriter writer, IEnumerable<JudgedTrip> results)
+    {
+        var list = results.ToList();
+        if (list.Count == 0)
+        {
+            return;
+        }
+
+        writer.WriteLine();
+        writer.WriteLine("Advisories (passes outside a drawn line; no requirement broken, compare with the maker's curve):");
+        foreach (var r in list)
+        {
+            var m = r.Trip.Measurement;
+            foreach (var advisory in r.Assessment.Advisories)
+            {
+                Item(writer, $"{m.Tag} {m.TestedAt} at {m.Current}: {advisory.Message}");
             }
         }
     }

@@ -47,4 +47,7 @@ public enum FindingKind
 
     /// <summary>No as-found test since the device's due date.</summary>
     TestOverdue,
+
+    /// <summary>A trip test neither broke nor proved a requirement: the test that would decide is still to be run.</summary>
+    RetestNeeded,
 }

@@ -23,6 +23,9 @@ public sealed record TripAssessment(
     /// <summary>Remarks beside the verdict: settings found at the test, ambient corrections or warnings.</summary>
     public IReadOnlyList<string> Notes { get; init; } = [];
 
+    /// <summary>For a not-assessable verdict, the standard's point a test would decide at, when the reason names one.</summary>
+    public NormativePoint? RetestAt { get; init; }
+
     /// <summary>For a pass, the requirement (or requirements) the test proved, in words; null for any other verdict.</summary>
     public string? Proved { get; init; }
 

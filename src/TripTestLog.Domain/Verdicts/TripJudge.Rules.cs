@@ -63,9 +63,11 @@ public static partial class TripJudge
         }
 
         // 3. Nothing broken: a pass needs a requirement the test proves.
-        // A test aimed at a point (within its window, same start and loading) passes only by proving that point.
+        // A test within a point's window (with the point's loading, whatever its start) passes only by proving that
+        // point: a 1.45 In test started cold does not pass on row a a fortiori.
         var proofs = outcome.Tripped ? TripProofs(c, guaranteedMins, guaranteedMaxs) : HoldProofs(c, guaranteedMins, guaranteedMaxs);
-        if (c.AimedAt is { } aimed && proofs.All(p => p.Point != aimed))
+        var near = c.Envelope.Points.Where(p => p.Within(c.Multiple, c.Envelope.Window) && (p.Loading is null || p.Loading == conditions.Loading)).ToList();
+        if (near.Count > 0 && !proofs.Any(p => p.Point is { } proved && near.Contains(proved)))
         {
             proofs.Clear();
         }
@@ -146,8 +148,8 @@ public static partial class TripJudge
 
     // A requirement stated at this current: a setting, the relay formula in its range, or a curve-table row within the window.
     private static bool Proves(BandEdge e, Case c) =>
-        !e.Carried && e.Source is EdgeSource.Setting or EdgeSource.Characteristic or EdgeSource.CurveTable or EdgeSource.Instantaneous
-        && (e.Anchor is not { } anchor || Math.Abs(c.Multiple / anchor - 1.0) <= c.Envelope.Window + 1e-12);
+        e.Source is EdgeSource.Setting or EdgeSource.Characteristic or EdgeSource.CurveTable or EdgeSource.Instantaneous
+        && (e.Anchor is { } anchor ? Math.Abs(c.Multiple / anchor - 1.0) <= c.Envelope.Window + 1e-12 : !e.Carried);
 
     // The point nearest the test current first: it is the one the test was most likely aimed at.
     private static List<Proof> Nearest(List<Proof> proofs, Case c) =>
@@ -221,11 +223,7 @@ public static partial class TripJudge
     // Which test would decide: the standard's nearest point, or for a band without points where its limits are stated.
     private static string Hint(Case c)
     {
-        // A trip is decided at a trip-by point, a hold at a no-trip one.
-        var nearest = c.Envelope.Points
-            .OrderBy(p => (c.Outcome.Tripped ? p.MustTripWithin : p.MustHoldFor) is null ? 1 : 0)
-            .ThenBy(p => Math.Abs(Math.Log(c.Multiple / p.Multiple.Value)))
-            .FirstOrDefault();
+        var nearest = Nearest(c.Envelope, c.Multiple, c.Conditions, c.Outcome.Tripped);
         return nearest is not null
             ? $"the standard's nearest point is {nearest.Brief(c.Envelope.ReferenceName)}: {nearest.Requirement}"
             : $"test at a current where {c.Envelope.Standard} states a limit of its own";
@@ -234,6 +232,14 @@ public static partial class TripJudge
     // A conventional time reads better in hours.
     private static string Long(Seconds s) =>
         s.Value >= 3600 && s.Value % 3600 == 0 ? $"{(s.Value / 3600).ToString("0", CultureInfo.InvariantCulture)} h" : s.ToString();
+
+    // A trip is decided at a trip-by point, a hold at a no-trip one, with the test's loading.
+    private static NormativePoint? Nearest(PointWindowEnvelope envelope, double multiple, TestConditions conditions, bool tripped) =>
+        envelope.Points
+            .OrderBy(p => p.Loading is null || p.Loading == conditions.Loading ? 0 : 1)
+            .ThenBy(p => (tripped ? p.MustTripWithin : p.MustHoldFor) is null ? 1 : 0)
+            .ThenBy(p => Math.Abs(Math.Log(multiple / p.Multiple.Value)))
+            .FirstOrDefault();
 
     private static string Pct(double multiple, NormativePoint p) =>
         $"{Math.Abs(multiple / p.Multiple.Value - 1) * 100:0.0} %";

@@ -51,6 +51,7 @@ public static partial class TripJudge
         {
             Notes = judged.Notes,
             Proved = judged.Verdict == Verdict.Pass ? string.Join("; ", judged.Proved.Select(p => p.Requirement).Distinct()) : null,
+            RetestAt = judged.Verdict == Verdict.NotAssessable ? aimedAt ?? Nearest(windowed, multiple, conditions, outcome.Tripped) : null,
 
             // An advisory qualifies a pass; on a failure or an open question it would only repeat the reason.
             Advisories = judged.Verdict == Verdict.Pass ? Advisories(applied, outcome) : [],
