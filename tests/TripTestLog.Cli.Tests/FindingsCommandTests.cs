@@ -9,6 +9,7 @@ public sealed class FindingsCommandTests(SampleFleetDatabase fleet) : IClassFixt
     public static readonly TheoryData<string, string> KindsAndDevices = new()
     {
         { "trip-out-of-band", "BPS-DB1-Q03" },
+        { "retest-needed", "ARW-MCC-Q01" },
         { "trip-drift", "ARW-DB1-Q05" },
         { "trip-trend-exit", "ARW-DB1-Q05" },
         { "peer-outlier", "CWD-DB1-Q04" },
@@ -39,6 +40,22 @@ public sealed class FindingsCommandTests(SampleFleetDatabase fleet) : IClassFixt
         Assert.All(findings, f => Assert.Equal(kind, f.GetProperty("kind").GetString()));
         var readme = File.ReadLines(Path.Combine(Golden.RepositoryRoot(), "docs", "findings.md"));
         Assert.Contains(readme, line => line.Contains($"`{kind}`", StringComparison.Ordinal) && line.Contains(asset, StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void ANotAssessableTest_StaysOpenAsARetest_AndKeepsItsDeviceOutOfSound()
+    {
+        // ARW-MCC-Q01 (thermal-magnetic, no curve table): cold trips at about 3 Ir meet only the 1.30 Ir limit carried
+        // upward (IEC 60947-2 8.3.3, from memory), so they prove nothing and the device cannot be graded sound.
+        var (_, findings, _) = Run("findings", "--json", "--asset", "ARW-MCC-Q01");
+        var (_, fleet, _) = Run("fleet", "--json", "--asset", "ARW-MCC-Q01");
+
+        var retest = JsonDocument.Parse(findings).RootElement.EnumerateArray().Single(f => f.GetProperty("kind").GetString() == "retest-needed");
+        Assert.Equal("open", retest.GetProperty("status").GetString());
+        Assert.Contains("1.30Ir", retest.GetProperty("message").GetString());
+        var listed = JsonDocument.Parse(fleet).RootElement.GetProperty("priority").EnumerateArray().Single();
+        Assert.Equal("watch", listed.GetProperty("grade").GetString());
+        Assert.Contains("retest-needed", listed.GetProperty("why").GetString());
     }
 
     [Fact]

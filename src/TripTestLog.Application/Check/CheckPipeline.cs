@@ -13,13 +13,14 @@ public static class CheckPipeline
     /// <summary>
     /// The judged tests of every device (or of <paramref name="only"/>), in asset-tag and test-time order;
     /// <paramref name="requireRegisteredInstruments"/> makes an instrument missing from the register a finding;
-    /// <paramref name="ambientNoteKelvin"/> is the lab policy's ambient warning.
+    /// <paramref name="ambientNoteKelvin"/> is the lab policy's ambient warning, <paramref name="pointWindow"/> its
+    /// test-current tolerance around a standard's point (a fraction).
     /// </summary>
     public static IEnumerable<JudgedTrip> Run(ITripSource source, AssetTag? only = null, bool requireRegisteredInstruments = false,
-        CancellationToken cancel = default, double ambientNoteKelvin = LabPolicy.AmbientNoteKelvin)
+        CancellationToken cancel = default, double ambientNoteKelvin = LabPolicy.AmbientNoteKelvin, double pointWindow = LabPolicy.PointWindow)
     {
         ArgumentNullException.ThrowIfNull(source);
-        var judge = DeviceJudge.For(source, requireRegisteredInstruments, ambientNoteKelvin);
+        var judge = DeviceJudge.For(source, requireRegisteredInstruments, ambientNoteKelvin, pointWindow);
         // The store is read a few devices ahead on another thread, so reading and judging overlap on two cores.
         foreach (var device in ReadAhead.Of(source.Devices(only), 8, cancel))
         {

@@ -1,5 +1,6 @@
 using TripTestLog.Domain.Condition;
 using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Settings;
 
 namespace TripTestLog.Application.Findings;
 
@@ -73,6 +74,12 @@ public sealed record FindingPolicy
 
     /// <summary>How far the test ambient may lie from the reference before a thermal verdict carries a note, in kelvin (lab policy: 15).</summary>
     public double AmbientNoteKelvin { get; init; } = 15;
+
+    /// <summary>
+    /// The test-current tolerance within which a test is a test of a standard's point, in per cent of the point's current
+    /// (lab policy: 3; no standard figure is used).
+    /// </summary>
+    public double PointWindowPercent { get; init; } = LabPolicy.PointWindow * 100;
 
     /// <summary>Whether a test made with an instrument missing from the register is a finding (default: no).</summary>
     public bool RequireRegisteredInstruments { get; init; }

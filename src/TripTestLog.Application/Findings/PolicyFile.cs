@@ -54,6 +54,8 @@ public static class PolicyFile
             p => p.InsulationFallPercentPerYear, (p, v) => p with { InsulationFallPercentPerYear = v }, 1, 99),
         Number("ambient_note_kelvin", "ambient warning: a thermal verdict notes an ambient this far from its reference",
             p => p.AmbientNoteKelvin, (p, v) => p with { AmbientNoteKelvin = v }, 5, 100),
+        Number("point_window_pct", "verdicts: a test this close (per cent) to a standard point's current tests that point",
+            p => p.PointWindowPercent, (p, v) => p with { PointWindowPercent = v }, 0.5, 10),
         new("require_registered_instruments", "instrument-unregistered: yes or no",
             p => p.RequireRegisteredInstruments ? "yes" : "no",
             (p, v) => v switch { "yes" => p with { RequireRegisteredInstruments = true }, "no" => p with { RequireRegisteredInstruments = false }, _ => null }),

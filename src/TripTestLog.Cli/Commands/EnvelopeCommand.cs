@@ -93,7 +93,7 @@ internal static class EnvelopeCommand
                 device = history.InForceOn(on);
             }
 
-            envelope = EnvelopeFactory.For(device, device.Settings, 1.0, store.CurveTables());
+            envelope = PointWindowEnvelope.Of(EnvelopeFactory.For(device, device.Settings, 1.0, store.CurveTables()));
             title = $"{device.Tag}: {FamilyCodes.Of(device.Family)}, In = {device.RatedCurrent}, {device.Settings.Summary} ({envelope.Standard})"
                 + (request.On is { } shown ? $", settings in force on {shown}" : "");
         }
@@ -113,7 +113,7 @@ internal static class EnvelopeCommand
             }
 
             var device = new Device(AssetTag.Of("envelope"), "", "", family, rated, request.Poles ?? 1, Volts.Of(400), null, null, "", "", "", settings.Value.Settings);
-            envelope = EnvelopeFactory.For(device, device.Settings, 1.0, settings.Value.Tables);
+            envelope = PointWindowEnvelope.Of(EnvelopeFactory.For(device, device.Settings, 1.0, settings.Value.Tables));
             title = $"{FamilyCodes.Of(family)}, {(request.Rated is null ? "" : $"In = {rated}, ")}{device.Settings.Summary} ({envelope.Standard})";
         }
 
