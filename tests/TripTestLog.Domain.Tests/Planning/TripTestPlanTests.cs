@@ -4,6 +4,7 @@ using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Planning;
 using TripTestLog.Domain.Quantities;
 using TripTestLog.Domain.Settings;
+using TripTestLog.Domain.Verdicts;
 
 namespace TripTestLog.Domain.Tests.Planning;
 
@@ -114,5 +115,48 @@ public sealed class TripTestPlanTests
         var plan = TripTestPlan.For(device, EnvelopeFactory.For(device));
 
         Assert.Empty(plan);
+    }
+
+    public static TheoryData<string> PlannedDevices => new() { "c16", "b80x3", "electronic", "thermal-magnetic", "relay" };
+
+    private static Device PlannedDevice(string name) => name switch
+    {
+        "c16" => Breaker(DeviceFamily.Iec60898, 16, 1, new Iec60898Settings(TripCurve.C)),
+        "b80x3" => Breaker(DeviceFamily.Iec60898, 80, 3, new Iec60898Settings(TripCurve.B)),
+        "electronic" => Breaker(DeviceFamily.Iec60947Electronic, 630, 3, new ElectronicTripSettings(Amperes.Of(500), Seconds.Of(10), 6,
+            Amperes.Of(2400), Seconds.Of(0.2), false, Amperes.Of(6000), LabPolicy.ElectronicTimeTolerance, LabPolicy.InstantaneousMax)),
+        "thermal-magnetic" => Breaker(DeviceFamily.Iec60947ThermalMagnetic, 160, 3, new ThermalMagneticSettings(Amperes.Of(125), Amperes.Of(1250), LabPolicy.InstantaneousMax)),
+        _ => Breaker(DeviceFamily.RelayIdmt, 1000, 3, new RelaySettings(IdmtCurve.StandardInverse, Amperes.Of(800), 0.1, Amperes.Of(6000),
+            Seconds.Of(0.05), LabPolicy.RelayTimeTolerance, 0.05, Seconds.Zero)),
+    };
+
+    [Theory]
+    [MemberData(nameof(PlannedDevices))]
+    public void EveryPlannedPoint_ProvesItsRequirement_WhenTheResultLandsInItsWindow(string name)
+    {
+        // The planned currents sit on the proving side of each point's window: a hold for the planned time, or a trip
+        // in the middle of the window the worksheet prints, is a pass that names what it proved.
+        var device = PlannedDevice(name);
+        var envelope = EnvelopeFactory.For(device);
+
+        foreach (var p in TripTestPlan.For(device, envelope))
+        {
+            if (p.HoldFor is null && p.Window.Maximum.Limit is null)
+            {
+                continue; // a trip the plan asks for without a time bound: nothing to land inside
+            }
+
+            var min = p.Window.Minimum.IsOpen || p.Window.Minimum.Limit is null ? 0.0 : p.Window.Minimum.Limit.Value.Value;
+            var outcome = p.HoldFor is { } hold
+                ? TripOutcome.HeldFor(hold)
+                : TripOutcome.TrippedAfter(Seconds.Of(min > 0 ? Math.Sqrt(min * p.Window.Maximum.Limit!.Value.Value) : p.Window.Maximum.Limit!.Value.Value / 2));
+            var m = new TripMeasurement(device.Tag, TestedAt.OnDate(new DateOnly(2025, 1, 1)), TestStage.AsFound, p.Pole, p.Current, outcome,
+                p.Conditions.Start, null, "", "", "");
+
+            var a = TripJudge.Assess(envelope, m, p.Conditions);
+
+            Assert.True(a.Verdict == Verdict.Pass, $"{name} {p.Label}: {a.Verdict}: {a.Reason}");
+            Assert.False(string.IsNullOrEmpty(a.Proved));
+        }
     }
 }
