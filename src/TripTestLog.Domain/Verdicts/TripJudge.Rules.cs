@@ -12,6 +12,16 @@ public static partial class TripJudge
         NormativePoint? AimedAt)
     {
         public string At => $"{Multiple.ToString("0.###", CultureInfo.InvariantCulture)} {Envelope.ReferenceName}";
+
+        /// <summary>The point whose window the test lies in, with its loading, when its start differs from the test's.</summary>
+        public NormativePoint? OtherStart => AimedAt is null
+            ? Envelope.Points.Where(p => p.Within(Multiple, Envelope.Window) && (p.Loading is null || p.Loading == Conditions.Loading) && !p.AnyStart && p.Start != Conditions.Start)
+                .OrderBy(p => Math.Abs(Multiple / p.Multiple.Value - 1.0)).FirstOrDefault()
+            : null;
+
+        public string StartMismatch(NormativePoint p) =>
+            $"at {At}, in {p.Label}'s window, but {p.Label} assumes a start {(p.Start == StartCondition.Cold ? "from cold" : "from warm")} "
+            + $"and this test ran {(Conditions.Start == StartCondition.Cold ? "from cold" : "from warm")}, so it proves nothing there ({p.Requirement}); repeat at {p.Where(Envelope.ReferenceName)}";
     }
 
     private sealed record Proof(string Requirement, BandEdge Edge, NormativePoint? Point);
@@ -173,6 +183,11 @@ public static partial class TripJudge
     {
         var t = c.Outcome.Time;
 
+        if (c.OtherStart is { } other)
+        {
+            return $"tripped after {t} {c.StartMismatch(other)}";
+        }
+
         // Aimed at a point, past its limit but within what the current offset or the ambient can explain: neither broken nor proved.
         if (c.AimedAt is { } p)
         {
@@ -193,6 +208,11 @@ public static partial class TripJudge
 
     private static string UnprovedHold(Case c, List<BandEdge> maxs)
     {
+        if (c.OtherStart is { } other && c.Applied.Maximum.Limit is null)
+        {
+            return $"held {c.Outcome.Time} {c.StartMismatch(other)}";
+        }
+
         var held = c.Outcome.Time;
         var max = c.Applied.Maximum;
         if (max.Limit is { } latest)
@@ -209,7 +229,7 @@ public static partial class TripJudge
 
         var w = c.Envelope.Window;
         var needed = c.Envelope.Points
-            .Where(p => p.MustHoldFor is not null && c.Multiple >= p.Multiple.Value * (1 - w))
+            .Where(p => p.MustHoldFor is { } h && held < h && c.Multiple >= p.Multiple.Value * (1 - w))
             .OrderBy(p => Math.Abs(Math.Log(c.Multiple / p.Multiple.Value)))
             .FirstOrDefault();
         if (needed is not null)
