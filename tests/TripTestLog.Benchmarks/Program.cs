@@ -22,6 +22,7 @@ namespace TripTestLog.Benchmarks;
 /// With --pairs N, only the import against the insert floor at the largest --rows, N times alternated, and the median ratio.
 /// Diagnostic steps, run one at a time on a fleet written with --step generate: --step NAME --work DIR, where NAME is
 /// floor-schema (the raw insert into the project's own table), parse-only, rows-only, open-only, read-only, judge-only.
+/// With --one-device DB --asset TAG [--runs 10], the one-device commands as processes against a bare --version (OneDevice).
 /// </summary>
 internal static class Program
 {
@@ -43,6 +44,11 @@ internal static class Program
             }
 
             server = options.Server;
+            if (options.OneDevice is { } database)
+            {
+                return OneDevice.Run(database, options.Asset ?? throw new ArgumentException("--one-device needs --asset TAG"), options.Runs);
+            }
+
             return options.Step is { } step ? RunStep(step, options.Work) : options.Pairs > 0 ? RunPairs(options) : RunAll(options);
         }
         catch (ArgumentException e)
@@ -441,6 +447,12 @@ internal static class Program
 
     private sealed record Options(IReadOnlyList<long> Rows, int Devices, int Files, string Work, string? Step, int Pairs = 0, string? Server = null)
     {
+        public string? OneDevice { get; init; }
+
+        public string? Asset { get; init; }
+
+        public int Runs { get; init; } = 10;
+
         public static Options Parse(string[] args)
         {
             var rows = new List<long> { 100_000, 300_000, 1_000_000 };
@@ -449,6 +461,8 @@ internal static class Program
             string? step = null;
             var pairs = 0;
             string? server = null;
+            string? oneDevice = null, asset = null;
+            var runs = 10;
             for (var i = 0; i < args.Length; i++)
             {
                 var value = i + 1 < args.Length ? args[i + 1] : throw new ArgumentException($"{args[i]} needs a value");
@@ -475,14 +489,23 @@ internal static class Program
                     case "--pairs":
                         pairs = int.TryParse(value, out var n2) && n2 is > 0 and <= 20 ? n2 : throw new ArgumentException("--pairs takes a whole number from 1 to 20");
                         break;
+                    case "--one-device":
+                        oneDevice = value;
+                        break;
+                    case "--asset":
+                        asset = value;
+                        break;
+                    case "--runs":
+                        runs = int.TryParse(value, out var r) && r is > 0 and <= 100 ? r : throw new ArgumentException("--runs takes a whole number from 1 to 100");
+                        break;
                     default:
-                        throw new ArgumentException($"unknown option {args[i]}; use --rows, --devices, --files, --work, --pairs, --server");
+                        throw new ArgumentException($"unknown option {args[i]}; use --rows, --devices, --files, --work, --pairs, --server, --one-device, --asset, --runs");
                 }
 
                 i++;
             }
 
-            return new Options(rows, devices, files, work, step, pairs, server);
+            return new Options(rows, devices, files, work, step, pairs, server) { OneDevice = oneDevice, Asset = asset, Runs = runs };
         }
     }
 }
