@@ -128,7 +128,8 @@ internal static class SampleFleet
             var t = traits[d.Tag];
             var at = day.AddDays(index / 5).AddHours(index % 5 * 1.5);
             var tech = Technicians[site][(index + year) % 2];
-            var ambient = F(18 + random.NextDouble() * 8, "0.0");
+            // The labs test miniature breakers in a test room held near IEC 60898-1's 30 °C reference.
+            var ambient = F(27 + random.NextDouble() * 5, "0.0");
             if (site == 0 && year == 1 && index == 0)
             {
                 // Tested in the unheated pump room in winter: far from the 30 °C reference, with no correction table.

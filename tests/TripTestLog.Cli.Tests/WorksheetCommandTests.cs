@@ -21,8 +21,9 @@ public sealed class WorksheetCommandTests(SampleFleetDatabase fleet) : IClassFix
         var lines = File.ReadAllLines(trips);
         Assert.Equal("ARW-DB1-Q05,,as-found,all,28.25,,,cold,,,,,T1", lines[1]);
         Assert.Equal("ARW-DB1-Q05,,as-found,all,63.75,,,cold,,,,,T4", lines[4]);
-        lines[1] = "ARW-DB1-Q05,2026-11-30T08:00,as-found,all,28.25,,3600,cold,24,INJ-ARW-1,E. Marlow,,T1";
-        lines[4] = "ARW-DB1-Q05,2026-11-30T10:00,as-found,all,63.75,0.5,,cold,24,INJ-ARW-1,E. Marlow,,T4";
+        // In a test room at 29 °C, within 5 K of the 30 °C reference, so the hold proves row a.
+        lines[1] = "ARW-DB1-Q05,2026-11-30T08:00,as-found,all,28.25,,3600,cold,29,INJ-ARW-1,E. Marlow,,T1";
+        lines[4] = "ARW-DB1-Q05,2026-11-30T10:00,as-found,all,63.75,0.5,,cold,29,INJ-ARW-1,E. Marlow,,T4";
         File.WriteAllLines(trips, lines);
         var contacts = Path.Combine(sheet, WorksheetCsv.ContactFile);
         var contactLines = File.ReadAllLines(contacts);

@@ -72,14 +72,21 @@ public sealed partial class TripAssessor
     private static TripAssessment? CheckResidual(TripAssessment assessment, Device device, TestConditions conditions)
     {
         var outcome = assessment.Measurement.Outcome;
-        if (device.Family != DeviceFamily.Iec61009 || conditions.Loading != PoleLoading.OnePole || !outcome.Tripped)
+        if (device.Family != DeviceFamily.Iec61009 || conditions.Loading != PoleLoading.OnePole)
         {
             return null;
         }
 
         if (assessment.Verdict != Verdict.TooEarly && !(assessment.Verdict == Verdict.Pass && outcome.Time <= LabPolicy.ResidualBreakTime))
         {
-            return null;
+            // Slower than the residual release: either no residual current flowed (line and neutral in series) or that
+            // release did not act, which a one-pole overcurrent verdict cannot tell apart.
+            return outcome.Time <= LabPolicy.ResidualBreakTime ? null : assessment with
+            {
+                Notes = [.. assessment.Notes, $"one pole of an RCBO carried {assessment.Measurement.Current} for {outcome.Time} without the residual-current release "
+                    + $"acting (it should within {LabPolicy.ResidualBreakTime} if the current flowed through that pole alone): confirm the injection was through line and neutral "
+                    + "in series, or test the residual-current release"],
+            };
         }
 
         return assessment with

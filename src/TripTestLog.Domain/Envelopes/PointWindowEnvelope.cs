@@ -29,6 +29,12 @@ public sealed class PointWindowEnvelope : ITripEnvelope
     /// <summary>The ambient's shift in words, or empty when the ambient moves nothing.</summary>
     public string AmbientWords => _ambient.Words;
 
+    /// <summary>The ambient's shift: a proof at a non-reference ambient must clear the limit moved against the test.</summary>
+    public AmbientShift Ambient => _ambient;
+
+    /// <summary>The family's envelope read through this one.</summary>
+    public ITripEnvelope Inner => _inner;
+
     /// <inheritdoc />
     public string Standard => _inner.Standard;
 

@@ -13,15 +13,18 @@ public static partial class TripJudge
     {
         public string At => $"{Multiple.ToString("0.###", CultureInfo.InvariantCulture)} {Envelope.ReferenceName}";
 
-        /// <summary>The point whose window the test lies in, with its loading, when its start differs from the test's.</summary>
+        /// <summary>The point whose window the test lies in when the test's start or loading differs from the point's.</summary>
         public NormativePoint? OtherStart => AimedAt is null
-            ? Envelope.Points.Where(p => p.Within(Multiple, Envelope.Window) && (p.Loading is null || p.Loading == Conditions.Loading) && !p.AnyStart && p.Start != Conditions.Start)
+            ? Envelope.Points.Where(p => p.Within(Multiple, Envelope.Window))
                 .OrderBy(p => Math.Abs(Multiple / p.Multiple.Value - 1.0)).FirstOrDefault()
             : null;
 
-        public string StartMismatch(NormativePoint p) =>
-            $"at {At}, in {p.Label}'s window, but {p.Label} assumes a start {(p.Start == StartCondition.Cold ? "from cold" : "from warm")} "
-            + $"and this test ran {(Conditions.Start == StartCondition.Cold ? "from cold" : "from warm")}, so it proves nothing there ({p.Requirement}); repeat at {p.Where(Envelope.ReferenceName)}";
+        public string StartMismatch(NormativePoint p)
+        {
+            var assumes = p.HoldEdge(carried: false).Assumes();
+            return $"at {At}, in {p.Label}'s window, but {p.Label} assumes {assumes} and this test ran {Conditions}, so it proves nothing there "
+                + $"({p.Requirement}); repeat at {p.Where(Envelope.ReferenceName)}{(p.Loading == PoleLoading.AllPoles && Conditions.Loading != PoleLoading.AllPoles ? " with all poles loaded" : "")}";
+        }
     }
 
     private sealed record Proof(string Requirement, BandEdge Edge, NormativePoint? Point);
@@ -46,13 +49,13 @@ public static partial class TripJudge
         if (outcome.Tripped && !min.IsOpen && min.TripIsBefore(t))
         {
             var limit = min.Limit is { } m ? $"the {m} minimum" : "a current where it must not operate at all";
-            return new(Verdict.TooEarly, $"{what}, before {limit} ({min.Requirement})", min, [], [], null);
+            return new(Verdict.TooEarly, $"{what}, before {limit} ({min.Requirement}){Fortiori(min, conditions, cooler: true)}", min, [], [], null);
         }
 
         if (max.Limit is { } latest && (outcome.Tripped ? max.TripIsAfter(t) : t >= latest))
         {
             var must = max.Strict ? $"trip in less than {latest}" : $"trip within {latest}";
-            return new(Verdict.TooLate, $"{what}; it must {must} ({max.Requirement})", max, [], [], null);
+            return new(Verdict.TooLate, $"{what}; it must {must} ({max.Requirement}){Fortiori(max, conditions, cooler: false)}", max, [], [], null);
         }
 
         // 2. A guaranteed edge is broken, but it assumes conditions the test did not meet: the band reported is the one cited.
@@ -84,8 +87,7 @@ public static partial class TripJudge
 
         if (proofs.Count > 0)
         {
-            var inside = max.Limit is null && min.IsOpen ? "" : $", inside {applied.Range}";
-            return new(Verdict.Pass, $"{what}{inside}; proves {proofs[0].Requirement}", proofs[0].Edge, PassNotes(c, guaranteedMins, guaranteedMaxs), proofs, null);
+            return new(Verdict.Pass, $"{what}; proves {proofs[0].Requirement}", proofs[0].Edge, PassNotes(c, guaranteedMins, guaranteedMaxs), proofs, null);
         }
 
         if (!band.HasRequirement && (outcome.Tripped || guaranteedMaxs.Count == 0))
@@ -111,8 +113,10 @@ public static partial class TripJudge
             // A point with both limits (IEC 60898-1 row c) is proved inside its window only by a trip within both; below
             // the window a trip within its trip-by limit proves that limit a fortiori, above it a trip after its no-trip one.
             var mp = p.Multiple.Value;
-            var tripSide = c.Multiple <= mp * (1 + w) && p.TripEdge(carried: false) is { Limit: not null } trip && !trip.TripIsAfter(t) && trip.TestAtMostAsHot(c.Conditions);
-            var holdSide = c.Multiple >= mp * (1 - w) && p.HoldEdge(carried: false) is { Limit: not null } hold && !hold.TripIsBefore(t) && hold.TestAtLeastAsHot(c.Conditions);
+            var tripSide = c.Multiple <= mp * (1 + w) && p.TripEdge(carried: false) is { Limit: not null } trip
+                && !trip.TripIsAfter(AtReference(c, p, t, tripBy: true)) && trip.TestAtMostAsHot(c.Conditions);
+            var holdSide = c.Multiple >= mp * (1 - w) && p.HoldEdge(carried: false) is { Limit: not null } hold
+                && !hold.TripIsBefore(AtReference(c, p, t, tripBy: false)) && hold.TestAtLeastAsHot(c.Conditions);
             var both = p.MustTripWithin is not null && p.MustHoldFor is not null;
             if (both ? (p.Within(c.Multiple, w) ? tripSide && holdSide : tripSide || holdSide) : tripSide || holdSide)
             {
@@ -138,7 +142,7 @@ public static partial class TripJudge
         var proofs = new List<Proof>();
         foreach (var p in c.Envelope.Points)
         {
-            if (p.IsNoTripPoint && p.MustHoldFor is { } h && held >= h && c.Multiple >= p.Multiple.Value * (1 - w) && (!mustOperate || p.Within(c.Multiple, w))
+            if (p.IsNoTripPoint && p.MustHoldFor is { } h && AtReference(c, p, held, tripBy: false) >= h && c.Multiple >= p.Multiple.Value * (1 - w) && (!mustOperate || p.Within(c.Multiple, w))
                 && p.HoldEdge(carried: false) is var edge && edge.TestAtLeastAsHot(c.Conditions))
             {
                 proofs.Add(new Proof(p.Requirement, edge, p));
@@ -150,10 +154,29 @@ public static partial class TripJudge
             return Nearest(proofs, c);
         }
 
-        proofs.AddRange(mins.Where(e => Proves(e, c) && e.TestAtLeastAsHot(c.Conditions)
-                && (e.Limit is { } l ? !e.IsOpen && held >= l : e.ProvenByHolding is { } need && held >= need))
+        // A setting's minimum is a floor with no hold time of its own: a hold past it proves nothing. Only "must not
+        // operate at all" (a relay below its start) states how long a hold must last.
+        proofs.AddRange(mins.Where(e => Proves(e, c) && e.TestAtLeastAsHot(c.Conditions) && e.Limit is null && e.ProvenByHolding is { } need && held >= need)
             .Select(e => new Proof(e.Requirement, e, null)));
         return Nearest(proofs, c);
+    }
+
+    // The time a test at a non-reference ambient stands for at the reference, taken against the test (a proof must hold
+    // however the ambient moved the release): a hot release trips sooner, so its trip stands for up to a stretched time; a
+    // cold one later, so its hold or late trip stands for as little as a shrunk time. Magnetic points do not move.
+    private static Seconds AtReference(Case c, NormativePoint p, Seconds t, bool tripBy)
+    {
+        var shift = c.Envelope.Ambient;
+        if (shift.IsNone || p.HighestUltimate is not { } u)
+        {
+            return t;
+        }
+
+        var m = c.Multiple;
+        var factor = tripBy
+            ? OffsetBound.Stretch(m, m * shift.Upper, u)
+            : OffsetBound.Shrink(m, m * shift.Lower, u);
+        return Seconds.Of(double.IsInfinity(factor) ? double.MaxValue : t.Value * factor);
     }
 
     // A requirement stated at this current: a setting, the relay formula in its range, or a curve-table row within the window.
@@ -244,8 +267,14 @@ public static partial class TripJudge
     private static string Hint(Case c)
     {
         var nearest = Nearest(c.Envelope, c.Multiple, c.Conditions, c.Outcome.Tripped);
-        return nearest is not null
-            ? $"the standard's nearest point is {nearest.Brief(c.Envelope.ReferenceName)}: {nearest.Requirement}"
+        if (nearest is not null)
+        {
+            return $"the standard's nearest point is {nearest.Brief(c.Envelope.ReferenceName)}: {nearest.Requirement}";
+        }
+
+        return c.Envelope.Inner is RelayEnvelope relay
+            ? $"time the relay between {RelayEnvelope.AccuracyFrom:0} and {RelayEnvelope.AccuracyTo:0} x Is ({Amperes.Of(RelayEnvelope.AccuracyFrom * relay.Reference.Value)} to "
+                + $"{Amperes.Of(RelayEnvelope.AccuracyTo * relay.Reference.Value)}), where {c.Envelope.Standard} declares its accuracy"
             : $"test at a current where {c.Envelope.Standard} states a limit of its own";
     }
 
@@ -263,6 +292,17 @@ public static partial class TripJudge
 
     private static string Pct(double multiple, NormativePoint p) =>
         $"{Math.Abs(multiple / p.Multiple.Value - 1) * 100:0.0} %";
+
+    // Where the limit assumes other conditions than the test's, why it still holds: the test ran no hotter (a minimum) or
+    // at least as hot (a maximum) than the limit assumes.
+    private static string Fortiori(BandEdge edge, TestConditions test, bool cooler)
+    {
+        var assumes = edge.Assumes();
+        var start = !edge.AnyStart && edge.Start != test.Start;
+        var loading = edge.Loading is { } l && l != test.Loading;
+        return assumes.Length == 0 || (!start && !loading) ? ""
+            : $"; this test ({test}) runs {(cooler ? "no hotter" : "at least as hot")} than that limit assumes ({assumes}), so it holds";
+    }
 
     private static string Repeat(BandEdge edge) => edge.Assumes() is { Length: > 0 } a ? a : "under the standard's conditions";
 }

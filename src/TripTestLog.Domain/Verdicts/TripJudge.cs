@@ -43,8 +43,9 @@ public static partial class TripJudge
         var point = judged.Verdict switch
         {
             Verdict.Pass => judged.Proved.Any(p => p.Point is { } pp && pp == aimedAt) ? aimedAt : null,
-            _ => judged.Edge?.PointLabel is { } label && windowed.Points.FirstOrDefault(p => p.Label == label) is { } broken
-                && broken.Within(multiple, windowed.Window) ? broken : aimedAt,
+            Verdict.TooEarly or Verdict.TooLate => judged.Edge?.PointLabel is { } label && judged.Edge.Value.Source == EdgeSource.NormativePoint
+                && windowed.Points.FirstOrDefault(p => p.Label == label) is { } broken && broken.Within(multiple, windowed.Window) ? broken : null,
+            _ => aimedAt,
         };
         var margin = MarginOf(applied, outcome.Time);
         return new TripAssessment(measurement, judged.Band ?? applied, judged.Verdict, BasisOf(judged), point, margin, judged.Reason)

@@ -24,12 +24,15 @@ public sealed class ThermalMagneticEnvelopeTests
     }
 
     [Fact]
-    public void BetweenTheConventionalCurrents_ThereIsNoBand()
+    public void BetweenTheConventionalCurrents_OnlyTheMagneticNoOperationLimitApplies()
     {
-        var band = Envelope.At(Amperes.Of(150));
+        // 1.2 Ir: nothing requires a trip, and only the magnetic release's "no operation within 0.2 s at 0.8 Im" (IEC
+        // 60947-2 8.3.3.1.2, from memory), carried to lower currents, bounds an early one.
+        var band = Envelope.At(Amperes.Of(150)).For(TestConditions.Reference);
 
-        Assert.False(band.HasRequirement);
-        Assert.Contains("curve table", band.NoRequirement);
+        Assert.Equal(0.2, band.Minimum.Limit!.Value.Value, 9);
+        Assert.Equal("0.8Im", band.Minimum.PointLabel);
+        Assert.Null(band.Maximum.Limit);
     }
 
     [Fact]
@@ -41,21 +44,23 @@ public sealed class ThermalMagneticEnvelopeTests
         Assert.True(band.HasRequirement);
         Assert.Equal(7200, band.For(Warm).Maximum.Limit!.Value.Value, 6);
         Assert.Null(band.For(TestConditions.Reference).Maximum.Limit);
-        Assert.True(band.For(Warm).Minimum.IsOpen);
+        Assert.Equal(0.2, band.For(Warm).Minimum.Limit!.Value.Value, 9);
     }
 
     [Theory]
-    // Magnetic 1250 A: no operation at or below 0.8 Im = 1000 A, operation from 1.2 Im = 1500 A (IEC 60947-2).
-    [InlineData(999, 7200.0)]
-    [InlineData(1001, 7200.0)]
-    [InlineData(1499, 7200.0)]
-    [InlineData(1500, 0.05)]
-    public void TheMagneticTolerance_DecidesTheBand(double amps, double max)
+    // Magnetic 1250 A: no operation at or below 0.8 Im = 1000 A (within 0.2 s, from memory), operation from 1.2 Im =
+    // 1500 A (IEC 60947-2).
+    [InlineData(999, 7200.0, 0.2)]
+    [InlineData(1000, 7200.0, 0.2)]
+    [InlineData(1001, 7200.0, 0.0)]
+    [InlineData(1499, 7200.0, 0.0)]
+    [InlineData(1500, 0.05, 0.0)]
+    public void TheMagneticTolerance_DecidesTheBand(double amps, double max, double min)
     {
         var band = Envelope.At(Amperes.Of(amps)).For(Warm);
 
         Assert.Equal(max, band.Maximum.Limit!.Value.Value, 6);
-        Assert.True(band.Minimum.IsOpen);
+        Assert.Equal(min, band.Minimum.Limit!.Value.Value, 6);
     }
 
     private static readonly TestConditions Warm = new(StartCondition.Warm, PoleLoading.AllPoles);

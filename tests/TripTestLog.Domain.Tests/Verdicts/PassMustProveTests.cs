@@ -179,4 +179,88 @@ public sealed class PassMustProveTests
         Assert.Equal(170.4, a.Band.Minimum.Limit!.Value.Value, 1);
         Assert.Contains("assumes from cold", a.Reason);
     }
+
+    private static TripAssessment AtAmbient(double amps, TripOutcome outcome, double ambient, string pole = "all", DeviceFamily family = DeviceFamily.Iec60898, int poles = 1)
+    {
+        var device = new DeviceHistory([new Device(AssetTag.Of("M-2"), "S", "L", family, Amperes.Of(16), poles, Volts.Of(230), null, null, "", "", "",
+            new Iec60898Settings(TripCurve.C))]);
+        var trip = new TripMeasurement(AssetTag.Of("M-2"), TestedAt.OnDate(new DateOnly(2024, 3, 1)), TestStage.AsFound, Pole.Parse(pole), Amperes.Of(amps),
+            outcome, StartCondition.Cold, Celsius.Of(ambient), "", "", "");
+        return new TripAssessor(new Dictionary<string, CurveTable>(), new Dictionary<string, AmbientTable>()).Assess(device, trip).Assessment;
+    }
+
+    [Theory]
+    // A proof at a non-reference ambient must clear the limit moved against the test (IEC 60898-1 calibrates at 30 °C;
+    // 1 %/K from memory). At 42 °C the release acts as at 2.55 x 1.12 = 2.856 In, so a trip stands for up to
+    // g(1.45 / 2.55) / g(1.45 / 2.856) = 0.39064 / 0.29347 = 1.331 times as long at the reference: 55 s could be 73 s.
+    // At 21 °C it acts as at 0.91 x the current: a 1 h hold at 1.13 In proves nothing of row a (the ultimate current
+    // may sit anywhere up to 1.45 In), and a 1.1 s trip at 2.55 In stands for as little as 1.1 / 1.2675 = 0.87 s.
+    [InlineData(40.8, false, 55, 42, Verdict.NotAssessable)]
+    [InlineData(40.8, false, 30, 42, Verdict.Pass)]
+    [InlineData(18.08, true, 3600, 21, Verdict.NotAssessable)]
+    [InlineData(40.8, false, 1.1, 21, Verdict.NotAssessable)]
+    [InlineData(40.8, false, 1.3, 21, Verdict.Pass)]
+    [InlineData(18.08, true, 3600, 28, Verdict.Pass)] // within 5 K of the reference (lab policy): no move
+    public void AProofAwayFromTheReferenceAmbient_MustClearTheLimitMovedAgainstIt(double amps, bool held, double seconds, double ambient, Verdict expected)
+    {
+        var a = AtAmbient(amps, held ? Held(seconds) : Tripped(seconds), ambient);
+
+        Assert.Equal(expected, a.Verdict);
+    }
+
+    [Theory]
+    // Thermal-magnetic Ir 125 A, Im 1250 A: the magnetic release does not operate at 0.8 Im = 1000 A within 0.2 s (IEC
+    // 60947-2 8.3.3.1.2, from memory), and no release trips sooner at a lower current.
+    [InlineData(1000, 0.01, Verdict.TooEarly)]
+    [InlineData(950, 0.01, Verdict.TooEarly)]
+    [InlineData(1000, 0.3, Verdict.Pass)]
+    public void AThermalMagneticRelease_DoesNotOperateMagneticallyAtEightyPerCentOfIm(double amps, double seconds, Verdict expected)
+    {
+        var envelope = new ThermalMagneticEnvelope(Amperes.Of(160), new ThermalMagneticSettings(Amperes.Of(125), Amperes.Of(1250), Seconds.Of(0.05)));
+        var a = TripJudge.Assess(envelope, new TripMeasurement(AssetTag.Of("T-2"), TestedAt.OnDate(new DateOnly(2025, 5, 1)), TestStage.AsFound,
+            Pole.All, Amperes.Of(amps), Tripped(seconds), StartCondition.Cold, null, "", "", ""));
+
+        Assert.Equal(expected, a.Verdict);
+    }
+
+    [Fact]
+    public void AHoldPastASettingsMinimum_ProvesNothing()
+    {
+        // 1.2 Ir on the electronic unit: nothing must operate (1.05 to 1.30 Ir, IEC 60947-2 8.3.3); the long-time minimum
+        // 10 (6 / 1.2)² - 20 % = 200 s is a floor, not a hold time.
+        var a = JudgeUnit(Unit, 480, Held(600), StartCondition.Cold);
+
+        Assert.Equal(Verdict.NotAssessable, a.Verdict);
+    }
+
+    [Fact]
+    public void ASlowOnePoleTripOfAnRcbo_SaysTheResidualReleaseDidNotAct()
+    {
+        // 25.5 A through one pole alone is a residual current; the residual release acts within 0.3 s (IEC 61009-1, from memory).
+        var a = AtAmbient(25.52, Tripped(1800), 30, pole: "1", family: DeviceFamily.Iec61009, poles: 2);
+
+        Assert.Contains(a.Notes, n => n.Contains("residual-current release", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void AOnePoleTestAtRowA_NamesNoPoint_AndAsksForAllPoles()
+    {
+        // Row a assumes every pole loaded (IEC 60898-1 Table 7); one pole of two held at 1.13 In is not a test of it.
+        var a = Judge(TripCurve.C, 16, 18.08, Held(3600), StartCondition.Cold, poles: 2, pole: "1");
+
+        Assert.Equal(Verdict.NotAssessable, a.Verdict);
+        Assert.Null(a.Point);
+        Assert.Contains("with all poles loaded", a.Reason);
+    }
+
+    [Fact]
+    public void ARelayTestThatProvesNothing_NamesTheRangeToTimeItIn()
+    {
+        // Below the start threshold x 1.05 nothing is required yet; the characteristic's accuracy is declared from 2 to
+        // 20 x Is (IEC 60255-151, from memory), here 800 A to 8000 A.
+        var a = JudgeRelay(Relay(), 430, Tripped(60));
+
+        Assert.Equal(Verdict.NotAssessable, a.Verdict);
+        Assert.Contains("between 2 and 20 x Is (800 A to 8000 A)", a.Reason);
+    }
 }
