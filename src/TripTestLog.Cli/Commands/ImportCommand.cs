@@ -98,6 +98,12 @@ internal static class ImportCommand
             return ExitCodes.BadInput;
         }
 
+        if (db.MissingFolder() is { } missing)
+        {
+            cli.Error.WriteLine("error: " + missing);
+            return ExitCodes.BadInput;
+        }
+
         using var log = Logging.BesideDatabase(db);
         using var store = Stores.Open(db);
         IReadOnlyList<ImportOutcome> outcomes;

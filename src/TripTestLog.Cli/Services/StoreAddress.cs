@@ -41,8 +41,7 @@ internal sealed partial class StoreAddress
 
     /// <summary>
     /// Reads what `--db` (or the environment) says; a server address from a command line may not hold a password. An
-    /// address with a scheme other than postgres:// or postgresql:// (a misspelling) is refused, not taken for a path;
-    /// so is a file in a folder that does not exist: `--db` never creates folders.
+    /// address with a scheme other than postgres:// or postgresql:// (a misspelling) is refused, not taken for a path.
     /// </summary>
     /// <exception cref="FormatException">When the address cannot be read; the message says what to fix and never repeats the address.</exception>
     public static StoreAddress Parse(string text, bool fromCommandLine)
@@ -60,16 +59,18 @@ internal sealed partial class StoreAddress
                 + "give a database file's path, or a server as postgres://user@host/dbname");
         }
 
-        var file = OfFile(text);
-        if (file.File!.Directory is { Exists: false } folder)
-        {
-            throw new FormatException(text.Contains('@', StringComparison.Ordinal)
-                ? "the folder of the database file it names does not exist (not repeated here: it may hold a password); --db never creates folders"
-                : $"the folder {folder.FullName} does not exist; create it first (--db never creates folders)");
-        }
-
-        return file;
+        return OfFile(text);
     }
+
+    /// <summary>
+    /// For a command that may create the database (import): null when the database file's folder exists (or the store is
+    /// a server), else the sentence refusing it, since `--db` never creates folders.
+    /// </summary>
+    public string? MissingFolder() =>
+        File?.Directory is not { Exists: false } folder ? null
+        : _given.Contains('@', StringComparison.Ordinal)
+            ? "--db: the folder of the database file it names does not exist (not repeated here: it may hold a password); --db never creates folders"
+            : $"--db: the folder {folder.FullName} does not exist; create it first (--db never creates folders)";
 
     // A URL's scheme of two or more letters (one letter is a Windows drive).
     [System.Text.RegularExpressions.GeneratedRegex("^([A-Za-z][A-Za-z0-9+.-]+)://")]
