@@ -32,6 +32,8 @@ internal static class CliApp
 
     public static int Run(string[] args, CliContext cli)
     {
+        // Everything printed for a person passes one guard against terminal control characters in values.
+        cli = cli with { Out = Output.Visible.Wrap(cli.Out), Error = Output.Visible.Wrap(cli.Error) };
         var parse = Build(cli).Parse(args);
         var clock = System.Diagnostics.Stopwatch.StartNew();
         int exit;

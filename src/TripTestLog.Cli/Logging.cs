@@ -8,8 +8,8 @@ internal static class Logging
 {
     public static Logger BesideDatabase(Services.StoreAddress database)
     {
+        // The folder exists: the address was refused otherwise (--db never creates folders).
         var folder = database.Folder;
-        Directory.CreateDirectory(folder);
         return new LoggerConfiguration()
             .MinimumLevel.Information()
             .WriteTo.File(Path.Combine(folder, "triptestlog.log"), shared: true,

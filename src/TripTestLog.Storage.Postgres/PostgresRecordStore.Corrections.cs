@@ -1,5 +1,6 @@
 using Npgsql;
 using NpgsqlTypes;
+using TripTestLog.Application.Import;
 using TripTestLog.Application.Records;
 using TripTestLog.Domain.Measurements;
 
@@ -11,14 +12,91 @@ public sealed partial class PostgresRecordStore
 
     internal NpgsqlBinaryImporter Copy(string sql) => _connection.BeginBinaryImport(sql);
 
-    /// <summary>The latest earlier import from the same full path and of the same kind: a corrected file's rows are matched with its lines.</summary>
-    internal (long Id, string Name)? EarlierFileOfTheSameName(NpgsqlTransaction transaction, string path, RecordKind kind)
+    /// <summary>The measurement files of <paramref name="kind"/> stored so far: the candidates a correction may name.</summary>
+    internal IEnumerable<EarlierFile> EarlierFiles(NpgsqlTransaction transaction, RecordKind kind)
     {
-        using var select = Command("SELECT id, full_path FROM source_files WHERE kind = @kind AND full_path = @full ORDER BY id DESC LIMIT 1", transaction);
+        using var select = Command(
+            "SELECT id, file_name, full_path, sha256, imported_at FROM source_files WHERE kind = @kind AND sha256 NOT LIKE 'pending:%' ORDER BY id", transaction);
         select.Parameters.Add(Text("kind", kind.ToString()));
-        select.Parameters.Add(Text("full", Path.GetFullPath(path)));
         using var reader = select.ExecuteReader();
-        return reader.Read() ? (reader.GetInt64(0), reader.GetString(1)) : null;
+        var files = new List<EarlierFile>();
+        while (reader.Read())
+        {
+            files.Add(new EarlierFile(reader.GetInt64(0), reader.GetString(1), reader.GetString(2), reader.GetString(3),
+                new DateTimeOffset(DateTime.SpecifyKind(reader.GetDateTime(4), DateTimeKind.Utc))));
+        }
+
+        return files;
+    }
+
+    /// <summary>
+    /// Pairs the records of the corrected file that no row of the new file held again with the records the new file
+    /// added (ids above <paramref name="lastIdBefore"/>; see <see cref="CorrectionPairing"/>): each pair is one record
+    /// corrected, its old values kept in the audit table. What is left of the corrected file is kept and reported.
+    /// </summary>
+    internal CorrectionResult Correct(NpgsqlTransaction transaction, MeasurementTable table, EarlierFile earlier, long sourceId, long lastIdBefore,
+        IReadOnlyCollection<(long OldLine, long NewLine)> anchors, IReadOnlyDictionary<string, long> deviceIds, DateTimeOffset now)
+    {
+        var (pairs, left) = CorrectionPairing.Pair(anchors,
+            Lines(transaction, table, "source_file_id = @old", earlier.Id, sourceId, lastIdBefore),
+            Lines(transaction, table, "source_file_id = @new AND id > @before", earlier.Id, sourceId, lastIdBefore));
+        var columns = table.Columns;
+        var tags = deviceIds.ToDictionary(d => d.Value, d => d.Key);
+        static string Time(string alias) => $"{alias}.{ServerColumnTypes.OffsetColumn}, {alias}.{ServerColumnTypes.HasTimeColumn}";
+        foreach (var (oldId, newId) in pairs)
+        {
+            Correction correction;
+            TestedAt when;
+            using (var select = Command(
+                $"SELECT {string.Join(", ", columns.Select(c => "o." + c))}, {Time("o")}, {string.Join(", ", columns.Select(c => "n." + c))}, {Time("n")}, "
+                + $"encode(n.fingerprint, 'hex'), n.source_line FROM {table.Table} o, {table.Table} n WHERE o.id = @o AND n.id = @n", transaction))
+            {
+                select.Parameters.Add(new NpgsqlParameter("o", NpgsqlDbType.Bigint) { Value = oldId });
+                select.Parameters.Add(new NpgsqlParameter("n", NpgsqlDbType.Bigint) { Value = newId });
+                using var reader = select.ExecuteReader();
+                reader.Read();
+                var old = Enumerable.Range(0, columns.Length).Select(reader.GetValue).ToArray();
+                old[MeasurementTable.TestedAtColumn] = ServerRows.TestedAt(reader, MeasurementTable.TestedAtColumn, columns.Length).ToString();
+                var n = columns.Length + 2;
+                var values = Enumerable.Range(n, columns.Length).Select(reader.GetValue).ToArray();
+                when = ServerRows.TestedAt(reader, n + MeasurementTable.TestedAtColumn, n + columns.Length);
+                values[MeasurementTable.TestedAtColumn] = when.ToString();
+                var at = n + columns.Length + 2;
+                correction = new Correction(new MeasurementRow(values, reader.GetString(at), reader.GetInt64(at + 1)), oldId, old, earlier.Id, earlier.Name, columns)
+                {
+                    Tags = tags,
+                    AddedId = newId,
+                };
+            }
+
+            using (var delete = Command($"DELETE FROM {table.Table} WHERE id = @id", transaction))
+            {
+                delete.Parameters.Add(new NpgsqlParameter("id", NpgsqlDbType.Bigint) { Value = newId });
+                delete.ExecuteNonQuery();
+            }
+
+            ApplyCorrection(transaction, table, correction, when, sourceId, now);
+        }
+
+        return new CorrectionResult(earlier.Name, anchors.Count, pairs.Count, [.. left.Take(100).Select(l => l.Line)], left.Count);
+    }
+
+    private List<(long Id, long Line)> Lines(NpgsqlTransaction transaction, MeasurementTable table, string where, long earlierId, long sourceId, long lastIdBefore)
+    {
+        using var select = Command($"SELECT id, source_line FROM {table.Table} WHERE {where}", transaction);
+        foreach (var (name, value) in new[] { ("old", earlierId), ("new", sourceId), ("before", lastIdBefore) }.Where(p => where.Contains("@" + p.Item1, StringComparison.Ordinal)))
+        {
+            select.Parameters.Add(new NpgsqlParameter(name, NpgsqlDbType.Bigint) { Value = value });
+        }
+
+        using var reader = select.ExecuteReader();
+        var lines = new List<(long, long)>();
+        while (reader.Read())
+        {
+            lines.Add((reader.GetInt64(0), reader.GetInt64(1)));
+        }
+
+        return lines;
     }
 
     /// <summary>Replaces a corrected record's values and writes every old value to `audit_changes`.</summary>
@@ -27,7 +105,7 @@ public sealed partial class PostgresRecordStore
         var sets = string.Join(", ", table.Columns.Select((c, i) => $"{c} = @p{i}"));
         using var update = Command(
             $"UPDATE {table.Table} SET {sets}, {ServerColumnTypes.OffsetColumn} = @offset, {ServerColumnTypes.HasTimeColumn} = @hastime, "
-            + "fingerprint = @fp, source_file_id = @src WHERE id = @id", transaction);
+            + "fingerprint = @fp, source_file_id = @src, source_line = @line WHERE id = @id", transaction);
         var values = correction.New.Values;
         for (var i = 0; i < values.Length; i++)
         {
@@ -43,6 +121,7 @@ public sealed partial class PostgresRecordStore
         update.Parameters.Add(new NpgsqlParameter("hastime", NpgsqlDbType.Boolean) { Value = when.HasTime });
         update.Parameters.Add(new NpgsqlParameter("fp", NpgsqlDbType.Bytea) { Value = Convert.FromHexString(correction.New.Fingerprint) });
         update.Parameters.Add(new NpgsqlParameter("src", NpgsqlDbType.Bigint) { Value = sourceId });
+        update.Parameters.Add(new NpgsqlParameter("line", NpgsqlDbType.Bigint) { Value = correction.New.Line });
         update.Parameters.Add(new NpgsqlParameter("id", NpgsqlDbType.Bigint) { Value = correction.StoredId });
         update.ExecuteNonQuery();
 

@@ -9,8 +9,8 @@ namespace TripTestLog.Storage.Postgres;
 public sealed partial class PostgresRecordStore
 {
     /// <inheritdoc />
-    public IMeasurementBatch BeginMeasurements(RecordKind kind, string name, string path, DateTimeOffset now) =>
-        new ServerMeasurementBatch(this, kind, name, path, now);
+    public IMeasurementBatch BeginMeasurements(RecordKind kind, string name, string path, DateTimeOffset now, string? corrects = null) =>
+        new ServerMeasurementBatch(this, kind, name, path, now, corrects);
 
     /// <inheritdoc />
     public ImportOutcome StoreSmallFile(ParsedFile file, DateTimeOffset now)

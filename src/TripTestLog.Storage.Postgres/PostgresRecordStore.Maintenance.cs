@@ -64,7 +64,26 @@ public sealed partial class PostgresRecordStore
 
         var files = Rows("SELECT id, file_name, full_path, sha256 FROM source_files ORDER BY id",
             r => new SourceFileRow { Id = r.GetInt64(0), FileName = r.GetString(1), FullPath = r.GetString(2), Sha256 = r.GetString(3) });
-        return new VerifyReport([], broken, untraced, ImportedFiles.Check(files, counts)) { IntegrityCheck = null };
+        var fingerprints = new FingerprintCheck();
+        foreach (var table in FingerprintCheck.Tables)
+        {
+            var n = table.Columns.Length;
+            using var select = Command(
+                $"SELECT {string.Join(", ", table.Columns.Select(c => "t." + c))}, t.{ServerColumnTypes.OffsetColumn}, t.{ServerColumnTypes.HasTimeColumn}, "
+                + $"encode(t.fingerprint, 'hex'), f.file_name, t.source_line FROM {table.Table} t LEFT JOIN source_files f ON f.id = t.source_file_id");
+            using var reader = select.ExecuteReader();
+            while (reader.Read())
+            {
+                var values = Enumerable.Range(0, n).Select(reader.GetValue).ToArray();
+                values[MeasurementTable.TestedAtColumn] = ServerRows.TestedAt(reader, MeasurementTable.TestedAtColumn, n).ToString();
+                fingerprints.Check(table, values, reader.GetString(n + 2), reader.IsDBNull(n + 3) ? null : reader.GetString(n + 3), reader.GetInt64(n + 4));
+            }
+        }
+
+        return new VerifyReport([], broken, untraced, ImportedFiles.Check(files, counts))
+        {
+            IntegrityCheck = null, AlteredRecords = fingerprints.Altered, AlteredExamples = fingerprints.ExamplesFound,
+        };
     }
 
     /// <summary>A server database is backed up with the server's own tool; this says so rather than pretending.</summary>

@@ -24,27 +24,27 @@ internal sealed class ServerMeasurementBatch : IMeasurementBatch
     private readonly MeasurementTable _table;
     private readonly Dictionary<string, long> _deviceIds;
     private readonly long _sourceId;
-    private readonly (long Id, string Name)? _earlier;
-    private readonly NpgsqlCommand? _lookup;
-    private readonly string _name;
+    private readonly EarlierFile? _earlier;
     private readonly DateTimeOffset _now;
     private readonly string _copy;
     private readonly List<Prepared> _chunk = new(ChunkRows);
-    private Correction? _pending;
     private long _stored;
     private bool _done;
 
-    public ServerMeasurementBatch(PostgresRecordStore store, RecordKind kind, string name, string path, DateTimeOffset now)
+    public ServerMeasurementBatch(PostgresRecordStore store, RecordKind kind, string name, string path, DateTimeOffset now, string? corrects)
     {
         _store = store;
-        _name = name;
         _now = now;
         _table = MeasurementTable.For(kind);
         _transaction = store.BeginTransaction();
         try
         {
             _deviceIds = store.DeviceIds(_transaction);
-            _earlier = store.EarlierFileOfTheSameName(_transaction, path, kind);
+            if (corrects is not null)
+            {
+                (_earlier, Refusal) = EarlierFiles.Find(store.EarlierFiles(_transaction, kind), corrects, kind);
+            }
+
             _sourceId = store.InsertSourceFile(_transaction, name, path, "pending:" + Guid.NewGuid().ToString("N"), kind, 0, now);
             var staged = string.Join(", ", StagedColumns);
             using (var create = store.Command($"CREATE TEMP TABLE {Stage} ON COMMIT DROP AS SELECT {staged} FROM {_table.Table} WITH NO DATA", _transaction))
@@ -53,14 +53,6 @@ internal sealed class ServerMeasurementBatch : IMeasurementBatch
             }
 
             _copy = $"COPY {Stage} ({staged}) FROM STDIN (FORMAT BINARY)";
-            if (_earlier is { } earlier)
-            {
-                _lookup = store.Command(
-                    $"SELECT id, {string.Join(", ", _table.Columns)}, {ServerColumnTypes.OffsetColumn}, {ServerColumnTypes.HasTimeColumn} "
-                    + $"FROM {_table.Table} WHERE source_file_id = @src AND source_line = @line", _transaction);
-                _lookup.Parameters.Add(new NpgsqlParameter("src", NpgsqlDbType.Bigint) { Value = earlier.Id });
-                _lookup.Parameters.Add(new NpgsqlParameter("line", NpgsqlDbType.Bigint));
-            }
         }
         catch
         {
@@ -77,38 +69,19 @@ internal sealed class ServerMeasurementBatch : IMeasurementBatch
             ? new Prepared(MeasurementTable.RowOf(measurement, device, line), m.TestedAt)
             : null;
 
-    public RowAnswer Add(PreparedRow prepared)
-    {
-        var row = (Prepared)prepared;
-        if (Correction(row.Row) is { } correction)
-        {
-            _pending = correction;
-            var problem = correction.Problem(_name);
-            return new RowAnswer(RowAnswerKind.Conflict, problem.Column, problem.Reason);
-        }
+    public string? Refusal { get; }
 
+    public void Add(PreparedRow prepared)
+    {
         _stored++;
-        _chunk.Add(row);
+        _chunk.Add((Prepared)prepared);
         if (_chunk.Count == ChunkRows)
         {
             Flush();
         }
-
-        return RowAnswer.Stored;
     }
 
-    public void Replace(PreparedRow prepared)
-    {
-        if (_pending is not { } correction || correction.New.Line != prepared.Line)
-        {
-            throw new InvalidOperationException($"line {prepared.Line} was not answered with a conflict");
-        }
-
-        _store.ApplyCorrection(_transaction, _table, correction, ((Prepared)prepared).When, _sourceId, _now);
-        _pending = null;
-    }
-
-    public BatchResult Complete(string sha256, long rowsRead, long replaced)
+    public BatchResult Complete(string sha256, long rowsRead)
     {
         Flush();
         _store.TakeImportLock(_transaction);
@@ -117,6 +90,31 @@ internal sealed class ServerMeasurementBatch : IMeasurementBatch
             _transaction.Rollback();
             _done = true;
             return new BatchResult(false, 0, 0) { EarlierFile = earlier };
+        }
+
+        long lastIdBefore = 0;
+        var anchors = new List<(long OldLine, long NewLine)>();
+        if (_earlier is { } corrected)
+        {
+            using (var last = _store.Command($"SELECT COALESCE(MAX(id), 0) FROM {_table.Table}", _transaction))
+            {
+                lastIdBefore = (long)last.ExecuteScalar()!;
+            }
+
+            // A row identical to a record of the corrected file takes that record over: it now cites this file and line.
+            using var move = _store.Command(
+                $"WITH m AS (SELECT t.id, t.source_line AS old_line, s.source_line AS new_line FROM {_table.Table} t "
+                + $"JOIN (SELECT DISTINCT ON (fingerprint) fingerprint, source_line FROM {Stage} ORDER BY fingerprint, source_line) s "
+                + "ON t.fingerprint = s.fingerprint WHERE t.source_file_id = @old), "
+                + $"u AS (UPDATE {_table.Table} t SET source_file_id = @src, source_line = m.new_line FROM m WHERE t.id = m.id) "
+                + "SELECT old_line, new_line FROM m", _transaction);
+            move.Parameters.Add(new NpgsqlParameter("src", NpgsqlDbType.Bigint) { Value = _sourceId });
+            move.Parameters.Add(new NpgsqlParameter("old", NpgsqlDbType.Bigint) { Value = corrected.Id });
+            using var reader = move.ExecuteReader();
+            while (reader.Read())
+            {
+                anchors.Add((reader.GetInt64(0), reader.GetInt64(1)));
+            }
         }
 
         // In file order, so of two identical rows of one file the first line is the one kept.
@@ -130,16 +128,17 @@ internal sealed class ServerMeasurementBatch : IMeasurementBatch
             added = insert.ExecuteNonQuery();
         }
 
-        var duplicates = _stored - added;
-        _store.RecordCounts(_transaction, _sourceId, rowsRead, added + replaced, duplicates, sha256);
+        long unchanged = anchors.Count;
+        var duplicates = _stored - added - unchanged;
+        var correction = _earlier is { } earlierFile ? _store.Correct(_transaction, _table, earlierFile, _sourceId, lastIdBefore, anchors, _deviceIds, _now) : null;
+        _store.RecordCounts(_transaction, _sourceId, rowsRead, added + unchanged, duplicates, sha256);
         _transaction.Commit();
         _done = true;
-        return new BatchResult(true, added, duplicates);
+        return new BatchResult(true, added - (correction?.Replaced ?? 0), duplicates) { Correction = correction };
     }
 
     public void Dispose()
     {
-        _lookup?.Dispose();
         if (!_done)
         {
             try
@@ -213,33 +212,6 @@ internal sealed class ServerMeasurementBatch : IMeasurementBatch
             default:
                 throw new ArgumentOutOfRangeException(nameof(value), value.GetType().Name, "no column type for this value");
         }
-    }
-
-    private Correction? Correction(MeasurementRow row)
-    {
-        if (_lookup is null || _earlier is not { } earlier)
-        {
-            return null;
-        }
-
-        _lookup.Parameters["line"].Value = row.Line;
-        using var reader = _lookup.ExecuteReader();
-        if (!reader.Read())
-        {
-            return null;
-        }
-
-        // The stored values as the SQLite store holds them, so a correction compares and reads the same on both.
-        var values = new object[_table.Columns.Length];
-        for (var i = 0; i < values.Length; i++)
-        {
-            values[i] = reader.GetValue(i + 1);
-        }
-
-        // The lookup selects id first and the test time's two other parts last.
-        values[MeasurementTable.TestedAtColumn] = ServerRows.TestedAt(reader, MeasurementTable.TestedAtColumn + 1, _table.Columns.Length + 1).ToString();
-        var correction = new Correction(row, reader.GetInt64(0), values, earlier.Id, earlier.Name, _table.Columns);
-        return correction.Changes.Any() ? correction : null;
     }
 
     private sealed record Prepared(MeasurementRow Row, TestedAt When) : PreparedRow(Row.Line);

@@ -1,30 +1,25 @@
 using Microsoft.Data.Sqlite;
+using TripTestLog.Application.Import;
 using TripTestLog.Application.Records;
 
 namespace TripTestLog.Storage;
 
 public sealed partial class RecordStore
 {
-    /// <summary>
-    /// A corrected file is one at the same path (and of the same kind) as an earlier import but with other content: the
-    /// test set's export written again. Its rows are matched with the earlier file's by line; a matched row whose values
-    /// differ is a correction. A copy under another path is a new file, whose identical rows are duplicates.
-    /// </summary>
-    internal (long Id, string Name)? EarlierFileOfTheSameName(SqliteTransaction transaction, string path, RecordKind kind)
+    /// <summary>The measurement files of <paramref name="kind"/> stored so far: the candidates a correction may name.</summary>
+    internal IEnumerable<EarlierFile> EarlierFiles(SqliteTransaction transaction, RecordKind kind)
     {
-        using var select = Command(transaction, "SELECT id, full_path FROM source_files WHERE kind = $kind ORDER BY id DESC");
+        using var select = Command(transaction,
+            "SELECT id, file_name, full_path, sha256, imported_at FROM source_files WHERE kind = $kind AND sha256 NOT LIKE 'pending:%' ORDER BY id");
         select.Parameters.AddWithValue("$kind", kind.ToString());
         using var reader = select.ExecuteReader();
-        var full = System.IO.Path.GetFullPath(path);
+        var files = new List<EarlierFile>();
         while (reader.Read())
         {
-            if (string.Equals(reader.GetString(1), full, StringComparison.Ordinal))
-            {
-                return (reader.GetInt64(0), reader.GetString(1));
-            }
+            files.Add(new EarlierFile(reader.GetInt64(0), reader.GetString(1), reader.GetString(2), reader.GetString(3), Moment(reader.GetString(4))));
         }
 
-        return null;
+        return files;
     }
 
     /// <summary>Replaces the corrected records' values and writes every old value to `audit_changes`.</summary>
@@ -36,8 +31,8 @@ public sealed partial class RecordStore
         }
 
         var sets = string.Join(", ", table.Columns.Select((c, i) => $"{c} = $p{i}"));
-        using var update = Command(transaction, $"UPDATE {table.Table} SET {sets}, fingerprint = $fp, source_file_id = $src WHERE id = $id");
-        var p = Parameters(update, [.. table.Columns.Select((_, i) => "$p" + i), "$fp", "$src", "$id"]);
+        using var update = Command(transaction, $"UPDATE {table.Table} SET {sets}, fingerprint = $fp, source_file_id = $src, source_line = $line WHERE id = $id");
+        var p = Parameters(update, [.. table.Columns.Select((_, i) => "$p" + i), "$fp", "$src", "$line", "$id"]);
         using var audit = Command(transaction,
             "INSERT INTO audit_changes (table_name, record_id, column_name, old_value, new_value, old_source_file_id, new_source_file_id, changed_at) "
             + "VALUES ($t, $r, $c, $o, $n, $os, $ns, $at)");
@@ -49,8 +44,9 @@ public sealed partial class RecordStore
                 p[i].Value = c.New.Values[i];
             }
 
-            p[^3].Value = c.New.Fingerprint;
-            p[^2].Value = sourceId;
+            p[^4].Value = c.New.Fingerprint;
+            p[^3].Value = sourceId;
+            p[^2].Value = c.New.Line;
             p[^1].Value = c.StoredId;
             update.ExecuteNonQuery();
             foreach (var (column, old, value) in c.Changes)

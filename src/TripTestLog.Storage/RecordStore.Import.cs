@@ -13,7 +13,8 @@ public sealed partial class RecordStore
     private static readonly TimeSpan LockPatience = TimeSpan.FromMinutes(10);
 
     /// <inheritdoc />
-    public IMeasurementBatch BeginMeasurements(RecordKind kind, string name, string path, DateTimeOffset now) => new SqliteMeasurementBatch(this, kind, name, path, now);
+    public IMeasurementBatch BeginMeasurements(RecordKind kind, string name, string path, DateTimeOffset now, string? corrects = null) =>
+        new SqliteMeasurementBatch(this, kind, name, path, now, corrects);
 
     /// <inheritdoc />
     public ImportOutcome StoreSmallFile(ParsedFile file, DateTimeOffset now)

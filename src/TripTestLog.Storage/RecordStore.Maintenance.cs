@@ -47,8 +47,23 @@ public sealed partial class RecordStore
             }
         }
 
+        var fingerprints = new FingerprintCheck();
+        foreach (var table in FingerprintCheck.Tables)
+        {
+            using var select = _connection.CreateCommand();
+            select.CommandText = $"SELECT {string.Join(", ", table.Columns.Select(c => "t." + c))}, t.fingerprint, f.file_name, t.source_line "
+                + $"FROM {table.Table} t LEFT JOIN source_files f ON f.id = t.source_file_id";
+            using var reader = select.ExecuteReader();
+            var n = table.Columns.Length;
+            while (reader.Read())
+            {
+                var values = Enumerable.Range(0, n).Select(reader.GetValue).ToArray();
+                fingerprints.Check(table, values, reader.GetString(n), reader.IsDBNull(n + 1) ? null : reader.GetString(n + 1), reader.GetInt64(n + 2));
+            }
+        }
+
         var files = ImportedFiles.Check(_context.SourceFiles.AsNoTracking().OrderBy(f => f.Id).ToList(), counts);
-        return new VerifyReport(integrity, foreignKeys, untraced, files);
+        return new VerifyReport(integrity, foreignKeys, untraced, files) { AlteredRecords = fingerprints.Altered, AlteredExamples = fingerprints.ExamplesFound };
     }
 
     /// <summary>A consistent copy of the live database at <paramref name="destination"/>, made with SQLite's online backup.</summary>

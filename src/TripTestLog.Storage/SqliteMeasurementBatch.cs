@@ -22,21 +22,24 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
     private readonly int _shortColumns;
     private readonly Statement _full;
     private readonly Statement _short;
-    private readonly (long Id, string Name)? _earlier;
-    private readonly SqliteCommand? _lookup;
-    private readonly string _path;
+    private readonly EarlierFile? _earlier;
+    private readonly SqliteCommand? _find;
+    private readonly SqliteCommand? _move;
+    private readonly long _lastIdBefore;
     private readonly DateTimeOffset _now;
-    private Correction? _pending;
+    private readonly Lazy<IReadOnlyDictionary<long, string>> _tags;
+    private readonly List<(long OldLine, long NewLine)> _anchors = [];
     private long _stored;
     private long _added;
+    private long _unchanged;
     private bool _done;
 
-    public SqliteMeasurementBatch(RecordStore store, RecordKind kind, string name, string path, DateTimeOffset now)
+    public SqliteMeasurementBatch(RecordStore store, RecordKind kind, string name, string path, DateTimeOffset now, string? corrects)
     {
         _store = store;
-        _path = name;
         _now = now;
         _table = MeasurementTable.For(kind);
+        _tags = new(() => _deviceIds!.ToDictionary(d => d.Value, d => d.Key));
 
         // Foreign keys are not checked row by row here: every device id comes from the register read inside this
         // transaction and the source id from the row it just wrote, and `verify` runs SQLite's foreign-key check.
@@ -46,7 +49,13 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
         try
         {
             _deviceIds = store.DeviceIds(_transaction);
-            _earlier = store.EarlierFileOfTheSameName(_transaction, path, kind);
+            if (corrects is not null)
+            {
+                (_earlier, Refusal) = EarlierFiles.Find(store.EarlierFiles(_transaction, kind), corrects, kind);
+                using var last = store.Command(_transaction, $"SELECT COALESCE(MAX(id), 0) FROM {_table.Table}");
+                _lastIdBefore = (long)last.ExecuteScalar()!;
+            }
+
             _sourceId = store.InsertSourceFile(_transaction, name, path, "pending:" + Guid.NewGuid().ToString("N"), kind, 0, now);
 
             // Most rows leave the trailing optional columns (settings found on the device) empty; statements without
@@ -56,9 +65,11 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
             _short = Insert(_shortColumns);
             if (_earlier is { } earlier)
             {
-                _lookup = store.Command(_transaction,
-                    $"SELECT id, {string.Join(", ", _table.Columns)} FROM {_table.Table} WHERE source_file_id = $src AND source_line = $line");
-                RecordStore.Parameters(_lookup, "$src", "$line")[0].Value = earlier.Id;
+                // A row identical to a record of the corrected file takes that record over: it now cites this file and line.
+                _find = store.Command(_transaction, $"SELECT id, source_line FROM {_table.Table} WHERE fingerprint = $fp AND source_file_id = $old");
+                RecordStore.Parameters(_find, "$fp", "$old")[1].Value = earlier.Id;
+                _move = store.Command(_transaction, $"UPDATE {_table.Table} SET source_file_id = $new, source_line = $line WHERE id = $id");
+                RecordStore.Parameters(_move, "$new", "$line", "$id")[0].Value = _sourceId;
             }
         }
         catch
@@ -72,35 +83,38 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
     public PreparedRow? Prepare(object measurement, long line) =>
         _deviceIds.TryGetValue(TagOf(measurement).Value, out var device) ? new Prepared(MeasurementTable.RowOf(measurement, device, line)) : null;
 
-    public RowAnswer Add(PreparedRow prepared)
+    public string? Refusal { get; }
+
+    public void Add(PreparedRow prepared)
     {
         var row = ((Prepared)prepared).Row;
-        if (Correction(row) is { } correction)
-        {
-            _pending = correction;
-            var problem = correction.Problem(_path);
-            return new RowAnswer(RowAnswerKind.Conflict, problem.Column, problem.Reason);
-        }
-
         _stored++;
-        _added += Execute(IsShort(row) ? _short : _full, row);
-        return RowAnswer.Stored;
-    }
-
-    public void Replace(PreparedRow prepared)
-    {
-        if (_pending is not { } correction || correction.New.Line != prepared.Line)
+        var added = Execute(IsShort(row) ? _short : _full, row);
+        _added += added;
+        if (added == 0 && _find is not null && _move is not null)
         {
-            throw new InvalidOperationException($"line {prepared.Line} was not answered with a conflict");
-        }
+            _find.Parameters["$fp"].Value = row.Fingerprint;
+            long id, oldLine;
+            using (var reader = _find.ExecuteReader())
+            {
+                if (!reader.Read())
+                {
+                    return;
+                }
 
-        _store.ApplyCorrections(_transaction, _table, [correction], _sourceId, _now);
-        _pending = null;
+                (id, oldLine) = (reader.GetInt64(0), reader.GetInt64(1));
+            }
+
+            _move.Parameters["$line"].Value = row.Line;
+            _move.Parameters["$id"].Value = id;
+            _move.ExecuteNonQuery();
+            _anchors.Add((oldLine, row.Line));
+            _unchanged++;
+        }
     }
 
-    public BatchResult Complete(string sha256, long rowsRead, long replaced)
+    public BatchResult Complete(string sha256, long rowsRead)
     {
-        var duplicates = _stored - _added;
         if (_store.AlreadyImported(_transaction, sha256) is { } earlier)
         {
             _transaction.Rollback();
@@ -108,17 +122,82 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
             return new BatchResult(false, 0, 0) { EarlierFile = earlier };
         }
 
+        var correction = _earlier is { } corrected ? Correct(corrected) : null;
+        var added = _added - (correction?.Replaced ?? 0);
+        var duplicates = _stored - _added - _unchanged;
         using var update = _store.Command(_transaction,
             "UPDATE source_files SET sha256 = $sha, rows_read = $rows, records_added = $a, duplicates = $d WHERE id = $id");
         update.Parameters.AddWithValue("$sha", sha256);
         update.Parameters.AddWithValue("$rows", rowsRead);
-        update.Parameters.AddWithValue("$a", _added + replaced);
+        update.Parameters.AddWithValue("$a", _added + _unchanged);
         update.Parameters.AddWithValue("$d", duplicates);
         update.Parameters.AddWithValue("$id", _sourceId);
         update.ExecuteNonQuery();
         _transaction.Commit();
         _done = true;
-        return new BatchResult(true, _added, duplicates);
+        return new BatchResult(true, added, duplicates) { Correction = correction };
+    }
+
+    /// <summary>
+    /// Pairs the records of the corrected file that no row of this file held again with the records this file added
+    /// (see <see cref="CorrectionPairing"/>): each pair is one record corrected, its old values kept in the audit table.
+    /// What is left of the corrected file is kept and reported. Only the line numbers are held in memory.
+    /// </summary>
+    private CorrectionResult Correct(EarlierFile earlier)
+    {
+        var (pairs, left) = CorrectionPairing.Pair(_anchors, Lines("source_file_id = $old", earlier.Id), Lines("source_file_id = $new AND id > $before", earlier.Id));
+        var columns = _table.Columns;
+        var corrections = new List<Correction>();
+        using (var select = _store.Command(_transaction,
+            $"SELECT {string.Join(", ", columns.Select(c => "o." + c))}, {string.Join(", ", columns.Select(c => "n." + c))}, n.fingerprint, n.source_line "
+            + $"FROM {_table.Table} o, {_table.Table} n WHERE o.id = $o AND n.id = $n"))
+        {
+            var p = RecordStore.Parameters(select, "$o", "$n");
+            foreach (var (oldId, newId) in pairs)
+            {
+                p[0].Value = oldId;
+                p[1].Value = newId;
+                using var reader = select.ExecuteReader();
+                reader.Read();
+                var old = Enumerable.Range(0, columns.Length).Select(reader.GetValue).ToArray();
+                var now = Enumerable.Range(columns.Length, columns.Length).Select(reader.GetValue).ToArray();
+                var at = 2 * columns.Length;
+                corrections.Add(new Correction(new MeasurementRow(now, reader.GetString(at), reader.GetInt64(at + 1)), oldId, old, earlier.Id, earlier.Name, columns)
+                {
+                    Tags = _tags.Value,
+                    AddedId = newId,
+                });
+            }
+        }
+
+        using (var delete = _store.Command(_transaction, $"DELETE FROM {_table.Table} WHERE id = $id"))
+        {
+            var id = RecordStore.Parameters(delete, "$id")[0];
+            foreach (var correction in corrections)
+            {
+                id.Value = correction.AddedId;
+                delete.ExecuteNonQuery();
+            }
+        }
+
+        _store.ApplyCorrections(_transaction, _table, corrections, _sourceId, _now);
+        return new CorrectionResult(earlier.Name, _unchanged, corrections.Count, [.. left.Take(100).Select(l => l.Line)], left.Count);
+    }
+
+    private List<(long Id, long Line)> Lines(string where, long earlierId)
+    {
+        using var select = _store.Command(_transaction, $"SELECT id, source_line FROM {_table.Table} WHERE {where}");
+        select.Parameters.AddWithValue("$old", earlierId);
+        select.Parameters.AddWithValue("$new", _sourceId);
+        select.Parameters.AddWithValue("$before", _lastIdBefore);
+        using var reader = select.ExecuteReader();
+        var lines = new List<(long, long)>();
+        while (reader.Read())
+        {
+            lines.Add((reader.GetInt64(0), reader.GetInt64(1)));
+        }
+
+        return lines;
     }
 
     public void Dispose()
@@ -128,7 +207,8 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
             statement.Command.Dispose();
         }
 
-        _lookup?.Dispose();
+        _find?.Dispose();
+        _move?.Dispose();
         if (!_done)
         {
             _transaction.Rollback();
@@ -172,30 +252,6 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
         var command = _store.Command(_transaction,
             $"INSERT OR IGNORE INTO {_table.Table} ({string.Join(", ", used)}) VALUES ({string.Join(", ", names)})");
         return new Statement(command, RecordStore.Parameters(command, [.. names]), columns);
-    }
-
-    private Correction? Correction(MeasurementRow row)
-    {
-        if (_lookup is null || _earlier is not { } earlier)
-        {
-            return null;
-        }
-
-        _lookup.Parameters["$line"].Value = row.Line;
-        using var reader = _lookup.ExecuteReader();
-        if (!reader.Read())
-        {
-            return null;
-        }
-
-        var values = new object[_table.Columns.Length];
-        for (var i = 0; i < values.Length; i++)
-        {
-            values[i] = reader.GetValue(i + 1);
-        }
-
-        var correction = new Correction(row, reader.GetInt64(0), values, earlier.Id, earlier.Name, _table.Columns);
-        return correction.Changes.Any() ? correction : null;
     }
 
     private static AssetTag TagOf(object record) =>

@@ -57,7 +57,10 @@ public sealed class ListingCommandTests(SampleFleetDatabase fleet) : IClassFixtu
         File.WriteAllLines(trips, [Header, "ARW-DB1-Q03,2026-03-06T11:00,as-found,all,40.9,22.5,,cold,18.9,INJ-ARW-1,T. Adeyemi,"]);
         Assert.Equal(0, CliRun.Run("import", Path.Combine(Golden.RepositoryRoot(), "sample-records", "device-register.csv"), trips, "--db", db).Exit);
         File.WriteAllLines(trips, [Header, "ARW-DB1-Q03,2026-03-06T11:00,as-found,all,40.9,25,,cold,18.9,INJ-ARW-1,T. Adeyemi,"]);
-        Assert.Equal(0, CliRun.Run("import", trips, "--db", db, "--replace").Exit);
+        var (replaceExit, replaceOut, _) = CliRun.Run("import", trips, "--db", db, "--replace", trips);
+        Assert.Equal(0, replaceExit);
+        Assert.Contains("trips.csv: 1 record took new values (old ones in the audit table), 0 unchanged, 0 added.",
+            System.Text.RegularExpressions.Regex.Replace(replaceOut, @"\s+", " "));
 
         var (exit, output, _) = CliRun.Run("history", "--db", db, "--asset", "ARW-DB1-Q03");
         var (_, msb, _) = CliRun.Run("history", "--db", fleet.Database, "--asset", "ARW-MSB-Q01");

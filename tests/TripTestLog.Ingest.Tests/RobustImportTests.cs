@@ -84,7 +84,7 @@ public sealed class RobustImportTests
 
     [Theory]
     [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
-    public void ACorrectedFile_IsAConflict_UntilReplaceAppliesIt_KeepingTheOldValue(Provider provider)
+    public void ACorrectedFile_IsANewFile_UntilReplaceNamesTheFileItCorrects_KeepingTheOldValue(Provider provider)
     {
         using var temp = new TempFolder();
         using var database = TestDatabase.Create(provider, temp.Path);
@@ -94,15 +94,9 @@ public sealed class RobustImportTests
         store.Import(RecordFileReader.Read(path, Records.Today), Now);
         File.WriteAllText(path, Records.Trips.ReplaceLineEndings("\n").Replace("40.9,22.5", "40.9,25.0"));
 
-        var conflict = store.Import(RecordFileReader.Read(path, Records.Today), Now);
-        var replaced = store.Import(RecordFileReader.Read(path, Records.Today), Now, new ImportOptions(Replace: true));
+        var replaced = store.Import(RecordFileReader.Read(path, Records.Today), Now, new ImportOptions(Corrects: "trips.csv"));
 
-        Assert.Equal(ImportStatus.Refused, conflict.Status);
-        var problem = Assert.Single(conflict.Problems);
-        Assert.Equal((4L, "trip_time_s"), (problem.Line, problem.Column));
-        Assert.Contains("trip_time_s 22.5 -> 25", problem.Reason);
-        Assert.Contains("--replace", problem.Reason);
-        Assert.Equal((ImportStatus.Imported, 1L, 0L, 2L), (replaced.Status, replaced.Replaced, replaced.Added, replaced.Duplicates));
+        Assert.Equal((ImportStatus.Imported, 1L, 0L, 2L, 0L), (replaced.Status, replaced.Replaced, replaced.Added, replaced.Unchanged, replaced.Duplicates));
         Assert.Equal(3, db.Count("SELECT COUNT(*) FROM trip_tests"));
         Assert.Equal(1, db.Count("SELECT COUNT(*) FROM trip_tests WHERE time_s = 25.0"));
         var audit = Assert.Single(store.Changes());

@@ -27,7 +27,7 @@ public sealed class TransferTests
         var trips = temp.Write("trips.csv", Records.Trips);
         source.Import(trips, Now);
         File.WriteAllText(trips, Records.Trips.ReplaceLineEndings("\n").Replace("40.9,22.5", "40.9,25.0"));
-        Assert.Equal(1L, source.Import(trips, Now.AddDays(2), new ImportOptions(Replace: true)).Replaced);
+        Assert.Equal(1L, source.Import(trips, Now.AddDays(2), new ImportOptions(Corrects: "trips.csv")).Replaced);
         source.Import(temp.Write("contact.csv", "asset_tag,tested_at,stage,pole,resistance_uohm,test_current_a\nT-02,2024-03-18T09:30+02:00,as-found,1,1250,100\n"), Now);
 
         var (files, changes) = new TransferPipeline(source, target).Run();

@@ -8,8 +8,9 @@ public interface IImportStore
     /// <summary>
     /// Begins storing one measurement file in a transaction of its own; waits while another import holds the store.
     /// <paramref name="name"/> is how records will cite the file; <paramref name="path"/> where it was read from.
+    /// <paramref name="corrects"/>, when given, names the earlier file this one corrects (see <see cref="EarlierFiles.Find"/>).
     /// </summary>
-    IMeasurementBatch BeginMeasurements(RecordKind kind, string name, string path, DateTimeOffset now);
+    IMeasurementBatch BeginMeasurements(RecordKind kind, string name, string path, DateTimeOffset now, string? corrects = null);
 
     /// <summary>
     /// Stores a small file read whole (a register, a curve or ambient table, the instrument register) in one transaction:
@@ -31,19 +32,21 @@ public interface IMeasurementBatch : IDisposable
     /// </summary>
     PreparedRow? Prepare(object measurement, long line);
 
-    /// <summary>Stores a prepared row (an identical stored record makes it a duplicate, counted at the end), unless the
-    /// line differs from the same line of an earlier import from the same path: then it answers with the conflict.</summary>
-    RowAnswer Add(PreparedRow row);
+    /// <summary>
+    /// When the batch was begun to correct an earlier file that cannot be found, or is named ambiguously: the sentence
+    /// saying so. The batch then stores nothing and is only disposed.
+    /// </summary>
+    string? Refusal { get; }
 
-    /// <summary>Applies a correction that <see cref="Add"/> answered with a conflict: the stored record takes the new values
-    /// and its old ones are kept in the audit table.</summary>
-    void Replace(PreparedRow row);
+    /// <summary>Stores a prepared row; an identical stored record makes it a duplicate (or, in a correction, an unchanged
+    /// record of the corrected file), counted at the end.</summary>
+    void Add(PreparedRow row);
 
     /// <summary>
     /// Commits the file with its hash and counts; not committed (and nothing stored) when a file with that hash was
-    /// imported before. <paramref name="replaced"/> corrections count as stored records.
+    /// imported before. In a correction, pairs the corrected file's records with the new rows (see <see cref="BatchResult"/>).
     /// </summary>
-    BatchResult Complete(string sha256, long rowsRead, long replaced);
+    BatchResult Complete(string sha256, long rowsRead);
 }
 
 /// <summary>How a measurement file ended in the store.</summary>
@@ -54,28 +57,24 @@ public sealed record BatchResult(bool Committed, long Added, long Duplicates)
 {
     /// <summary>When not committed because the same content was imported before: the name it was imported under.</summary>
     public string? EarlierFile { get; init; }
+
+    /// <summary>In a correction: the earlier file corrected, and what became of its records.</summary>
+    public CorrectionResult? Correction { get; init; }
 }
+
+/// <summary>
+/// What a correction did to the records of the earlier file it names. A record whose content the new file holds
+/// again now cites the new file (unchanged); a record whose line the new file holds with other values took those
+/// values, the old ones kept in the audit table (replaced); a record the new file no longer holds stays stored,
+/// citing the earlier file, and is reported (kept).
+/// </summary>
+/// <param name="File">The earlier file's name as stored.</param>
+/// <param name="Unchanged">Records held again with the same content.</param>
+/// <param name="Replaced">Records that took new values.</param>
+/// <param name="KeptLines">The lines of the earlier file whose records the new file does not hold (the first hundred).</param>
+/// <param name="Kept">How many such records there are.</param>
+public sealed record CorrectionResult(string File, long Unchanged, long Replaced, IReadOnlyList<long> KeptLines, long Kept);
 
 /// <summary>A measurement as a store will write it; what it holds is the store's own business.</summary>
 /// <param name="Line">The line of the file it was read from.</param>
 public abstract record PreparedRow(long Line);
-
-/// <summary>What the store did with one row.</summary>
-public enum RowAnswerKind
-{
-    /// <summary>Stored, or found identical to a stored record (the batch counts which).</summary>
-    Stored,
-
-    /// <summary>Differs from the same line of an earlier import from the same path: a correction, not stored.</summary>
-    Conflict,
-}
-
-/// <summary>The store's answer for one row; for a conflict, the column that differs first and the words to report.</summary>
-/// <param name="Kind">Added, duplicate or conflict.</param>
-/// <param name="Column">For a conflict: the first column that differs.</param>
-/// <param name="Reason">For a conflict: what differs and how to apply it.</param>
-public readonly record struct RowAnswer(RowAnswerKind Kind, string Column = "", string Reason = "")
-{
-    /// <summary>Stored, or a duplicate.</summary>
-    public static RowAnswer Stored => new(RowAnswerKind.Stored);
-}

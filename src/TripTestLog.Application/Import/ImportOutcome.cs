@@ -32,7 +32,7 @@ public sealed record ImportOutcome(
     /// <summary>Problems found beyond those kept in <see cref="Problems"/> (a report keeps the first ten thousand).</summary>
     public long ProblemsOmitted { get; init; }
 
-    /// <summary>Stored rows replaced by a corrected file (with --replace); their old values are in the audit table.</summary>
+    /// <summary>Stored records that took a correction's values (import --replace); their old values are in the audit table.</summary>
     public long Replaced { get; init; }
 
     /// <summary>For a file already imported: the name its content was first imported under (the same file, or a copy).</summary>
@@ -41,6 +41,11 @@ public sealed record ImportOutcome(
     /// <summary>Rows planned on a worksheet and left blank: tests not made, counted and never stored.</summary>
     public long NotTested { get; init; }
 
-    /// <summary>Register rows that matched the stored entry exactly.</summary>
-    public long Unchanged => Status == ImportStatus.Imported && Kind == RecordKind.DeviceRegister ? RowsRead - Added - Updated - Duplicates - RefusedRows : 0;
+    /// <summary>For a correction (import --replace): the earlier file corrected and what became of its records.</summary>
+    public CorrectionResult? Correction { get; init; }
+
+    /// <summary>Register rows that matched the stored entry exactly; in a correction, records of the corrected file held again unchanged.</summary>
+    public long Unchanged => Status != ImportStatus.Imported ? 0
+        : Kind == RecordKind.DeviceRegister ? RowsRead - Added - Updated - Duplicates - RefusedRows
+        : Correction?.Unchanged ?? 0;
 }

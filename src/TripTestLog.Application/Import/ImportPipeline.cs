@@ -86,10 +86,14 @@ public sealed class ImportPipeline(IImportStore store)
 
     private ImportOutcome Measurements(IRecordFile file, RecordKind kind, ImportOptions options, DateTimeOffset now, CancellationToken cancel)
     {
-        using var batch = store.BeginMeasurements(kind, file.Name, file.Path, now);
+        using var batch = store.BeginMeasurements(kind, file.Name, file.Path, now, options.Corrects);
+        if (batch.Refusal is { } refusal)
+        {
+            return Refused(file.Name, kind, 0, [new RowProblem(file.Name, 1, "", refusal)]);
+        }
+
         using var rejects = options.AcceptValid ? file.Rejects() : null;
         var log = new ProblemLog();
-        long replaced = 0;
         long notTested = 0;
         foreach (var (row, prepared) in ParsedAhead(file, batch, cancel))
         {
@@ -107,7 +111,7 @@ public sealed class ImportPipeline(IImportStore store)
                 // back, so that every unknown tag and conflict in the file is reported in one go.
                 problems = prepared is null
                     ? [ImportProblems.UnknownTag(file.Name, row.Line, TagOf(record))]
-                    : Store(batch, file.Name, prepared, options, ref replaced);
+                    : Store(batch, prepared);
             }
 
             if (problems.Count > 0)
@@ -124,7 +128,7 @@ public sealed class ImportPipeline(IImportStore store)
             return Refused(file.Name, kind, summary.RowsRead, log.Problems) with { ProblemsOmitted = log.Omitted };
         }
 
-        var result = batch.Complete(summary.Sha256, summary.RowsRead, replaced);
+        var result = batch.Complete(summary.Sha256, summary.RowsRead);
         if (!result.Committed)
         {
             return new ImportOutcome(file.Name, kind, ImportStatus.AlreadyImported, summary.RowsRead, 0, 0, 0, [])
@@ -135,7 +139,8 @@ public sealed class ImportPipeline(IImportStore store)
 
         return new ImportOutcome(file.Name, kind, ImportStatus.Imported, summary.RowsRead, result.Added, 0, result.Duplicates, log.Problems)
         {
-            Replaced = replaced,
+            Replaced = result.Correction?.Replaced ?? 0,
+            Correction = result.Correction,
             NotTested = notTested,
             RefusedRows = log.RefusedLines,
             ProblemsOmitted = log.Omitted,
@@ -150,20 +155,10 @@ public sealed class ImportPipeline(IImportStore store)
     private static IEnumerable<(ReadRow Row, PreparedRow? Prepared)> ParsedAhead(IRecordFile file, IMeasurementBatch batch, CancellationToken cancel) =>
         ReadAhead.Of(file.Rows().Select(row => (row, row.Record is { } record && row.Problems.Count == 0 ? batch.Prepare(record, row.Line) : null)), 4096, cancel);
 
-    private static IReadOnlyList<RowProblem> Store(IMeasurementBatch batch, string path, PreparedRow row, ImportOptions options, ref long replaced)
+    private static IReadOnlyList<RowProblem> Store(IMeasurementBatch batch, PreparedRow row)
     {
-        var answer = batch.Add(row);
-        switch (answer.Kind)
-        {
-            case RowAnswerKind.Stored:
-                return [];
-            case RowAnswerKind.Conflict when options.Replace:
-                batch.Replace(row);
-                replaced++;
-                return [];
-            default:
-                return [new RowProblem(path, row.Line, answer.Column, answer.Reason)];
-        }
+        batch.Add(row);
+        return [];
     }
 
     private static AssetTag TagOf(object record) =>

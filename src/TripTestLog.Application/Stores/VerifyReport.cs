@@ -36,6 +36,13 @@ public sealed record VerifyReport(IReadOnlyList<string> IntegrityErrors, long Fo
     /// </summary>
     public string? IntegrityCheck { get; init; } = "SQLite integrity check";
 
+    /// <summary>Measurement records whose values no longer give the fingerprint stored with them: changed outside the tool.</summary>
+    public long AlteredRecords { get; init; }
+
+    /// <summary>The first hundred of <see cref="AlteredRecords"/>, each as its table, file and line.</summary>
+    public IReadOnlyList<string> AlteredExamples { get; init; } = [];
+
     /// <summary>True when nothing is wrong (files not at hand are not faults).</summary>
-    public bool Sound => IntegrityErrors.Count == 0 && ForeignKeyErrors == 0 && UntracedRecords == 0 && Files.All(f => f.State != SourceFileState.Changed);
+    public bool Sound => IntegrityErrors.Count == 0 && ForeignKeyErrors == 0 && UntracedRecords == 0 && AlteredRecords == 0
+        && Files.All(f => f.State != SourceFileState.Changed);
 }

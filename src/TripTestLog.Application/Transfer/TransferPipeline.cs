@@ -47,24 +47,18 @@ public sealed class TransferPipeline(IRecordStore source, IRecordStore target)
     private TransferredFile Measurements(StoredFile file, CancellationToken cancel)
     {
         using var batch = target.BeginMeasurements(file.Kind, file.Name, file.FullPath, file.ImportedAt);
-        long records = 0, replaced = 0;
+        long records = 0;
         foreach (var (record, line) in source.Records(file))
         {
             cancel.ThrowIfCancellationRequested();
             records++;
             var row = batch.Prepare(record, line)
                 ?? throw new InvalidOperationException($"{file.Name}:{line}: the target's register has no device {((IMeasurement)record).Tag}");
-
-            // The source holds the corrected value: it is the one to keep.
-            if (batch.Add(row).Kind == RowAnswerKind.Conflict)
-            {
-                batch.Replace(row);
-                replaced++;
-            }
+            batch.Add(row);
         }
 
-        var result = batch.Complete(file.Sha256, file.RowsRead, replaced);
-        return new TransferredFile(file, result.Committed, records, result.Added + replaced);
+        var result = batch.Complete(file.Sha256, file.RowsRead);
+        return new TransferredFile(file, result.Committed, records, result.Added);
     }
 
     private TransferredFile SmallFile(StoredFile file)

@@ -156,8 +156,8 @@ internal static class CheckCommand
         var counts = new VerdictCounts();
         IVerdictWriter writer = format switch
         {
-            "json" => new VerdictJson(cli.Out),
-            "csv" => new VerdictCsv(cli.Out),
+            "json" => new VerdictJson(Visible.Exact(cli.Out)),
+            "csv" => new VerdictCsv(Visible.Exact(cli.Out)),
             "wide" => new VerdictTable(cli.Out, wide: true),
             _ => new VerdictTable(cli.Out),
         };

@@ -52,7 +52,7 @@ internal static class DevicesCommand
 
         if (json)
         {
-            WriteJson(cli.Out, devices);
+            WriteJson(Visible.Exact(cli.Out), devices);
             return ExitCodes.Ok;
         }
 

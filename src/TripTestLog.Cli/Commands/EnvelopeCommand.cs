@@ -119,7 +119,7 @@ internal static class EnvelopeCommand
 
         if (request.Csv)
         {
-            EnvelopeWriter.WriteCsv(cli.Out, envelope, conditions);
+            EnvelopeWriter.WriteCsv(Visible.Exact(cli.Out), envelope, conditions);
         }
         else
         {

@@ -98,7 +98,7 @@ internal static class FindingsCommand
         }
 
         var asOf = options.AsOf.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture);
-        IFindingWriter output = json ? new FindingJson(cli.Out) : csv ? new FindingCsv(cli.Out) : new FindingText(cli.Out, asOf, options.PolicyFrom);
+        IFindingWriter output = json ? new FindingJson(Visible.Exact(cli.Out)) : csv ? new FindingCsv(Visible.Exact(cli.Out)) : new FindingText(cli.Out, asOf, options.PolicyFrom);
         var anyOpen = false;
         try
         {

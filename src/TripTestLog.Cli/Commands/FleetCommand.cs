@@ -68,7 +68,7 @@ internal static class FleetCommand
         var asOf = options.AsOf.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);
         if (json)
         {
-            FleetJson.Write(cli.Out, fleet, asOf, options.PolicyFrom);
+            FleetJson.Write(Visible.Exact(cli.Out), fleet, asOf, options.PolicyFrom);
         }
         else
         {

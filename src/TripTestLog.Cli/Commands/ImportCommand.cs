@@ -22,9 +22,11 @@ internal static class ImportCommand
         {
             Description = "Store the good rows of a file with bad rows; the bad rows go, unchanged and with their reasons, to NAME.rejects.csv beside it",
         };
-        var replace = new Option<bool>("--replace")
+        var replace = new Option<string?>("--replace")
         {
-            Description = "Apply corrected files: rows that differ from the same lines of an earlier import from the same path replace the stored values (old values are kept in the audit table)",
+            Description = "The one PATH given corrects the earlier file named here (its name as imported, full path, or SHA-256 prefix): "
+                + "its records take the new values line by line, old values kept in the audit table; without it, every file is a new file",
+            HelpName = "EARLIER",
         };
         var profile = new Option<FileInfo?>("--profile") { Description = "A column-mapping profile (JSON) for another layout; applies to every file given", HelpName = "FILE" };
         var delimiter = new Option<string?>("--delimiter") { Description = "Field separator, e.g. ';' (default: recognised from the header)", HelpName = "CHAR" };
@@ -41,6 +43,12 @@ internal static class ImportCommand
             var today = cli.Today;
             if (!ConditionOptions.AsOfDate(parse.GetValue(asOf), today, cli, out today))
             {
+                return ExitCodes.BadInput;
+            }
+
+            if (parse.GetValue(replace) is { } corrects && (parse.GetValue(paths)!.Length != 1 || !File.Exists(parse.GetValue(paths)![0]) || corrects.Trim().Length == 0))
+            {
+                cli.Error.WriteLine("error: --replace EARLIER corrects one file: give exactly one CSV file as PATH and name the earlier file it corrects");
                 return ExitCodes.BadInput;
             }
 
@@ -87,6 +95,12 @@ internal static class ImportCommand
         if (files.Count == 0)
         {
             cli.Error.WriteLine("error: no .csv files found in the paths given");
+            return ExitCodes.BadInput;
+        }
+
+        if (db.MissingFolder() is { } missing)
+        {
+            cli.Error.WriteLine("error: " + missing);
             return ExitCodes.BadInput;
         }
 

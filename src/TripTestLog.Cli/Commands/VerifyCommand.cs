@@ -48,6 +48,17 @@ internal static class VerifyCommand
             : "Page checks: left to the server's administrator (PostgreSQL's amcheck and data checksums)");
         cli.Out.WriteLine($"Foreign keys: {(report.ForeignKeyErrors == 0 ? "ok" : $"{report.ForeignKeyErrors} broken references")}");
         cli.Out.WriteLine($"Records without an imported file: {report.UntracedRecords}");
+        cli.Out.WriteLine($"Records whose values no longer match their fingerprint (changed outside the tool): {report.AlteredRecords}");
+        foreach (var example in report.AlteredExamples.Take(20))
+        {
+            Wrapped.Write(cli.Out, example, 2, 4);
+        }
+
+        if (report.AlteredRecords > 20)
+        {
+            cli.Out.WriteLine($"  ... and {report.AlteredRecords - 20} more");
+        }
+
         var changed = report.Files.Count(f => f.State == SourceFileState.Changed);
         var away = report.Files.Count(f => f.State == SourceFileState.NotAtHand);
         var corrected = report.Files.Count(f => f.State == SourceFileState.Superseded);

@@ -58,6 +58,15 @@ internal static class ImportReport
             Wrapped.Write(writer, $"{o.File} holds the same content as {o.EarlierFile}, imported before: nothing added.", 0, 2);
         }
 
+        foreach (var o in outcomes.Where(o => o.Status == ImportStatus.Imported && o.Correction is not null))
+        {
+            var c = o.Correction!;
+            Wrapped.Write(writer, $"{o.File} corrects {c.File}: {c.Replaced} {(c.Replaced == 1 ? "record" : "records")} took new values "
+                + $"(old ones in the audit table), {c.Unchanged} unchanged, {o.Added} added"
+                + (c.Kept == 0 ? "." : $"; {c.Kept} of its {(c.Kept == 1 ? "records is" : "records are")} not in the correction and stayed stored, "
+                    + $"citing {c.File} at {(c.Kept == 1 ? "line" : "lines")} {string.Join(", ", c.KeptLines)}{(c.Kept > c.KeptLines.Count ? ", ..." : "")}."), 0, 2);
+        }
+
         foreach (var o in outcomes.Where(o => o.Status == ImportStatus.Imported && o.RefusedRows > 0))
         {
             writer.WriteLine();

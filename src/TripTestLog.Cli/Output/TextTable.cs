@@ -28,7 +28,8 @@ internal sealed class TextTable
             throw new ArgumentException($"a row needs {_headers.Length} cells; got {cells.Length}", nameof(cells));
         }
 
-        _rows.Add(cells);
+        // Measured as it will be shown, so a value's control characters cannot push the table past its width.
+        _rows.Add([.. cells.Select(Visible.Text)]);
     }
 
     /// <summary>

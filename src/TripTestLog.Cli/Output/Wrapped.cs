@@ -12,6 +12,7 @@ internal static class Wrapped
     /// <summary>A list item: the first line indented by <paramref name="first"/>, the lines it wraps onto by <paramref name="rest"/>.</summary>
     public static void Write(TextWriter writer, string text, int first, int rest)
     {
+        text = Visible.Text(text);
         var indent = first;
         var line = new StringBuilder(new string(' ', first));
         foreach (var word in text.Split(' ', StringSplitOptions.RemoveEmptyEntries))

@@ -35,14 +35,16 @@ internal sealed class Progress : IDisposable
         var width = 30;
         var filled = _total == 0 ? width : width * _done / _total;
         var text = $"[{new string('#', filled)}{new string('.', width - filled)}] {_done}/{_total} {_phase}";
-        _writer.Write("\r" + (text.Length > 100 ? text[..100] : text.PadRight(100)));
+        text = Output.Visible.Text(text);
+        Output.Visible.Exact(_writer).Write('\r');
+        _writer.Write(text.Length > 100 ? text[..100] : text.PadRight(100));
     }
 
     public void Dispose()
     {
         if (_writer is not null)
         {
-            _writer.Write("\r" + new string(' ', 100) + "\r");
+            Output.Visible.Exact(_writer).Write("\r" + new string(' ', 100) + "\r");
             _writer.Flush();
         }
     }
