@@ -28,12 +28,17 @@ internal sealed class Child : IDisposable
 
     public bool HasExited => _process.HasExited;
 
-    public static Child Start(IReadOnlyDictionary<string, string>? environment, string? asUser, params string[] args)
+    public static Child StartWith(IReadOnlyDictionary<string, string>? environment, string? asUser, params string[] args) =>
+        StartIn(null, environment, asUser, args);
+
+    /// <summary>Starts it in <paramref name="folder"/> (where a server's lab policy is looked for), or in this process's folder.</summary>
+    public static Child StartIn(string? folder, IReadOnlyDictionary<string, string>? environment, string? asUser, params string[] args)
     {
         var program = Path.Combine(AppContext.BaseDirectory, "triptestlog.dll");
         var info = new ProcessStartInfo(asUser is null ? "dotnet" : "runuser")
         {
             RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false,
+            WorkingDirectory = folder ?? Directory.GetCurrentDirectory(),
         };
         if (asUser is not null)
         {
@@ -57,7 +62,7 @@ internal sealed class Child : IDisposable
         return new Child(Process.Start(info)!);
     }
 
-    public static Child Start(params string[] args) => Start(null, null, args);
+    public static Child Start(params string[] args) => StartWith(null, null, args);
 
     /// <summary>Waits for the exit, at most <paramref name="limit"/> (then kills it and fails).</summary>
     public int Exit(TimeSpan limit)

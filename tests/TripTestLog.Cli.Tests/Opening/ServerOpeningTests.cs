@@ -46,7 +46,7 @@ public sealed class ServerOpeningTests : IDisposable
             connection.Open();
             foreach (var role in _roles)
             {
-                Execute(connection, $"DROP OWNED BY {role}; DROP ROLE {role}");
+                Execute(connection, $"DROP ROLE {role}");
             }
         }
 
@@ -134,7 +134,7 @@ public sealed class ServerOpeningTests : IDisposable
         // The lock a frozen importer would hold: "TTLimpt" (PostgresRecordStore's import lock).
         Execute(holder, "SELECT pg_advisory_lock(23736585206722676)");
 
-        using var importer = Child.Start(new Dictionary<string, string>(), null, "import", Trips("t.csv", 5, 0), "--db", database.Address);
+        using var importer = Child.StartIn(_folder, null, null, "import", Trips("t.csv", 5, 0), "--db", database.Address);
         Assert.Equal(2, importer.Exit(TimeSpan.FromSeconds(90)));
         Assert.Contains("waiting for another import on ", importer.Error, StringComparison.Ordinal);
         Assert.Contains("held the server's import lock longer than 3 seconds, so nothing of this file was stored", importer.Error, StringComparison.Ordinal);
@@ -147,7 +147,7 @@ public sealed class ServerOpeningTests : IDisposable
         var database = Schema();
         Assert.Equal(0, CliRun.Run("import", Register(), "--db", database.Address).Exit);
         var application = "ttl-end-" + _suffix;
-        using var importer = Child.Start(new Dictionary<string, string>(), null, "import", Trips("big.csv", 300_000, 0), "--db",
+        using var importer = Child.StartWith(null, null, "import", Trips("big.csv", 300_000, 0), "--db",
             database.Address + ";Application Name=" + application);
         Assert.True(Child.WaitFor(() => database.Count($"SELECT COUNT(*) FROM pg_stat_activity WHERE application_name = '{application}' "
             + "AND backend_xid IS NOT NULL") > 0 || importer.HasExited, TimeSpan.FromSeconds(120)), "the import never started writing");
@@ -194,7 +194,7 @@ public sealed class ServerOpeningTests : IDisposable
     private static Child As(string role, TestDatabase database, params string[] args)
     {
         var address = new NpgsqlConnectionStringBuilder(database.Address) { Username = role }.ConnectionString;
-        return Child.Start(new Dictionary<string, string> { ["PGPASSWORD"] = Password }, null, [.. args, "--db", address]);
+        return Child.StartWith(new Dictionary<string, string> { ["PGPASSWORD"] = Password }, null, [.. args, "--db", address]);
     }
 
     private string Register()
