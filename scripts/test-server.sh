@@ -64,7 +64,7 @@ start() {
 
   # Over the Unix socket (trust, the cluster owner only): a role and its database. The password goes in on stdin.
   as_owner "$bin/psql" -q -v ON_ERROR_STOP=1 -h "$dir/socket" -p "$port" -U postgres -d postgres >/dev/null <<SQL
-CREATE ROLE $role LOGIN CREATEDB PASSWORD '$role_password';
+CREATE ROLE $role LOGIN CREATEDB CREATEROLE PASSWORD '$role_password';
 CREATE DATABASE $database OWNER $role;
 SQL
 

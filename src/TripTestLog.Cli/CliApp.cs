@@ -22,6 +22,7 @@ internal static class CliApp
             EnvelopeCommand.Create(cli),
             VerifyCommand.Create(cli),
             BackupCommand.Create(cli),
+            MigrateCommand.Create(cli),
             WorksheetCommand.Create(cli),
             DevicesCommand.Create(cli),
             InstrumentsCommand.Create(cli),

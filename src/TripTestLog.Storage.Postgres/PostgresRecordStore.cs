@@ -3,6 +3,7 @@ using Npgsql;
 using NpgsqlTypes;
 using TripTestLog.Application.Stores;
 
+
 namespace TripTestLog.Storage.Postgres;
 
 /// <summary>
@@ -20,44 +21,66 @@ public sealed partial class PostgresRecordStore : IRecordStore
     private readonly NpgsqlDataSource _source;
     private readonly NpgsqlConnection _connection;
 
-    private PostgresRecordStore(ServerAddress address, NpgsqlDataSource source, NpgsqlConnection connection)
+    private PostgresRecordStore(ServerAddress address, NpgsqlDataSource source, NpgsqlConnection connection, StoreOpening opening)
     {
         Location = address.Display;
         _source = source;
         _connection = connection;
+        Opening = opening;
     }
 
     /// <inheritdoc />
     public string Location { get; }
 
-    /// <summary>Connects to the server and brings the schema up to date.</summary>
+    /// <summary>What the store was opened for, and how long it waits for the server-wide import lock.</summary>
+    internal StoreOpening Opening { get; }
+
+    /// <summary>Connects to the server to import, creating or bringing the schema up to date.</summary>
     /// <exception cref="StoreUnavailableException">When the server cannot be reached or refuses the login: the message says which.</exception>
-    public static PostgresRecordStore Open(ServerAddress address)
+    /// <exception cref="StoreRefusedException">When a newer version wrote the schema, or the role may not migrate it.</exception>
+    public static PostgresRecordStore Open(ServerAddress address) => Open(address, StoreOpening.ForImport);
+
+    /// <summary>
+    /// Connects to the server for what <paramref name="opening"/> says. A reader runs only SELECTs (a role with SELECT
+    /// alone can read); only an import or `migrate` changes the schema, and only when it is behind.
+    /// </summary>
+    /// <exception cref="StoreUnavailableException">When the server cannot be reached or refuses the login: the message says which.</exception>
+    /// <exception cref="StoreRefusedException">
+    /// When a newer version wrote the schema, the schema is behind and the purpose is reading, or the role may not
+    /// migrate it: one sentence, and nothing written.
+    /// </exception>
+    public static PostgresRecordStore Open(ServerAddress address, StoreOpening opening)
     {
         ArgumentNullException.ThrowIfNull(address);
-        var source = NpgsqlDataSource.Create(address.Builder);
+        ArgumentNullException.ThrowIfNull(opening);
+
+        // A long statement (a 5 M-row file's final move, a large sort) runs as long as it needs: Npgsql's default of 30 s
+        // would end it. A wait on a lock is bounded by the lab policy instead, where the code waits.
+        var builder = new NpgsqlConnectionStringBuilder(address.Builder.ConnectionString);
+        if (builder.CommandTimeout == 30)
+        {
+            builder.CommandTimeout = 0;
+        }
+
+        var source = NpgsqlDataSource.Create(builder);
         NpgsqlConnection? connection = null;
         try
         {
             connection = source.OpenConnection();
-            Execute(connection, $"SELECT pg_advisory_lock({MigrationLock})");
-            try
-            {
-                using var context = new TripTestLogContext(ServerStoreOptions.For(connection));
-                context.Database.Migrate();
-            }
-            finally
-            {
-                Execute(connection, $"SELECT pg_advisory_unlock({MigrationLock})");
-            }
-
-            return new PostgresRecordStore(address, source, connection);
+            ServerSchema.BringUpToDate(address.Display, connection, opening, MigrationLock);
+            return new PostgresRecordStore(address, source, connection, opening);
         }
         catch (Exception e) when (e is NpgsqlException or TimeoutException)
         {
             connection?.Dispose();
             source.Dispose();
             throw new StoreUnavailableException($"the database server {address.Display} could not be used ({Plain(e)})", e);
+        }
+        catch
+        {
+            connection?.Dispose();
+            source.Dispose();
+            throw;
         }
     }
 
@@ -83,13 +106,13 @@ public sealed partial class PostgresRecordStore : IRecordStore
     internal static NpgsqlParameter Text(string name, object? value) =>
         new(name, NpgsqlDbType.Text) { Value = value ?? DBNull.Value };
 
-    private static void Execute(NpgsqlConnection connection, string sql)
+    internal static void Execute(NpgsqlConnection connection, string sql)
     {
         using var command = new NpgsqlCommand(sql, connection);
         command.ExecuteNonQuery();
     }
 
-    private static string Plain(Exception e) => e switch
+    internal static string Plain(Exception e) => e switch
     {
         PostgresException p => p.MessageText,
         _ => (e.InnerException ?? e).Message.ReplaceLineEndings(" ").Trim().TrimEnd('.'),

@@ -9,9 +9,6 @@ namespace TripTestLog.Storage;
 
 public sealed partial class RecordStore
 {
-    /// <summary>How long an import waits for another process's import to finish before giving up.</summary>
-    private static readonly TimeSpan LockPatience = TimeSpan.FromMinutes(10);
-
     /// <inheritdoc />
     public IMeasurementBatch BeginMeasurements(RecordKind kind, string name, string path, DateTimeOffset now, string? corrects = null) =>
         new SqliteMeasurementBatch(this, kind, name, path, now, corrects);
@@ -47,20 +44,39 @@ public sealed partial class RecordStore
 
     /// <summary>
     /// BEGIN IMMEDIATE takes the write lock up front, so two imports queue instead of failing halfway. SQLite's own busy
-    /// wait covers short waits; this loop covers another process's long import.
+    /// wait covers short waits; this loop covers another process's long import, for as long as the lab policy allows,
+    /// and says once on stderr what it waits for.
     /// </summary>
+    /// <exception cref="TripTestLog.Application.Stores.StoreRefusedException">When the wait runs out: one sentence, nothing written.</exception>
     internal SqliteTransaction BeginWriting()
     {
+        if (Opening.Purpose == TripTestLog.Application.Stores.StorePurpose.Read)
+        {
+            throw new InvalidOperationException("a store opened for reading cannot write");
+        }
+
         var started = DateTime.UtcNow;
         var pause = TimeSpan.FromMilliseconds(50);
+        var said = false;
         while (true)
         {
             try
             {
                 return _connection.BeginTransaction(deferred: false);
             }
-            catch (SqliteException e) when (e.SqliteErrorCode is 5 or 6 && DateTime.UtcNow - started < LockPatience)
+            catch (SqliteException e) when (e.SqliteErrorCode is 5 or 6)
             {
+                if (DateTime.UtcNow - started >= Opening.Patience)
+                {
+                    throw SqliteSchema.Gave(Opening, Path, e);
+                }
+
+                if (!said)
+                {
+                    Opening.Note(SqliteSchema.Waiting(Opening, Path));
+                    said = true;
+                }
+
                 Thread.Sleep(pause);
                 pause = TimeSpan.FromMilliseconds(Math.Min(pause.TotalMilliseconds * 2, 2000));
             }

@@ -36,6 +36,9 @@ public sealed partial class RecordStore : ITripSource
     /// <inheritdoc />
     public IEnumerable<DeviceRecords> Devices(AssetTag? only = null, bool withResistance = false)
     {
+        // One read transaction around every query: the file names, the register and the measurements are one snapshot,
+        // so an import that commits meanwhile is seen by none of them or by all (a record never names a file not read).
+        using var snapshot = ReadTransaction.Begin(_connection);
         using var revisions = TagQuery(
             $"SELECT d.asset_tag, {string.Join(", ", RegisterColumns.Split(", ").Select(c => "r." + c))} "
             + "FROM device_revisions r JOIN devices d ON d.id = r.device_id WHERE $tag IS NULL OR d.asset_tag = $tag COLLATE NOCASE ORDER BY d.asset_tag, r.id", only);

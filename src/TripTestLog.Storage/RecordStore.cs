@@ -6,19 +6,20 @@ using Microsoft.EntityFrameworkCore;
 namespace TripTestLog.Storage;
 
 /// <summary>
-/// The SQLite store of devices and measurements. Opening applies any pending migrations (never EnsureCreated), so a
-/// database made by an older version is upgraded in place.
+/// The SQLite store of devices and measurements. Only an import creates a database, and only where no file exists; a
+/// reader opens the file read-only and writes nothing; an import or `migrate` brings an older schema up to date.
 /// </summary>
 public sealed partial class RecordStore : IRecordStore
 {
     private readonly SqliteConnection _connection;
     private readonly TripTestLogContext _context;
 
-    private RecordStore(string path, SqliteConnection connection, TripTestLogContext context)
+    private RecordStore(string path, SqliteConnection connection, TripTestLogContext context, StoreOpening opening)
     {
         Path = path;
         _connection = connection;
         _context = context;
+        Opening = opening;
     }
 
     /// <summary>The database file.</summary>
@@ -27,24 +28,68 @@ public sealed partial class RecordStore : IRecordStore
     /// <inheritdoc />
     public string Location => Path;
 
-    /// <summary>Opens, creating if need be, the database at <paramref name="path"/> and brings its schema up to date.</summary>
-    public static RecordStore Open(string path)
-    {
-        var connection = StoreOptions.Connect(path);
-        connection.Open();
-        Execute(connection, "PRAGMA journal_mode=WAL;");
-        Execute(connection, "PRAGMA synchronous=NORMAL;");
-        Execute(connection, "PRAGMA foreign_keys=ON;");
-        Execute(connection, "PRAGMA busy_timeout=10000;");
+    /// <summary>What the store was opened for, and how long its writes wait for another process's.</summary>
+    internal StoreOpening Opening { get; }
 
-        // A 256 MiB page cache keeps the indexes of a million-row import in memory (SQLite's default, about 8 MiB, spills
-        // them to disk on every random insert); it is a ceiling, filled only as pages are touched.
-        Execute(connection, "PRAGMA cache_size=-262144;");
-        Execute(connection, "PRAGMA temp_store=MEMORY;");
-        var context = new TripTestLogContext(StoreOptions.For(connection));
-        context.Database.Migrate();
-        FingerprintScheme.Upgrade(connection);
-        return new RecordStore(path, connection, context);
+    /// <summary>Opens the database at <paramref name="path"/> to import: creates it where no file exists, and brings its schema up to date.</summary>
+    /// <exception cref="StoreRefusedException">When the file is not a TripTestLog database, or a newer version wrote it.</exception>
+    public static RecordStore Open(string path) => Open(path, StoreOpening.ForImport);
+
+    /// <summary>Opens the database at <paramref name="path"/> for what <paramref name="opening"/> says.</summary>
+    /// <exception cref="StoreRefusedException">
+    /// When the file is missing (and the purpose is not import), is not a TripTestLog database, was written by a newer
+    /// version, or is behind and the purpose is reading: one sentence, and nothing written.
+    /// </exception>
+    public static RecordStore Open(string path, StoreOpening opening)
+    {
+        ArgumentNullException.ThrowIfNull(opening);
+        var exists = File.Exists(path);
+        if (!exists && opening.Purpose != StorePurpose.Import)
+        {
+            throw new StoreRefusedException($"no database at {path}; import records first (triptestlog import PATH --db {path})");
+        }
+
+        // A file being created is empty for a moment: an import that finds none, or an empty one, waits for whoever may
+        // be creating it, then looks again, so an empty file is refused only when nobody is creating it.
+        using var guard = opening.Purpose == StorePurpose.Import && (!exists || new FileInfo(path).Length == 0) ? MigrationGuard.Take(path, opening) : null;
+        exists = File.Exists(path);
+        if (exists)
+        {
+            SqliteSchema.RefuseForeignFile(path);
+        }
+
+        var reading = opening.Purpose == StorePurpose.Read;
+        var connection = StoreOptions.Connect(path, reading ? SqliteOpenMode.ReadOnly : exists ? SqliteOpenMode.ReadWrite : SqliteOpenMode.ReadWriteCreate);
+        try
+        {
+            connection.Open();
+            if (reading)
+            {
+                SqliteSideFiles.RefuseIfReaderWouldCreate(path);
+            }
+            else
+            {
+                Execute(connection, "PRAGMA journal_mode=WAL;");
+                Execute(connection, "PRAGMA synchronous=NORMAL;");
+                SqliteSideFiles.Keep(connection);
+            }
+
+            Execute(connection, "PRAGMA foreign_keys=ON;");
+            Execute(connection, $"PRAGMA busy_timeout={(reading ? 10_000 : StoreOptions.WriterWaitSeconds * 1000)};");
+
+            // A 256 MiB page cache keeps the indexes of a million-row import in memory (SQLite's default, about 8 MiB, spills
+            // them to disk on every random insert); it is a ceiling, filled only as pages are touched.
+            Execute(connection, "PRAGMA cache_size=-262144;");
+            Execute(connection, "PRAGMA temp_store=MEMORY;");
+            var context = new TripTestLogContext(StoreOptions.For(connection));
+            SqliteSchema.BringUpToDate(path, connection, context, opening, isNew: !exists, guard);
+            return new RecordStore(path, connection, context, opening);
+        }
+        catch
+        {
+            connection.Dispose();
+            throw;
+        }
     }
 
     /// <summary>Turns SQLite's row-by-row foreign-key enforcement on or off for this connection (outside a transaction).</summary>
@@ -60,7 +105,7 @@ public sealed partial class RecordStore : IRecordStore
         _connection.Dispose();
     }
 
-    private static void Execute(SqliteConnection connection, string sql)
+    internal static void Execute(SqliteConnection connection, string sql)
     {
         using var command = connection.CreateCommand();
         command.CommandText = sql;

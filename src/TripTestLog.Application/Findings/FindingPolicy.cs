@@ -84,6 +84,12 @@ public sealed record FindingPolicy
     /// <summary>Whether a test made with an instrument missing from the register is a finding (default: no).</summary>
     public bool RequireRegisteredInstruments { get; init; }
 
+    /// <summary>
+    /// Minutes a command waits for another process's write to the store (a SQLite file's write lock, the server's import
+    /// or schema lock) before it gives up with one sentence; it says on stderr what it waits for. Lab policy; 10 by default.
+    /// </summary>
+    public double StoreWaitMinutes { get; init; } = 10;
+
     /// <summary>Months from the latest as-found test to the next, by grade (lab policy).</summary>
     public IReadOnlyDictionary<ConditionGrade, int> DueMonths { get; init; } = new Dictionary<ConditionGrade, int>
     {

@@ -59,6 +59,8 @@ public static class PolicyFile
         new("require_registered_instruments", "instrument-unregistered: yes or no",
             p => p.RequireRegisteredInstruments ? "yes" : "no",
             (p, v) => v switch { "yes" => p with { RequireRegisteredInstruments = true }, "no" => p with { RequireRegisteredInstruments = false }, _ => null }),
+        Number("store_wait_minutes", "minutes a command waits for another process's write to the database before it gives up (lab policy)",
+            p => p.StoreWaitMinutes, (p, v) => p with { StoreWaitMinutes = v }, 0.05, 1440),
         .. Enum.GetValues<ConditionGrade>().Select(g => Whole($"due_months.{TextCodes.Grade.Of(g)}",
             $"months from the latest as-found test to the next, grade {TextCodes.Grade.Of(g)}",
             p => p.DueMonths[g], (p, v) => p with { DueMonths = new Dictionary<ConditionGrade, int>(p.DueMonths) { [g] = v } }, 0, 240)),

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using TripTestLog.Cli.Services;
 using System.CommandLine;
 
@@ -37,7 +38,7 @@ internal static class BackupCommand
             return ExitCodes.BadInput;
         }
 
-        using var store = Stores.Open(db);
+        using var store = Stores.Open(cli, db, StorePurpose.Read);
         store.Backup(target.FullName);
         var counts = store.Counts();
         cli.Out.WriteLine($"Backed up {db.Display} to {target.FullName}: {counts.Files} files, {counts.Devices} devices, "

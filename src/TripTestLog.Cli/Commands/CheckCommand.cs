@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using System.CommandLine;
 using TripTestLog.Application.Check;
 using TripTestLog.Cli.Output;
@@ -147,7 +148,7 @@ internal static class CheckCommand
             return Usage(cli, problem!);
         }
 
-        using var store = Stores.Open(db);
+        using var store = Stores.Open(cli, db, StorePurpose.Read);
         if (only is { } tag && !store.Devices(tag).Any())
         {
             return Usage(cli, $"--asset: '{tag}' is not in the device register of {db.Display}");

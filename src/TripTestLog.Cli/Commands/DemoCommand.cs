@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using TripTestLog.Application.Import;
 using TripTestLog.Application.Check;
 using TripTestLog.Application.Findings;
@@ -96,7 +97,7 @@ internal static class DemoCommand
         var fleet = new FleetSummary(5);
         string reportPage;
         using (var log = Logging.BesideDatabase(db))
-        using (var store = Stores.Open(db))
+        using (var store = Stores.Open(cli, db, StorePurpose.Import))
         using (var textWriter = new StreamWriter(text))
         using (var jsonWriter = new StreamWriter(json))
         {

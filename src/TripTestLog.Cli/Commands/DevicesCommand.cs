@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using TripTestLog.Cli.Services;
 using System.CommandLine;
 using System.Globalization;
@@ -38,7 +39,7 @@ internal static class DevicesCommand
             return ExitCodes.BadInput;
         }
 
-        using var store = Stores.Open(db);
+        using var store = Stores.Open(cli, db, StorePurpose.Read);
         var devices = store.Histories().Values
             .Select(h => (Entry: h.InForceOn(on), Entries: h.Entries.Count))
             .Where(d => site is null || string.Equals(d.Entry.Site, site, StringComparison.OrdinalIgnoreCase))

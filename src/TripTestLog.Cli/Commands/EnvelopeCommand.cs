@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using TripTestLog.Cli.Services;
 using TripTestLog.Domain.Codes;
 using System.CommandLine;
@@ -76,7 +77,7 @@ internal static class EnvelopeCommand
                 return ExitCodes.BadInput;
             }
 
-            using var store = Stores.Open(request.Database);
+            using var store = Stores.Open(cli, request.Database, StorePurpose.Read);
             if (!store.Histories().TryGetValue(asset, out var history))
             {
                 return Usage(cli, $"--asset: '{asset}' is not in the device register");

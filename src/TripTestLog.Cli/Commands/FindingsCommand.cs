@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using TripTestLog.Cli.Services;
 using System.CommandLine;
 using TripTestLog.Application.Findings;
@@ -90,7 +91,7 @@ internal static class FindingsCommand
 
     private static int Run(CliContext cli, ConditionOptions.Resolved options, Filter filter, bool json, bool csv, bool failOnFindings)
     {
-        using var store = Stores.Open(options.Database);
+        using var store = Stores.Open(cli, options.Database, StorePurpose.Read);
         if (options.Only is { } tag && !store.Devices(tag).Any())
         {
             cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {options.Database.Display}");

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using TripTestLog.Cli.Services;
 using System.CommandLine;
 using System.Globalization;
@@ -41,7 +42,7 @@ internal static class FleetCommand
 
     private static int Run(CliContext cli, ConditionOptions.Resolved options, int top, bool json)
     {
-        using var store = Stores.Open(options.Database);
+        using var store = Stores.Open(cli, options.Database, StorePurpose.Read);
         if (options.Only is { } tag && !store.Devices(tag).Any())
         {
             cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {options.Database.Display}");

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using TripTestLog.Cli.Services;
 using System.CommandLine;
 using System.Globalization;
@@ -34,7 +35,7 @@ internal static class HistoryCommand
             return ExitCodes.BadInput;
         }
 
-        using var store = Stores.Open(db);
+        using var store = Stores.Open(cli, db, StorePurpose.Read);
         var tag = AssetTag.Of(asset);
         var revisions = store.Revisions(tag);
         if (revisions.Count == 0)

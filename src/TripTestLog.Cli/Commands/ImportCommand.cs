@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using TripTestLog.Application.Import;
 using TripTestLog.Application.Check;
 using System.CommandLine;
@@ -105,7 +106,7 @@ internal static class ImportCommand
         }
 
         using var log = Logging.BesideDatabase(db);
-        using var store = Stores.Open(db);
+        using var store = Stores.Open(cli, db, StorePurpose.Import);
         IReadOnlyList<ImportOutcome> outcomes;
         try
         {

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using TripTestLog.Cli.Services;
 using System.CommandLine;
 using System.Globalization;
@@ -31,7 +32,7 @@ internal static class InstrumentsCommand
                 return ExitCodes.BadInput;
             }
 
-            using var store = Stores.Open(file);
+            using var store = Stores.Open(cli, file, StorePurpose.Read);
             var register = store.Instruments();
             var table = new TextTable("Instrument", "Kind", "Serial", "Calibrated", "Due", "State") { Elastic = 5 };
             var lapsed = 0;

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using System.CommandLine;
 using System.Diagnostics;
 using TripTestLog.Cli.Services;
@@ -76,7 +77,7 @@ internal static class ReportCommand
             return ExitCodes.BadInput;
         }
 
-        using var store = Stores.Open(options.Database);
+        using var store = Stores.Open(cli, options.Database, StorePurpose.Read);
         if (options.Only is { } tag && !store.Devices(tag).Any())
         {
             cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {options.Database.Display}");

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using System.CommandLine;
 using TripTestLog.Application.Transfer;
 using TripTestLog.Cli.Services;
@@ -33,8 +34,8 @@ internal static class TransferCommand
             return ExitCodes.BadInput;
         }
 
-        using var source = Stores.Open(from);
-        using var target = Stores.Open(to);
+        using var source = Stores.Open(cli, from, StorePurpose.Read);
+        using var target = Stores.Open(cli, to, StorePurpose.Import);
         var toCopy = source.Files().ToList();
         using var log = Logging.BesideDatabase(to);
         IReadOnlyList<TransferredFile> files;

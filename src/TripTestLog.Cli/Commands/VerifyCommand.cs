@@ -27,7 +27,7 @@ internal static class VerifyCommand
             return ExitCodes.BadInput;
         }
 
-        using var store = Stores.Open(db);
+        using var store = Stores.Open(cli, db, StorePurpose.Read);
         var report = store.Verify();
         var table = new TextTable("File", "Records>", "State");
         foreach (var f in report.Files)

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Stores;
 using System.CommandLine;
 using System.Text;
 using TripTestLog.Application.Worksheet;
@@ -55,7 +56,7 @@ internal static class WorksheetCommand
 
     private static int Run(CliContext cli, ConditionOptions.Resolved options, TestStage stage, string folder)
     {
-        using var store = Stores.Open(options.Database);
+        using var store = Stores.Open(cli, options.Database, StorePurpose.Read);
         var histories = store.Histories();
         var selected = histories.Values
             .Where(h => options.Only is { } tag ? h.Latest.Tag == tag : string.Equals(h.InForceOn(options.AsOf).Site, options.Site, StringComparison.OrdinalIgnoreCase))

@@ -10,9 +10,17 @@ namespace TripTestLog.Cli.Services;
 /// </summary>
 internal static class Stores
 {
-    /// <summary>Opens (creating and migrating a new database or schema) the store at <paramref name="address"/>.</summary>
-    public static IRecordStore Open(StoreAddress address) =>
-        address.Server is { } server ? PostgresRecordStore.Open(server) : RecordStore.Open(address.File!.FullName);
+    /// <summary>
+    /// Opens the store at <paramref name="address"/> for <paramref name="purpose"/>: a reader writes nothing; only an import
+    /// creates a database (where no file exists) or brings its schema up to date, as `migrate` does. Waits for another
+    /// process's write as long as the lab policy's store_wait_minutes allows, saying on stderr what it waits for.
+    /// </summary>
+    public static IRecordStore Open(CliContext cli, StoreAddress address, StorePurpose purpose)
+    {
+        var minutes = PolicyLoader.Load(null, address, out _) is { } policy ? policy.Policy.StoreWaitMinutes : StoreOpening.DefaultPatience.TotalMinutes;
+        var opening = new StoreOpening(purpose, TimeSpan.FromMinutes(minutes), what => cli.Error.WriteLine(what));
+        return address.Server is { } server ? PostgresRecordStore.Open(server, opening) : RecordStore.Open(address.File!.FullName, opening);
+    }
 
     /// <summary>
     /// A database's failure in one sentence, or null when <paramref name="e"/> is not one: a server that cannot be used
@@ -20,9 +28,15 @@ internal static class Stores
     /// </summary>
     public static string? Plain(Exception e)
     {
-        if (e is StoreUnavailableException)
+        if (e is StoreUnavailableException or StoreRefusedException)
         {
             return e.Message;
+        }
+
+        if (ServerClosed(e))
+        {
+            return "the database server closed the connection during the command; nothing of the file in progress was stored (each file is one "
+                + "transaction): import it again when the server is back";
         }
 
         while (e.InnerException is { } inner)
@@ -36,5 +50,21 @@ internal static class Stores
             Npgsql.NpgsqlException or Microsoft.Data.Sqlite.SqliteException => $"the database could not be used ({e.Message.ReplaceLineEndings(" ").Trim()})",
             _ => null,
         };
+    }
+
+    // The server went away mid-command: the socket broke or the stream ended, in whichever layer noticed first.
+    private static bool ServerClosed(Exception e)
+    {
+        for (Exception? x = e; x is not null; x = x.InnerException)
+        {
+            if (x is Npgsql.PostgresException { SqlState: "57P01" or "57P02" or "57P03" }
+                || (x is Npgsql.NpgsqlException && x.InnerException is IOException or EndOfStreamException or System.Net.Sockets.SocketException)
+                || (x is Npgsql.NpgsqlException && x.Message.Contains("Broken pipe", StringComparison.Ordinal)))
+            {
+                return true;
+            }
+        }
+
+        return false;
     }
 }

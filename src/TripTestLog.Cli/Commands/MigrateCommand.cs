@@ -1,0 +1,41 @@
+using System.CommandLine;
+using TripTestLog.Application.Stores;
+using TripTestLog.Cli.Services;
+using TripTestLog.Storage;
+using TripTestLog.Storage.Postgres;
+
+namespace TripTestLog.Cli.Commands;
+
+/// <summary>`migrate`: brings an existing database's schema up to this version's; the only step besides import that changes it.</summary>
+internal static class MigrateCommand
+{
+    public static Command Create(CliContext cli)
+    {
+        var db = CommonOptions.ExistingDatabase();
+        var command = new Command("migrate", "Bring an existing database's schema up to this version (reading commands never change it; import does this too). "
+            + "On a server, run it as the owner role")
+        {
+            db,
+        };
+        command.SetAction(parse => Run(cli, parse.GetValue(db)!));
+        return command;
+    }
+
+    private static int Run(CliContext cli, StoreAddress db)
+    {
+        if (CommonOptions.Missing(cli, db))
+        {
+            return ExitCodes.BadInput;
+        }
+
+        using var store = Stores.Open(cli, db, StorePurpose.Migrate);
+        var applied = store switch
+        {
+            RecordStore file => file.AppliedMigrations(),
+            PostgresRecordStore server => server.AppliedMigrations(),
+            _ => [],
+        };
+        cli.Out.WriteLine($"The schema of {db.Display} is up to date: {applied.Count} migrations, the latest {(applied.Count > 0 ? applied[^1] : "none")}.");
+        return ExitCodes.Ok;
+    }
+}
