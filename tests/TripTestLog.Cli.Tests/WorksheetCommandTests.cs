@@ -47,6 +47,32 @@ public sealed class WorksheetCommandTests(SampleFleetDatabase fleet) : IClassFix
     }
 
     [Fact]
+    public void RunningTheWorksheetAgain_OverABlankSheet_RewritesIt_ButOverOneHoldingResults_RefusesAndNamesTheFile()
+    {
+        var folder = Path.Combine(fleet.Folder, "worksheet-again");
+        Assert.Equal(0, CliRun.Run("worksheet", "--db", fleet.Database, "--asset", "ARW-DB1-Q05", "--out", folder).Exit);
+        Assert.Equal(0, CliRun.Run("worksheet", "--db", fleet.Database, "--asset", "ARW-DB1-Q05", "--out", folder).Exit);
+
+        var trips = Path.Combine(folder, WorksheetCsv.TripFile);
+        var lines = File.ReadAllLines(trips);
+        var cells = lines[2].Split(',');
+        cells[1] = "2026-12-01T09:40";
+        cells[5] = "12.5";
+        lines[2] = string.Join(',', cells);
+        File.WriteAllLines(trips, lines);
+
+        var (exit, output, error) = CliRun.Run("worksheet", "--db", fleet.Database, "--asset", "ARW-DB1-Q05", "--out", folder);
+
+        Assert.Equal(2, exit);
+        Assert.Equal("", output);
+        var sentence = string.Join(' ', error.Split('\n', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries));
+        Assert.StartsWith("error: ", sentence, StringComparison.Ordinal);
+        Assert.Contains(WorksheetCsv.TripFile + " already holds results (line 3)", sentence, StringComparison.Ordinal);
+        Assert.All(error.Split('\n'), l => Assert.True(l.Length <= 100, l));
+        Assert.Equal(lines, File.ReadAllLines(trips));
+    }
+
+    [Fact]
     public void TheSheet_ListsEachPointWithItsWindow_AndCarriesTheCaution()
     {
         var folder = Path.Combine(fleet.Folder, "worksheet-page");

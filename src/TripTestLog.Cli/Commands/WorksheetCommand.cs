@@ -80,6 +80,13 @@ internal static class WorksheetCommand
             return ExitCodes.BadInput;
         }
 
+        if (WorksheetCsv.FirstWithResults(folder) is { } filled)
+        {
+            Wrapped.Write(cli.Error, $"error: {filled.File} already holds results (line {filled.Line}); import it first or move it, "
+                + "or give another --out: a new worksheet would overwrite it", 0);
+            return ExitCodes.BadInput;
+        }
+
         var tables = store.CurveTables();
         var what = options.Only is { } only ? only.Value : $"site {selected[0].InForceOn(options.AsOf).Site}";
         var page = Path.Combine(folder, PageFile);

@@ -27,6 +27,90 @@ internal sealed class WorksheetCsv : IDisposable
         _insulation = Open(Path.Combine(folder, InsulationFile), "asset_tag,tested_at,stage,path,test_voltage_v,resistance_mohm,temperature_c,duration_s,plan");
     }
 
+    // The columns a person fills in at the bench; the worksheet leaves them blank.
+    private static readonly Dictionary<string, string[]> ResultColumns = new(StringComparer.Ordinal)
+    {
+        [TripFile] = ["tested_at", "trip_time_s", "held_s", "ambient_c", "instrument", "technician", "note"],
+        [ContactFile] = ["tested_at", "resistance_uohm", "temperature_c", "instrument", "technician"],
+        [InsulationFile] = ["tested_at", "resistance_mohm", "temperature_c"],
+    };
+
+    /// <summary>
+    /// The first worksheet CSV in <paramref name="folder"/> that already holds a result, and the line it is on; null when
+    /// none does, so writing the worksheet there loses nothing.
+    /// </summary>
+    public static (string File, int Line)? FirstWithResults(string folder)
+    {
+        foreach (var (name, columns) in ResultColumns)
+        {
+            var path = Path.Combine(folder, name);
+            if (!File.Exists(path))
+            {
+                continue;
+            }
+
+            using var reader = new StreamReader(path, Encoding.UTF8);
+            var header = Cells(reader.ReadLine() ?? "");
+            var watched = columns.Select(c => header.IndexOf(c)).Where(i => i >= 0).ToList();
+            var line = 1;
+            for (var row = reader.ReadLine(); row is not null; row = reader.ReadLine())
+            {
+                line++;
+                var cells = Cells(row);
+                if (watched.Any(i => i < cells.Count && cells[i].Trim().Length > 0))
+                {
+                    return (path, line);
+                }
+            }
+        }
+
+        return null;
+    }
+
+    // One CSV line's cells, with double-quoted cells unquoted (the worksheet writes one record a line).
+    private static List<string> Cells(string line)
+    {
+        var cells = new List<string>();
+        var cell = new StringBuilder();
+        var quoted = false;
+        for (var i = 0; i < line.Length; i++)
+        {
+            var c = line[i];
+            if (quoted)
+            {
+                if (c == '"' && i + 1 < line.Length && line[i + 1] == '"')
+                {
+                    cell.Append('"');
+                    i++;
+                }
+                else if (c == '"')
+                {
+                    quoted = false;
+                }
+                else
+                {
+                    cell.Append(c);
+                }
+            }
+            else if (c == '"')
+            {
+                quoted = true;
+            }
+            else if (c == ',')
+            {
+                cells.Add(cell.ToString());
+                cell.Clear();
+            }
+            else
+            {
+                cell.Append(c);
+            }
+        }
+
+        cells.Add(cell.ToString());
+        return cells;
+    }
+
     public void Add(DeviceWorksheet sheet)
     {
         var tag = CsvCell.Text(sheet.Device.Tag.Value);

@@ -1,3 +1,4 @@
+using System.Globalization;
 using ScottPlot;
 
 namespace TripTestLog.Reports.Charts;
@@ -54,7 +55,12 @@ internal static class ChartStyle
     {
         var svg = plot.GetSvgXml(width, height);
         var start = svg.IndexOf("<svg", StringComparison.Ordinal);
-        return start > 0 ? svg[start..] : svg;
+        svg = start > 0 ? svg[start..] : svg;
+
+        // A view box lets the page scale the chart down (print, a narrow screen) instead of cropping it.
+        return svg.Contains("viewBox", StringComparison.Ordinal)
+            ? svg
+            : string.Concat("<svg viewBox=\"0 0 ", width.ToString(CultureInfo.InvariantCulture), " ", height.ToString(CultureInfo.InvariantCulture), "\"", svg[4..]);
     }
 }
 

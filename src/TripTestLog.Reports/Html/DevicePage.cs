@@ -34,7 +34,8 @@ internal static class DevicePage
         Findings(html, condition);
         SignOff(html, report, context);
         html.Append("</section>\n");
-        Layout.End(html, context.Footer);
+        // The sign-off carries the footer's trace (version, database), so the page prints it once.
+        Layout.End(html, null);
         return html.ToString();
     }
 
@@ -42,7 +43,7 @@ internal static class DevicePage
     {
         var d = report.Condition.Device;
         html.Append("<h2>Register entry</h2>\n");
-        Table(html, ["field", "value"],
+        string[][] fields =
         [
             ["asset tag", H(d.Tag.Value)], ["site", H(d.Site)], ["location", H(d.Location)], ["family", H(TextCodes.Family.Of(d.Family))],
             ["rated current In", H($"{N(d.RatedCurrent.Value)} A")], ["poles", H(N(d.Poles))], ["rated voltage", H($"{N(d.RatedVoltage.Value)} V")],
@@ -50,7 +51,12 @@ internal static class DevicePage
             ["contact limit", H(d.ContactLimit is { } l ? $"{N(l.Value, "0")} micro-ohm" : "not recorded")],
             ["make, model, serial", H($"{d.Make} {d.Model} {d.Serial}".Trim())],
             ["settings in force", H(d.Settings.Summary)], ["curve table", H(d.CurveTable ?? "none")], ["ambient table", H(d.AmbientTable ?? "none")],
-        ]);
+        ];
+
+        // Two fields a row keeps the entry short on paper.
+        Table(html, ["field", "value", "field", "value"], fields.Chunk(2).Select(pair => pair.Length == 2
+            ? new[] { H(pair[0][0]), pair[0][1], H(pair[1][0]), pair[1][1] }
+            : [H(pair[0][0]), pair[0][1], "", ""]), "register");
         html.Append("<h3>Settings history</h3>\n");
         Table(html, ["in force from", "settings", "curve table"], report.Records.History.Entries.Select(e => new[]
         {
@@ -68,7 +74,7 @@ internal static class DevicePage
         }
 
         var latest = report.Trips[^1];
-        html.Append("<figure>").Append(TimeCurrentChart.Svg(latest.Envelope, report.Trips)).Append("<figcaption>")
+        html.Append("<figure class=\"wide\">").Append(TimeCurrentChart.Svg(latest.Envelope, report.Trips)).Append("<figcaption>")
             .Append(H($"Band of the settings in force at the latest test ({latest.Envelope.Standard}, {latest.Device.Settings.Summary}), drawn for a cold "
                 + "start with all poles loaded: shaded between the guaranteed edges (solid), typical edges dashed. Each test is marked at its current "
                 + "over the setting in force on its date, by the verdict it got under its own conditions: filled circle pass at a standard's point, "
@@ -79,22 +85,23 @@ internal static class DevicePage
     private static void Trips(StringBuilder html, IReadOnlyList<JudgedTrip> trips)
     {
         html.Append("<h2>Trip records</h2>\n");
-        Table(html, ["tested", "stage", "pole", "start", "current", "x ref", "result", "band", "verdict", "basis", "margin", "source"], trips.Select(t =>
+        Table(html, ["tested", "stage, pole, start", "current (x ref)", "result and band", "verdict", "basis, margin and source"], trips.Select(t =>
         {
             var m = t.Trip.Measurement;
             var a = t.Assessment;
             var verdict = TextCodes.Verdict.Of(a.Verdict);
             var band = a.Band.HasRequirement ? a.Band.Range : "no band";
+            var basis = a.Basis == VerdictBasis.Normative ? "normative" + (a.Point is { } p ? " " + p.Label : "") : "band";
             return new[]
             {
-                H(m.TestedAt.ToString()), H(TextCodes.Stage.Of(m.Stage)), H(m.Pole.Code), H(TextCodes.Start.Of(m.Start)),
-                H($"{N(m.Current.Value, "0.##")} A"), H(N(m.Current.Value / t.Envelope.Reference.Value, "0.##")),
-                H(m.Outcome.ToString()), H(band), $"<span class=\"verdict-{verdict}\">{H(verdict)}</span><br>{H(a.Reason)}",
-                H(a.Basis == VerdictBasis.Normative ? "normative" + (a.Point is { } p ? " " + p.Label : "") : "band"),
-                H(a.Margin.DecadesToNearerEdge is { } d ? N(d, "0.00") + " dec" : ""),
-                H($"{t.Trip.SourceFile}:{t.Trip.SourceLine}"),
+                H(m.TestedAt.ToString()), H($"{TextCodes.Stage.Of(m.Stage)}, {m.Pole.Code}, {TextCodes.Start.Of(m.Start)}"),
+                H($"{N(m.Current.Value, "0.##")} A ({N(m.Current.Value / t.Envelope.Reference.Value, "0.##")} x)"),
+                H(m.Outcome.ToString()) + "<br>" + Small(band),
+                $"<span class=\"verdict-{verdict}\">{H(verdict)}</span>: {H(a.Reason)}",
+                H(basis + (a.Margin.DecadesToNearerEdge is { } d ? ", " + N(d, "0.00") + " dec" : "")) + "<br>"
+                    + Small(t.Trip.SourceFile + ":" + t.Trip.SourceLine.ToString(System.Globalization.CultureInfo.InvariantCulture)),
             };
-        }));
+        }), "trips");
     }
 
     private static void Drift(StringBuilder html, DeviceReport report)
@@ -114,7 +121,7 @@ internal static class DevicePage
             var exit = report.Condition.Open.FirstOrDefault(f => f.Kind == FindingKind.TripTrendExit && f.Point == point.Label);
             var chart = DriftChart.Build(point.Label, [.. tests.Select(t => new DriftChart.Point(TrendPoint.YearOf(t.Trip.Measurement.TestedAt.Date),
                 t.Trip.Measurement.Outcome.Time.Value, TimeCurrentChart.KindOf(t)))], band.Minimum.Limit?.Value, band.Maximum.Limit?.Value, exit);
-            html.Append("<figure>").Append(ChartStyle.Svg(chart, 520, 320)).Append("</figure>");
+            html.Append("<figure>").Append(ChartStyle.Svg(chart, 400, 260)).Append("</figure>");
         }
 
         html.Append("</div>\n");
@@ -132,7 +139,7 @@ internal static class DevicePage
 
         var forecasts = report.Condition.Open.Where(f => f.Kind == FindingKind.ContactTrendLimit).ToList();
         var chart = ContactChart.Build(readings, report.Condition.Device.ContactLimit?.Value, forecasts);
-        html.Append("<figure>").Append(ChartStyle.Svg(chart)).Append("<figcaption>")
+        html.Append("<figure class=\"wide contact\">").Append(ChartStyle.Svg(chart)).Append("<figcaption>")
             .Append(H("Each pole's median reading at each test, referred to 20 °C for copper (IEC 60228, 0.00393 per K); dotted: each pole's first "
                 + "as-found reading; red: the maker's limit; dashed: a Theil–Sen trend to the date it reaches the limit."))
             .Append("</figcaption></figure>\n");
@@ -182,9 +189,11 @@ internal static class DevicePage
             };
         }));
 
+    private static string Small(string text) => $"<span class=\"small\">{H(text)}</span>";
+
     private static void SignOff(StringBuilder html, DeviceReport report, ReportContext context)
     {
-        html.Append("<h2>Sign-off</h2>\n<table class=\"signoff\"><tbody>")
+        html.Append("<div class=\"keep\"><h2>Sign-off</h2>\n<table class=\"signoff\"><tbody>")
             .Append("<tr><th>Tested by</th><td></td><th>Date</th><td></td></tr>")
             .Append("<tr><th>Checked by</th><td></td><th>Date</th><td></td></tr></tbody></table>\n");
         var standards = report.Trips.Select(t => t.Envelope.Standard).Distinct().ToList();
@@ -205,6 +214,6 @@ internal static class DevicePage
                 ? $"{p.Kind} {p.Serial}: calibrated {p.CalibratedOn:yyyy-MM-dd}, due {p.CalibrationDue:yyyy-MM-dd}"
                 : context.Instruments.Trace(u.Name, u.Latest, true)?.Message ?? ""),
         }));
-        html.Append("<p>").Append(H(context.Footer)).Append("</p>\n");
+        html.Append("<footer>").Append(H(context.Footer)).Append("</footer></div>\n");
     }
 }

@@ -23,24 +23,23 @@ internal static class FleetPage
         Layout.Begin(html, "Fleet condition", $"{devices} devices at {sites.Count} sites{selection}; findings as of {context.AsOf:yyyy-MM-dd}", null);
         html.Append("<nav>Data beside this page: <a href=\"findings.csv\">findings.csv</a> <a href=\"findings.json\">findings.json</a> ")
             .Append("<a href=\"verdicts.csv\">verdicts.csv</a> <a href=\"verdicts.json\">verdicts.json</a></nav>\n");
-        var grades = Enum.GetValues<ConditionGrade>();
+        html.Append("<h2>Act first</h2>\n<p class=\"sub\">Worst grade first, then the soonest forecast, then overdue.</p>\n");
+        Table(html, ["#", "device", "site", "grade", "next test due", "why it is here"], fleet.Summary.Priority.Select((d, i) => new[]
+        {
+            N(i + 1), Link(d, pageOf), H(d.Device.Site), Badge(d.Grade),
+            H(d.DueOn.ToString("yyyy-MM-dd")) + (d.Overdue ? " (overdue)" : ""), H(Why(d)),
+        }));
 
+        var grades = Enum.GetValues<ConditionGrade>();
         html.Append("<h2>Devices by site and condition grade</h2>\n");
         Table(html, ["site", "devices", .. grades.Select(g => TextCodes.Grade.Of(g)), "overdue"],
             sites.Select(s => (string[])[H(s.Key), N(s.Value.Devices), .. s.Value.ByGrade.Select(n => N(n)), N(s.Value.Overdue)])
                 .Append(["all sites", N(devices), .. grades.Select(g => N(sites.Values.Sum(s => s.ByGrade[(int)g]))), N(sites.Values.Sum(s => s.Overdue))]));
         var totals = grades.Select(g => sites.Values.Sum(s => s.ByGrade[(int)g])).ToList();
-        html.Append("<figure>").Append(ChartStyle.Svg(GradeChart.Build(totals), 640, 300)).Append("<figcaption>")
+        html.Append("<figure class=\"wide\">").Append(ChartStyle.Svg(GradeChart.Build(totals), 640, 300)).Append("<figcaption>")
             .Append(H("Grades: sound, nothing open; watch, look into it; plan-work, a trend or change needs work; repair, over a limit or out of "
                 + "band; take-out-of-service, may not protect its circuit until repaired and retested."))
             .Append("</figcaption></figure>\n");
-
-        html.Append("<h2>Act first</h2>\n<p class=\"sub\">Worst grade first, then the soonest forecast, then overdue.</p>\n");
-        Table(html, ["#", "device", "site", "grade", "next test due", "why it is here"], fleet.Summary.Priority.Select((d, i) => new[]
-        {
-            N(i + 1), Link(d, pageOf), H(d.Device.Site), $"<span class=\"grade\">{H(TextCodes.Grade.Of(d.Grade))}</span>",
-            H(d.DueOn.ToString("yyyy-MM-dd")) + (d.Overdue ? " (overdue)" : ""), H(Why(d)),
-        }));
 
         html.Append("<h2>Overdue for test</h2>\n");
         Table(html, ["device", "site", "last as-found test", "was due", "days overdue"], fleet.Overdue.Select(d => new[]
@@ -76,6 +75,13 @@ internal static class FleetPage
         }));
         Layout.End(html, context.Footer);
         return html.ToString();
+    }
+
+    /// <summary>A grade as a badge in the grade chart's colour, its word kept for a print in black and white.</summary>
+    internal static string Badge(ConditionGrade grade)
+    {
+        var code = H(TextCodes.Grade.Of(grade));
+        return $"<span class=\"grade grade-{code}\">{code}</span>";
     }
 
     /// <summary>The worst open finding in words, and how many more there are.</summary>

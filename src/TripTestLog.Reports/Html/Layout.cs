@@ -36,17 +36,33 @@ internal static class Layout
         .sev-out-of-service, .sev-act { color: var(--act); font-weight: bold; } .sev-plan { color: var(--plan); font-weight: bold; }
         .closed { color: var(--muted); }
         figure { margin: 8px 0 16px; } figure svg { max-width: 100%; height: auto; } figcaption { color: var(--muted); font-size: 12px; }
-        .charts { display: flex; flex-wrap: wrap; gap: 8px; } .charts figure { flex: 1 1 480px; }
+        .charts { display: flex; flex-wrap: wrap; gap: 8px; } .charts figure { flex: 0 1 400px; }
         .signoff td { height: 2.2em; } .signoff th { width: 22%; }
         td.entry { min-width: 7em; height: 2.2em; border: 1px solid var(--ink); background: #fff; }
-        .small { color: var(--muted); font-size: 12px; }
+        .small { color: var(--muted); font-size: 12px; } .tick { white-space: nowrap; font-size: 12px; }
         nav a { margin-right: 12px; }
         footer { color: var(--muted); font-size: 12px; margin-top: 24px; border-top: 1px solid var(--line); padding-top: 6px; }
-        @page { margin: 14mm 12mm; }
+        .grade-sound { background: #4f772d; color: #fff; } .grade-watch { background: #90a955; }
+        .grade-plan-work { background: #e9c46a; } .grade-repair { background: #e76f51; }
+        .grade-take-out-of-service { background: #a4161a; color: #fff; } .grade-untested { background: #eceeed; }
+        @media print { .grade { -webkit-print-color-adjust: exact; print-color-adjust: exact; } }
+        table.register td:nth-child(odd) { width: 16%; color: var(--muted); } table.register td:nth-child(even) { width: 34%; }
+        .src { overflow-wrap: anywhere; }
+        @page { margin: 12mm 10mm; }
         @media print {
-          body { max-width: none; padding: 0; font-size: 11px; } nav { display: none; }
-          .device-page { break-before: page; } h2 { break-after: avoid; } figure, tr { break-inside: avoid; }
-          .charts figure { flex: 1 1 100%; }
+          body { max-width: none; padding: 0; font-size: 9.5px; line-height: 1.3; } nav { display: none; }
+          h1 { font-size: 15px; margin: 0 0 2px; } h2 { font-size: 12px; margin: 8px 0 3px; } h3 { font-size: 10.5px; margin: 6px 0 2px; }
+          h2, h3, h2 + .sub { break-after: avoid; break-inside: avoid; }
+          h2::after, h3::after { content: ""; display: block; height: 28mm; margin-bottom: -28mm; } .caution, .basis { font-size: 8px; padding: 3px 6px; margin: 4px 0; } .sub { margin: 0 0 4px; }
+          table { font-size: 8px; margin: 2px 0 6px; } th, td { padding: 1px 3px; } thead { display: table-header-group; }
+          figure, tr, .keep { break-inside: avoid; } figure { margin: 2px 0 6px; } figcaption { font-size: 7.5px; }
+          section.device-page ~ section.device-page { break-before: page; }
+          figure.wide svg { max-height: 70mm; width: auto; } figure.wide { text-align: center; }
+          .charts { gap: 4px; } .charts figure { flex: 0 1 32%; max-width: 33%; } figure.contact svg { max-height: 55mm; }
+          table.trips td { white-space: nowrap; } table.trips td:nth-child(5) { white-space: normal; }
+          td.entry { height: 1.9em; } .signoff td { height: 1.9em; }
+          .small, .tick { font-size: 7px; }
+          footer { margin-top: 8px; padding-top: 3px; font-size: 8px; }
         }
         """;
 
@@ -64,8 +80,14 @@ internal static class Layout
         html.Append("<p class=\"basis\">").Append(H(Basis)).Append("</p>\n");
     }
 
-    public static void End(StringBuilder html, string footer)
+    /// <summary>Closes the page; a null <paramref name="footer"/> writes none (a page whose sign-off already carries it).</summary>
+    public static void End(StringBuilder html, string? footer)
     {
-        html.Append("<footer>").Append(H(footer)).Append("</footer>\n</body></html>\n");
+        if (footer is not null)
+        {
+            html.Append("<footer>").Append(H(footer)).Append("</footer>\n");
+        }
+
+        html.Append("</body></html>\n");
     }
 }

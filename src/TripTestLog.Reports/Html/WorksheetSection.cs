@@ -4,6 +4,7 @@ using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Planning;
+using TripTestLog.Domain.Settings;
 using static TripTestLog.Reports.Html.Markup;
 
 namespace TripTestLog.Reports.Html;
@@ -33,28 +34,29 @@ internal static class WorksheetSection
         }
         else
         {
-            Table(html, ["Row", "Point", "Inject", "Start", "Poles loaded", "Passes if", "Basis", "Current injected", "Trip time or held"],
+            Table(html, ["Row", "Point", "Inject", "Start", "Poles loaded", "Passes if", "Basis", "Time tested", "Current injected", "Trip time or held", "Result"],
                 sheet.Trips.Select((t, i) => Trip(sheet, t, i)), "worksheet");
         }
 
         html.Append("<h3>Contact resistance</h3>\n");
-        Table(html, ["Row", "Pole", "Test current (DC)", "Limit", "Basis", "Reading", "Temperature"],
+        Table(html, ["Row", "Pole", "Test current (DC)", "Limit", "Basis", "Time tested", "Reading", "Temperature", "Result"],
             sheet.Contacts.Select((c, i) => new string?[]
             {
                 H(DeviceWorksheet.RowLabel('C', i)), H(c.Pole.Code), H(c.TestCurrent.ToString()),
-                c.Limit is { } l ? H(l.ToString()) : "<span class=\"none\">none in the register</span>", Small(c.Basis), Entry, Entry,
+                c.Limit is { } l ? H(l.ToString()) : "<span class=\"none\">none in the register</span>", Small(c.Basis), Entry, Entry, Entry, Tick,
             }), "worksheet");
 
         html.Append("<h3>Insulation resistance</h3>\n");
-        Table(html, ["Row", "Path", "Test voltage (DC)", "Minimum", "Reading after", "Basis", "Reading", "Temperature"],
+        Table(html, ["Row", "Path", "Test voltage (DC)", "Minimum", "Reading after", "Basis", "Time tested", "Reading", "Temperature", "Result"],
             sheet.Insulation.Select((p, i) => new string?[]
             {
                 H(DeviceWorksheet.RowLabel('I', i)), H(p.Path), p.TestVoltage is { } v ? H(v.ToString()) : "<span class=\"none\">from the maker</span>",
                 p.Minimum is { } m ? H(m.ToString()) : "<span class=\"none\">from the maker</span>", H(PlannedTrip.Duration(PlannedInsulation.Duration)),
-                Small(p.Basis), Entry, Entry,
+                Small(p.Basis), Entry, Entry, Entry, Tick,
             }), "worksheet");
 
         html.Append("<table class=\"signoff\"><tbody><tr><th>Tested by</th><td></td><th>Date</th><td></td></tr>")
+            .Append("<tr><th>Checked by</th><td></td><th>Date</th><td></td></tr>")
             .Append("<tr><th>Instruments (ID)</th><td></td><th>Ambient</th><td></td></tr></tbody></table>\n</section>\n");
         return html.ToString();
     }
@@ -62,11 +64,16 @@ internal static class WorksheetSection
     // A box to write a result in.
     private const string? Entry = null;
 
+    // Ticked by hand beside the window: the result as the technician reads it at the bench.
+    private const string Tick = "<span class=\"tick\">\u2610 pass \u2610 fail</span>";
+
     private static string?[] Trip(DeviceWorksheet sheet, PlannedTrip t, int index)
     {
         var start = t.Conditions.Start == StartCondition.Warm
             ? t.StraightAfterPrevious ? $"warm: straight after {DeviceWorksheet.RowLabel('T', index - 1)}, no cooling" : "warm"
-            : "cold (device at ambient)";
+            : Heats(sheet.Trips, index - 1)
+                ? $"cold: rest {LabPolicy.ColdRest.TotalMinutes:0} min after {DeviceWorksheet.RowLabel('T', index - 1)} ends (lab policy)"
+                : "cold (device at ambient)";
         var poles = t.Conditions.Loading == PoleLoading.OnePole ? "one pole only (pole 1)" : sheet.Device.Poles == 1 ? "the pole" : "all poles in series";
 
         // A drawn curve says nothing useful about a no-trip test, so its advisory is shown only where a trip is expected.
@@ -74,8 +81,22 @@ internal static class WorksheetSection
         return
         [
             H(DeviceWorksheet.RowLabel('T', index)), H(t.Label),
-            H($"{t.Current} ({t.Multiple.Value:0.###} {sheet.Envelope.ReferenceName})"), H(start), H(poles), passes, Small(t.Basis), Entry, Entry,
+            H($"{t.Current} ({t.Multiple.Value:0.###} {sheet.Envelope.ReferenceName})"), H(start), H(poles), passes, Small(t.Basis), Entry, Entry, Entry, Tick,
         ];
+    }
+
+    // The test before may carry current long enough to warm a thermal release: a hold, a warm start, or a window reaching
+    // past the policy's heating time (the same rule the check applies to a test marked cold).
+    private static bool Heats(IReadOnlyList<PlannedTrip> trips, int index)
+    {
+        if (index < 0)
+        {
+            return false;
+        }
+
+        var t = trips[index];
+        return t.HoldFor is not null || t.Conditions.Start == StartCondition.Warm
+            || t.Window.Maximum.Limit is not { } max || max.Value >= LabPolicy.HeatingTestSeconds;
     }
 
     private static string Small(string text) => $"<span class=\"small\">{H(text)}</span>";
