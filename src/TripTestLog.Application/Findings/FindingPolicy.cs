@@ -77,12 +77,16 @@ public sealed record FindingPolicy
     /// <summary>Whether a test made with an instrument missing from the register is a finding (default: no).</summary>
     public bool RequireRegisteredInstruments { get; init; }
 
-    /// <summary>Months from the latest as-found test to the next, by grade (lab policy).</summary>
+    /// <summary>Months from the latest as-found test to the next, by grade (lab policy); for <see cref="ConditionGrade.Untested"/>, from commissioning.</summary>
     public IReadOnlyDictionary<ConditionGrade, int> DueMonths { get; init; } = new Dictionary<ConditionGrade, int>
     {
         [ConditionGrade.Sound] = 36,
         [ConditionGrade.Watch] = 24,
         [ConditionGrade.PlanWork] = 12,
+
+        // A device never tested is due this many months after its commissioning: an as-found (acceptance) test at
+        // commissioning is common practice, no source.
+        [ConditionGrade.Untested] = 0,
         [ConditionGrade.Repair] = 3,
         [ConditionGrade.TakeOutOfService] = 0,
     };

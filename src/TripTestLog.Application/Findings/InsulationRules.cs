@@ -56,7 +56,8 @@ internal static class InsulationRules
     }
 
     /// <summary>insulation-falling: a Theil–Sen line through a path's log readings falls faster than the policy allows, clearly beyond their scatter.</summary>
-    public static void Falling(DeviceHistory history, IReadOnlyList<StoredMeasurement<InsulationMeasurement>> readings, FindingLedger ledger, FindingPolicy policy)
+    public static void Falling(DeviceHistory history, IReadOnlyList<StoredMeasurement<InsulationMeasurement>> readings, FindingLedger ledger, FindingPolicy policy,
+        DateOnly asOf)
     {
         foreach (var path in readings.Select(Result).Where(r => r.Stage == TestStage.AsFound).GroupBy(r => r.Path))
         {
@@ -88,7 +89,11 @@ internal static class InsulationRules
             ledger.Add(new Finding(FindingKind.InsulationFalling, Severity.Plan, last.Tag, last.At,
                 $"Theil–Sen trend (Sen 1968) of {line.Count} as-found readings referred to 20 °C (halving per 10 K rule)",
                 Invariant($"path {last.Path} falls about {fall:0}% a year ({list[0].Corrected:0.#} to {last.Corrected:0.#} MOhm at 20 °C since {list[0].At.Date:yyyy-MM-dd})")
-                    + (forecast is { } on ? Invariant($" and would reach the minimum of {row!.Minimum.Value:0.##} MOhm about {on:yyyy-MM-dd}") : "")
+                    + (forecast is { } on
+                        ? on < asOf
+                            ? Invariant($" and has probably fallen below the minimum of {row!.Minimum.Value:0.##} MOhm since about {on:yyyy-MM-dd} (judged on {asOf:yyyy-MM-dd}): test it now")
+                            : Invariant($" and would reach the minimum of {row!.Minimum.Value:0.##} MOhm about {on:yyyy-MM-dd}")
+                        : "")
                     + "; look for moisture, contamination or tracking",
                 [.. list.Select(r => r.Source)])
             {

@@ -58,7 +58,8 @@ public static class PolicyFile
             p => p.RequireRegisteredInstruments ? "yes" : "no",
             (p, v) => v switch { "yes" => p with { RequireRegisteredInstruments = true }, "no" => p with { RequireRegisteredInstruments = false }, _ => null }),
         .. Enum.GetValues<ConditionGrade>().Select(g => Whole($"due_months.{TextCodes.Grade.Of(g)}",
-            $"months from the latest as-found test to the next, grade {TextCodes.Grade.Of(g)}",
+            g == ConditionGrade.Untested ? "months from commissioning to the first as-found test of a device never tested"
+                : $"months from the latest as-found test to the next, grade {TextCodes.Grade.Of(g)}",
             p => p.DueMonths[g], (p, v) => p with { DueMonths = new Dictionary<ConditionGrade, int>(p.DueMonths) { [g] = v } }, 0, 240)),
     ];
 

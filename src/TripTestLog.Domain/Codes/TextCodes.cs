@@ -73,7 +73,7 @@ public static class TextCodes
     /// <summary>Condition grades, best first.</summary>
     public static CodeBook<ConditionGrade> Grade { get; } = new("condition grade",
         (ConditionGrade.Sound, "sound"), (ConditionGrade.Watch, "watch"), (ConditionGrade.PlanWork, "plan-work"),
-        (ConditionGrade.Repair, "repair"), (ConditionGrade.TakeOutOfService, "take-out-of-service"));
+        (ConditionGrade.Untested, "untested"), (ConditionGrade.Repair, "repair"), (ConditionGrade.TakeOutOfService, "take-out-of-service"));
 
     /// <summary>Insulation minimum tables a lab may choose.</summary>
     public static CodeBook<InsulationTable> InsulationTable { get; } = new("insulation table",
