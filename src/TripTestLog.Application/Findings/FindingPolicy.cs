@@ -77,6 +77,12 @@ public sealed record FindingPolicy
     /// <summary>Whether a test made with an instrument missing from the register is a finding (default: no).</summary>
     public bool RequireRegisteredInstruments { get; init; }
 
+    /// <summary>Which models fail: no failure rate or rise is given for a group of fewer devices (lab policy: 5).</summary>
+    public int FleetMinimumDevices { get; init; } = 5;
+
+    /// <summary>Which models fail: the as-found tests counted lie within this many years before the day judged (lab policy: 5).</summary>
+    public double FleetWindowYears { get; init; } = 5;
+
     /// <summary>Months from the latest as-found test to the next, by grade (lab policy); for <see cref="ConditionGrade.Untested"/>, from commissioning.</summary>
     public IReadOnlyDictionary<ConditionGrade, int> DueMonths { get; init; } = new Dictionary<ConditionGrade, int>
     {

@@ -28,6 +28,7 @@ internal static class InsulationRules
                 continue;
             }
 
+            Voltage(r, row, device, ledger, policy);
             var subject = "insulation|" + r.Path;
             if (!r.OverRange && r.Corrected < row.Minimum.Value)
             {
@@ -52,6 +53,34 @@ internal static class InsulationRules
             {
                 ledger.Confirm(subject, r.At, $"reading of path {r.Path} above the minimum");
             }
+        }
+    }
+
+    // insulation-test-voltage: a reading at a lower voltage than the table's says little about the insulation at the
+    // voltage the table's minimum assumes, whatever it reads: retest at the table's voltage. A later as-found test of the
+    // path at that voltage closes it.
+    private static void Voltage(PathResult r, InsulationMinimum row, Device device, FindingLedger ledger, FindingPolicy policy)
+    {
+        var subject = "voltage|" + r.Path;
+        if (r.TestVoltage < row.TestVoltage.Value)
+        {
+            ledger.Raise(subject, new Finding(FindingKind.InsulationTestVoltage, Severity.Investigate, r.Tag, r.At, row.Source,
+                Invariant($"{(r.Stage == TestStage.AsLeft ? "as-left: " : "")}path {r.Path} was tested at {r.TestVoltage:0} V DC; the table asks {row.TestVoltage.Value:0} V DC for a {device.RatedVoltage.Value:0} V breaker, so its reading ({Describe(r)}) does not show the insulation sound at that voltage; retest at {row.TestVoltage.Value:0} V DC"),
+                [r.Source])
+            {
+                Path = r.Path,
+                Value = new Reading(r.TestVoltage, ReadingUnit.Volts),
+                Limit = new Reading(row.TestVoltage.Value, ReadingUnit.Volts),
+                Policy = PolicyFile.Setting(policy, "insulation_table"),
+            });
+        }
+        else if (r.Stage == TestStage.AsFound)
+        {
+            ledger.Clear(subject, r.At, $"test of path {r.Path} at {r.TestVoltage:0} V DC");
+        }
+        else
+        {
+            ledger.Confirm(subject, r.At, $"test of path {r.Path} at {r.TestVoltage:0} V DC");
         }
     }
 

@@ -57,6 +57,10 @@ public static class PolicyFile
         new("require_registered_instruments", "instrument-unregistered: yes or no",
             p => p.RequireRegisteredInstruments ? "yes" : "no",
             (p, v) => v switch { "yes" => p with { RequireRegisteredInstruments = true }, "no" => p with { RequireRegisteredInstruments = false }, _ => null }),
+        Whole("fleet_min_devices", "which models fail: no figure for fewer devices than this (lab policy)",
+            p => p.FleetMinimumDevices, (p, v) => p with { FleetMinimumDevices = v }, 1, 100000),
+        Number("fleet_window_years", "which models fail: the window of as-found tests counted, years back from the day judged",
+            p => p.FleetWindowYears, (p, v) => p with { FleetWindowYears = v }, 0.5, 50),
         .. Enum.GetValues<ConditionGrade>().Select(g => Whole($"due_months.{TextCodes.Grade.Of(g)}",
             g == ConditionGrade.Untested ? "months from commissioning to the first as-found test of a device never tested"
                 : $"months from the latest as-found test to the next, grade {TextCodes.Grade.Of(g)}",

@@ -10,7 +10,7 @@ namespace TripTestLog.Cli.Output;
 /// <summary>`fleet --json`: one object with the counts by site and grade and the priority list; fields in the README.</summary>
 internal static class FleetJson
 {
-    public static void Write(TextWriter writer, FleetSummary fleet, string asOf, string policyFrom)
+    public static void Write(TextWriter writer, FleetSummary fleet, string asOf, string policyFrom, FleetModels? models = null)
     {
         using var stream = new MemoryStream();
         using (var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping }))
@@ -61,10 +61,33 @@ internal static class FleetJson
                 }
 
                 json.WriteEndArray();
+                if (DeviceCondition.MarginOf(device.WorstOpen!) is { } margin && device.WorstOpen!.Kind != FindingKind.TestOverdue)
+                {
+                    json.WriteNumber("margin_percent", Math.Round(margin * 100, 2));
+                }
+                else
+                {
+                    json.WriteNull("margin_percent");
+                }
+
+                if (PriorityLine.CauseOf(device) is { } cause && fleet.Lines.Any(l => l.Cause is not null && l.Devices.Contains(device)))
+                {
+                    json.WriteString("shared_cause", fleet.Lines.First(l => l.Devices.Contains(device)).Cause);
+                }
+                else
+                {
+                    json.WriteNull("shared_cause");
+                }
+
                 json.WriteEndObject();
             }
 
             json.WriteEndArray();
+            if (models is not null)
+            {
+                FleetModelsOutput.WriteJson(json, models);
+            }
+
             json.WriteEndObject();
         }
 

@@ -47,4 +47,7 @@ public enum FindingKind
 
     /// <summary>No as-found test since the device's due date.</summary>
     TestOverdue,
+
+    /// <summary>An insulation test made at a lower DC voltage than the policy's table asks for the breaker's rated voltage.</summary>
+    InsulationTestVoltage,
 }

@@ -64,7 +64,8 @@ public static class TextCodes
         (Codes.FindingKind.CalibrationLapsed, "calibration-lapsed"),
         (Codes.FindingKind.InstrumentUnregistered, "instrument-unregistered"),
         (Codes.FindingKind.SettingsDiffer, "settings-differ"),
-        (Codes.FindingKind.TestOverdue, "test-overdue"));
+        (Codes.FindingKind.TestOverdue, "test-overdue"),
+        (Codes.FindingKind.InsulationTestVoltage, "insulation-test-voltage"));
 
     /// <summary>Finding severities, in rising order.</summary>
     public static CodeBook<Severity> Severity { get; } = new("severity",

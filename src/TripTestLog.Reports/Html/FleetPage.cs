@@ -31,11 +31,11 @@ internal static class FleetPage
                 .Append(["all sites", N(devices), .. grades.Select(g => N(sites.Values.Sum(s => s.ByGrade[(int)g]))), N(sites.Values.Sum(s => s.Overdue))]));
         var totals = grades.Select(g => sites.Values.Sum(s => s.ByGrade[(int)g])).ToList();
         html.Append("<figure>").Append(ChartStyle.Svg(GradeChart.Build(totals), 640, 300)).Append("<figcaption>")
-            .Append(H("Grades: sound, nothing open; watch, look into it; plan-work, a trend or change needs work; repair, over a limit or out of "
+            .Append(H("Grades: sound, nothing open; watch, look into it; plan-work, a trend or change needs work; untested, no as-found test on record; repair, over a limit or out of "
                 + "band; take-out-of-service, may not protect its circuit until repaired and retested."))
             .Append("</figcaption></figure>\n");
 
-        html.Append("<h2>Act first</h2>\n<p class=\"sub\">Worst grade first, then the soonest forecast, then overdue.</p>\n");
+        html.Append("<h2>Act first</h2>\n<p class=\"sub\">Worst grade first; within a grade, furthest past its limit (as a fraction of the limit); then the soonest date, a forecast or the due date.</p>\n");
         Table(html, ["#", "device", "site", "grade", "next test due", "why it is here"], fleet.Summary.Priority.Select((d, i) => new[]
         {
             N(i + 1), Link(d, pageOf), H(d.Device.Site), $"<span class=\"grade\">{H(TextCodes.Grade.Of(d.Grade))}</span>",
@@ -74,6 +74,7 @@ internal static class FleetPage
         {
             H(l.Key), N(l.Value.Records), N(l.Value.Devices), H(l.Value.Reason),
         }));
+        FleetModelsSection.Write(html, fleet.Models);
         Layout.End(html, context.Footer);
         return html.ToString();
     }
@@ -82,7 +83,7 @@ internal static class FleetPage
     private static string Why(DeviceCondition device)
     {
         var more = device.Open.Count() - 1;
-        return device.WorstOpen is { } worst ? worst.Message + (more > 0 ? $" (and {more} more)" : "") : "";
+        return device.WorstOpen is { } worst ? worst.Message + (more switch { 0 => "", 1 => " (and 1 more finding)", _ => $" (and {more} more findings)" }) : "";
     }
 
     private static string Link(DeviceCondition device, Func<string, string?> pageOf) =>
