@@ -31,12 +31,12 @@ internal static class DepotFleet
         {
             var commissioned = new DateOnly(2018, 4, 2 + i);
             yield return string.Join(',', Tag(i), Site, $"Board DB1 way {i}", "iec60898", "C", "16", "1", "230", Iso(commissioned),
-                F(ContactLimit, "0"), "Halbrook", "HA1-C16", $"H18{random.Next(100000, 999999)}") + emptyTail;
+                F(ContactLimit, "0"), "Halbrook", "HA1", $"H18{random.Next(100000, 999999)}") + emptyTail;
         }
 
         // Q11 was fitted in 2025 and has never been tested (untested, due since commissioning).
         yield return string.Join(',', Tag(11), Site, "Board DB1 way 11", "iec60898", "C", "16", "1", "230", "2025-06-02",
-            F(ContactLimit, "0"), "Halbrook", "HA1-C16", "H18400211") + emptyTail;
+            F(ContactLimit, "0"), "Halbrook", "HA1", "H18400211") + emptyTail;
     }
 
     private const double Typical = 90_000 / Rated;

@@ -99,7 +99,9 @@ internal static class SampleFleet
             var make = Makes[d.Site];
             var commissioned = new DateOnly(2012 + random.Next(8), 1 + random.Next(12), 1 + random.Next(28));
             var voltage = d.Poles == 1 ? 230 : 400;
-            var model = $"{make[..2].ToUpperInvariant()}{d.Poles}-{d.Curve}{d.Rated:0}";
+            // The model names the maker's range by pole count; curve and rating have columns of their own, so a range's
+            // breakers group together when the fleet is read by make and model.
+            var model = $"{make[..2].ToUpperInvariant()}{d.Poles}";
             var serial = $"{make[0]}{commissioned.Year % 100:00}{random.Next(100000, 999999)}";
             Row(sb, d.Tag, SiteNames[d.Site], d.Location, "iec60898", d.Curve.ToString(), F(d.Rated, "0"), d.Poles.ToString(CultureInfo.InvariantCulture),
                 F(voltage, "0"), commissioned.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture), F(ContactLimit(d), "0"), make, model, serial + IndustrialFleet.EmptyTail);

@@ -15,7 +15,7 @@ internal static class FleetText
         Wrapped.Write(writer, $"Fleet condition as of {asOf} (policy: {policyFrom})", 0);
         writer.WriteLine();
         // Headers are the grade codes themselves; the site column gives up width to keep the table within 100 columns.
-        var counts = new TextTable(["site", "devices>", .. Grades.Select(g => TextCodes.Grade.Of(g) + ">"), "overdue>"]);
+        var counts = new TextTable(["site", "devices>", .. Grades.Select(g => Head(TextCodes.Grade.Of(g)) + ">"), "overdue>"]);
         foreach (var (site, c) in fleet.Sites)
         {
             counts.Add([site, N(c.Devices), .. c.ByGrade.Select(N), N(c.Overdue)]);
@@ -93,12 +93,20 @@ internal static class FleetText
         }
 
         var more = device.Open.Count() - 1;
+        if (device.Grade == ConditionGrade.Untested && worst.Kind == FindingKind.TestOverdue)
+        {
+            return $"never tested; due since {device.DueOn:yyyy-MM-dd}" + (more switch { 0 => "", 1 => " (and 1 more finding)", _ => $" (and {more} more findings)" });
+        }
+
         var subject = worst.Concerns.Length == 0 ? "" : " " + worst.Concerns;
         var forecast = worst.ForecastOn is { } on ? $" by {on:yyyy-MM}" : "";
-        var margin = DeviceCondition.MarginOf(worst) is { } m ? string.Create(CultureInfo.InvariantCulture, $", {m * 100:0.#} % past its limit") : "";
+        var margin = DeviceCondition.MarginOf(worst) is { } m && m >= 0.0005 ? string.Create(CultureInfo.InvariantCulture, $", {m * 100:0.#} % past its limit") : "";
         return $"{TextCodes.FindingKind.Of(worst.Kind)}{subject}{forecast}{margin}"
             + (more switch { 0 => "", 1 => " (and 1 more finding)", _ => $" (and {more} more findings)" });
     }
+
+    // The longest grade word is broken after its second hyphen over two header lines, so the table keeps 100 columns.
+    private static string Head(string grade) => grade == "take-out-of-service" ? "take-out-\nof-service" : grade;
 
     private static string N(int n) => n.ToString(CultureInfo.InvariantCulture);
 }
