@@ -35,6 +35,8 @@ internal static class FleetJson
 
             json.WriteEndArray();
             json.WriteStartArray("priority");
+            var shared = fleet.Lines.Where(l => l.Cause is not null).SelectMany(l => l.Devices.Select(d => (d, l.Cause!)))
+                .ToDictionary(x => x.d, x => x.Item2, ReferenceEqualityComparer.Instance);
             foreach (var (device, rank) in fleet.Priority.Select((d, i) => (d, i + 1)))
             {
                 json.WriteStartObject();
@@ -61,7 +63,7 @@ internal static class FleetJson
                 }
 
                 json.WriteEndArray();
-                if (DeviceCondition.MarginOf(device.WorstOpen!) is { } margin && device.WorstOpen!.Kind != FindingKind.TestOverdue)
+                if (device.WorstOpen is { } worst && worst.Kind != FindingKind.TestOverdue && DeviceCondition.MarginOf(worst) is { } margin)
                 {
                     json.WriteNumber("margin_percent", Math.Round(margin * 100, 2));
                 }
@@ -70,9 +72,9 @@ internal static class FleetJson
                     json.WriteNull("margin_percent");
                 }
 
-                if (PriorityLine.CauseOf(device) is { } cause && fleet.Lines.Any(l => l.Cause is not null && l.Devices.Contains(device)))
+                if (shared.TryGetValue(device, out var cause))
                 {
-                    json.WriteString("shared_cause", fleet.Lines.First(l => l.Devices.Contains(device)).Cause);
+                    json.WriteString("shared_cause", cause);
                 }
                 else
                 {
