@@ -14,7 +14,7 @@ public sealed class ReportWriter
     private readonly string _folder;
     private readonly ReportContext _context;
     private readonly bool _devicePages;
-    private readonly FleetReport _fleet = new(30);
+    private readonly FleetReport _fleet;
     private int _pages;
 
     /// <summary>Starts a report in <paramref name="folder"/> (created if missing); <paramref name="devicePages"/> writes a page per device.</summary>
@@ -23,6 +23,7 @@ public sealed class ReportWriter
         _folder = folder;
         _context = context;
         _devicePages = devicePages;
+        _fleet = new FleetReport(30) { Models = new FleetModels(context.Policy, context.AsOf) };
         Directory.CreateDirectory(Path.Combine(folder, "devices"));
     }
 

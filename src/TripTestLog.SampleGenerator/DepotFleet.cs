@@ -7,8 +7,9 @@ namespace TripTestLog.SampleGenerator;
 /// A third invented site, Copperwell Depot: one board of ten alike C16 single-pole breakers, so each has enough peers,
 /// tested each May from 2021. Most are healthy; Q04 trips far slower than its peers (yet within its band), Q06's contact
 /// resistance climbs towards its limit, Q07 has one path whose insulation has failed, Q08 has one path whose insulation
-/// halves each year, Q09 left the test programme after 2022, and Q10 was last tested with a borrowed set that is not in
-/// the instrument register. It draws from its own seed, so the other sites' records do not change.
+/// halves each year, Q09 left the test programme after 2022, Q10 was last tested with a borrowed set that is not in
+/// the instrument register, and Q11, fitted in 2025, has never been tested. It draws from its own seed, so the other
+/// sites' records do not change.
 /// </summary>
 internal static class DepotFleet
 {
@@ -30,8 +31,12 @@ internal static class DepotFleet
         {
             var commissioned = new DateOnly(2018, 4, 2 + i);
             yield return string.Join(',', Tag(i), Site, $"Board DB1 way {i}", "iec60898", "C", "16", "1", "230", Iso(commissioned),
-                F(ContactLimit, "0"), "Halbrook", "HA1-C16", $"H18{random.Next(100000, 999999)}") + emptyTail;
+                F(ContactLimit, "0"), "Halbrook", "HA1", $"H18{random.Next(100000, 999999)}") + emptyTail;
         }
+
+        // Q11 was fitted in 2025 and has never been tested (untested, due since commissioning).
+        yield return string.Join(',', Tag(11), Site, "Board DB1 way 11", "iec60898", "C", "16", "1", "230", "2025-06-02",
+            F(ContactLimit, "0"), "Halbrook", "HA1", "H18400211") + emptyTail;
     }
 
     private const double Typical = 90_000 / Rated;

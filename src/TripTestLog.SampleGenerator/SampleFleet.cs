@@ -99,7 +99,9 @@ internal static class SampleFleet
             var make = Makes[d.Site];
             var commissioned = new DateOnly(2012 + random.Next(8), 1 + random.Next(12), 1 + random.Next(28));
             var voltage = d.Poles == 1 ? 230 : 400;
-            var model = $"{make[..2].ToUpperInvariant()}{d.Poles}-{d.Curve}{d.Rated:0}";
+            // The model names the maker's range by pole count; curve and rating have columns of their own, so a range's
+            // breakers group together when the fleet is read by make and model.
+            var model = $"{make[..2].ToUpperInvariant()}{d.Poles}";
             var serial = $"{make[0]}{commissioned.Year % 100:00}{random.Next(100000, 999999)}";
             Row(sb, d.Tag, SiteNames[d.Site], d.Location, "iec60898", d.Curve.ToString(), F(d.Rated, "0"), d.Poles.ToString(CultureInfo.InvariantCulture),
                 F(voltage, "0"), commissioned.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture), F(ContactLimit(d), "0"), make, model, serial + IndustrialFleet.EmptyTail);
@@ -224,7 +226,10 @@ internal static class SampleFleet
                 // Each path keeps its own level from year to year, within ±10 %: healthy insulation does not wander.
                 var r = PathLevel(d.Tag, path) * (1 + (random.NextDouble() - 0.5) * 0.2);
                 var text = r > 10000 ? ">10000" : F(r, "0");
-                Row(sb, d.Tag, Iso(date), "as-found", path, "500", text, F(16 + random.NextDouble() * 8, "0.0"), "60");
+                // The policy's table asks 1000 V DC for a 400 V breaker and 500 V DC up to 250 V; in its last year one 400 V
+                // breaker was tested at 500 V DC by mistake (insulation-test-voltage).
+                var volts = d.Poles == 1 ? "500" : d.Tag == "ARW-DB1-Q06" && year == Years - 1 ? "500" : "1000";
+                Row(sb, d.Tag, Iso(date), "as-found", path, volts, text, F(16 + random.NextDouble() * 8, "0.0"), "60");
             }
         }
 

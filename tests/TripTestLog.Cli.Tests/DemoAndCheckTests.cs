@@ -94,7 +94,7 @@ public sealed class DemoAndCheckTests : IDisposable
         Assert.Equal((0, 1, 0), (sound.Exit, changed.Exit, backup.Exit));
         Assert.Contains("The database is sound.", sound.Out);
         Assert.Contains("CHANGED since import", changed.Out);
-        Assert.Contains("57 devices", backup.Out);
+        Assert.Contains("58 devices", backup.Out);
         Assert.Equal(2, CliRun.Run("backup", Path.Combine(_folder, "copy.db"), "--db", db).Exit);
     }
 

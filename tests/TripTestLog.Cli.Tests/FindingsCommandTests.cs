@@ -24,6 +24,7 @@ public sealed class FindingsCommandTests(SampleFleetDatabase fleet) : IClassFixt
         { "instrument-unregistered", "CWD-DB1-Q10" },
         { "settings-differ", "ARW-MSB-Q01" },
         { "test-overdue", "CWD-DB1-Q09" },
+        { "insulation-test-voltage", "ARW-DB1-Q06" },
     };
 
     private (int Exit, string Out, string Error) Run(params string[] args) => CliRun.Run([.. args, "--db", fleet.Database]);
@@ -111,7 +112,55 @@ public sealed class FindingsCommandTests(SampleFleetDatabase fleet) : IClassFixt
 
         Assert.Equal(3, priority.Count);
         Assert.Equal(("BPS-DB1-Q03", "take-out-of-service"), (priority[0].GetProperty("asset_tag").GetString(), priority[0].GetProperty("grade").GetString()));
-        Assert.Equal(57, root.GetProperty("sites").EnumerateArray().Sum(s => s.GetProperty("devices").GetInt32()));
+        Assert.Equal(58, root.GetProperty("sites").EnumerateArray().Sum(s => s.GetProperty("devices").GetInt32()));
+    }
+
+    [Fact]
+    public void FleetJson_HasTheDocumentedPriorityAndModelFields()
+    {
+        var root = JsonDocument.Parse(Run("fleet", "--json").Out).RootElement;
+        var names = root.EnumerateObject().Select(p => p.Name)
+            .Concat(root.GetProperty("priority").EnumerateArray().First().EnumerateObject().Select(p => "priority." + p.Name))
+            .Concat(root.GetProperty("models").EnumerateObject().Select(p => "models." + p.Name))
+            .Concat(root.GetProperty("models").GetProperty("groups").EnumerateArray().First().EnumerateObject().Select(p => "models.groups." + p.Name));
+
+        Golden.Matches("fleet-json-fields.txt", string.Join("\n", names) + "\n");
+    }
+
+    [Fact]
+    public void TheSampleFleet_HasADeviceNeverTested_GradedUntested()
+    {
+        var (_, output, _) = Run("findings", "--json", "--asset", "CWD-DB1-Q11");
+        var overdue = Assert.Single(JsonDocument.Parse(output).RootElement.EnumerateArray());
+
+        Assert.Equal(("untested", "2025-06-02"), (overdue.GetProperty("grade").GetString(), overdue.GetProperty("due_on").GetString()));
+        Assert.StartsWith("never tested; due since 2025-06-02", overdue.GetProperty("message").GetString(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void OneLapsedInstrument_GivesOneLineNamingItsDevices()
+    {
+        // Copperwell's ohmmeter OHM-CWD-1 was out of calibration for the depot's 2026 contact tests: the devices whose
+        // worst finding that is share one line of the priority list.
+        var (_, output, _) = Run("fleet", "--top", "60");
+        var text = System.Text.RegularExpressions.Regex.Replace(output, @"\s+", " ");
+
+        Assert.Single(System.Text.RegularExpressions.Regex.Matches(text, @"one cause \(instrument OHM-CWD-1\)"));
+        Assert.Matches(@"one cause \(instrument OHM-CWD-1\) on \d+ devices: CWD-DB1-Q01, CWD-DB1-Q02, CWD-DB1-Q03", text);
+        Assert.DoesNotContain(" +1", text, StringComparison.Ordinal);
+        Assert.DoesNotContain(" +2", text, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void FleetCsv_GivesNoFigureBelowThePolicyMinimum()
+    {
+        var (exit, output, _) = Run("fleet", "--csv");
+        var rows = output.Trim().Split('\n').Skip(1).Select(r => r.Split(',')).ToList();
+
+        Assert.Equal(0, exit);
+        Assert.StartsWith("grouping,group,devices,tested,failed,failure_rate,wilson_low,wilson_high", output, StringComparison.Ordinal);
+        Assert.All(rows.Where(r => int.Parse(r[3], System.Globalization.CultureInfo.InvariantCulture) < 5), r => Assert.Equal("", r[5]));
+        Assert.Contains(rows, r => r[5].Length > 0);
     }
 
     [Fact]

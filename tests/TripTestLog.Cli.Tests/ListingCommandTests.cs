@@ -26,7 +26,7 @@ public sealed class ListingCommandTests(SampleFleetDatabase fleet) : IClassFixtu
 
         Assert.Equal(0, exit);
         var devices = JsonDocument.Parse(output).RootElement.EnumerateArray().ToList();
-        Assert.Equal(57, devices.Count);
+        Assert.Equal(58, devices.Count);
         var q01 = devices.Single(d => d.GetProperty("asset_tag").GetString() == "ARW-MSB-Q01");
         Assert.Equal(2, q01.GetProperty("register_entries").GetInt32());
         Assert.Equal("iec60947-electronic", q01.GetProperty("family").GetString());

@@ -14,7 +14,7 @@ public sealed class ReportCommandTests(SampleFleetDatabase fleet) : IClassFixtur
 
         Assert.Equal(0, exit);
         Assert.Contains($"Fleet page: {Path.Combine(folder, "index.html")}", output);
-        Assert.Equal(57, Directory.GetFiles(Path.Combine(folder, "devices"), "*.html").Length);
+        Assert.Equal(58, Directory.GetFiles(Path.Combine(folder, "devices"), "*.html").Length);
         var index = File.ReadAllText(Path.Combine(folder, "index.html"));
         Assert.Contains("href=\"devices/BPS-DB1-Q03.html\"", index);
         Assert.Contains("Caution:", index);

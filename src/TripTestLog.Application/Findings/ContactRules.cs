@@ -99,8 +99,10 @@ internal static class ContactRules
         }
 
         var subject = "spread|" + pole.Pole;
+        // Every pole of a test is usually referred to 20 °C by the same factor, so the ratio carries a rounding error
+        // (1500/1000 at 15 °C gives 50.000000000000014 %): compared at the stated precision (TripRules.Tolerance).
         var above = (pole.Corrected / lowest - 1) * 100;
-        if (above > policy.ContactSpreadPercent)
+        if (above > policy.ContactSpreadPercent + TripRules.Tolerance)
         {
             ledger.Raise(subject, Make(FindingKind.ContactPoleSpread, Severity.Investigate, pole.At, pole,
                 "ANSI/NETA maintenance testing specifications: investigate a pole more than 50 % above the lowest (a customary guide, not a failure)",
@@ -178,9 +180,12 @@ internal static class ContactRules
         });
     }
 
-    /// <summary>contact-trend-limit: a Theil–Sen line through a pole's readings since its last repair reaches the limit before <paramref name="due"/>.</summary>
+    /// <summary>
+    /// contact-trend-limit: a Theil–Sen line through a pole's readings since its last repair reaches the limit before
+    /// <paramref name="window"/> (the due date before any forecast); the text names <paramref name="due"/>, the device's one due date.
+    /// </summary>
     public static void TrendLimit(DeviceHistory history, IReadOnlyList<StoredMeasurement<ContactMeasurement>> readings, FindingLedger ledger,
-        FindingPolicy policy, DateOnly due)
+        FindingPolicy policy, DateOnly window, DateOnly due, DateOnly asOf)
     {
         if (history.Latest.ContactLimit is not { } limit)
         {
@@ -200,7 +205,7 @@ internal static class ContactRules
             }
 
             var line = TheilSen.Fit([.. found.Select(p => new TrendPoint(TrendPoint.YearOf(p.At.Date), p.Corrected))]);
-            var until = Math.Min(TrendPoint.YearOf(due), line?.LastYear + policy.ForecastHorizonYears ?? 0);
+            var until = Math.Min(TrendPoint.YearOf(window), line?.LastYear + policy.ForecastHorizonYears ?? 0);
             if (line is null || line.Slope <= 0 || line.Reaches(limit.Value) is not { } year || year > until)
             {
                 continue;
@@ -211,8 +216,8 @@ internal static class ContactRules
             var last = found[^1];
             ledger.Add(Make(FindingKind.ContactTrendLimit, uncertain ? Severity.Investigate : Severity.Plan, last.At, last,
                 $"Theil–Sen trend (Sen 1968) of {line.Count} as-found tests against the maker's limit",
-                Invariant($"pole {last.Pole} rises {line.Slope:0} uOhm a year and reaches the limit of {limit.Value:0} uOhm about {on:yyyy-MM-dd}, before the next test is due ({due:yyyy-MM-dd})")
-                    + (uncertain ? "; the readings scatter too much for the date to be trusted: retest sooner" : "; plan cleaning and re-torquing before then")) with
+                Forecast.Text(Invariant($"pole {last.Pole}'s readings rise {line.Slope:0} uOhm a year towards the limit of {limit.Value:0} uOhm"), "passed it", on, due, asOf,
+                    uncertain ? "the readings scatter too much for the date to be trusted: retest sooner" : "plan cleaning and re-torquing before then")) with
             {
                 Value = new Reading(last.Corrected, ReadingUnit.MicroOhms),
                 Limit = new Reading(limit.Value, ReadingUnit.MicroOhms),

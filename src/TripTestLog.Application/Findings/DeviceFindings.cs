@@ -25,41 +25,66 @@ internal static class DeviceFindings
         PeerRule.Apply(points, peers, ledger, policy);
         ContactRules.States(history, device.Contacts, ledger, policy, instruments);
         InsulationRules.States(history, device.Insulation, ledger, policy);
-        InsulationRules.Falling(history, device.Insulation, ledger, policy);
+        InsulationRules.Falling(history, device.Insulation, ledger, policy, asOf);
 
         var last = LastTested(device);
-        var first = GradeOf(ledger.All());
-        var due = DueOn(device, last, first, policy, asOf);
-        TripRules.TrendExit(points, ledger, policy, due);
-        ContactRules.TrendLimit(history, device.Contacts, ledger, policy, due);
+        var window = DueOn(device, last, GradeOf(ledger.All(), last), policy, asOf);
 
-        var grade = GradeOf(ledger.All());
-        due = DueOn(device, last, grade, policy, asOf);
-        if (due < asOf)
+        // Forecasts are judged against the due date before any forecast (they can only shorten it); their grade sets the
+        // device's one due date, which their text then names: a first pass finds them, the second writes them.
+        var trial = new FindingLedger();
+        TripRules.TrendExit(points, trial, policy, window, window, asOf);
+        ContactRules.TrendLimit(history, device.Contacts, trial, policy, window, window, asOf);
+        var grade = GradeOf([.. ledger.All(), .. trial.All()], last);
+        var due = DueOn(device, last, grade, policy, asOf);
+        if (Forecast.AnyPast([.. ledger.All(), .. trial.All()], asOf) && due > asOf)
         {
-            var months = policy.MonthsBetweenTests(history.Latest.Family, grade);
-            var at = last is { } l ? TestedAt.OnDate(l) : TestedAt.OnDate(due);
-            ledger.Add(new Finding(FindingKind.TestOverdue, Severity.Plan, history.Latest.Tag, at,
-                $"lab policy: an as-found test every {months} months for a {TextCodes.Family.Of(history.Latest.Family)} breaker graded {TextCodes.Grade.Of(grade)}",
-                last is not { } d ? "no as-found test on record: schedule one"
-                : months == 0 ? string.Create(CultureInfo.InvariantCulture, $"graded {TextCodes.Grade.Of(grade)} on its test of {d:yyyy-MM-dd}: repair it and test it again before it returns to service")
-                : string.Create(CultureInfo.InvariantCulture, $"no as-found test since {d:yyyy-MM-dd}; the next was due on {due:yyyy-MM-dd}, {asOf.DayNumber - due.DayNumber} days ago: schedule it"),
-                [])
-            {
-                Value = new Reading(asOf.DayNumber - due.DayNumber, ReadingUnit.Days),
-                Limit = new Reading(0, ReadingUnit.Days),
-                Policy = PolicyFile.Setting(policy, $"due_months.{TextCodes.Grade.Of(grade)}"),
-            });
+            due = asOf;
+        }
+
+        TripRules.TrendExit(points, ledger, policy, window, due, asOf);
+        ContactRules.TrendLimit(history, device.Contacts, ledger, policy, window, due, asOf);
+        if (due < asOf || (grade == ConditionGrade.Untested && due == asOf))
+        {
+            ledger.Add(Overdue(device, policy, grade, last, due, asOf));
         }
 
         return new DeviceCondition(history.Latest, grade, last, due, ledger.All());
     }
 
-    private static ConditionGrade GradeOf(IEnumerable<Finding> findings)
+    private static Finding Overdue(DeviceRecords device, FindingPolicy policy, ConditionGrade grade, DateOnly? last, DateOnly due, DateOnly asOf)
+    {
+        var latest = device.History.Latest;
+        var months = policy.MonthsBetweenTests(latest.Family, grade);
+        var at = last is { } l ? TestedAt.OnDate(l) : TestedAt.OnDate(due);
+        var days = asOf.DayNumber - due.DayNumber;
+        var basis = grade == ConditionGrade.Untested
+            ? $"lab policy: a first as-found test {months} months after commissioning for a {TextCodes.Family.Of(latest.Family)} breaker"
+            : $"lab policy: an as-found test every {months} months for a {TextCodes.Family.Of(latest.Family)} breaker graded {TextCodes.Grade.Of(grade)}";
+        var message = last is not { } d
+            ? latest.CommissionedOn is { } c
+                ? Invariant($"never tested; due since {due:yyyy-MM-dd}, {days} days ago (commissioned {c:yyyy-MM-dd}): schedule an as-found test")
+                : "never tested, and the register gives no commissioning date: due now; schedule an as-found test"
+            : months == 0 ? Invariant($"graded {TextCodes.Grade.Of(grade)} on its test of {d:yyyy-MM-dd}: repair it and test it again before it returns to service")
+            : Invariant($"no as-found test since {d:yyyy-MM-dd}; the next was due on {due:yyyy-MM-dd}, {days} days ago: schedule it");
+        return new Finding(FindingKind.TestOverdue, Severity.Plan, latest.Tag, at, basis, message, [])
+        {
+            Value = new Reading(days, ReadingUnit.Days),
+            Limit = new Reading(0, ReadingUnit.Days),
+            Policy = PolicyFile.Setting(policy, $"due_months.{TextCodes.Grade.Of(grade)}"),
+        };
+    }
+
+    /// <summary>
+    /// The grade from the worst open finding (an overdue test aside); a device with no as-found test of any kind and
+    /// nothing worse open is <see cref="ConditionGrade.Untested"/>, not sound.
+    /// </summary>
+    private static ConditionGrade GradeOf(IEnumerable<Finding> findings, DateOnly? lastTested)
     {
         var worst = findings.Where(f => f.Open && f.Kind != FindingKind.TestOverdue).Select(f => (Severity?)f.Severity).Max();
         return worst switch
         {
+            null or Severity.Investigate or Severity.Plan when lastTested is null => ConditionGrade.Untested,
             null => ConditionGrade.Sound,
             Severity.Investigate => ConditionGrade.Watch,
             Severity.Plan => ConditionGrade.PlanWork,
@@ -68,12 +93,15 @@ internal static class DeviceFindings
         };
     }
 
+    // A device never tested and with no commissioning date is due on the day judged.
     private static DateOnly DueOn(DeviceRecords device, DateOnly? last, ConditionGrade grade, FindingPolicy policy, DateOnly asOf)
     {
         var months = policy.MonthsBetweenTests(device.History.Latest.Family, grade);
         var from = last ?? device.History.Latest.CommissionedOn;
-        return from is { } d ? d.AddMonths(months) : asOf.AddDays(-1);
+        return from is { } d ? d.AddMonths(months) : asOf;
     }
+
+    private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 
     private static DateOnly? LastTested(DeviceRecords device)
     {

@@ -45,9 +45,14 @@ internal sealed class FindingLedger
     {
         if (_open.TryGetValue(subject, out var open) && open.TestedAt.CompareTo(at) <= 0)
         {
+            // The finding's own action ("clean and re-torque") is done: its words keep what was found and say what stands now.
+            var cut = open.Message.LastIndexOf("; ", StringComparison.Ordinal);
+            var found = cut < 0 ? open.Message : open.Message[..cut];
             _open[subject] = open with
             {
                 Severity = Severity.Investigate,
+                Message = open.Standing is not null ? open.Message : $"found on {open.TestedAt.Date:yyyy-MM-dd}: {found}; repaired: the as-left {what} on {at.Date:yyyy-MM-dd} is good; "
+                    + "confirm it at the next as-found test",
                 Standing = $"as-left {what} on {at.Date:yyyy-MM-dd} confirms the repair; the next as-found test closes it",
             };
         }

@@ -90,12 +90,22 @@ public sealed record FindingPolicy
     /// </summary>
     public double StoreWaitMinutes { get; init; } = 10;
 
-    /// <summary>Months from the latest as-found test to the next, by grade (lab policy).</summary>
+    /// <summary>Which models fail: no failure rate or rise is given for a group of fewer devices (lab policy: 5).</summary>
+    public int FleetMinimumDevices { get; init; } = 5;
+
+    /// <summary>Which models fail: the as-found tests counted lie within this many years before the day judged (lab policy: 5).</summary>
+    public double FleetWindowYears { get; init; } = 5;
+
+    /// <summary>Months from the latest as-found test to the next, by grade (lab policy); for <see cref="ConditionGrade.Untested"/>, from commissioning.</summary>
     public IReadOnlyDictionary<ConditionGrade, int> DueMonths { get; init; } = new Dictionary<ConditionGrade, int>
     {
         [ConditionGrade.Sound] = 36,
         [ConditionGrade.Watch] = 24,
         [ConditionGrade.PlanWork] = 12,
+
+        // A device never tested is due this many months after its commissioning: an as-found (acceptance) test at
+        // commissioning is common practice, no source.
+        [ConditionGrade.Untested] = 0,
         [ConditionGrade.Repair] = 3,
         [ConditionGrade.TakeOutOfService] = 0,
     };

@@ -31,6 +31,9 @@ public sealed class FleetReport(int top)
         public int Devices { get; set; }
     }
 
+    /// <summary>Which models fail; null when not asked for.</summary>
+    public FleetModels? Models { get; init; }
+
     /// <summary>Counts by site and grade, and the priority list.</summary>
     public FleetSummary Summary { get; } = new(top);
 
@@ -55,6 +58,7 @@ public sealed class FleetReport(int top)
         ArgumentNullException.ThrowIfNull(report);
         var device = report.Condition;
         Summary.Add(device);
+        Models?.Add(report);
         foreach (var trip in report.Trips)
         {
             var key = (trip.Device.Family, trip.Device.RatedCurrent.Value);

@@ -30,6 +30,12 @@ public sealed class FleetSummary(int size)
     /// <summary>The devices that need attention, most urgent first, at most the size asked for.</summary>
     public IReadOnlyList<DeviceCondition> Priority => [.. _top];
 
+    /// <summary>
+    /// The priority list as lines to read: devices whose worst finding has one cause (one instrument used while
+    /// untraceable) share one line, at the place of the first of them.
+    /// </summary>
+    public IReadOnlyList<PriorityLine> Lines => PriorityLine.Group(Priority);
+
     /// <summary>Counts one device and keeps it if it ranks among the top.</summary>
     public void Add(DeviceCondition device)
     {
@@ -55,8 +61,8 @@ public sealed class FleetSummary(int size)
 }
 
 /// <summary>
-/// The asset manager's order: worst grade first, then the soonest forecast exit or limit, then overdue before not,
-/// then the earliest due date, then asset tag so the order is total.
+/// The asset manager's order: worst grade first; within a grade, the furthest past its limit (a margin as a fraction of
+/// the limit, none last); then the soonest date (a forecast or the due date); then asset tag so the order is total.
 /// </summary>
 public sealed class PriorityOrder : IComparer<DeviceCondition>
 {
@@ -82,15 +88,13 @@ public sealed class PriorityOrder : IComparer<DeviceCondition>
             return c;
         }
 
-        c = (x.SoonestForecast ?? DateOnly.MaxValue).CompareTo(y.SoonestForecast ?? DateOnly.MaxValue);
+        c = (y.Margin ?? -1).CompareTo(x.Margin ?? -1);
         if (c != 0)
         {
             return c;
         }
 
-        c = y.Overdue.CompareTo(x.Overdue);
-        return c != 0 ? c
-            : x.DueOn.CompareTo(y.DueOn) is var d && d != 0 ? d
-            : string.CompareOrdinal(x.Device.Tag.Value, y.Device.Tag.Value);
+        c = x.SoonestDate.CompareTo(y.SoonestDate);
+        return c != 0 ? c : string.CompareOrdinal(x.Device.Tag.Value, y.Device.Tag.Value);
     }
 }

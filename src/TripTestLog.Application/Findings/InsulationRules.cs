@@ -28,6 +28,7 @@ internal static class InsulationRules
                 continue;
             }
 
+            Voltage(r, row, device, ledger, policy);
             var subject = "insulation|" + r.Path;
             if (!r.OverRange && r.Corrected < row.Minimum.Value)
             {
@@ -55,8 +56,37 @@ internal static class InsulationRules
         }
     }
 
+    // insulation-test-voltage: a reading at a lower voltage than the table's says little about the insulation at the
+    // voltage the table's minimum assumes, whatever it reads: retest at the table's voltage. A later as-found test of the
+    // path at that voltage closes it.
+    private static void Voltage(PathResult r, InsulationMinimum row, Device device, FindingLedger ledger, FindingPolicy policy)
+    {
+        var subject = "voltage|" + r.Path;
+        if (r.TestVoltage < row.TestVoltage.Value)
+        {
+            ledger.Raise(subject, new Finding(FindingKind.InsulationTestVoltage, Severity.Investigate, r.Tag, r.At, row.Source,
+                Invariant($"{(r.Stage == TestStage.AsLeft ? "as-left: " : "")}path {r.Path} was tested at {r.TestVoltage:0} V DC; the table asks {row.TestVoltage.Value:0} V DC for a {device.RatedVoltage.Value:0} V breaker, so its reading ({Describe(r)}) does not show the insulation sound at that voltage; retest at {row.TestVoltage.Value:0} V DC"),
+                [r.Source])
+            {
+                Path = r.Path,
+                Value = new Reading(r.TestVoltage, ReadingUnit.Volts),
+                Limit = new Reading(row.TestVoltage.Value, ReadingUnit.Volts),
+                Policy = PolicyFile.Setting(policy, "insulation_table"),
+            });
+        }
+        else if (r.Stage == TestStage.AsFound)
+        {
+            ledger.Clear(subject, r.At, $"test of path {r.Path} at {r.TestVoltage:0} V DC");
+        }
+        else
+        {
+            ledger.Confirm(subject, r.At, $"test of path {r.Path} at {r.TestVoltage:0} V DC");
+        }
+    }
+
     /// <summary>insulation-falling: a Theil–Sen line through a path's log readings falls faster than the policy allows, clearly beyond their scatter.</summary>
-    public static void Falling(DeviceHistory history, IReadOnlyList<StoredMeasurement<InsulationMeasurement>> readings, FindingLedger ledger, FindingPolicy policy)
+    public static void Falling(DeviceHistory history, IReadOnlyList<StoredMeasurement<InsulationMeasurement>> readings, FindingLedger ledger, FindingPolicy policy,
+        DateOnly asOf)
     {
         foreach (var path in readings.Select(Result).Where(r => r.Stage == TestStage.AsFound).GroupBy(r => r.Path))
         {
@@ -88,7 +118,11 @@ internal static class InsulationRules
             ledger.Add(new Finding(FindingKind.InsulationFalling, Severity.Plan, last.Tag, last.At,
                 $"Theil–Sen trend (Sen 1968) of {line.Count} as-found readings referred to 20 °C (halving per 10 K rule)",
                 Invariant($"path {last.Path} falls about {fall:0}% a year ({list[0].Corrected:0.#} to {last.Corrected:0.#} MOhm at 20 °C since {list[0].At.Date:yyyy-MM-dd})")
-                    + (forecast is { } on ? Invariant($" and would reach the minimum of {row!.Minimum.Value:0.##} MOhm about {on:yyyy-MM-dd}") : "")
+                    + (forecast is { } on
+                        ? on < asOf
+                            ? Invariant($" and has probably fallen below the minimum of {row!.Minimum.Value:0.##} MOhm since about {on:yyyy-MM-dd} (judged on {asOf:yyyy-MM-dd}): test it now")
+                            : Invariant($" and would reach the minimum of {row!.Minimum.Value:0.##} MOhm about {on:yyyy-MM-dd}")
+                        : "")
                     + "; look for moisture, contamination or tracking",
                 [.. list.Select(r => r.Source)])
             {

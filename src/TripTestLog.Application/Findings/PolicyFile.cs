@@ -61,8 +61,13 @@ public static class PolicyFile
             (p, v) => v switch { "yes" => p with { RequireRegisteredInstruments = true }, "no" => p with { RequireRegisteredInstruments = false }, _ => null }),
         Number("store_wait_minutes", "minutes a command waits for another process's write to the database before it gives up (lab policy)",
             p => p.StoreWaitMinutes, (p, v) => p with { StoreWaitMinutes = v }, 0.05, 1440),
+        Whole("fleet_min_devices", "which models fail: no figure for fewer devices than this (lab policy)",
+            p => p.FleetMinimumDevices, (p, v) => p with { FleetMinimumDevices = v }, 1, 100000),
+        Number("fleet_window_years", "which models fail: the window of as-found tests counted, years back from the day judged",
+            p => p.FleetWindowYears, (p, v) => p with { FleetWindowYears = v }, 0.5, 50),
         .. Enum.GetValues<ConditionGrade>().Select(g => Whole($"due_months.{TextCodes.Grade.Of(g)}",
-            $"months from the latest as-found test to the next, grade {TextCodes.Grade.Of(g)}",
+            g == ConditionGrade.Untested ? "months from commissioning to the first as-found test of a device never tested"
+                : $"months from the latest as-found test to the next, grade {TextCodes.Grade.Of(g)}",
             p => p.DueMonths[g], (p, v) => p with { DueMonths = new Dictionary<ConditionGrade, int>(p.DueMonths) { [g] = v } }, 0, 240)),
     ];
 

@@ -28,4 +28,7 @@ public enum ReadingUnit
 
     /// <summary>Days (suffix days).</summary>
     Days,
+
+    /// <summary>Volts (suffix v).</summary>
+    Volts,
 }

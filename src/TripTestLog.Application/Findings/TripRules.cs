@@ -129,11 +129,38 @@ internal static class TripRules
             .Where(x => x.Latest.Assessment.Margin.PositionInBand is not null)
             .Select(x => (x.Point, x.Latest, x.Latest.Assessment.Margin.PositionInBand!.Value));
 
-    /// <summary>trip-drift: the latest as-found time at each point against the first.</summary>
+    /// <summary>
+    /// The tests at one point since the settings last changed: a register revision (or settings found on the device)
+    /// that changes the protection settings moves the expected trip time, so it starts a new baseline and a new trend,
+    /// as a repair does for contact resistance.
+    /// </summary>
+    public static List<JudgedTrip> SinceSettingsChanged(List<JudgedTrip> tests)
+    {
+        var from = 0;
+        for (var i = 1; i < tests.Count; i++)
+        {
+            if (!Equals(tests[i].Device.Settings, tests[i - 1].Device.Settings))
+            {
+                from = i;
+            }
+        }
+
+        return from == 0 ? tests : tests[from..];
+    }
+
+    /// <summary>
+    /// trip-drift: the latest as-found time at each point against the first since the settings last changed. Judged
+    /// only where the band gives room to drift (both edges known, so a place in the band exists): an instantaneous
+    /// trip's few milliseconds under an open-ended band are no drift. Two tests, either of which fires: the slower of the
+    /// two times over the faster (a factor, the same either way on a log scale) against 1 + trip_drift_time_percent, and
+    /// the move of the place in the band against trip_drift_band_percent of the band. The finding carries, and its text
+    /// prints, the one that fired.
+    /// </summary>
     public static void Drift(IReadOnlyList<(TripPoint Point, List<JudgedTrip> Tests)> points, FindingLedger ledger, FindingPolicy policy)
     {
-        foreach (var (point, tests) in points)
+        foreach (var (point, all) in points)
         {
+            var tests = SinceSettingsChanged(all);
             var (first, last) = (tests[0], tests[^1]);
             if (last.Trip.Measurement.TestedAt.Date <= first.Trip.Measurement.TestedAt.Date)
             {
@@ -142,26 +169,33 @@ internal static class TripRules
 
             var (p0, p1) = (first.Assessment.Margin.PositionInBand, last.Assessment.Margin.PositionInBand);
             var drift = TripDrift.Between(first.Trip.Measurement.Outcome.Time, p0, last.Trip.Measurement.Outcome.Time, p1);
-            var byTime = Math.Abs(drift.Decades) >= Math.Log10(1 + policy.TripDriftTimePercent / 100);
-            var byBand = drift.PositionShift is { } shift && Math.Abs(shift) * 100 >= policy.TripDriftBandPercent;
+            if (drift.PositionShift is not { } shift)
+            {
+                continue;
+            }
+
+            // The rule compares a factor: 10^|decades| against 1 + limit/100, so a halving and a doubling weigh the same.
+            var factorPercent = 100 * (Math.Pow(10, Math.Abs(drift.Decades)) - 1);
+            var byTime = factorPercent >= policy.TripDriftTimePercent - Tolerance;
+            var byBand = Math.Abs(shift) * 100 >= policy.TripDriftBandPercent - Tolerance;
             if (!byTime && !byBand)
             {
                 continue;
             }
 
             var (t0, t1) = (first.Trip.Measurement.Outcome.Time, last.Trip.Measurement.Outcome.Time);
-            var place = drift.PositionShift is not null
-                ? Invariant($"; its place in the band moved from {p0!.Value * 100:0}% to {p1!.Value * 100:0}% (0% = earliest allowed, 100% = latest)")
-                : "";
+            var slower = drift.Decades >= 0 ? "slower" : "faster";
+            var compared = byTime
+                ? Invariant($"{slower} by a factor of {Math.Pow(10, Math.Abs(drift.Decades)):0.00} (the policy's limit: {1 + policy.TripDriftTimePercent / 100:0.00} either way on a log scale)")
+                : Invariant($"its place in the band moved {shift * 100:+0;-0} % of the band, from {p0!.Value * 100:0} % to {p1!.Value * 100:0} % (0 % = earliest allowed, 100 % = latest; the policy's limit: {policy.TripDriftBandPercent:0} %)");
             var m = last.Trip.Measurement;
-            ledger.Add(new Finding(FindingKind.TripDrift, Severity.Investigate, m.Tag, m.TestedAt, "lab policy: trip-time drift from the device's first as-found tests",
-                Invariant($"as-found trip time at {point.Label} moved from {t0} ({first.Trip.Measurement.TestedAt.Date:yyyy-MM-dd}) to {t1} ({m.TestedAt.Date:yyyy-MM-dd}), {drift.TimeChangePercent:+0;-0}%{place}; look for wear, dirt or a changed setting before it leaves the band"),
+            var restarted = tests.Count < all.Count ? Invariant($" (since the settings changed on {first.Trip.Measurement.TestedAt.Date:yyyy-MM-dd})") : "";
+            ledger.Add(new Finding(FindingKind.TripDrift, Severity.Investigate, m.Tag, m.TestedAt, "lab policy: trip-time drift from the device's first as-found tests at its present settings",
+                Invariant($"as-found trip time at {point.Label} moved from {t0} ({first.Trip.Measurement.TestedAt.Date:yyyy-MM-dd}) to {t1} ({m.TestedAt.Date:yyyy-MM-dd}){restarted}: {compared}; look for wear or dirt before it leaves the band"),
                 [Source(first), Source(last)])
             {
                 Point = point.Label,
-                Value = byTime || drift.PositionShift is null
-                    ? new Reading(drift.TimeChangePercent, ReadingUnit.Percent)
-                    : new Reading(drift.PositionShift!.Value * 100, ReadingUnit.Percent),
+                Value = byTime ? new Reading(factorPercent, ReadingUnit.Percent) : new Reading(shift * 100, ReadingUnit.Percent),
                 Limit = new Reading(byTime ? policy.TripDriftTimePercent : policy.TripDriftBandPercent, ReadingUnit.Percent),
                 Policy = byTime ? PolicyFile.Setting(policy, "trip_drift_time_percent") : PolicyFile.Setting(policy, "trip_drift_band_percent"),
                 FirstSeen = first.Trip.Measurement.TestedAt.Date,
@@ -169,11 +203,17 @@ internal static class TripRules
         }
     }
 
-    /// <summary>trip-trend-exit: a Theil–Sen line through log trip time reaches a guaranteed edge before <paramref name="due"/>.</summary>
-    public static void TrendExit(IReadOnlyList<(TripPoint Point, List<JudgedTrip> Tests)> points, FindingLedger ledger, FindingPolicy policy, DateOnly due)
+    /// <summary>
+    /// trip-trend-exit: a Theil–Sen line through log trip time since the settings last changed reaches a guaranteed edge
+    /// before <paramref name="window"/> (the due date before any forecast). The text names <paramref name="due"/>, the
+    /// device's one due date; a forecast date before <paramref name="asOf"/> says it has probably left the band already.
+    /// </summary>
+    public static void TrendExit(IReadOnlyList<(TripPoint Point, List<JudgedTrip> Tests)> points, FindingLedger ledger, FindingPolicy policy,
+        DateOnly window, DateOnly due, DateOnly asOf)
     {
-        foreach (var (point, tests) in points)
+        foreach (var (point, all) in points)
         {
+            var tests = SinceSettingsChanged(all);
             var last = tests[^1];
             var dates = tests.Select(t => t.Trip.Measurement.TestedAt.Date).Distinct().Count();
             if (dates < policy.TrendMinimumTests || last.Assessment.Verdict != Verdict.Pass)
@@ -195,7 +235,7 @@ internal static class TripRules
             }
 
             var exit = line.Reaches(Math.Log10(limit.Value));
-            var until = Math.Min(TrendPoint.YearOf(due), line.LastYear + policy.ForecastHorizonYears);
+            var until = Math.Min(TrendPoint.YearOf(window), line.LastYear + policy.ForecastHorizonYears);
             if (exit is not { } year || year > until)
             {
                 continue;
@@ -206,10 +246,11 @@ internal static class TripRules
             var on = TrendPoint.DateOf(year);
             var m = last.Trip.Measurement;
             var side = line.Slope > 0 ? "latest allowed time" : "earliest allowed time";
+            var stem = Invariant($"as-found trip times at {point.Label} trend towards the {side} ({limit})");
             ledger.Add(new Finding(FindingKind.TripTrendExit, uncertain ? Severity.Investigate : Severity.Plan, m.Tag, m.TestedAt,
                 $"Theil–Sen trend (Sen 1968) of {line.Count} as-found tests against {edge.Requirement}",
-                Invariant($"as-found trip times at {point.Label} trend towards the {side} ({limit}) and reach it about {on:yyyy-MM-dd}, before the next test is due ({due:yyyy-MM-dd})")
-                    + (string)(uncertain ? "; the tests scatter too much for the date to be trusted: retest sooner" : "; plan a service or replacement before then"),
+                Forecast.Text(stem, "left the band", on, due, asOf,
+                    uncertain ? "the tests scatter too much for the date to be trusted: retest sooner" : "plan a service or replacement before then"),
                 [.. tests.Select(Source)])
             {
                 Point = point.Label,
@@ -226,6 +267,10 @@ internal static class TripRules
     public static IReadOnlyList<(TripPoint Point, List<JudgedTrip> Tests)> ByPoint(IReadOnlyList<JudgedTrip> trips) => TripPoint.Series(trips);
 
     internal static RecordSource Source(JudgedTrip judged) => new(judged.Trip.SourceFile, judged.Trip.SourceLine);
+
+    // Thresholds are compared at a stated precision, 1e-9 of a per cent, so a value exactly at a limit that arrives a
+    // rounding error away from it (a ratio of corrected readings, a logarithm) is judged as exactly at it.
+    internal const double Tolerance = 1e-9;
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }

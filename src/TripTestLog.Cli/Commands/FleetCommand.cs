@@ -15,8 +15,9 @@ internal static class FleetCommand
         var shared = new ConditionOptions();
         var top = new Option<int>("--top") { Description = "How many devices the priority list shows", DefaultValueFactory = _ => 15, HelpName = "N" };
         var json = new Option<bool>("--json") { Description = "Write one JSON object (fields in docs/findings.md)" };
+        var csv = new Option<bool>("--csv") { Description = "Write which models fail as CSV: failure rate by make and model and by age band" };
         var command = new Command("fleet", "The fleet by site and condition grade, and what to act on first");
-        foreach (var option in shared.All.Concat<Option>([top, json]))
+        foreach (var option in shared.All.Concat<Option>([top, json, csv]))
         {
             command.Options.Add(option);
         }
@@ -35,12 +36,18 @@ internal static class FleetCommand
                 return ExitCodes.BadInput;
             }
 
-            return Run(cli, options, n, parse.GetValue(json));
+            if (parse.GetValue(json) && parse.GetValue(csv))
+            {
+                cli.Error.WriteLine("error: --json and --csv: choose one");
+                return ExitCodes.BadInput;
+            }
+
+            return Run(cli, options, n, parse.GetValue(json), parse.GetValue(csv));
         });
         return command;
     }
 
-    private static int Run(CliContext cli, ConditionOptions.Resolved options, int top, bool json)
+    private static int Run(CliContext cli, ConditionOptions.Resolved options, int top, bool json, bool csv)
     {
         using var store = Stores.Open(cli, options.Database, StorePurpose.Read);
         if (options.Only is { } tag && !store.Devices(tag).Any())
@@ -50,13 +57,15 @@ internal static class FleetCommand
         }
 
         var fleet = new FleetSummary(top);
+        var models = new FleetModels(options.Policy, options.AsOf);
         try
         {
-            foreach (var device in FindingsPipeline.Run(store, options.Policy, options.AsOf, options.Only, cli.Cancel))
+            foreach (var report in FindingsPipeline.RunWithRecords(store, options.Policy, options.AsOf, options.Only, cli.Cancel))
             {
-                if (options.AtSite(device))
+                if (options.AtSite(report.Condition))
                 {
-                    fleet.Add(device);
+                    fleet.Add(report.Condition);
+                    models.Add(report);
                 }
             }
         }
@@ -69,11 +78,15 @@ internal static class FleetCommand
         var asOf = options.AsOf.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);
         if (json)
         {
-            FleetJson.Write(Visible.Exact(cli.Out), fleet, asOf, options.PolicyFrom);
+            FleetJson.Write(Visible.Exact(cli.Out), fleet, asOf, options.PolicyFrom, models);
+        }
+        else if (csv)
+        {
+            FleetModelsOutput.WriteCsv(Visible.Exact(cli.Out), models);
         }
         else
         {
-            FleetText.Write(cli.Out, fleet, asOf, options.PolicyFrom);
+            FleetText.Write(cli.Out, fleet, asOf, options.PolicyFrom, models);
         }
 
         return ExitCodes.Ok;

@@ -41,6 +41,10 @@ internal static class FindingFields
         ("grade", (d, f) => TextCodes.Grade.Of(d.Grade)),
         ("due_on", (d, f) => Date(d.DueOn)),
         ("rests_on", (d, f) => string.Join("; ", f.RestsOn.Select(r => $"{r.File}:{r.Line.ToString(CultureInfo.InvariantCulture)}"))),
+
+        // Added later, so at the end: volts (insulation-test-voltage).
+        ("value_v", (d, f) => f.Value is { Unit: ReadingUnit.Volts } v ? Math.Round(v.Amount, 4) : null),
+        ("limit_v", (d, f) => f.Limit is { Unit: ReadingUnit.Volts } l ? Math.Round(l.Amount, 4) : null),
     ];
 
     private static string? Date(DateOnly? date) => date?.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);

@@ -10,7 +10,7 @@ namespace TripTestLog.Cli.Output;
 /// <summary>`fleet --json`: one object with the counts by site and grade and the priority list; fields in the README.</summary>
 internal static class FleetJson
 {
-    public static void Write(TextWriter writer, FleetSummary fleet, string asOf, string policyFrom)
+    public static void Write(TextWriter writer, FleetSummary fleet, string asOf, string policyFrom, FleetModels? models = null)
     {
         using var stream = new MemoryStream();
         using (var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping }))
@@ -35,6 +35,12 @@ internal static class FleetJson
 
             json.WriteEndArray();
             json.WriteStartArray("priority");
+            var shared = new Dictionary<object, string>(ReferenceEqualityComparer.Instance);
+            foreach (var (d, cause) in fleet.Lines.Where(l => l.Cause is not null).SelectMany(l => l.Devices.Select(d => (d, l.Cause!))))
+            {
+                shared[d] = cause;
+            }
+
             foreach (var (device, rank) in fleet.Priority.Select((d, i) => (d, i + 1)))
             {
                 json.WriteStartObject();
@@ -61,10 +67,33 @@ internal static class FleetJson
                 }
 
                 json.WriteEndArray();
+                if (device.WorstOpen is { } worst && worst.Kind != FindingKind.TestOverdue && DeviceCondition.MarginOf(worst) is { } margin)
+                {
+                    json.WriteNumber("margin_percent", Math.Round(margin * 100, 2));
+                }
+                else
+                {
+                    json.WriteNull("margin_percent");
+                }
+
+                if (shared.TryGetValue(device, out var cause))
+                {
+                    json.WriteString("shared_cause", cause);
+                }
+                else
+                {
+                    json.WriteNull("shared_cause");
+                }
+
                 json.WriteEndObject();
             }
 
             json.WriteEndArray();
+            if (models is not null)
+            {
+                FleetModelsOutput.WriteJson(json, models);
+            }
+
             json.WriteEndObject();
         }
 

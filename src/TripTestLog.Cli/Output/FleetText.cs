@@ -10,14 +10,15 @@ internal static class FleetText
 {
     private static readonly ConditionGrade[] Grades = Enum.GetValues<ConditionGrade>();
 
-    public static void Write(TextWriter writer, FleetSummary fleet, string asOf, string policyFrom)
+    public static void Write(TextWriter writer, FleetSummary fleet, string asOf, string policyFrom, FleetModels? models = null)
     {
         Wrapped.Write(writer, $"Fleet condition as of {asOf} (policy: {policyFrom})", 0);
         writer.WriteLine();
-        var counts = new TextTable(["site", "devices>", .. Grades.Select(g => Short(g) + ">"), "overdue>"]);
+        // Headers are the grade codes themselves; the site column gives up width to keep the table within 100 columns.
+        var counts = new TextTable(["site", "devices>", .. Grades.Select(g => Head(TextCodes.Grade.Of(g)) + ">"), "overdue>"]);
         foreach (var (site, c) in fleet.Sites)
         {
-            counts.Add([Fit(site, 28), N(c.Devices), .. c.ByGrade.Select(N), N(c.Overdue)]);
+            counts.Add([site, N(c.Devices), .. c.ByGrade.Select(N), N(c.Overdue)]);
         }
 
         var all = fleet.Sites.Values;
@@ -25,48 +26,87 @@ internal static class FleetText
         counts.WriteTo(writer);
         writer.WriteLine();
         writer.WriteLine("Grades: sound (nothing open), watch (look into it), plan-work (a trend or change needs work),");
-        writer.WriteLine("repair (over a limit or out of band), take-out-of-service (may not protect its circuit).");
+        writer.WriteLine("untested (no as-found test on record), repair (over a limit or out of band),");
+        writer.WriteLine("take-out-of-service (may not protect its circuit).");
         writer.WriteLine();
 
-        var priority = fleet.Priority;
-        if (priority.Count == 0)
+        var lines = fleet.Lines;
+        if (lines.Count == 0)
         {
             writer.WriteLine("No device needs attention.");
         }
         else
         {
-            writer.WriteLine("Act first: worst grade, then soonest forecast, then overdue.");
-            var table = new TextTable("#>", "asset", "grade", "due", "why");
-            foreach (var (device, i) in priority.Select((d, i) => (d, i + 1)))
+            Wrapped.Write(writer, "Act first: worst grade; within a grade, furthest past its limit (as a fraction of the limit); then the soonest "
+                + "date, a forecast or the due date. Devices with one cause share a line.", 0);
+            writer.WriteLine();
+            var rank = Math.Max(1, N(lines.Count).Length);
+            var tag = Math.Max(5, lines.Max(l => l.Devices[0].Device.Tag.Value.Length));
+            var grade = Math.Max(5, lines.Max(l => TextCodes.Grade.Of(l.Devices[0].Grade).Length));
+            writer.WriteLine($"{"#".PadLeft(rank)}  {"asset".PadRight(tag)}  {"grade".PadRight(grade)}  due");
+            writer.WriteLine($"{new string('-', rank)}  {new string('-', tag)}  {new string('-', grade)}  {new string('-', 20)}");
+            foreach (var (line, i) in lines.Select((l, i) => (l, i + 1)))
             {
-                table.Add(N(i), device.Device.Tag.Value, TextCodes.Grade.Of(device.Grade), device.DueOn.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture),
-                    Fit(Why(device), 46));
+                var first = line.Devices[0];
+                writer.WriteLine($"{N(i).PadLeft(rank)}  {first.Device.Tag.Value.PadRight(tag)}  {TextCodes.Grade.Of(first.Grade).PadRight(grade)}  {Due(first)}");
+                Wrapped.Write(writer, Why(line), rank + 2);
             }
+        }
 
-            table.WriteTo(writer);
+        if (models is not null)
+        {
+            writer.WriteLine();
+            FleetModelsOutput.WriteText(writer, models);
         }
 
         writer.WriteLine();
         Wrapped.Write(writer, Safety.Caution, 0);
     }
 
-    /// <summary>The worst open finding's kind and subject, and how many more there are.</summary>
+    /// <summary>The due date with an "(overdue)" marker when its test is overdue.</summary>
+    public static string Due(DeviceCondition device) =>
+        device.DueOn.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture) + (device.Overdue ? " (overdue)" : "");
+
+    /// <summary>
+    /// A priority line's reason: for one device its worst open finding's kind, subject, how far past its limit, and how
+    /// many more findings; for devices sharing a cause, the cause and the devices it names.
+    /// </summary>
+    public static string Why(PriorityLine line)
+    {
+        ArgumentNullException.ThrowIfNull(line);
+        if (line.Cause is null)
+        {
+            return Why(line.Devices[0]);
+        }
+
+        var kind = line.Devices[0].WorstOpen is { } worst ? TextCodes.FindingKind.Of(worst.Kind) : "";
+        return $"{kind}, one cause ({line.Cause}) on {line.Devices.Count} devices: {string.Join(", ", line.Devices.Select(d => d.Device.Tag.Value))}";
+    }
+
+    /// <summary>The worst open finding's kind and subject, how far past its limit, and how many more findings there are.</summary>
     public static string Why(DeviceCondition device)
     {
+        ArgumentNullException.ThrowIfNull(device);
         if (device.WorstOpen is not { } worst)
         {
             return "";
         }
 
         var more = device.Open.Count() - 1;
+        if (device.Grade == ConditionGrade.Untested && worst.Kind == FindingKind.TestOverdue)
+        {
+            return $"never tested; due since {device.DueOn:yyyy-MM-dd}" + (more switch { 0 => "", 1 => " (and 1 more finding)", _ => $" (and {more} more findings)" });
+        }
+
         var subject = worst.Concerns.Length == 0 ? "" : " " + worst.Concerns;
         var forecast = worst.ForecastOn is { } on ? $" by {on:yyyy-MM}" : "";
-        return $"{TextCodes.FindingKind.Of(worst.Kind)}{subject}{forecast}" + (more > 0 ? $" +{more}" : "");
+        var margin = DeviceCondition.MarginOf(worst) is { } m && m >= 0.0005 ? string.Create(CultureInfo.InvariantCulture, $", {m * 100:0.#} % past its limit") : "";
+        return $"{TextCodes.FindingKind.Of(worst.Kind)}{subject}{forecast}{margin}"
+            + (more switch { 0 => "", 1 => " (and 1 more finding)", _ => $" (and {more} more findings)" });
     }
 
-    private static string Short(ConditionGrade grade) => grade == ConditionGrade.TakeOutOfService ? "out-of-service" : TextCodes.Grade.Of(grade);
+    // The longest grade word is broken after its second hyphen over two header lines, so the table keeps 100 columns.
+    private static string Head(string grade) => grade == "take-out-of-service" ? "take-out-\nof-service" : grade;
 
     private static string N(int n) => n.ToString(CultureInfo.InvariantCulture);
-
-    private static string Fit(string text, int width) => text.Length <= width ? text : text[..(width - 3)] + "...";
 }

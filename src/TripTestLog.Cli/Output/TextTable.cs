@@ -12,7 +12,10 @@ internal sealed class TextTable
     private readonly bool[] _rightAligned;
     private readonly List<string[]> _rows = [];
 
-    /// <summary>Columns whose header ends with '>' are right-aligned (the marker is not printed).</summary>
+    /// <summary>
+    /// Columns whose header ends with '>' are right-aligned (the marker is not printed). A header may hold a line break:
+    /// it is then printed over two lines, so a long word does not widen its column of short numbers.
+    /// </summary>
     public TextTable(params string[] headers)
     {
         _rightAligned = headers.Select(h => h.EndsWith('>')).ToArray();
@@ -44,15 +47,22 @@ internal sealed class TextTable
     /// </summary>
     public void WriteTo(TextWriter writer, int maxWidth = Wrapped.Width)
     {
-        var widths = _headers.Select((h, i) => Math.Max(h.Length, _rows.Count == 0 ? 0 : _rows.Max(r => r[i].Length))).ToArray();
+        var heads = _headers.Select(h => h.Split('\n')).ToArray();
+        var widths = heads.Select((h, i) => Math.Max(h.Max(p => p.Length), _rows.Count == 0 ? 0 : _rows.Max(r => r[i].Length))).ToArray();
         var total = widths.Sum() + 2 * (widths.Length - 1);
         var e = Elastic;
         if (total > maxWidth)
         {
-            widths[e] = Math.Max(Math.Max(_headers[e].Length, 12), widths[e] - (total - maxWidth));
+            widths[e] = Math.Max(Math.Max(heads[e].Max(p => p.Length), 12), widths[e] - (total - maxWidth));
         }
 
-        writer.WriteLine(Line(_headers, widths));
+        var lines = heads.Max(h => h.Length);
+        for (var l = 0; l < lines; l++)
+        {
+            // A header of fewer lines sits on the last of them.
+            writer.WriteLine(Line([.. heads.Select(h => l - (lines - h.Length) is var k && k >= 0 ? h[k] : "")], widths));
+        }
+
         writer.WriteLine(string.Join("  ", widths.Select(w => new string('-', w))));
         foreach (var row in _rows)
         {

@@ -50,4 +50,7 @@ public enum FindingKind
 
     /// <summary>A trip test neither broke nor proved a requirement: the test that would decide is still to be run.</summary>
     RetestNeeded,
+
+    /// <summary>An insulation test made at a lower DC voltage than the policy's table asks for the breaker's rated voltage.</summary>
+    InsulationTestVoltage,
 }

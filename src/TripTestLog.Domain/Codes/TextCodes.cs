@@ -65,7 +65,8 @@ public static class TextCodes
         (Codes.FindingKind.InstrumentUnregistered, "instrument-unregistered"),
         (Codes.FindingKind.SettingsDiffer, "settings-differ"),
         (Codes.FindingKind.TestOverdue, "test-overdue"),
-        (Codes.FindingKind.RetestNeeded, "retest-needed"));
+        (Codes.FindingKind.RetestNeeded, "retest-needed"),
+        (Codes.FindingKind.InsulationTestVoltage, "insulation-test-voltage"));
 
     /// <summary>Finding severities, in rising order.</summary>
     public static CodeBook<Severity> Severity { get; } = new("severity",
@@ -74,7 +75,7 @@ public static class TextCodes
     /// <summary>Condition grades, best first.</summary>
     public static CodeBook<ConditionGrade> Grade { get; } = new("condition grade",
         (ConditionGrade.Sound, "sound"), (ConditionGrade.Watch, "watch"), (ConditionGrade.PlanWork, "plan-work"),
-        (ConditionGrade.Repair, "repair"), (ConditionGrade.TakeOutOfService, "take-out-of-service"));
+        (ConditionGrade.Untested, "untested"), (ConditionGrade.Repair, "repair"), (ConditionGrade.TakeOutOfService, "take-out-of-service"));
 
     /// <summary>Insulation minimum tables a lab may choose.</summary>
     public static CodeBook<InsulationTable> InsulationTable { get; } = new("insulation table",

@@ -12,6 +12,12 @@ public enum ConditionGrade
     /// <summary>A trend or change that will need work before long: plan it.</summary>
     PlanWork,
 
+    /// <summary>
+    /// No as-found test of any kind on record: its condition is unknown, so it ranks above anything known to work and
+    /// below anything known to have failed.
+    /// </summary>
+    Untested,
+
     /// <summary>Over a limit or out of its band: repair it.</summary>
     Repair,
 

@@ -7,9 +7,10 @@ namespace TripTestLog.Reports.Charts;
 /// <summary>Devices per condition grade, as labelled bars.</summary>
 internal static class GradeChart
 {
+    // One colour per grade in enum order; untested is a neutral grey, since its condition is unknown.
     private static readonly Color[] Colors =
     [
-        Color.FromHex("#4f772d"), Color.FromHex("#90a955"), Color.FromHex("#e9c46a"), Color.FromHex("#e76f51"), Color.FromHex("#a4161a"),
+        Color.FromHex("#4f772d"), Color.FromHex("#90a955"), Color.FromHex("#e9c46a"), Color.FromHex("#8d99ae"), Color.FromHex("#e76f51"), Color.FromHex("#a4161a"),
     ];
 
     public static Plot Build(IReadOnlyList<int> byGrade)

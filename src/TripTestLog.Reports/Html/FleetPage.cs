@@ -37,7 +37,7 @@ internal static class FleetPage
                 .Append(["all sites", N(devices), .. grades.Select(g => N(sites.Values.Sum(s => s.ByGrade[(int)g]))), N(sites.Values.Sum(s => s.Overdue))]));
         var totals = grades.Select(g => sites.Values.Sum(s => s.ByGrade[(int)g])).ToList();
         html.Append("<figure class=\"wide\">").Append(ChartStyle.Svg(GradeChart.Build(totals), 640, 300)).Append("<figcaption>")
-            .Append(H("Grades: sound, nothing open; watch, look into it; plan-work, a trend or change needs work; repair, over a limit or out of "
+            .Append(H("Grades: sound, nothing open; watch, look into it; plan-work, a trend or change needs work; untested, no as-found test on record; repair, over a limit or out of "
                 + "band; take-out-of-service, may not protect its circuit until repaired and retested."))
             .Append("</figcaption></figure>\n");
 
@@ -73,6 +73,7 @@ internal static class FleetPage
         {
             H(l.Key), N(l.Value.Records), N(l.Value.Devices), H(l.Value.Reason),
         }));
+        FleetModelsSection.Write(html, fleet.Models);
         Layout.End(html, context.Footer);
         return html.ToString();
     }
@@ -88,7 +89,7 @@ internal static class FleetPage
     private static string Why(DeviceCondition device)
     {
         var more = device.Open.Count() - 1;
-        return device.WorstOpen is { } worst ? worst.Message + (more > 0 ? $" (and {more} more)" : "") : "";
+        return device.WorstOpen is { } worst ? worst.Message + (more switch { 0 => "", 1 => " (and 1 more finding)", _ => $" (and {more} more findings)" }) : "";
     }
 
     private static string Link(DeviceCondition device, Func<string, string?> pageOf) =>

@@ -37,6 +37,9 @@ internal sealed class FindingsStore : IDisposable
     public FindingsStore Insulation(params string[] rows) => Import(
         "asset_tag,tested_at,stage,path,test_voltage_v,resistance_mohm,temperature_c,duration_s", rows);
 
+    /// <summary>Any record file, with its own header (a register with settings columns, say).</summary>
+    public FindingsStore Records(string header, params string[] rows) => Import(header, rows);
+
     public IReadOnlyList<DeviceCondition> Conditions(FindingPolicy? policy = null, DateOnly? asOf = null) =>
         [.. FindingsPipeline.Run(_store, policy ?? FindingPolicy.Default, asOf ?? AsOf)];
 
