@@ -50,4 +50,7 @@ public enum FindingKind
 
     /// <summary>A trip test neither broke nor proved a requirement: the test that would decide is still to be run.</summary>
     RetestNeeded,
+
+    /// <summary>A result within the measurement uncertainty of its limit: a test with a more accurate instrument would decide.</summary>
+    RetestAccuracy,
 }
