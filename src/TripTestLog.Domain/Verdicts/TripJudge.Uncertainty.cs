@@ -10,8 +10,8 @@ namespace TripTestLog.Domain.Verdicts;
 /// The lab's decision rule on a verdict already given by simple acceptance. The deciding quantity is the trip (or hold)
 /// time against the limit T(I) of the deciding edge; its combined standard uncertainty is u² = u(t)² + (∂T/∂I · u(I))²
 /// (GUM, JCGM 100:2008, 5.1.2), each instrument accuracy ±a taken as rectangular, u = a / √3 (GUM 4.3.7), and U = k u.
-/// Where the limit jumps with current (a threshold, a point's window) no slope can carry the current's share: the test is
-/// then also judged at the current less and plus its expanded uncertainty, and with the point window widened by it.
+/// Where the limit jumps with current (a point's window) no slope can carry the current's share: the test is then also
+/// judged with the point window widened by the current's expanded uncertainty.
 /// </summary>
 public static partial class TripJudge
 {
@@ -133,7 +133,7 @@ public static partial class TripJudge
         {
             var applied = envelope.At(Amperes.Of(current.Value * factor)).For(conditions);
             var e = minimum ? applied.Minimum : applied.Maximum;
-            return e.Limit is { } l && !e.IsOpen && e.Source == edge.Source && e.PointLabel == edge.PointLabel ? l.Value : null;
+            return e.Limit is { } l && !e.IsOpen && SameRequirement(e, edge) ? l.Value : null;
         }
 
         return (At(1 - SlopeStep), At(1 + SlopeStep)) switch
@@ -145,8 +145,15 @@ public static partial class TripJudge
         };
     }
 
-    // The verdict judged again at the current less and plus its guard band, and with the point window widened by it: where
-    // any differs, the decision depends on where within its uncertainty the current really was.
+    // The same requirement on both sides of the current: a point's limit moved for the offset keeps its requirement's
+    // words before the "; tested ... %" that says how far it moved.
+    private static bool SameRequirement(BandEdge a, BandEdge b) =>
+        a.Source == b.Source && a.PointLabel == b.PointLabel && a.Anchor == b.Anchor && a.Carried == b.Carried
+        && string.Equals(a.Requirement.Split(';')[0], b.Requirement.Split(';')[0], StringComparison.Ordinal);
+
+    // The verdict judged again with the point window widened by the current's guard band: a test that far from a point
+    // may have been a test of it (the window itself is the lab's test-current tolerance, so the current is not also moved
+    // within it). Where the verdict differs, the decision depends on where within its uncertainty the current really was.
     private static string? CurrentDoubt(TripAssessment simple, PointWindowEnvelope envelope, TestConditions conditions, double guardAmperes)
     {
         var m = simple.Measurement;
@@ -155,23 +162,11 @@ public static partial class TripJudge
             return null;
         }
 
-        bool Same(Verdict v) => simple.IsFailure ? v == simple.Verdict : v == Verdict.Pass;
-        var fraction = guardAmperes / m.Current.Value;
-        var at = $"the test current {m.Current} ± {Num(guardAmperes)} A";
-        foreach (var sign in new[] { -1.0, 1.0 })
-        {
-            var moved = Amperes.Of(Math.Max(m.Current.Value * (1 + (sign * fraction)), m.Current.Value * 0.01));
-            var v = Assess(envelope, m with { Current = moved }, conditions).Verdict;
-            if (!Same(v))
-            {
-                return $"{at}: at {moved} the verdict would be {Word(v)}";
-            }
-        }
-
-        var widened = envelope.Widened(fraction);
+        var widened = envelope.Widened(guardAmperes / m.Current.Value);
         var w = Assess(widened, m, conditions).Verdict;
-        return Same(w) ? null
-            : $"{at}: with the point window widened to ±{Num(widened.Window * 100)} % by it the verdict would be {Word(w)}";
+        var same = simple.IsFailure ? w == simple.Verdict : w == Verdict.Pass;
+        return same ? null
+            : $"the test current {m.Current} ± {Num(guardAmperes)} A may lie within ±{Num(widened.Window * 100)} % of a standard point, and judged so the verdict would be {Word(w)}";
     }
 
     private static string Word(Verdict v) => v switch
