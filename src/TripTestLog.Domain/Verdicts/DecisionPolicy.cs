@@ -17,7 +17,6 @@ public sealed record DecisionPolicy(DecisionRule Rule, InstrumentAccuracy Defaul
     public ResolvedAccuracy AccuracyOf(InstrumentRegister register, string instrument, DateOnly date)
     {
         ArgumentNullException.ThrowIfNull(register);
-        var stated = instrument.Length > 0 && register.PeriodOn(instrument, date) is { } period ? period.Accuracy : InstrumentAccuracy.None;
-        return stated.Over(Defaults);
+        return (instrument.Length > 0 ? register.AccuracyOn(instrument, date) : InstrumentAccuracy.None).Over(Defaults);
     }
 }
