@@ -153,10 +153,12 @@ public sealed partial class PostgresRecordStore
     private (long Added, long Updated, long Duplicates) InsertInstruments(NpgsqlTransaction transaction, ParsedFile file, long sourceId)
     {
         using var insert = Command(
-            "INSERT INTO instruments (instrument, kind, serial, calibrated_on, calibration_due, source_file_id, source_line, fingerprint) "
-            + "VALUES (@i, @k, @s, @on, @due, @src, @line, @fp) ON CONFLICT (fingerprint) DO NOTHING", transaction);
-        var p = Parameters(insert, ("i", NpgsqlDbType.Text), ("k", NpgsqlDbType.Text), ("s", NpgsqlDbType.Text), ("on", NpgsqlDbType.Date),
-            ("due", NpgsqlDbType.Date), ("src", NpgsqlDbType.Bigint), ("line", NpgsqlDbType.Bigint), ("fp", NpgsqlDbType.Bytea));
+            "INSERT INTO instruments (instrument, kind, serial, calibrated_on, calibration_due, source_file_id, source_line, fingerprint, "
+            + InstrumentAccuracyColumns.List + ") VALUES (@i, @k, @s, @on, @due, @src, @line, @fp, @a0, @a1, @a2, @a3, @a4, @a5, @a6, @a7) "
+            + "ON CONFLICT (fingerprint) DO NOTHING", transaction);
+        var p = Parameters(insert, [("i", NpgsqlDbType.Text), ("k", NpgsqlDbType.Text), ("s", NpgsqlDbType.Text), ("on", NpgsqlDbType.Date),
+            ("due", NpgsqlDbType.Date), ("src", NpgsqlDbType.Bigint), ("line", NpgsqlDbType.Bigint), ("fp", NpgsqlDbType.Bytea),
+            .. Enumerable.Range(0, InstrumentAccuracyColumns.Names.Length).Select(i => ("a" + i, NpgsqlDbType.Double))]);
         long added = 0;
         foreach (var (c, line) in file.Instruments)
         {
@@ -168,6 +170,12 @@ public sealed partial class PostgresRecordStore
             p[5].Value = sourceId;
             p[6].Value = line;
             p[7].Value = Convert.FromHexString(Fingerprint.Of(c));
+            var accuracy = InstrumentAccuracyColumns.Values(c.Accuracy);
+            for (var i = 0; i < accuracy.Length; i++)
+            {
+                p[8 + i].Value = accuracy[i];
+            }
+
             added += insert.ExecuteNonQuery();
         }
 

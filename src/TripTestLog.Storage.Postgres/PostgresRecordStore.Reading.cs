@@ -1,3 +1,4 @@
+using TripTestLog.Storage;
 using TripTestLog.Application.Check;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Envelopes;
@@ -64,8 +65,11 @@ public sealed partial class PostgresRecordStore : ITripSource
 
     /// <inheritdoc />
     public InstrumentRegister Instruments() => new(Rows(
-        "SELECT instrument, kind, serial, calibrated_on, calibration_due FROM instruments ORDER BY id",
-        r => new InstrumentCalibration(r.GetString(0), r.GetString(1), r.GetString(2), r.GetFieldValue<DateOnly>(3), r.GetFieldValue<DateOnly>(4))));
+        $"SELECT instrument, kind, serial, calibrated_on, calibration_due, {InstrumentAccuracyColumns.List} FROM instruments ORDER BY id",
+        r => new InstrumentCalibration(r.GetString(0), r.GetString(1), r.GetString(2), r.GetFieldValue<DateOnly>(3), r.GetFieldValue<DateOnly>(4))
+        {
+            Accuracy = InstrumentAccuracyColumns.Read(r, 5),
+        }));
 
     // The test time's offset and has-time columns, which every measurement stream ends with.
     private static string TestTime(string alias) => $"{alias}.{ServerColumnTypes.OffsetColumn}, {alias}.{ServerColumnTypes.HasTimeColumn}";

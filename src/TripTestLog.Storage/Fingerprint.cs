@@ -51,8 +51,9 @@ internal static class Fingerprint
         }
     }
 
-    public static string Of(InstrumentCalibration c) => Hash("instrument", c.Instrument, c.Kind, c.Serial,
-        c.CalibratedOn.ToString(CultureInfo.InvariantCulture), c.CalibrationDue.ToString(CultureInfo.InvariantCulture));
+    public static string Of(InstrumentCalibration c) => Hash(["instrument", c.Instrument, c.Kind, c.Serial,
+        c.CalibratedOn.ToString(CultureInfo.InvariantCulture), c.CalibrationDue.ToString(CultureInfo.InvariantCulture),
+        .. InstrumentAccuracyColumns.FingerprintParts(c.Accuracy)]);
 
     private static string Hash(params string[] parts) =>
         Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(string.Join('\u001f', parts))))[..32];

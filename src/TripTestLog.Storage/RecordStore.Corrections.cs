@@ -69,9 +69,9 @@ public sealed partial class RecordStore
     private (long Added, long Updated, long Duplicates) InsertInstruments(SqliteTransaction transaction, ParsedFile file, long sourceId)
     {
         using var insert = Command(transaction,
-            "INSERT OR IGNORE INTO instruments (instrument, kind, serial, calibrated_on, calibration_due, source_file_id, source_line, fingerprint) "
-            + "VALUES ($i, $k, $s, $on, $due, $src, $line, $fp)");
-        var p = Parameters(insert, "$i", "$k", "$s", "$on", "$due", "$src", "$line", "$fp");
+            "INSERT OR IGNORE INTO instruments (instrument, kind, serial, calibrated_on, calibration_due, source_file_id, source_line, fingerprint, "
+            + InstrumentAccuracyColumns.List + ") VALUES ($i, $k, $s, $on, $due, $src, $line, $fp, $a0, $a1, $a2, $a3, $a4, $a5, $a6, $a7)");
+        var p = Parameters(insert, "$i", "$k", "$s", "$on", "$due", "$src", "$line", "$fp", "$a0", "$a1", "$a2", "$a3", "$a4", "$a5", "$a6", "$a7");
         long added = 0;
         foreach (var (c, line) in file.Instruments)
         {
@@ -83,6 +83,12 @@ public sealed partial class RecordStore
             p[5].Value = sourceId;
             p[6].Value = line;
             p[7].Value = Fingerprint.Of(c);
+            var accuracy = InstrumentAccuracyColumns.Values(c.Accuracy);
+            for (var i = 0; i < accuracy.Length; i++)
+            {
+                p[8 + i].Value = accuracy[i];
+            }
+
             added += insert.ExecuteNonQuery();
         }
 

@@ -12,7 +12,12 @@ public sealed partial class RecordStore
 
     /// <summary>Every instrument calibration period imported.</summary>
     public InstrumentRegister Instruments() => new(_context.Instruments.AsNoTracking().AsEnumerable()
-        .Select(i => new InstrumentCalibration(i.Instrument, i.Kind, i.Serial, Date(i.CalibratedOn), Date(i.CalibrationDue)))
+        .OrderBy(i => i.Id)
+        .Select(i => new InstrumentCalibration(i.Instrument, i.Kind, i.Serial, Date(i.CalibratedOn), Date(i.CalibrationDue))
+        {
+            Accuracy = InstrumentAccuracy.Of(i.TimeAccuracyPct, i.TimeAccuracyS, i.CurrentAccuracyPct, i.CurrentAccuracyA, i.ResistanceAccuracyPct,
+                i.ResistanceAccuracyUohm, i.InsulationAccuracyPct, i.CoverageFactor),
+        })
         .ToList());
 
     /// <summary>Every value a corrected file replaced, oldest first: table, record id, column, old value, new value.</summary>

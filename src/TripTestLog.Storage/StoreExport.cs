@@ -30,7 +30,8 @@ internal sealed class StoreExport(Func<string, string> registerSelect, Func<stri
         RecordKind.TripTests or RecordKind.ContactResistance or RecordKind.InsulationResistance => Measurements(MeasurementTable.For(kind)),
         RecordKind.CurveTable => "SELECT table_name, multiple, min_s, max_s, source_line FROM curve_table_rows WHERE source_file_id = @id ORDER BY source_line, id",
         RecordKind.AmbientTable => "SELECT table_name, ambient_c, current_factor, source_line FROM ambient_table_rows WHERE source_file_id = @id ORDER BY source_line, id",
-        _ => $"SELECT instrument, kind, serial, {text("calibrated_on")}, {text("calibration_due")}, source_line FROM instruments WHERE source_file_id = @id ORDER BY source_line, id",
+        _ => $"SELECT instrument, kind, serial, {text("calibrated_on")}, {text("calibration_due")}, source_line, {InstrumentAccuracyColumns.List} "
+            + "FROM instruments WHERE source_file_id = @id ORDER BY source_line, id",
     };
 
     /// <summary>Every correction, oldest first: table, record fingerprint, column, old, new, old and new file hashes, time.</summary>
@@ -55,7 +56,10 @@ internal sealed class StoreExport(Func<string, string> registerSelect, Func<stri
                 RecordKind.CurveTable => new(new CurveTableRow(r.GetString(0), new CurveTablePoint(CurrentMultiple.Of(r.GetDouble(1)), Seconds.Of(r.GetDouble(2)),
                     r.IsDBNull(3) ? null : Seconds.Of(r.GetDouble(3)))), r.GetInt64(4)),
                 RecordKind.AmbientTable => new(new AmbientTableRow(r.GetString(0), new AmbientPoint(Celsius.Of(r.GetDouble(1)), r.GetDouble(2))), r.GetInt64(3)),
-                _ => new(new InstrumentCalibration(r.GetString(0), r.GetString(1), r.GetString(2), Date(r.GetString(3)), Date(r.GetString(4))), r.GetInt64(5)),
+                _ => new(new InstrumentCalibration(r.GetString(0), r.GetString(1), r.GetString(2), Date(r.GetString(3)), Date(r.GetString(4)))
+                {
+                    Accuracy = InstrumentAccuracyColumns.Read(r, 6),
+                }, r.GetInt64(5)),
             };
         }
     }

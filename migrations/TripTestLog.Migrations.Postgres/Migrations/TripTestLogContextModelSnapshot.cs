@@ -475,6 +475,18 @@ namespace TripTestLog.Migrations.Postgres.Migrations
                         .HasColumnType("date")
                         .HasColumnName("calibration_due");
 
+                    b.Property<double?>("CoverageFactor")
+                        .HasColumnType("double precision")
+                        .HasColumnName("coverage_factor");
+
+                    b.Property<double?>("CurrentAccuracyA")
+                        .HasColumnType("double precision")
+                        .HasColumnName("current_accuracy_a");
+
+                    b.Property<double?>("CurrentAccuracyPct")
+                        .HasColumnType("double precision")
+                        .HasColumnName("current_accuracy_pct");
+
                     b.Property<byte[]>("Fingerprint")
                         .IsRequired()
                         .HasColumnType("bytea")
@@ -485,10 +497,22 @@ namespace TripTestLog.Migrations.Postgres.Migrations
                         .HasColumnType("text")
                         .HasColumnName("instrument");
 
+                    b.Property<double?>("InsulationAccuracyPct")
+                        .HasColumnType("double precision")
+                        .HasColumnName("insulation_accuracy_pct");
+
                     b.Property<string>("Kind")
                         .IsRequired()
                         .HasColumnType("text")
                         .HasColumnName("kind");
+
+                    b.Property<double?>("ResistanceAccuracyPct")
+                        .HasColumnType("double precision")
+                        .HasColumnName("resistance_accuracy_pct");
+
+                    b.Property<double?>("ResistanceAccuracyUohm")
+                        .HasColumnType("double precision")
+                        .HasColumnName("resistance_accuracy_uohm");
 
                     b.Property<string>("Serial")
                         .IsRequired()
@@ -502,6 +526,14 @@ namespace TripTestLog.Migrations.Postgres.Migrations
                     b.Property<long>("SourceLine")
                         .HasColumnType("bigint")
                         .HasColumnName("source_line");
+
+                    b.Property<double?>("TimeAccuracyPct")
+                        .HasColumnType("double precision")
+                        .HasColumnName("time_accuracy_pct");
+
+                    b.Property<double?>("TimeAccuracyS")
+                        .HasColumnType("double precision")
+                        .HasColumnName("time_accuracy_s");
 
                     b.HasKey("Id");
 

@@ -455,6 +455,18 @@ namespace TripTestLog.Migrations.Migrations
                         .HasColumnType("TEXT")
                         .HasColumnName("calibration_due");
 
+                    b.Property<double?>("CoverageFactor")
+                        .HasColumnType("REAL")
+                        .HasColumnName("coverage_factor");
+
+                    b.Property<double?>("CurrentAccuracyA")
+                        .HasColumnType("REAL")
+                        .HasColumnName("current_accuracy_a");
+
+                    b.Property<double?>("CurrentAccuracyPct")
+                        .HasColumnType("REAL")
+                        .HasColumnName("current_accuracy_pct");
+
                     b.Property<string>("Fingerprint")
                         .IsRequired()
                         .HasColumnType("TEXT")
@@ -465,10 +477,22 @@ namespace TripTestLog.Migrations.Migrations
                         .HasColumnType("TEXT")
                         .HasColumnName("instrument");
 
+                    b.Property<double?>("InsulationAccuracyPct")
+                        .HasColumnType("REAL")
+                        .HasColumnName("insulation_accuracy_pct");
+
                     b.Property<string>("Kind")
                         .IsRequired()
                         .HasColumnType("TEXT")
                         .HasColumnName("kind");
+
+                    b.Property<double?>("ResistanceAccuracyPct")
+                        .HasColumnType("REAL")
+                        .HasColumnName("resistance_accuracy_pct");
+
+                    b.Property<double?>("ResistanceAccuracyUohm")
+                        .HasColumnType("REAL")
+                        .HasColumnName("resistance_accuracy_uohm");
 
                     b.Property<string>("Serial")
                         .IsRequired()
@@ -482,6 +506,14 @@ namespace TripTestLog.Migrations.Migrations
                     b.Property<long>("SourceLine")
                         .HasColumnType("INTEGER")
                         .HasColumnName("source_line");
+
+                    b.Property<double?>("TimeAccuracyPct")
+                        .HasColumnType("REAL")
+                        .HasColumnName("time_accuracy_pct");
+
+                    b.Property<double?>("TimeAccuracyS")
+                        .HasColumnType("REAL")
+                        .HasColumnName("time_accuracy_s");
 
                     b.HasKey("Id");
 

@@ -14,13 +14,15 @@ public static class CheckPipeline
     /// The judged tests of every device (or of <paramref name="only"/>), in asset-tag and test-time order;
     /// <paramref name="requireRegisteredInstruments"/> makes an instrument missing from the register a finding;
     /// <paramref name="ambientNoteKelvin"/> is the lab policy's ambient warning, <paramref name="pointWindow"/> its
-    /// test-current tolerance around a standard's point (a fraction).
+    /// test-current tolerance around a standard's point (a fraction); <paramref name="decision"/> its decision rule and
+    /// default accuracies (null: simple acceptance).
     /// </summary>
     public static IEnumerable<JudgedTrip> Run(ITripSource source, AssetTag? only = null, bool requireRegisteredInstruments = false,
-        CancellationToken cancel = default, double ambientNoteKelvin = LabPolicy.AmbientNoteKelvin, double pointWindow = LabPolicy.PointWindow)
+        CancellationToken cancel = default, double ambientNoteKelvin = LabPolicy.AmbientNoteKelvin, double pointWindow = LabPolicy.PointWindow,
+        Domain.Verdicts.DecisionPolicy? decision = null)
     {
         ArgumentNullException.ThrowIfNull(source);
-        var judge = DeviceJudge.For(source, requireRegisteredInstruments, ambientNoteKelvin, pointWindow);
+        var judge = DeviceJudge.For(source, requireRegisteredInstruments, ambientNoteKelvin, pointWindow, decision);
         // The store is read a few devices ahead on another thread, so reading and judging overlap on two cores.
         foreach (var device in ReadAhead.Of(source.Devices(only), 8, cancel))
         {

@@ -58,7 +58,7 @@ internal static class ContactRules
                     baseline.TryAdd(pole.Pole, pole);
                 }
 
-                OverLimit(device, pole, ledger, asFound);
+                OverLimit(device, pole, ledger, asFound, policy, instruments);
                 Spread(pole, lowest, session.Count, ledger, policy, asFound);
                 Rise(baseline.GetValueOrDefault(pole.Pole), pole, ledger, policy, asFound);
             }
@@ -71,15 +71,32 @@ internal static class ContactRules
         }
     }
 
-    private static void OverLimit(Device device, PoleResult pole, FindingLedger ledger, bool asFound)
+    private static void OverLimit(Device device, PoleResult pole, FindingLedger ledger, bool asFound, FindingPolicy policy, InstrumentRegister instruments)
     {
         if (device.ContactLimit is not { } limit)
         {
             return;
         }
 
+        // The decision rule: under guarded the limit must be broken (or cleared) by the guard band; a reading within it,
+        // under guarded or non-binary, asks for a retest with a more accurate instrument.
+        var accuracy = policy.Decision.AccuracyOf(instruments, pole.Instrument, pole.At.Date);
+        var expanded = accuracy.CoverageFactor * accuracy.ResistanceStandard(pole.Measured) * (pole.Measured > 0 ? pole.Corrected / pole.Measured : 1);
+        var guard = Uncertain.Guard(policy, expanded);
+        var within = policy.DecisionRule != Domain.Verdicts.DecisionRule.Simple && Math.Abs(pole.Corrected - limit.Value) < guard;
+        var over = policy.DecisionRule == Domain.Verdicts.DecisionRule.Guarded ? pole.Corrected > limit.Value + guard : pole.Corrected > limit.Value;
+        Uncertain.Settle(ledger, "accuracy|contact|" + pole.Pole, within, asFound, pole.At, () => Make(FindingKind.RetestAccuracy, Severity.Investigate, pole.At, pole,
+            $"decision rule {TextCodes.DecisionRule.Of(policy.DecisionRule)} (ILAC-G8): a reading within the guard band of its limit is not a confident decision",
+            Invariant($"pole {pole.Pole} reads {pole.Corrected:0.#} uOhm against the limit of {limit.Value:0} uOhm, within the guard band of {guard:0.##} uOhm (U = {expanded:0.##} uOhm; {accuracy.Words(false, false, true, false)}): retest with a more accurate instrument"))
+            with { Value = new Reading(pole.Corrected, ReadingUnit.MicroOhms), Limit = new Reading(limit.Value, ReadingUnit.MicroOhms), Instrument = pole.Instrument,
+                Policy = PolicyFile.Setting(policy, "decision_rule") });
+        if (within && !over && policy.DecisionRule == Domain.Verdicts.DecisionRule.Guarded)
+        {
+            return;
+        }
+
         var subject = "over|" + pole.Pole;
-        if (pole.Corrected > limit.Value)
+        if (over)
         {
             ledger.Raise(subject, Make(FindingKind.ContactOverLimit, Severity.Act, pole.At, pole, "the maker's contact resistance limit (register contact_limit_uohm)",
                 Invariant($"pole {pole.Pole} reads {Describe(pole)}, over the limit of {limit.Value:0} uOhm; clean and re-torque the terminations or replace the breaker"))

@@ -1,6 +1,8 @@
 using TripTestLog.Domain.Condition;
 using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Instruments;
 using TripTestLog.Domain.Settings;
+using TripTestLog.Domain.Verdicts;
 
 namespace TripTestLog.Application.Findings;
 
@@ -80,6 +82,21 @@ public sealed record FindingPolicy
     /// (lab policy: 3; no standard figure is used).
     /// </summary>
     public double PointWindowPercent { get; init; } = LabPolicy.PointWindow * 100;
+
+    /// <summary>
+    /// How verdicts and limits take the measurement uncertainty into account (ILAC-G8:09/2019): simple (the limit as
+    /// written, the default, so no verdict changes unasked), guarded or non-binary.
+    /// </summary>
+    public DecisionRule DecisionRule { get; init; } = DecisionRule.Simple;
+
+    /// <summary>The guard band w as a multiple of the expanded uncertainty U (lab policy: 1, w = U, as ILAC-G8 describes).</summary>
+    public double GuardBandFactor { get; init; } = 1;
+
+    /// <summary>The accuracy assumed where the instrument register states none (<see cref="LabPolicy.DefaultAccuracy"/>).</summary>
+    public InstrumentAccuracy DefaultAccuracy { get; init; } = LabPolicy.DefaultAccuracy;
+
+    /// <summary>The decision rule, guard band and default accuracies as the judge takes them.</summary>
+    public DecisionPolicy Decision => new(DecisionRule, DefaultAccuracy, GuardBandFactor);
 
     /// <summary>Whether a test made with an instrument missing from the register is a finding (default: no).</summary>
     public bool RequireRegisteredInstruments { get; init; }

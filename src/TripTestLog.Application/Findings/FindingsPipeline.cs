@@ -25,7 +25,7 @@ public static class FindingsPipeline
     {
         ArgumentNullException.ThrowIfNull(source);
         ArgumentNullException.ThrowIfNull(policy);
-        var judge = DeviceJudge.For(source, policy.RequireRegisteredInstruments, policy.AmbientNoteKelvin, policy.PointWindowPercent / 100);
+        var judge = DeviceJudge.For(source, policy.RequireRegisteredInstruments, policy.AmbientNoteKelvin, policy.PointWindowPercent / 100, policy.Decision);
         var peers = new PeerGroups();
         // The store is read a few devices ahead on another thread, so reading and judging overlap on two cores.
         foreach (var device in ReadAhead.Of(source.Devices(), 8, cancel))

@@ -29,8 +29,29 @@ internal static class InsulationRules
             }
 
             Voltage(r, row, device, ledger, policy);
+            // The decision rule: the records carry no insulation instrument, so its accuracy is the lab policy's default.
+            var accuracy = Domain.Instruments.InstrumentAccuracy.None.Over(policy.DefaultAccuracy);
+            var expanded = accuracy.CoverageFactor * accuracy.InsulationStandard(r.Corrected);
+            var guard = Uncertain.Guard(policy, expanded);
+            var within = policy.DecisionRule != Domain.Verdicts.DecisionRule.Simple && !r.OverRange && Math.Abs(r.Corrected - row.Minimum.Value) < guard;
+            var below = !r.OverRange && (policy.DecisionRule == Domain.Verdicts.DecisionRule.Guarded ? r.Corrected < row.Minimum.Value - guard : r.Corrected < row.Minimum.Value);
+            Uncertain.Settle(ledger, "accuracy|insulation|" + r.Path, within, r.Stage == TestStage.AsFound, r.At, () => new Finding(FindingKind.RetestAccuracy, Severity.Investigate,
+                r.Tag, r.At, $"decision rule {TextCodes.DecisionRule.Of(policy.DecisionRule)} (ILAC-G8): a reading within the guard band of its limit is not a confident decision",
+                Invariant($"path {r.Path} reads {r.Corrected:0.##} MOhm against the minimum of {row.Minimum.Value:0.##} MOhm, within the guard band of {guard:0.##} MOhm (U = {expanded:0.##} MOhm; {accuracy.Words(false, false, false, true)}): retest with a more accurate instrument"),
+                [r.Source])
+            {
+                Path = r.Path,
+                Value = new Reading(r.Corrected, ReadingUnit.MegaOhms),
+                Limit = new Reading(row.Minimum.Value, ReadingUnit.MegaOhms),
+                Policy = PolicyFile.Setting(policy, "decision_rule"),
+            });
+            if (within && !below && policy.DecisionRule == Domain.Verdicts.DecisionRule.Guarded)
+            {
+                continue;
+            }
+
             var subject = "insulation|" + r.Path;
-            if (!r.OverRange && r.Corrected < row.Minimum.Value)
+            if (below)
             {
                 var voltage = r.TestVoltage < row.TestVoltage.Value
                     ? Invariant($" (tested at {r.TestVoltage:0} V DC; the table's minimum assumes {row.TestVoltage.Value:0} V DC)")

@@ -15,7 +15,7 @@ internal static class PeerPass
 {
     public static void Add(DeviceRecords device, DeviceJudge judge, PeerGroups peers)
     {
-        var assessor = new TripAssessor(judge.Curves, judge.Ambients, judge.AmbientNoteKelvin, judge.PointWindow);
+        var assessor = new TripAssessor(judge.Curves, judge.Ambients, judge.AmbientNoteKelvin, judge.PointWindow, judge.Decision, judge.Instruments);
         var byPoint = new Dictionary<string, (TripPoint Point, List<int> Tests)>(StringComparer.Ordinal);
         for (var i = 0; i < device.Trips.Count; i++)
         {

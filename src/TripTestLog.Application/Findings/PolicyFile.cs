@@ -3,6 +3,7 @@ using System.Text;
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Condition;
 using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Instruments;
 
 namespace TripTestLog.Application.Findings;
 
@@ -65,6 +66,24 @@ public static class PolicyFile
             p => p.FleetMinimumDevices, (p, v) => p with { FleetMinimumDevices = v }, 1, 100000),
         Number("fleet_window_years", "which models fail: the window of as-found tests counted, years back from the day judged",
             p => p.FleetWindowYears, (p, v) => p with { FleetWindowYears = v }, 0.5, 50),
+        new("decision_rule", "verdicts and limits against the measurement uncertainty (ILAC-G8): " + TextCodes.DecisionRule.Choices,
+            p => TextCodes.DecisionRule.Of(p.DecisionRule),
+            (p, v) => TextCodes.DecisionRule.TryParse(v, out var r) ? p with { DecisionRule = r } : null),
+        Number("guard_band_factor", "guarded: the guard band as a multiple of the expanded uncertainty U (ILAC-G8: 1)",
+            p => p.GuardBandFactor, (p, v) => p with { GuardBandFactor = v }, 0, 3),
+        Accuracy("default_time_accuracy_pct", "time accuracy where the instrument register states none, % of reading",
+            a => a.TimePercent, (a, v) => a with { TimePercent = v }, 100),
+        Accuracy("default_time_accuracy_s", "... plus this fixed part, s", a => a.TimeSeconds, (a, v) => a with { TimeSeconds = v }, 10),
+        Accuracy("default_current_accuracy_pct", "current accuracy where the register states none, % of reading",
+            a => a.CurrentPercent, (a, v) => a with { CurrentPercent = v }, 100),
+        Accuracy("default_current_accuracy_a", "... plus this fixed part, A", a => a.CurrentAmperes, (a, v) => a with { CurrentAmperes = v }, 100000),
+        Accuracy("default_resistance_accuracy_pct", "contact resistance accuracy where the register states none, % of reading",
+            a => a.ResistancePercent, (a, v) => a with { ResistancePercent = v }, 100),
+        Accuracy("default_resistance_accuracy_uohm", "... plus this fixed part, uOhm", a => a.ResistanceMicroOhms, (a, v) => a with { ResistanceMicroOhms = v }, 1000000),
+        Accuracy("default_insulation_accuracy_pct", "insulation resistance accuracy where the register states none, % of reading",
+            a => a.InsulationPercent, (a, v) => a with { InsulationPercent = v }, 100),
+        Number("default_coverage_factor", "coverage factor k of U = k u where the register states none (GUM: 2, about 95 %)",
+            p => p.DefaultAccuracy.CoverageFactor ?? 2, (p, v) => p with { DefaultAccuracy = p.DefaultAccuracy with { CoverageFactor = v } }, 1, 4),
         .. Enum.GetValues<ConditionGrade>().Select(g => Whole($"due_months.{TextCodes.Grade.Of(g)}",
             g == ConditionGrade.Untested ? "months from commissioning to the first as-found test of a device never tested"
                 : $"months from the latest as-found test to the next, grade {TextCodes.Grade.Of(g)}",
@@ -168,6 +187,10 @@ public static class PolicyFile
         new(name, $"{comment} [{min.ToString(CultureInfo.InvariantCulture)} to {max.ToString(CultureInfo.InvariantCulture)}]",
             p => get(p).ToString("0.###", CultureInfo.InvariantCulture),
             (p, v) => double.TryParse(v, NumberStyles.Float, CultureInfo.InvariantCulture, out var x) && x >= min && x <= max ? set(p, x) : null);
+
+    // One default accuracy figure: a number from 0 to max, stored in the policy's default instrument accuracy.
+    private static Key Accuracy(string name, string comment, Func<InstrumentAccuracy, double?> get, Func<InstrumentAccuracy, double, InstrumentAccuracy> set, double max) =>
+        Number(name, comment + " (lab policy)", p => get(p.DefaultAccuracy) ?? 0, (p, v) => p with { DefaultAccuracy = set(p.DefaultAccuracy, v) }, 0, max);
 
     private static Key Whole(string name, string comment, Func<FindingPolicy, int> get, Func<FindingPolicy, int, FindingPolicy> set, int min, int max) =>
         new(name, $"{comment} [{min} to {max}]", p => get(p).ToString(CultureInfo.InvariantCulture),

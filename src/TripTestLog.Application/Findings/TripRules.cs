@@ -50,11 +50,47 @@ internal static class TripRules
         }
     }
 
+    // A result within the measurement uncertainty of its limit (under the guarded or non-binary rule) asks for a retest
+    // with a more accurate instrument; a decided result at the point clears it.
+    private static void Accuracy(JudgedTrip judged, TripPoint point, FindingLedger ledger)
+    {
+        var m = judged.Trip.Measurement;
+        var a = judged.Assessment;
+        var subject = "accuracy|" + point.Key;
+        if (a.Uncertainty is not { Conditional: true } u)
+        {
+            if (a.Verdict != Verdict.NotAssessable)
+            {
+                ledger.Clear(subject, m.TestedAt, $"{Format(a.Verdict)} at {point.Label} clear of the measurement uncertainty");
+            }
+
+            return;
+        }
+
+        var statement = u.Conformity is { } c ? $" ({TextCodes.Conformity.Of(c)})" : "";
+        ledger.Raise(subject, new Finding(FindingKind.RetestAccuracy, Severity.Investigate, m.Tag, m.TestedAt,
+            $"decision rule {TextCodes.DecisionRule.Of(u.Rule)} (ILAC-G8): a result within the guard band of its limit is not a confident decision",
+            $"{TextCodes.Stage.Of(m.Stage)} at {point.Label} is within the measurement uncertainty of its limit{statement}: {a.Reason}; "
+            + $"retest with a more accurate instrument", [Source(judged)])
+        {
+            Point = point.Label,
+            Instrument = m.Instrument,
+            Value = new Reading(m.Outcome.Time.Value, ReadingUnit.Seconds),
+        });
+    }
+
     // A not-assessable verdict never vanishes: one open finding per device and point until a test there decides.
     private static void Retest(JudgedTrip judged, TripPoint point, FindingLedger ledger)
     {
         var m = judged.Trip.Measurement;
         var a = judged.Assessment;
+        Accuracy(judged, point, ledger);
+        if (a.Uncertainty is { Conditional: true } && a.Verdict == Verdict.NotAssessable)
+        {
+            // Withheld by the guard band: the retest it needs is one with a better instrument, raised above.
+            return;
+        }
+
         if (a.Verdict != Verdict.NotAssessable)
         {
             // A test that decides clears the retest at its own point, and at the standard's point it proved or broke.

@@ -165,7 +165,7 @@ internal static class CheckCommand
         var output = new VerdictWriters(writer, counts);
         try
         {
-            foreach (var judged in CheckPipeline.Run(store, only, requireRegistered || policy.Policy.RequireRegisteredInstruments, cli.Cancel, policy.Policy.AmbientNoteKelvin, policy.Policy.PointWindowPercent / 100))
+            foreach (var judged in CheckPipeline.Run(store, only, requireRegistered || policy.Policy.RequireRegisteredInstruments, cli.Cancel, policy.Policy.AmbientNoteKelvin, policy.Policy.PointWindowPercent / 100, policy.Policy.Decision))
             {
                 if (filter.Admits(judged))
                 {

@@ -103,7 +103,7 @@ internal static class DemoCommand
         {
             outcomes = new ImportRunner(store, log, cli).Run(files, ImportOptions.Strict, asOf);
             var writers = new VerdictWriters(new VerdictTable(textWriter), new VerdictJson(jsonWriter), counts, attention);
-            foreach (var judged in CheckPipeline.Run(store, null, policy.Policy.RequireRegisteredInstruments, cli.Cancel, policy.Policy.AmbientNoteKelvin, policy.Policy.PointWindowPercent / 100))
+            foreach (var judged in CheckPipeline.Run(store, null, policy.Policy.RequireRegisteredInstruments, cli.Cancel, policy.Policy.AmbientNoteKelvin, policy.Policy.PointWindowPercent / 100, policy.Policy.Decision))
             {
                 writers.Add(judged);
             }

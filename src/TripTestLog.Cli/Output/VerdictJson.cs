@@ -62,7 +62,12 @@ internal sealed class VerdictJson(TextWriter writer) : IVerdictWriter
             Format.Edge(band.TypicalMinimum?.Limit?.Value),
             Format.Edge(band.TypicalMaximum?.Limit?.Value),
             a.Advisories.Select(x => x.Message).ToList(),
-            a.Proved);
+            a.Proved,
+            a.Uncertainty?.Time is { } u ? Format.Edge(u.Value) : null,
+            a.Uncertainty is { } ui ? Format.Edge(ui.CurrentAmperes) : null,
+            Domain.Codes.TextCodes.DecisionRule.Of(a.Uncertainty?.Rule ?? Domain.Verdicts.DecisionRule.Simple),
+            a.Uncertainty?.Conformity is { } c ? Domain.Codes.TextCodes.Conformity.Of(c) : null,
+            a.Uncertainty?.FromDefaults.Where(d => d is "time" or "current" or "k").ToList() ?? []);
     }
 
     // A test held without a trip to or past the band's maximum has no known trip time (only a later one), so no margin.
@@ -104,7 +109,12 @@ internal sealed class VerdictJson(TextWriter writer) : IVerdictWriter
         double? TypicalMinS,
         double? TypicalMaxS,
         IReadOnlyList<string> Advisories,
-        string? Proved);
+        string? Proved,
+        double? UncertaintyS,
+        double? UncertaintyA,
+        string DecisionRule,
+        string? Conformity,
+        IReadOnlyList<string> AccuracyDefaults);
 }
 
 /// <summary>Serialisation of verdict rows generated at build time: no reflection per row on a million-row check.</summary>

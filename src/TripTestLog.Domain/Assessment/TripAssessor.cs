@@ -18,9 +18,15 @@ namespace TripTestLog.Domain.Assessment;
 /// <param name="ambientTables">Ambient tables by name.</param>
 /// <param name="ambientNoteKelvin">How far from the reference ambient a thermal verdict carries a note, in kelvin.</param>
 /// <param name="pointWindow">The lab's test-current tolerance within which a test is a test of a standard's point.</param>
+/// <param name="decision">The lab's decision rule and default accuracies (default: simple acceptance).</param>
+/// <param name="instruments">The instrument register the accuracy of each test's instrument is read from.</param>
 public sealed partial class TripAssessor(IReadOnlyDictionary<string, CurveTable> curveTables, IReadOnlyDictionary<string, AmbientTable> ambientTables,
-    double ambientNoteKelvin = LabPolicy.AmbientNoteKelvin, double pointWindow = LabPolicy.PointWindow)
+    double ambientNoteKelvin = LabPolicy.AmbientNoteKelvin, double pointWindow = LabPolicy.PointWindow, DecisionPolicy? decision = null,
+    Instruments.InstrumentRegister? instruments = null)
 {
+    private readonly DecisionPolicy _decision = decision ?? DecisionPolicy.Default;
+    private readonly Instruments.InstrumentRegister _instruments = instruments ?? Instruments.InstrumentRegister.Empty;
+
     private readonly Dictionary<(Device, DeviceSettings, double, AmbientShift), ITripEnvelope> _envelopes = [];
 
     /// <summary>The result of judging one test: the envelope used and the assessment.</summary>
@@ -42,6 +48,10 @@ public sealed partial class TripAssessor(IReadOnlyDictionary<string, CurveTable>
             ?? CheckCurveTableAmbient(assessment, device, settings, thermal, envelope, conditions)
             ?? CheckResidual(assessment, device, conditions)
             ?? assessment;
+
+        // The decision rule comes last: it weighs the verdict the checks left against the instrument's accuracy.
+        var accuracy = _decision.AccuracyOf(_instruments, measurement.Instrument, measurement.TestedAt.Date);
+        assessment = TripJudge.ApplyRule(assessment, envelope, conditions, accuracy, _decision.Rule, _decision.GuardBandFactor);
         return new Result(device, envelope, assessment with { Notes = [.. notes, .. assessment.Notes] });
     }
 

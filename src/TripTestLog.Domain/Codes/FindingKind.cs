@@ -53,4 +53,7 @@ public enum FindingKind
 
     /// <summary>An insulation test made at a lower DC voltage than the policy's table asks for the breaker's rated voltage.</summary>
     InsulationTestVoltage,
+
+    /// <summary>A result within the measurement uncertainty of its limit: a test with a more accurate instrument would decide.</summary>
+    RetestAccuracy,
 }

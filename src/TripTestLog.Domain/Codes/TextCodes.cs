@@ -48,6 +48,15 @@ public static class TextCodes
         (Verdicts.Verdict.Pass, "pass"), (Verdicts.Verdict.TooEarly, "too-early"), (Verdicts.Verdict.TooLate, "too-late"),
         (Verdicts.Verdict.NotAssessable, "not-assessable"));
 
+    /// <summary>Decision rules: simple, guarded, non-binary.</summary>
+    public static CodeBook<DecisionRule> DecisionRule { get; } = new("decision rule",
+        (Verdicts.DecisionRule.Simple, "simple"), (Verdicts.DecisionRule.Guarded, "guarded"), (Verdicts.DecisionRule.NonBinary, "non-binary"));
+
+    /// <summary>Statements of conformity: pass, conditional-pass, conditional-fail, fail.</summary>
+    public static CodeBook<Conformity> Conformity { get; } = new("conformity",
+        (Verdicts.Conformity.Pass, "pass"), (Verdicts.Conformity.ConditionalPass, "conditional-pass"),
+        (Verdicts.Conformity.ConditionalFail, "conditional-fail"), (Verdicts.Conformity.Fail, "fail"));
+
     /// <summary>Finding kinds, as documented in the README.</summary>
     public static CodeBook<FindingKind> FindingKind { get; } = new("finding kind",
         (Codes.FindingKind.TripOutOfBand, "trip-out-of-band"),
@@ -66,7 +75,8 @@ public static class TextCodes
         (Codes.FindingKind.SettingsDiffer, "settings-differ"),
         (Codes.FindingKind.TestOverdue, "test-overdue"),
         (Codes.FindingKind.RetestNeeded, "retest-needed"),
-        (Codes.FindingKind.InsulationTestVoltage, "insulation-test-voltage"));
+        (Codes.FindingKind.InsulationTestVoltage, "insulation-test-voltage"),
+        (Codes.FindingKind.RetestAccuracy, "retest-accuracy"));
 
     /// <summary>Finding severities, in rising order.</summary>
     public static CodeBook<Severity> Severity { get; } = new("severity",

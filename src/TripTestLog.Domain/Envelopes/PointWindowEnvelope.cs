@@ -59,6 +59,9 @@ public sealed class PointWindowEnvelope : ITripEnvelope
         return new PointWindowEnvelope(inner, window, ambient ?? AmbientShift.None);
     }
 
+    /// <summary>This envelope with its window widened by <paramref name="extra"/> (a fraction), at most to 10 %, the ambient kept.</summary>
+    public PointWindowEnvelope Widened(double extra) => new(_inner, Math.Min(0.1, Window + Math.Max(0, extra)), _ambient);
+
     /// <inheritdoc />
     public bool IsThermal(Amperes current) => _inner.IsThermal(current);
 

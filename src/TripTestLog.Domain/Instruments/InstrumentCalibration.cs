@@ -6,4 +6,8 @@ namespace TripTestLog.Domain.Instruments;
 /// <param name="Serial">Its serial number.</param>
 /// <param name="CalibratedOn">The date of the calibration.</param>
 /// <param name="CalibrationDue">The date the calibration lapses (the last day it is valid).</param>
-public sealed record InstrumentCalibration(string Instrument, string Kind, string Serial, DateOnly CalibratedOn, DateOnly CalibrationDue);
+public sealed record InstrumentCalibration(string Instrument, string Kind, string Serial, DateOnly CalibratedOn, DateOnly CalibrationDue)
+{
+    /// <summary>The accuracy the calibration states; <see cref="InstrumentAccuracy.None"/> when the register gives none.</summary>
+    public InstrumentAccuracy Accuracy { get; init; } = InstrumentAccuracy.None;
+}

@@ -15,6 +15,13 @@ public sealed class InstrumentRegister(IReadOnlyList<InstrumentCalibration> cali
     public InstrumentCalibration? PeriodOn(string instrument, DateOnly date) =>
         _byName[instrument].Where(p => p.CalibratedOn <= date && date <= p.CalibrationDue).OrderByDescending(p => p.CalibratedOn).FirstOrDefault();
 
+    /// <summary>
+    /// The accuracy stated for <paramref name="instrument"/> on <paramref name="date"/>: of the periods covering the date,
+    /// the last imported that states one; <see cref="InstrumentAccuracy.None"/> when none does.
+    /// </summary>
+    public InstrumentAccuracy AccuracyOn(string instrument, DateOnly date) =>
+        _byName[instrument].LastOrDefault(p => p.CalibratedOn <= date && date <= p.CalibrationDue && !p.Accuracy.IsEmpty)?.Accuracy ?? InstrumentAccuracy.None;
+
     /// <summary>Every registered instrument's name, in order.</summary>
     public IEnumerable<string> Instruments => _byName.Select(g => g.Key).Order(StringComparer.Ordinal);
 

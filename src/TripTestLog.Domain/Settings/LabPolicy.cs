@@ -93,4 +93,13 @@ public static class LabPolicy
 
     /// <summary>The multiple of Ir at which the long-time delay tr is stated when the entry does not say: 6 (common maker practice).</summary>
     public const double TrReferenceMultiple = 6.0;
+
+    /// <summary>
+    /// The accuracy assumed for a test instrument the register states none for: time ±(0.5 % + 10 ms), current ±2 %, contact
+    /// resistance ±(1 % + 1 uOhm), insulation resistance ±5 %, coverage factor k = 2. A lab policy: figures of the order
+    /// test sets and meters commonly declare (from memory); k = 2 gives about 95 % coverage (GUM, JCGM 100:2008, 6.3.3).
+    /// </summary>
+    public static Instruments.InstrumentAccuracy DefaultAccuracy { get; } =
+        Instruments.InstrumentAccuracy.Of(timePercent: 0.5, timeSeconds: 0.01, currentPercent: 2, currentAmperes: 0, resistancePercent: 1,
+            resistanceMicroOhms: 1, insulationPercent: 5, coverageFactor: 2);
 }

@@ -32,6 +32,9 @@ public sealed record TripAssessment(
     /// <summary>Results outside a typical edge: never a failure, but worth a look.</summary>
     public IReadOnlyList<Advisory> Advisories { get; init; } = [];
 
+    /// <summary>The measurement uncertainty behind the verdict and the decision rule it was given under; null when not assessed.</summary>
+    public VerdictUncertainty? Uncertainty { get; init; }
+
     /// <summary>Whether the verdict is a failure: too early or too late.</summary>
     public bool IsFailure => Verdict is Verdict.TooEarly or Verdict.TooLate;
 }

@@ -78,7 +78,9 @@ internal sealed record RecordSchema(RecordKind Kind, IReadOnlyList<ColumnSpec> C
 
     public static RecordSchema Instruments { get; } = new(
         RecordKind.InstrumentRegister,
-        [Req("instrument"), Req("kind"), Req("serial"), Req("calibrated_on"), Req("calibration_due")],
+        [Req("instrument"), Req("kind"), Req("serial"), Req("calibrated_on"), Req("calibration_due"),
+            Opt("time_accuracy_pct"), Opt("time_accuracy_s"), Opt("current_accuracy_pct"), Opt("current_accuracy_a"),
+            Opt("resistance_accuracy_pct"), Opt("resistance_accuracy_uohm"), Opt("insulation_accuracy_pct"), Opt("coverage_factor")],
         ["calibrated_on", "calibration_due"]);
 
     public static IReadOnlyList<RecordSchema> All { get; } = [Register, Trip, Contact, Insulation, CurveTable, AmbientTable, Instruments];

@@ -15,6 +15,22 @@ internal sealed class InstrumentRow
 
     public string CalibrationDue { get; set; } = "";
 
+    public double? TimeAccuracyPct { get; set; }
+
+    public double? TimeAccuracyS { get; set; }
+
+    public double? CurrentAccuracyPct { get; set; }
+
+    public double? CurrentAccuracyA { get; set; }
+
+    public double? ResistanceAccuracyPct { get; set; }
+
+    public double? ResistanceAccuracyUohm { get; set; }
+
+    public double? InsulationAccuracyPct { get; set; }
+
+    public double? CoverageFactor { get; set; }
+
     public long SourceFileId { get; set; }
 
     public long SourceLine { get; set; }

@@ -40,6 +40,10 @@ internal sealed class FindingsStore : IDisposable
     /// <summary>Any record file, with its own header (a register with settings columns, say).</summary>
     public FindingsStore Records(string header, params string[] rows) => Import(header, rows);
 
+    public FindingsStore Instruments(params string[] rows) => Import(
+        "instrument,kind,serial,calibrated_on,calibration_due,time_accuracy_pct,time_accuracy_s,current_accuracy_pct,current_accuracy_a,"
+        + "resistance_accuracy_pct,resistance_accuracy_uohm,insulation_accuracy_pct,coverage_factor", rows);
+
     public IReadOnlyList<DeviceCondition> Conditions(FindingPolicy? policy = null, DateOnly? asOf = null) =>
         [.. FindingsPipeline.Run(_store, policy ?? FindingPolicy.Default, asOf ?? AsOf)];
 

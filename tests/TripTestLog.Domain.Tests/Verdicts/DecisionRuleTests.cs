@@ -1,0 +1,145 @@
+using TripTestLog.Domain.Codes;
+using TripTestLog.Domain.Devices;
+using TripTestLog.Domain.Envelopes;
+using TripTestLog.Domain.Instruments;
+using TripTestLog.Domain.Measurements;
+using TripTestLog.Domain.Quantities;
+using TripTestLog.Domain.Verdicts;
+
+namespace TripTestLog.Domain.Tests.Verdicts;
+
+/// <summary>
+/// The decision rules of ILAC-G8:09/2019 on worked examples done by hand. Each accuracy ±a is rectangular, u = a / √3
+/// (GUM, JCGM 100:2008, 4.3.7); time and current combine through the limit's slope by root-sum-square (GUM 5.1.2);
+/// U = k u with k = 2. Limits from IEC 60898-1:2015 Table 7 row c (C16 from cold at 2.55 In = 40.8 A: 1 s &lt; t &lt; 60 s).
+/// </summary>
+public sealed class DecisionRuleTests
+{
+    // A timer accurate to ±(0.5 % + 10 ms) and a current taken as exact, so only the time counts.
+    private static readonly ResolvedAccuracy TimerOnly = InstrumentAccuracy.Of(timePercent: 0.5, timeSeconds: 0.01, currentPercent: 0, currentAmperes: 0,
+        coverageFactor: 2).Over(InstrumentAccuracy.None);
+
+    // The same timer and a clamp accurate to ±2 %.
+    private static readonly ResolvedAccuracy TimerAndClamp = InstrumentAccuracy.Of(timePercent: 0.5, timeSeconds: 0.01, currentPercent: 2,
+        coverageFactor: 2).Over(InstrumentAccuracy.None);
+
+    private static TripAssessment Under(DecisionRule rule, double amps, double seconds, ResolvedAccuracy accuracy)
+    {
+        var envelope = PointWindowEnvelope.Of(new Iec60898Envelope(TripCurve.C, Amperes.Of(16)));
+        var m = new TripMeasurement(AssetTag.Of("U-1"), TestedAt.OnDate(new DateOnly(2025, 5, 6)), TestStage.AsFound, Pole.All, Amperes.Of(amps),
+            TripOutcome.TrippedAfter(Seconds.Of(seconds)), StartCondition.Cold, null, "", "", "");
+        var conditions = TestConditions.Reference;
+        return TripJudge.ApplyRule(TripJudge.Assess(envelope, m, conditions), envelope, conditions, accuracy, rule);
+    }
+
+    [Fact]
+    public void ATrip_At59_9s_AgainstRowCs60s_WithATimerOfHalfAPerCentPlus10ms()
+    {
+        // By hand: a = 0.005 x 59.9 + 0.010 = 0.3095 s; u = 0.3095 / √3 = 0.17869 s; U = 2u = 0.35738 s. The trip is 0.1 s
+        // inside the limit, less than U.
+        var simple = Under(DecisionRule.Simple, 40.8, 59.9, TimerOnly);
+        var guarded = Under(DecisionRule.Guarded, 40.8, 59.9, TimerOnly);
+        var nonBinary = Under(DecisionRule.NonBinary, 40.8, 59.9, TimerOnly);
+
+        Assert.Equal(Verdict.Pass, simple.Verdict);
+        Assert.Equal(0.35738, simple.Uncertainty!.Time!.Value.Value, 4);
+        Assert.Null(simple.Uncertainty.Conformity);
+        Assert.False(simple.Uncertainty.Conditional);
+
+        Assert.Equal(Verdict.NotAssessable, guarded.Verdict);
+        Assert.StartsWith("within the measurement uncertainty of the limit", guarded.Reason);
+        Assert.Contains("0.1 s inside the 60 s maximum", guarded.Reason);
+        Assert.Contains("U = 0.3574 s", guarded.Reason);
+        Assert.Null(guarded.Proved);
+        Assert.True(guarded.Uncertainty!.Conditional);
+
+        Assert.Equal(Verdict.Pass, nonBinary.Verdict);
+        Assert.Equal(Conformity.ConditionalPass, nonBinary.Uncertainty!.Conformity);
+    }
+
+    [Theory]
+    // 59.5 s: a = 0.3075, U = 0.35507 s, 0.5 s inside: a pass under every rule.
+    [InlineData(59.5, Verdict.Pass, Verdict.Pass, Conformity.Pass)]
+    // 60.2 s: a = 0.311, U = 0.35911 s, 0.2 s past: too late as written, within U of the limit.
+    [InlineData(60.2, Verdict.TooLate, Verdict.NotAssessable, Conformity.ConditionalFail)]
+    // 60.5 s: a = 0.3125, U = 0.36084 s, 0.5 s past: a failure under every rule.
+    [InlineData(60.5, Verdict.TooLate, Verdict.TooLate, Conformity.Fail)]
+    public void EitherSideOfRowCs60s(double seconds, Verdict simple, Verdict guarded, Conformity statement)
+    {
+        Assert.Equal(simple, Under(DecisionRule.Simple, 40.8, seconds, TimerOnly).Verdict);
+        Assert.Equal(guarded, Under(DecisionRule.Guarded, 40.8, seconds, TimerOnly).Verdict);
+        var nb = Under(DecisionRule.NonBinary, 40.8, seconds, TimerOnly);
+        Assert.Equal(simple, nb.Verdict);
+        Assert.Equal(statement, nb.Uncertainty!.Conformity);
+    }
+
+    [Fact]
+    public void ACurrentOnePerCentUnderRowC_WithAClampOfTwoPerCent_CarriesTheLimitsSlope()
+    {
+        // 40.392 A = 2.5245 In, 1 % under row c. Its limit moves by the first-order thermal bound (judging.md):
+        // T(M) = 60 s x g(1.45 / M) / g(1.45 / 2.55), g(y) = -ln(1 - y²): T = 60 x 0.400333 / 0.390568 = 61.50 s.
+        // dT/dM = 60 / 0.390568 x g'(y) dy/dM, g'(y) = 2y / (1 - y²) = 1.714289, dy/dM = -1.45 / M² = -0.227519:
+        // dT/dM = -59.92 s per In, so dT/dI = -3.745 s/A. u(I) = 0.02 x 40.392 / √3 = 0.46641 A: 1.7467 s through the slope.
+        // At 58.5 s, u(t) = (0.2925 + 0.01) / √3 = 0.17465 s; u = √(0.17465² + 1.7467²) = 1.7554 s; U = 3.511 s.
+        var simple = Under(DecisionRule.Simple, 40.392, 58.5, TimerAndClamp);
+        var guarded = Under(DecisionRule.Guarded, 40.392, 58.5, TimerAndClamp);
+
+        Assert.Equal(Verdict.Pass, simple.Verdict);
+        Assert.Equal(61.50, simple.Band.Maximum.Limit!.Value.Value, 2);
+        Assert.Equal(3.511, simple.Uncertainty!.Time!.Value.Value, 2);
+        Assert.Equal(2 * 0.46641, simple.Uncertainty.CurrentAmperes, 4);
+
+        // 3.0 s inside the moved limit, less than U: within the uncertainty. 50 s is 11.5 s inside: a pass.
+        Assert.Equal(Verdict.NotAssessable, guarded.Verdict);
+        Assert.Equal(Verdict.Pass, Under(DecisionRule.Guarded, 40.392, 50, TimerAndClamp).Verdict);
+    }
+
+    [Fact]
+    public void ACurrentJustOutsideThePointWindow_IsInsideItOnceTheClampsUncertaintyWidensIt()
+    {
+        // 39.35 A = 2.459 In, 3.6 % under row c, outside the ±3 % window: a 62 s trip breaks nothing and proves nothing.
+        // With a ±2 % clamp (U(I) = 2.31 % of the reading) the test may have been within 3 % of row c, where its moved
+        // limit (g(0.58958) / g(0.56863) = 0.42710 / 0.39057 = x1.0935, 65.6 s at 2.459 In) holds: simple says not assessable; guarded also, and says why.
+        var simple = Under(DecisionRule.Simple, 39.35, 62, TimerAndClamp);
+        var guarded = Under(DecisionRule.Guarded, 39.35, 62, TimerAndClamp);
+
+        Assert.Equal(Verdict.NotAssessable, simple.Verdict);
+        Assert.Equal(Verdict.NotAssessable, guarded.Verdict);
+
+        // A trip of 30 s there proves row c a fortiori at any current within the clamp's uncertainty: a pass under guarded too.
+        Assert.Equal(Verdict.Pass, Under(DecisionRule.Guarded, 39.35, 30, TimerAndClamp).Verdict);
+    }
+
+    [Fact]
+    public void TheRulesAndStatementsHaveOneCodeEach()
+    {
+        Assert.Equal(["simple", "guarded", "non-binary"], TextCodes.DecisionRule.All);
+        Assert.Equal(["pass", "conditional-pass", "conditional-fail", "fail"], TextCodes.Conformity.All);
+        Assert.Equal("retest-accuracy", TextCodes.FindingKind.Of(FindingKind.RetestAccuracy));
+    }
+
+    [Theory]
+    [InlineData(double.NaN)]
+    [InlineData(double.PositiveInfinity)]
+    [InlineData(-0.1)]
+    [InlineData(100.1)]
+    public void AnAccuracyOutsideItsRange_IsRefused(double percent)
+    {
+        var e = Assert.Throws<ArgumentOutOfRangeException>(() => InstrumentAccuracy.Of(timePercent: percent));
+        Assert.Equal("timePercent", e.ParamName);
+    }
+
+    [Fact]
+    public void WhatTheRegisterLeavesOut_ComesFromTheDefaults_AndSaysSo()
+    {
+        var stated = InstrumentAccuracy.Of(timePercent: 0.1);
+        var resolved = stated.Over(InstrumentAccuracy.Of(timePercent: 0.5, timeSeconds: 0.01, currentPercent: 2, coverageFactor: 2));
+
+        // The time is stated (its fixed part then zero); the current and k come from the defaults.
+        Assert.Equal(0.1, resolved.TimePercent);
+        Assert.Equal(0, resolved.TimeSeconds);
+        Assert.Equal(2, resolved.CurrentPercent);
+        Assert.Equal(["current", "resistance", "insulation", "k"], resolved.FromDefaults);
+        Assert.Contains("current from the lab policy's defaults", resolved.Words(true, true, false, false));
+    }
+}
