@@ -71,7 +71,7 @@ internal static class DepotFleet
             var at = day.AddHours((i - 1) % 5 * 1.5).AddDays((i - 1) / 5);
             var instrument = i == 10 && year == Years - 1 ? "INJ-CWD-LOAN" : "INJ-CWD-1";
             var tech = Technicians[(i + year) % 2];
-            var ambient = F(20 + random.NextDouble() * 4, "0.0");
+            var ambient = F(27 + random.NextDouble() * 4, "0.0");
 
             void Trip(DateTime when, double multiple, double? trip, double? held, string start, string note = "") =>
                 Row(sb, Tag(i), Iso(when), "as-found", "all", F(Rated * multiple * (1.003 + random.NextDouble() * 0.01), "0.00"),

@@ -143,10 +143,11 @@ public sealed class FindingsCommandTests(SampleFleetDatabase fleet) : IClassFixt
         // Copperwell's ohmmeter OHM-CWD-1 was out of calibration for the depot's 2026 contact tests: the devices whose
         // worst finding that is share one line of the priority list.
         var (_, output, _) = Run("fleet", "--top", "60");
-        var text = System.Text.RegularExpressions.Regex.Replace(output, @"\s+", " ");
+        var priority = output[..output.IndexOf("Which models fail", StringComparison.Ordinal)];
+        var text = System.Text.RegularExpressions.Regex.Replace(priority, @"\s+", " ");
 
         Assert.Single(System.Text.RegularExpressions.Regex.Matches(text, @"one cause \(instrument OHM-CWD-1\)"));
-        Assert.Matches(@"one cause \(instrument OHM-CWD-1\) on \d+ devices: CWD-DB1-Q01, CWD-DB1-Q02, CWD-DB1-Q03", text);
+        Assert.Matches(@"one cause \(instrument OHM-CWD-1\) on 5 devices: CWD-DB1-Q0\d(, CWD-DB1-Q0\d){4}", text);
         Assert.DoesNotContain(" +1", text, StringComparison.Ordinal);
         Assert.DoesNotContain(" +2", text, StringComparison.Ordinal);
     }

@@ -19,7 +19,7 @@ public sealed partial class PrintedPageTests(SampleFleetDatabase fleet) : IClass
     {
         // Twelve trip tests over the years, contact and insulation history, findings and the sign-off.
         { "devices/ARW-MCC-Q01.html", "A4", 2 },
-        { "devices/ARW-MCC-Q01.html", "Letter", 2 },
+        { "devices/ARW-MCC-Q01.html", "Letter", 3 },
         // Thirty-one trip tests on six dates and twelve insulation readings.
         { "devices/BPS-DB1-Q03.html", "A4", 3 },
         { "devices/BPS-DB1-Q03.html", "Letter", 3 },

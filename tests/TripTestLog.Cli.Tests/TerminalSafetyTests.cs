@@ -45,7 +45,7 @@ public sealed class TerminalSafetyTests : IDisposable
 
         Assert.Contains("4\\x1b[2J\\x1b[H\\x1b]0;owned\\x07", runs[0].Out);
         Assert.Contains("Site 4\\x1b[2J", runs[1].Out + runs[2].Out);
-        Assert.Contains("4\\x1b[2J\\x1b[H", runs[3].Out);
+        Assert.Contains("\\x1b[H\\x1b]0;owned\\x07", runs[3].Out); // the site column shortens a long name from the front
         foreach (var (exit, output, error) in runs)
         {
             Assert.DoesNotContain('\u001b', output + error);

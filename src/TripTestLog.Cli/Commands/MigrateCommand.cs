@@ -1,8 +1,6 @@
 using System.CommandLine;
 using TripTestLog.Application.Stores;
 using TripTestLog.Cli.Services;
-using TripTestLog.Storage;
-using TripTestLog.Storage.Postgres;
 
 namespace TripTestLog.Cli.Commands;
 
@@ -29,12 +27,7 @@ internal static class MigrateCommand
         }
 
         using var store = Stores.Open(cli, db, StorePurpose.Migrate);
-        var applied = store switch
-        {
-            RecordStore file => file.AppliedMigrations(),
-            PostgresRecordStore server => server.AppliedMigrations(),
-            _ => [],
-        };
+        var applied = Stores.AppliedMigrations(store);
         cli.Out.WriteLine($"The schema of {db.Display} is up to date: {applied.Count} migrations, the latest {(applied.Count > 0 ? applied[^1] : "none")}.");
         return ExitCodes.Ok;
     }

@@ -67,4 +67,12 @@ internal static class Stores
 
         return false;
     }
+
+    /// <summary>The migrations applied to <paramref name="store"/>, oldest first.</summary>
+    public static IReadOnlyList<string> AppliedMigrations(IRecordStore store) => store switch
+    {
+        RecordStore file => file.AppliedMigrations(),
+        PostgresRecordStore server => server.AppliedMigrations(),
+        _ => [],
+    };
 }
