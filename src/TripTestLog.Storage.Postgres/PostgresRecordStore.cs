@@ -85,11 +85,7 @@ public sealed partial class PostgresRecordStore : IRecordStore
     }
 
     /// <summary>The migrations applied to this database, oldest first.</summary>
-    public IReadOnlyList<string> AppliedMigrations()
-    {
-        using var context = new TripTestLogContext(ServerStoreOptions.For(_connection));
-        return context.Database.GetAppliedMigrations().ToList();
-    }
+    public IReadOnlyList<string> AppliedMigrations() => ServerSchema.Applied(_connection) ?? [];
 
     /// <inheritdoc />
     public void Dispose()

@@ -13,8 +13,7 @@ internal static class ServerSchema
 {
     public static void BringUpToDate(string display, NpgsqlConnection connection, StoreOpening opening, long migrationLock)
     {
-        using var context = new TripTestLogContext(ServerStoreOptions.For(connection));
-        var known = context.Database.GetMigrations().ToList();
+        var known = Known;
         var applied = Applied(connection);
         if (applied is not null && applied.FirstOrDefault(m => !known.Contains(m)) is not null)
         {
@@ -38,6 +37,7 @@ internal static class ServerSchema
         TakeLock(display, connection, opening, migrationLock);
         try
         {
+            using var context = new TripTestLogContext(ServerStoreOptions.For(connection));
             context.Database.Migrate();
         }
         catch (PostgresException e) when (e.SqlState == PostgresErrorCodes.InsufficientPrivilege)
@@ -55,8 +55,13 @@ internal static class ServerSchema
     public static string ProgramVersion =>
         typeof(ServerSchema).Assembly.GetName().Version is { } v ? $"{v.Major}.{v.Minor}.{v.Build}" : "unknown";
 
+    /// <summary>The migrations this version knows, oldest first, read without starting EF Core.</summary>
+    public static IReadOnlyList<string> Known => KnownIds.Value;
+
+    private static readonly Lazy<IReadOnlyList<string>> KnownIds = new(() => MigrationIds.In(ServerStoreOptions.MigrationsAssembly));
+
     // The applied migrations by a plain SELECT, or null when the history table is not there (nothing was ever migrated).
-    private static List<string>? Applied(NpgsqlConnection connection)
+    internal static List<string>? Applied(NpgsqlConnection connection)
     {
         using (var exists = new NpgsqlCommand("SELECT to_regclass('\"__EFMigrationsHistory\"') IS NOT NULL", connection))
         {

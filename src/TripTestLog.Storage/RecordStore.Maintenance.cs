@@ -1,7 +1,7 @@
 using TripTestLog.Application.Stores;
 using System.Globalization;
 
-using Microsoft.EntityFrameworkCore;
+using TripTestLog.Storage.Entities;
 using TripTestLog.Domain.Instruments;
 
 namespace TripTestLog.Storage;
@@ -11,19 +11,17 @@ public sealed partial class RecordStore
     private static readonly string[] RecordTables = ["devices", "device_revisions", "trip_tests", "contact_tests", "insulation_tests", "curve_table_rows", "ambient_table_rows", "instruments"];
 
     /// <summary>Every instrument calibration period imported.</summary>
-    public InstrumentRegister Instruments() => new(_context.Instruments.AsNoTracking().AsEnumerable()
-        .OrderBy(i => i.Id)
-        .Select(i => new InstrumentCalibration(i.Instrument, i.Kind, i.Serial, Date(i.CalibratedOn), Date(i.CalibrationDue))
+    public InstrumentRegister Instruments() => new(Rows(
+        $"SELECT instrument, kind, serial, calibrated_on, calibration_due, {InstrumentAccuracyColumns.List} FROM instruments ORDER BY id",
+        r => new InstrumentCalibration(r.GetString(0), r.GetString(1), r.GetString(2), Date(r.GetString(3)), Date(r.GetString(4)))
         {
-            Accuracy = InstrumentAccuracy.Of(i.TimeAccuracyPct, i.TimeAccuracyS, i.CurrentAccuracyPct, i.CurrentAccuracyA, i.ResistanceAccuracyPct,
-                i.ResistanceAccuracyUohm, i.InsulationAccuracyPct, i.CoverageFactor),
-        })
-        .ToList());
+            Accuracy = InstrumentAccuracyColumns.Read(r, 5),
+        }));
 
     /// <summary>Every value a corrected file replaced, oldest first: table, record id, column, old value, new value.</summary>
     public IReadOnlyList<(string Table, long RecordId, string Column, string Old, string New)> AuditTrail() =>
-        _context.AuditChanges.AsNoTracking().OrderBy(a => a.Id).AsEnumerable()
-            .Select(a => (a.TableName, a.RecordId, a.ColumnName, a.OldValue, a.NewValue)).ToList();
+        Rows("SELECT table_name, record_id, column_name, old_value, new_value FROM audit_changes ORDER BY id",
+            r => (r.GetString(0), r.GetInt64(1), r.GetString(2), r.GetString(3), r.GetString(4)));
 
     /// <summary>
     /// SQLite's integrity and foreign-key checks, then the project's own: every record traces to an imported file, and
@@ -67,7 +65,8 @@ public sealed partial class RecordStore
             }
         }
 
-        var files = ImportedFiles.Check(_context.SourceFiles.AsNoTracking().OrderBy(f => f.Id).ToList(), counts);
+        var files = ImportedFiles.Check(Rows("SELECT id, file_name, full_path, sha256 FROM source_files ORDER BY id",
+            r => new SourceFileRow { Id = r.GetInt64(0), FileName = r.GetString(1), FullPath = r.GetString(2), Sha256 = r.GetString(3) }), counts);
         return new VerifyReport(integrity, foreignKeys, untraced, files) { AlteredRecords = fingerprints.Altered, AlteredExamples = fingerprints.ExamplesFound };
     }
 

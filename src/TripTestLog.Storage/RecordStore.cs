@@ -1,7 +1,6 @@
 using TripTestLog.Application.Stores;
 using TripTestLog.Application.Import;
 using Microsoft.Data.Sqlite;
-using Microsoft.EntityFrameworkCore;
 
 namespace TripTestLog.Storage;
 
@@ -12,13 +11,11 @@ namespace TripTestLog.Storage;
 public sealed partial class RecordStore : IRecordStore
 {
     private readonly SqliteConnection _connection;
-    private readonly TripTestLogContext _context;
 
-    private RecordStore(string path, SqliteConnection connection, TripTestLogContext context, StoreOpening opening)
+    private RecordStore(string path, SqliteConnection connection, StoreOpening opening)
     {
         Path = path;
         _connection = connection;
-        _context = context;
         Opening = opening;
     }
 
@@ -81,9 +78,8 @@ public sealed partial class RecordStore : IRecordStore
             // them to disk on every random insert); it is a ceiling, filled only as pages are touched.
             Execute(connection, "PRAGMA cache_size=-262144;");
             Execute(connection, "PRAGMA temp_store=MEMORY;");
-            var context = new TripTestLogContext(StoreOptions.For(connection));
-            SqliteSchema.BringUpToDate(path, connection, context, opening, isNew: !exists, guard);
-            return new RecordStore(path, connection, context, opening);
+            SqliteSchema.BringUpToDate(path, connection, opening, isNew: !exists, guard);
+            return new RecordStore(path, connection, opening);
         }
         catch
         {
@@ -96,12 +92,11 @@ public sealed partial class RecordStore : IRecordStore
     internal void ForeignKeys(bool on) => Execute(_connection, on ? "PRAGMA foreign_keys=ON;" : "PRAGMA foreign_keys=OFF;");
 
     /// <summary>The migrations applied to this database, oldest first.</summary>
-    public IReadOnlyList<string> AppliedMigrations() => _context.Database.GetAppliedMigrations().ToList();
+    public IReadOnlyList<string> AppliedMigrations() => SqliteSchema.Applied(_connection);
 
     /// <inheritdoc />
     public void Dispose()
     {
-        _context.Dispose();
         _connection.Dispose();
     }
 

@@ -42,9 +42,9 @@ internal static class SqliteSchema
     /// <summary>
     /// Checks the schema against this version's migrations and, where the purpose allows, applies the missing ones.
     /// </summary>
-    public static void BringUpToDate(string path, SqliteConnection connection, TripTestLogContext context, StoreOpening opening, bool isNew, MigrationGuard? held)
+    public static void BringUpToDate(string path, SqliteConnection connection, StoreOpening opening, bool isNew, MigrationGuard? held)
     {
-        var known = Known(context);
+        var known = Known;
         var state = Read(connection);
         if (!isNew && !state.HasHistory && !state.HasLock)
         {
@@ -76,7 +76,11 @@ internal static class SqliteSchema
 
         using var guard = held is null ? MigrationGuard.Take(path, opening) : null;
         ClearStaleLock(connection, opening, path);
-        Patiently(opening, path, () => context.Database.Migrate());
+        using (var context = new TripTestLogContext(StoreOptions.For(connection)))
+        {
+            Patiently(opening, path, () => context.Database.Migrate());
+        }
+
         Patiently(opening, path, () => FingerprintScheme.Upgrade(connection));
     }
 
@@ -85,7 +89,12 @@ internal static class SqliteSchema
         typeof(SqliteSchema).Assembly.GetName().Version is { } v ? $"{v.Major}.{v.Minor}.{v.Build}" : "unknown";
 
     /// <summary>The migrations this version knows, oldest first.</summary>
-    public static IReadOnlyList<string> Known(DbContext context) => context.Database.GetMigrations().ToList();
+    public static IReadOnlyList<string> Known => KnownIds.Value;
+
+    /// <summary>The migrations applied to the database on <paramref name="connection"/>, oldest first.</summary>
+    public static IReadOnlyList<string> Applied(SqliteConnection connection) => Read(connection).Applied;
+
+    private static readonly Lazy<IReadOnlyList<string>> KnownIds = new(() => MigrationIds.In(StoreOptions.MigrationsAssembly));
 
     private static SchemaState Read(SqliteConnection connection)
     {

@@ -10,6 +10,27 @@ namespace TripTestLog.Ingest.Tests;
 public sealed class SchemaUpgradeTests
 {
     [Fact]
+    public void TheMigrationsReadFromTheirAttributes_AreTheOnesEfCoreWouldApply()
+    {
+        // Opening a store compares the history table with the migrations read from the assembly's attributes, so that
+        // EF Core is started only to migrate; the two lists must be the same, in the same order.
+        using var connection = new SqliteConnection("Data Source=:memory:");
+        using var context = new TripTestLogContext(StoreOptions.For(connection));
+        var efCore = Microsoft.EntityFrameworkCore.RelationalDatabaseFacadeExtensions.GetMigrations(context.Database).ToList();
+
+        Assert.NotEmpty(efCore);
+        Assert.Equal(efCore, SqliteSchema.Known);
+        Assert.Equal(efCore, MigrationIds.In("TripTestLog.Migrations"));
+
+        // The server's migrations likewise; listing them opens no connection.
+        using var server = new Npgsql.NpgsqlConnection();
+        using var serverContext = new TripTestLogContext(TripTestLog.Storage.Postgres.ServerStoreOptions.For(server));
+        var serverMigrations = Microsoft.EntityFrameworkCore.RelationalDatabaseFacadeExtensions.GetMigrations(serverContext.Database).ToList();
+        Assert.NotEmpty(serverMigrations);
+        Assert.Equal(serverMigrations, TripTestLog.Storage.Postgres.ServerSchema.Known);
+    }
+
+    [Fact]
     public void ASchema1Database_UpgradesWithItsRecordsIntact()
     {
         using var temp = new TempFolder();
