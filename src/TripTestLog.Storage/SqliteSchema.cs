@@ -46,6 +46,16 @@ internal static class SqliteSchema
     {
         var known = Known;
         var state = Read(connection);
+
+        // A file with no schema yet may be one another import is creating this moment: a writer waits for its guard
+        // and looks again before judging the file, so two imports into a new database both succeed.
+        using var waited = !isNew && !state.HasHistory && held is null && opening.Purpose != StorePurpose.Read ? MigrationGuard.Take(path, opening) : null;
+        if (waited is not null)
+        {
+            state = Read(connection);
+            held = waited;
+        }
+
         if (!isNew && !state.HasHistory && !state.HasLock)
         {
             throw new StoreRefusedException(state.TableCount == 0

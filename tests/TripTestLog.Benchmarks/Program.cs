@@ -22,7 +22,8 @@ namespace TripTestLog.Benchmarks;
 /// With --pairs N, only the import against the insert floor at the largest --rows, N times alternated, and the median ratio.
 /// Diagnostic steps, run one at a time on a fleet written with --step generate: --step NAME --work DIR, where NAME is
 /// floor-schema (the raw insert into the project's own table), parse-only, rows-only, open-only, read-only, judge-only.
-/// With --one-device DB --asset TAG [--runs 10], the one-device commands as processes against a bare --version (OneDevice).
+/// With --one-device DB --asset TAG [--runs 10] [--before TOOL], the one-device commands as processes against a bare --version
+/// (OneDevice); --before names an earlier build's triptestlog to time beside this one in the same run.
 /// </summary>
 internal static class Program
 {
@@ -46,7 +47,7 @@ internal static class Program
             server = options.Server;
             if (options.OneDevice is { } database)
             {
-                return OneDevice.Run(database, options.Asset ?? throw new ArgumentException("--one-device needs --asset TAG"), options.Runs);
+                return OneDevice.Run(database, options.Asset ?? throw new ArgumentException("--one-device needs --asset TAG"), options.Runs, options.Before);
             }
 
             return options.Step is { } step ? RunStep(step, options.Work) : options.Pairs > 0 ? RunPairs(options) : RunAll(options);
@@ -453,6 +454,8 @@ internal static class Program
 
         public int Runs { get; init; } = 10;
 
+        public string? Before { get; init; }
+
         public static Options Parse(string[] args)
         {
             var rows = new List<long> { 100_000, 300_000, 1_000_000 };
@@ -463,6 +466,7 @@ internal static class Program
             string? server = null;
             string? oneDevice = null, asset = null;
             var runs = 10;
+            string? before = null;
             for (var i = 0; i < args.Length; i++)
             {
                 var value = i + 1 < args.Length ? args[i + 1] : throw new ArgumentException($"{args[i]} needs a value");
@@ -495,17 +499,20 @@ internal static class Program
                     case "--asset":
                         asset = value;
                         break;
+                    case "--before":
+                        before = value;
+                        break;
                     case "--runs":
                         runs = int.TryParse(value, out var r) && r is > 0 and <= 100 ? r : throw new ArgumentException("--runs takes a whole number from 1 to 100");
                         break;
                     default:
-                        throw new ArgumentException($"unknown option {args[i]}; use --rows, --devices, --files, --work, --pairs, --server, --one-device, --asset, --runs");
+                        throw new ArgumentException($"unknown option {args[i]}; use --rows, --devices, --files, --work, --pairs, --server, --one-device, --asset, --runs, --before");
                 }
 
                 i++;
             }
 
-            return new Options(rows, devices, files, work, step, pairs, server) { OneDevice = oneDevice, Asset = asset, Runs = runs };
+            return new Options(rows, devices, files, work, step, pairs, server) { OneDevice = oneDevice, Asset = asset, Runs = runs, Before = before };
         }
     }
 }
