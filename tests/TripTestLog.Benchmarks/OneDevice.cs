@@ -11,8 +11,13 @@ namespace TripTestLog.Benchmarks;
 /// </summary>
 internal static class OneDevice
 {
-    public static int Run(string database, string asset, int runs, string? before = null)
+    public static int Run(string database, string asset, int runs, string? before = null, string? tool = null)
     {
+        if (tool is not null && !File.Exists(tool))
+        {
+            throw new ArgumentException($"--tool: no executable at {tool}");
+        }
+
         if (before is not null && !File.Exists(before))
         {
             throw new ArgumentException($"--before: no executable at {before}");
@@ -23,7 +28,7 @@ internal static class OneDevice
             throw new ArgumentException($"--one-device: no database at {database}");
         }
 
-        var tool = Path.Combine(AppContext.BaseDirectory, OperatingSystem.IsWindows() ? "triptestlog.exe" : "triptestlog");
+        tool ??= Path.Combine(AppContext.BaseDirectory, OperatingSystem.IsWindows() ? "triptestlog.exe" : "triptestlog");
         string[][] commands =
         [
             ["--version"],
@@ -55,6 +60,7 @@ internal static class OneDevice
         }
 
         Console.WriteLine($"TripTestLog one-device answers, {asset} in {database}, median of {runs} runs, {Environment.ProcessorCount} cores, {DateTime.UtcNow:yyyy-MM-dd}");
+        Console.WriteLine($"now: {tool}" + (before is null ? "" : $"; before: {before}"));
         Console.WriteLine(before is null ? "command                 median s  x --version" : "command                 median s  x --version   before s  x --version  before / now");
         var baseline = Median(times[0]);
         var earlierBaseline = before is null ? 0 : Median(earlier[0]);

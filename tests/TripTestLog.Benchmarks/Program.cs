@@ -23,13 +23,14 @@ namespace TripTestLog.Benchmarks;
 /// Diagnostic steps, run one at a time on a fleet written with --step generate: --step NAME --work DIR, where NAME is
 /// floor-schema (the raw insert into the project's own table), parse-only, rows-only, open-only, read-only, judge-only.
 /// With --one-device DB --asset TAG [--runs 10] [--before TOOL], the one-device commands as processes against a bare --version
-/// (OneDevice); --before names an earlier build's triptestlog to time beside this one in the same run.
+/// (OneDevice); --tool names the triptestlog to time (default: the build beside the benchmark, e.g. an installed tool
+/// instead), --before an earlier build's to time beside it in the same run.
 /// </summary>
 internal static class Program
 {
     private static string? server;
 
-    private static readonly string[] Steps = ["floor-insert", "import", "reimport", "floor-read", "check", "findings", "fleet-page", "report", "pages"];
+    private static readonly string[] Steps = ["floor-insert", "import", "reimport", "floor-read", "check", "findings", "fleet-page", "report", "pages", "full-report"];
 
     private static readonly string[] ServerSteps = ["server-floor-insert", "server-import", "server-floor-read", "server-check", "server-findings"];
 
@@ -47,7 +48,7 @@ internal static class Program
             server = options.Server;
             if (options.OneDevice is { } database)
             {
-                return OneDevice.Run(database, options.Asset ?? throw new ArgumentException("--one-device needs --asset TAG"), options.Runs, options.Before);
+                return OneDevice.Run(database, options.Asset ?? throw new ArgumentException("--one-device needs --asset TAG"), options.Runs, options.Before, options.Tool);
             }
 
             return options.Step is { } step ? RunStep(step, options.Work) : options.Pairs > 0 ? RunPairs(options) : RunAll(options);
@@ -81,7 +82,7 @@ internal static class Program
             {
                 Console.Error.WriteLine($"  {step} ...");
                 results[step] = Child(step, work);
-                if (results[step].Rows != rows && step is not "reimport" and not "findings" and not "fleet-page" and not "report" and not "pages")
+                if (results[step].Rows != rows && step is not "reimport" and not "findings" and not "fleet-page" and not "report" and not "pages" and not "full-report")
                 {
                     throw new InvalidOperationException($"{step} handled {results[step].Rows} rows, not {rows}");
                 }
@@ -97,6 +98,8 @@ internal static class Program
             Print(rows, "report", results["report"], results["check"], slower: true);
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
                 $"{rows,8}  device pages: {results["pages"].Rows} written in {results["pages"].Seconds:0.00} s, {results["pages"].Rows / results["pages"].Seconds:0} pages/s ({results["pages"].PeakMb:0} MB peak)"));
+            Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                $"{rows,8}  full report: {results["full-report"].Rows} device pages, data files and fleet page in {results["full-report"].Seconds:0.00} s ({results["full-report"].PeakMb:0} MB peak)"));
             if (o.Server is { } connection)
             {
                 ServerFloors.Reset(connection);
@@ -357,10 +360,21 @@ internal static class Program
                 }
 
                 break;
+            case "full-report":
+                using (var store = RecordStore.Open(project))
+                {
+                    var context = new TripTestLog.Reports.ReportContext(project, "benchmark", today, DateTimeOffset.UtcNow, FindingPolicy.Default, "defaults", store.Instruments());
+                    var (_, pages) = TripTestLog.Cli.Services.ReportRun.Write(store, Path.Combine(work, step), context,
+                        new TripTestLog.Cli.Services.ReportRun.Selection(null, null, null, null, true), default);
+                    rows = pages;
+                }
+
+                break;
             case "report":
             case "pages":
                 // report: the fleet page and the data files beside it (device pages off); x floor is its time over
-                // check's. pages: the time spent writing device pages alone, for the first 500 devices.
+                // check's. pages: from the first device out of the pipeline to the last of the first 500 devices' pages
+                // written. full-report: report as the command runs it, every device page and the data files.
                 using (var store = RecordStore.Open(project))
                 {
                     var folder = Path.Combine(work, step);
@@ -372,17 +386,20 @@ internal static class Program
                     }
                     else
                     {
-                        var writer = new TripTestLog.Reports.ReportWriter(folder, context, devicePages: true);
+                        // Judging and pages together, as report runs them: the page writers work beside the pipeline.
+                        using var writer = new TripTestLog.Reports.ReportWriter(folder, context, devicePages: true);
+                        // The clock starts at the first device, after the pipeline's first pass over the whole fleet.
                         var pageClock = new Stopwatch();
                         rows = 0;
                         foreach (var device in FindingsPipeline.RunWithRecords(store, FindingPolicy.Default, today).Take(500))
                         {
                             pageClock.Start();
                             writer.Add(device);
-                            pageClock.Stop();
                             rows++;
                         }
 
+                        writer.Finish();
+                        pageClock.Stop();
                         Console.WriteLine(JsonSerializer.Serialize(new StepResult(pageClock.Elapsed.TotalSeconds, rows, Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0)));
                         return 0;
                     }
@@ -456,6 +473,8 @@ internal static class Program
 
         public string? Before { get; init; }
 
+        public string? Tool { get; init; }
+
         public static Options Parse(string[] args)
         {
             var rows = new List<long> { 100_000, 300_000, 1_000_000 };
@@ -466,7 +485,7 @@ internal static class Program
             string? server = null;
             string? oneDevice = null, asset = null;
             var runs = 10;
-            string? before = null;
+            string? before = null, tool = null;
             for (var i = 0; i < args.Length; i++)
             {
                 var value = i + 1 < args.Length ? args[i + 1] : throw new ArgumentException($"{args[i]} needs a value");
@@ -499,6 +518,9 @@ internal static class Program
                     case "--asset":
                         asset = value;
                         break;
+                    case "--tool":
+                        tool = value;
+                        break;
                     case "--before":
                         before = value;
                         break;
@@ -506,13 +528,13 @@ internal static class Program
                         runs = int.TryParse(value, out var r) && r is > 0 and <= 100 ? r : throw new ArgumentException("--runs takes a whole number from 1 to 100");
                         break;
                     default:
-                        throw new ArgumentException($"unknown option {args[i]}; use --rows, --devices, --files, --work, --pairs, --server, --one-device, --asset, --runs, --before");
+                        throw new ArgumentException($"unknown option {args[i]}; use --rows, --devices, --files, --work, --pairs, --server, --one-device, --asset, --runs, --before, --tool");
                 }
 
                 i++;
             }
 
-            return new Options(rows, devices, files, work, step, pairs, server) { OneDevice = oneDevice, Asset = asset, Runs = runs, Before = before };
+            return new Options(rows, devices, files, work, step, pairs, server) { OneDevice = oneDevice, Asset = asset, Runs = runs, Before = before, Tool = tool };
         }
     }
 }

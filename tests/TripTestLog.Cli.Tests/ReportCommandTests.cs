@@ -35,6 +35,38 @@ public sealed class ReportCommandTests(SampleFleetDatabase fleet) : IClassFixtur
     }
 
     [Fact]
+    public void DevicePagesDrawnOnSeveralThreads_AreEachWholeAndNameTheirOwnDevice()
+    {
+        var folder = Path.Combine(fleet.Folder, "report-whole");
+
+        Assert.Equal(0, CliRun.Run("report", "--db", fleet.Database, "--out", folder).Exit);
+
+        var pages = Directory.GetFiles(Path.Combine(folder, "devices"), "*.html");
+        Assert.Equal(58, pages.Length);
+        Assert.All(pages, page =>
+        {
+            var html = File.ReadAllText(page);
+            Assert.EndsWith("</html>", html.TrimEnd(), StringComparison.Ordinal);
+            Assert.Contains(Path.GetFileNameWithoutExtension(page), html, StringComparison.Ordinal);
+        });
+    }
+
+    [Fact]
+    public void APageThatCannotBeWritten_StopsTheReportWithOnePlainSentence()
+    {
+        // A folder where one device's page should go: its page writer fails while the others carry on.
+        var folder = Path.Combine(fleet.Folder, "report-blocked");
+        Directory.CreateDirectory(Path.Combine(folder, "devices", "BPS-DB1-Q03.html"));
+
+        var (exit, output, error) = CliRun.Run("report", "--db", fleet.Database, "--out", folder);
+
+        Assert.Equal(2, exit);
+        Assert.StartsWith("error: ", error);
+        Assert.DoesNotContain("   at ", error + output);
+        Assert.False(File.Exists(Path.Combine(folder, "index.html")));
+    }
+
+    [Fact]
     public void AReportForOneSite_WritesOnlyItsDevices()
     {
         var folder = Path.Combine(fleet.Folder, "report-site");

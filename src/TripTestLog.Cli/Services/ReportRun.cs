@@ -36,7 +36,7 @@ internal static class ReportRun
     public static (string FleetPage, int DevicePages) Write(IRecordStore store, string folder, ReportContext context, Selection selection, CancellationToken cancel,
         Action<DeviceReport>? alsoEach = null)
     {
-        var writer = new ReportWriter(folder, context, selection.DevicePages);
+        using var writer = new ReportWriter(folder, context, selection.DevicePages);
         using var findingsCsvFile = new StreamWriter(Path.Combine(folder, "findings.csv"));
         using var findingsJsonFile = new StreamWriter(Path.Combine(folder, "findings.json"));
         using var verdictsCsvFile = new StreamWriter(Path.Combine(folder, "verdicts.csv"));
