@@ -26,6 +26,26 @@ public sealed partial class PostgresRecordStore : ITripSource
         $"SELECT {StoredColumns.Insulation}, {TestTime("i")} FROM devices d JOIN insulation_tests i ON i.device_id = d.id {OnlyTag} "
         + "ORDER BY d.asset_tag, i.tested_at, i.source_file_id, i.source_line";
 
+    // The devices sharing a family and a rated current with some register entry of the device tagged @tag.
+    private static readonly string PeerDevices =
+        "WHERE d.id IN (SELECT p.device_id FROM devices o JOIN device_revisions r ON r.device_id = o.id "
+        + $"JOIN device_revisions p ON p.family = r.family AND p.rated_current_a = r.rated_current_a WHERE {ServerSql.TagKey("o.asset_tag")} = {ServerSql.TagKey("@tag")})";
+
+    /// <inheritdoc />
+    public IEnumerable<DeviceRecords> PeersOf(AssetTag tag)
+    {
+        using var snapshot = new ReadSnapshot(this);
+        using var revisions = snapshot.Query(
+            $"SELECT d.asset_tag, {ServerSql.RegisterSelect("r")} FROM device_revisions r JOIN devices d ON d.id = r.device_id {PeerDevices} ORDER BY d.asset_tag, r.id", tag);
+        var rows = new StoredRows(SourceFileNames(revisions.Connection!), r => ServerRows.TestedAt(r, 1, r.FieldCount - 2));
+        using var entries = revisions.ExecuteReader();
+        using var trips = new TagStream<StoredTrip>(snapshot.Query(TripsInDeviceOrder.Replace(OnlyTag, PeerDevices, StringComparison.Ordinal), tag), rows.Trip);
+        foreach (var device in DeviceWalk.Merge(entries, trips, null, null))
+        {
+            yield return device;
+        }
+    }
+
     /// <inheritdoc />
     public IEnumerable<DeviceRecords> Devices(AssetTag? only = null, bool withResistance = false)
     {

@@ -33,6 +33,27 @@ public sealed partial class RecordStore : ITripSource
         "SELECT " + StoredColumns.Insulation + " FROM devices d CROSS JOIN insulation_tests i ON i.device_id = d.id "
         + "WHERE $tag IS NULL OR d.asset_tag = $tag COLLATE NOCASE ORDER BY d.asset_tag, i.tested_at, i.source_file_id, i.source_line";
 
+    /// <summary>The devices sharing a family and a rated current with some register entry of the device tagged $tag.</summary>
+    private const string PeerDevices =
+        "d.id IN (SELECT p.device_id FROM devices o JOIN device_revisions r ON r.device_id = o.id "
+        + "JOIN device_revisions p ON p.family = r.family AND p.rated_current_a = r.rated_current_a WHERE o.asset_tag = $tag COLLATE NOCASE)";
+
+    /// <inheritdoc />
+    public IEnumerable<DeviceRecords> PeersOf(AssetTag tag)
+    {
+        using var snapshot = ReadTransaction.Begin(_connection);
+        using var revisions = TagQuery(
+            $"SELECT d.asset_tag, {string.Join(", ", RegisterColumns.Split(", ").Select(c => "r." + c))} "
+            + $"FROM device_revisions r JOIN devices d ON d.id = r.device_id WHERE {PeerDevices} ORDER BY d.asset_tag, r.id", tag);
+        var rows = new StoredRows(SourceFileNames(), r => TestedAt.Parse(r.GetString(1)));
+        using var entries = revisions.ExecuteReader();
+        using var trips = new TagStream<StoredTrip>(TagQuery(TripsInDeviceOrder.Replace("$tag IS NULL OR d.asset_tag = $tag COLLATE NOCASE", PeerDevices, StringComparison.Ordinal), tag), rows.Trip);
+        foreach (var device in DeviceWalk.Merge(entries, trips, null, null))
+        {
+            yield return device;
+        }
+    }
+
     /// <inheritdoc />
     public IEnumerable<DeviceRecords> Devices(AssetTag? only = null, bool withResistance = false)
     {

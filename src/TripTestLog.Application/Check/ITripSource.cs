@@ -16,6 +16,13 @@ public interface ITripSource
     /// </summary>
     IEnumerable<DeviceRecords> Devices(AssetTag? only = null, bool withResistance = false);
 
+    /// <summary>
+    /// The devices that may share a peer group with <paramref name="tag"/>, itself included: those with a register entry
+    /// of the same family and rated current as one of its entries, streamed as <see cref="Devices"/> streams them (trip
+    /// tests only). A peer group is a family, a setting and a rating, so no other device can fall in one of its groups.
+    /// </summary>
+    IEnumerable<DeviceRecords> PeersOf(AssetTag tag);
+
     /// <summary>Every curve table, each as the newest imported file defines it.</summary>
     IReadOnlyDictionary<string, CurveTable> CurveTables();
 

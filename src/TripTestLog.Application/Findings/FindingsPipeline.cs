@@ -12,7 +12,7 @@ namespace TripTestLog.Application.Findings;
 public static class FindingsPipeline
 {
     /// <summary>
-    /// The condition of every device (or of <paramref name="only"/>, still compared with the whole fleet's peers) on
+    /// The condition of every device (or of <paramref name="only"/>, still compared with all its peers in the fleet) on
     /// <paramref name="asOf"/>, in asset-tag order.
     /// </summary>
     public static IEnumerable<DeviceCondition> Run(ITripSource source, FindingPolicy policy, DateOnly asOf, AssetTag? only = null,
@@ -27,8 +27,9 @@ public static class FindingsPipeline
         ArgumentNullException.ThrowIfNull(policy);
         var judge = DeviceJudge.For(source, policy.RequireRegisteredInstruments, policy.AmbientNoteKelvin, policy.PointWindowPercent / 100, policy.Decision);
         var peers = new PeerGroups();
-        // The store is read a few devices ahead on another thread, so reading and judging overlap on two cores.
-        foreach (var device in ReadAhead.Of(source.Devices(), 8, cancel))
+        // The store is read a few devices ahead on another thread, so reading and judging overlap on two cores. For one
+        // device, only the devices that can share one of its peer groups are read: its groups come out the same.
+        foreach (var device in ReadAhead.Of(only is { } tag ? source.PeersOf(tag) : source.Devices(), 8, cancel))
         {
             cancel.ThrowIfCancellationRequested();
             PeerPass.Add(device, judge, peers);
