@@ -62,6 +62,7 @@ public static partial class TripJudge
         }
 
         GuardedEdge? deciding = null;
+        var neighbours = edges.Count > 0 ? Neighbours(windowed, m.Current, conditions) : default;
         foreach (var (edge, minimum) in edges)
         {
             if (edge.Limit is not { } limit)
@@ -69,7 +70,7 @@ public static partial class TripJudge
                 continue;
             }
 
-            var slope = Slope(windowed, m.Current, conditions, edge, minimum);
+            var slope = Slope(neighbours, m.Current, edge, minimum);
             var u = k * Math.Sqrt((uT * uT) + (slope * uI * slope * uI));
             var inside = minimum ? t.Value - limit.Value : limit.Value - t.Value;
             var margin = simple.IsFailure ? -inside : inside;
@@ -125,18 +126,17 @@ public static partial class TripJudge
 
     // ∂T/∂I of the deciding edge, by a central difference where the same requirement holds on both sides, else one-sided;
     // zero where the limit jumps on both sides (the current check then carries the current's share).
-    private static double Slope(PointWindowEnvelope envelope, Amperes current, TestConditions conditions, BandEdge edge, bool minimum)
+    private static double Slope((AppliedBand Below, AppliedBand Above) neighbours, Amperes current, BandEdge edge, bool minimum)
     {
         var mid = edge.Limit!.Value.Value;
         var dI = current.Value * SlopeStep;
-        double? At(double factor)
+        double? At(AppliedBand applied)
         {
-            var applied = envelope.At(Amperes.Of(current.Value * factor)).For(conditions);
             var e = minimum ? applied.Minimum : applied.Maximum;
             return e.Limit is { } l && !e.IsOpen && SameRequirement(e, edge) ? l.Value : null;
         }
 
-        return (At(1 - SlopeStep), At(1 + SlopeStep)) switch
+        return (At(neighbours.Below), At(neighbours.Above)) switch
         {
             ({ } lo, { } hi) => (hi - lo) / (2 * dI),
             ({ } lo, null) => (mid - lo) / dI,
@@ -145,11 +145,18 @@ public static partial class TripJudge
         };
     }
 
+    // The band a step below and a step above the test current, read once for every edge's slope.
+    private static (AppliedBand Below, AppliedBand Above) Neighbours(PointWindowEnvelope envelope, Amperes current, TestConditions conditions) =>
+        (envelope.At(Amperes.Of(current.Value * (1 - SlopeStep))).For(conditions), envelope.At(Amperes.Of(current.Value * (1 + SlopeStep))).For(conditions));
+
     // The same requirement on both sides of the current: a point's limit moved for the offset keeps its requirement's
     // words before the "; tested ... %" that says how far it moved.
     private static bool SameRequirement(BandEdge a, BandEdge b) =>
         a.Source == b.Source && a.PointLabel == b.PointLabel && a.Anchor == b.Anchor && a.Carried == b.Carried
-        && string.Equals(a.Requirement.Split(';')[0], b.Requirement.Split(';')[0], StringComparison.Ordinal);
+        && Words(a.Requirement).SequenceEqual(Words(b.Requirement));
+
+    private static ReadOnlySpan<char> Words(string requirement) =>
+        requirement.AsSpan(0, requirement.IndexOf(';') is var i and >= 0 ? i : requirement.Length);
 
     // The verdict judged again with the point window widened by the current's guard band: a test that far from a point
     // may have been a test of it (the window itself is the lab's test-current tolerance, so the current is not also moved
