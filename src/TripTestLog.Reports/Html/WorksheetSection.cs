@@ -131,7 +131,12 @@ internal static class WorksheetSection
     // time as the check takes it, so it has no guarded window.
     private static string Guarded(DeviceWorksheet sheet, PlannedTrip t, DecisionPolicy decision)
     {
-        if (t.HoldFor is not null || !t.Window.HasRequirement || t.Window.Minimum.Limit is null)
+        if (t.HoldFor is not null)
+        {
+            return Small("guarded: as above (a hold is judged on the time held, as written)");
+        }
+
+        if (!t.Window.HasRequirement || t.Window.Minimum.Limit is null)
         {
             return Small("guarded: as above (no time limit to guard)");
         }

@@ -111,6 +111,40 @@ public sealed class DecisionRuleTests
     }
 
     [Fact]
+    public void TheWorksheetsGuardedWindow_IsWhereTheCheckPassesUnderGuarded()
+    {
+        // Row c at 40.8 A with the timer alone, w = U at each limit (ILAC-G8:09/2019, guarded acceptance):
+        // at 60 s, U = 2 x (0.005 x 60 + 0.010) / √3 = 0.35796 s; at 1 s, U = 2 x (0.005 x 1 + 0.010) / √3 = 0.017321 s.
+        var envelope = PointWindowEnvelope.Of(new Iec60898Envelope(TripCurve.C, Amperes.Of(16)));
+        var window = envelope.At(Amperes.Of(40.8)).For(TestConditions.Reference);
+        var g = TripJudge.GuardedWindowOf(envelope, Amperes.Of(40.8), TestConditions.Reference, window, TimerOnly);
+
+        Assert.Equal(60 - 0.35796, g.Maximum!.Value.Value, 4);
+        Assert.Equal(1 + 0.017321, g.Minimum!.Value.Value, 5);
+        Assert.False(g.Closed);
+
+        // Just inside the guarded window the check passes under guarded; just outside it, it withholds the verdict.
+        Assert.Equal(Verdict.Pass, Under(DecisionRule.Guarded, 40.8, g.Maximum.Value.Value - 0.01, TimerOnly).Verdict);
+        Assert.Equal(Verdict.NotAssessable, Under(DecisionRule.Guarded, 40.8, g.Maximum.Value.Value + 0.01, TimerOnly).Verdict);
+        Assert.Equal(Verdict.Pass, Under(DecisionRule.Guarded, 40.8, g.Minimum.Value.Value + 0.001, TimerOnly).Verdict);
+        Assert.Equal(Verdict.NotAssessable, Under(DecisionRule.Guarded, 40.8, g.Minimum.Value.Value - 0.001, TimerOnly).Verdict);
+    }
+
+    [Fact]
+    public void TheWorksheetsGuardBand_CarriesTheCurrentsShareAsTheCheckDoes()
+    {
+        // With a ±2 % clamp the limit's slope adds the current's share (GUM, JCGM 100:2008, 5.1.2); a trip at the limit
+        // itself is judged with the same U the worksheet moves the limit by.
+        var envelope = PointWindowEnvelope.Of(new Iec60898Envelope(TripCurve.C, Amperes.Of(16)));
+        var window = envelope.At(Amperes.Of(40.8)).For(TestConditions.Reference);
+        var g = TripJudge.GuardedWindowOf(envelope, Amperes.Of(40.8), TestConditions.Reference, window, TimerAndClamp);
+        var atLimit = Under(DecisionRule.Simple, 40.8, 60, TimerAndClamp);
+
+        Assert.Equal(atLimit.Uncertainty!.Time!.Value.Value, g.MaximumBand!.Value, 6);
+        Assert.True(g.MaximumBand > 0.35796 * 2, "the current's share through the slope is missing");
+    }
+
+    [Fact]
     public void TheRulesAndStatementsHaveOneCodeEach()
     {
         Assert.Equal(["simple", "guarded", "non-binary"], TextCodes.DecisionRule.All);
