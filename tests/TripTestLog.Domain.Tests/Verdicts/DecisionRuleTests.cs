@@ -9,7 +9,8 @@ using TripTestLog.Domain.Verdicts;
 namespace TripTestLog.Domain.Tests.Verdicts;
 
 /// <summary>
-/// The decision rules of ILAC-G8:09/2019 on worked examples done by hand. Each accuracy ±a is rectangular, u = a / √3
+/// The decision rules of ILAC-G8:09/2019 (the rule a statement of conformity must name, ISO/IEC 17025:2017, 7.8.6) on
+/// worked examples done by hand. Each accuracy ±a is rectangular, u = a / √3
 /// (GUM, JCGM 100:2008, 4.3.7); time and current combine through the limit's slope by root-sum-square (GUM 5.1.2);
 /// U = k u with k = 2. Limits from IEC 60898-1:2015 Table 7 row c (C16 from cold at 2.55 In = 40.8 A: 1 s &lt; t &lt; 60 s).
 /// </summary>
