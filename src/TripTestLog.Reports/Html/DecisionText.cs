@@ -88,6 +88,14 @@ internal static class DecisionText
             + $"default accuracies apply: {figures}.";
     }
 
+    /// <summary>An instrument's accuracy in a few words, saying which figures came from the policy's defaults.</summary>
+    public static string Brief(ResolvedAccuracy accuracy, bool trips, bool contacts)
+    {
+        var figures = accuracy.Words(trips, trips, contacts, insulation: false).Split("; ")[0];
+        var defaults = accuracy.FromDefaults.Where(d => (trips && d is "time" or "current") || (contacts && d == "resistance") || d == "k").ToList();
+        return figures + (defaults.Count == 0 ? "" : $" ({string.Join(", ", defaults)}: policy defaults, none in the register)");
+    }
+
     private static string Pair(double pct, double fixedPart, string unit) =>
         fixedPart == 0 ? $"{N(pct)} %" : pct == 0 ? $"{N(fixedPart, "0.####")} {unit}" : $"({N(pct)} % + {N(fixedPart, "0.####")} {unit})";
 

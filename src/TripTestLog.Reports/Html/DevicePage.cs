@@ -30,7 +30,7 @@ internal static class DevicePage
         Trips(html, report.Trips, context);
         Drift(html, report);
         Contacts(html, report);
-        Insulation(html, report, context);
+        Insulation(html, report);
         Findings(html, condition);
         SignOff(html, report, context);
         html.Append("</section>\n");
@@ -85,15 +85,14 @@ internal static class DevicePage
     private static void Trips(StringBuilder html, IReadOnlyList<JudgedTrip> trips, ReportContext context)
     {
         html.Append("<h2>Trip records</h2>\n");
-        if (trips.Count > 0)
-        {
-            // ISO/IEC 17025:2017, 7.8.6: a statement of conformity names the decision rule it was made under.
-            var accuracy = trips.Select(t => t.Assessment.Uncertainty?.Accuracy).OfType<string>().Distinct(StringComparer.Ordinal).ToList();
-            html.Append("<p class=\"small rule\">").Append(H(DecisionText.Rule(context.Policy)))
-                .Append(H(accuracy.Count == 0 ? "" : $" U (beside each verdict) is the expanded uncertainty of the deciding time, U(I) of the test current; accuracy used: {string.Join("; ", accuracy)}."))
-                .Append("</p>\n");
-        }
 
+        // ISO/IEC 17025:2017, 7.8.6: a statement of conformity names the decision rule it was made under.
+        var accuracy = trips.Select(t => t.Assessment.Uncertainty?.Accuracy).OfType<string>().Distinct(StringComparer.Ordinal).ToList();
+        var insulation = Domain.Instruments.InstrumentAccuracy.None.Over(context.Policy.DefaultAccuracy);
+        html.Append("<p class=\"small rule\">").Append(H($"Decision rule: {DecisionText.Short(context.Policy)}."))
+            .Append(H(accuracy.Count == 0 ? "" : $" Beside each verdict, U is the expanded uncertainty of the deciding time and U(I) of the test current; accuracy used: {string.Join("; ", accuracy)}."))
+            .Append(H($" Insulation: ±{N(insulation.InsulationPercent)} %, k = {N(insulation.CoverageFactor)}, the lab policy's default (its records name no instrument)."))
+            .Append("</p>\n");
         Table(html, ["tested", "stage, pole, start", "current (x ref)", "result and band", "verdict", "basis, margin and source"], trips.Select(t =>
         {
             var m = t.Trip.Measurement;
@@ -159,7 +158,7 @@ internal static class DevicePage
         }));
     }
 
-    private static void Insulation(StringBuilder html, DeviceReport report, ReportContext context)
+    private static void Insulation(StringBuilder html, DeviceReport report)
     {
         var readings = ReadingHistory.Insulation(report.Records.Insulation).ToList();
         html.Append("<h2>Insulation resistance</h2>\n");
@@ -174,10 +173,6 @@ internal static class DevicePage
             H(r.Date.ToString("yyyy-MM-dd")), H(TextCodes.Stage.Of(r.Stage)), H(r.Path), H(N(r.TestVoltageVolts, "0") + " V DC"),
             H((r.OverRange ? ">" : "") + N(r.MeasuredMegaOhms, "0.##") + " MOhm"), H((r.OverRange ? ">" : "") + N(r.CorrectedMegaOhms, "0.##") + " MOhm"),
         }));
-        var insulation = Domain.Instruments.InstrumentAccuracy.None.Over(context.Policy.DefaultAccuracy);
-        html.Append("<p class=\"small\">").Append(H($"Insulation records name no instrument: the lab policy's default accuracy applies to them "
-            + $"(±{N(insulation.InsulationPercent)} %, k = {N(insulation.CoverageFactor)})."))
-            .Append("</p>\n");
     }
 
     private static void Findings(StringBuilder html, Application.Findings.DeviceCondition condition)
@@ -210,8 +205,8 @@ internal static class DevicePage
             .Append("<tr><th>Tested by</th><td></td><th>Date</th><td></td></tr>")
             .Append("<tr><th>Checked by</th><td></td><th>Date</th><td></td></tr></tbody></table>\n");
         var standards = report.Trips.Select(t => t.Envelope.Standard).Distinct().ToList();
-        html.Append("<p>").Append(H($"Standards: {(standards.Count == 0 ? "none (no trip tests)" : string.Join("; ", standards))}.")).Append("</p>\n");
-        html.Append("<p>").Append(H($"Decision rule: {DecisionText.Short(context.Policy)}.")).Append("</p>\n");
+        html.Append("<p>").Append(H($"Standards: {(standards.Count == 0 ? "none (no trip tests)" : string.Join("; ", standards))}. "
+            + $"Decision rule: {DecisionText.Short(context.Policy)}.")).Append("</p>\n");
         var policy = PolicyFile.Write(context.Policy).Split('\n').Where(l => l.Contains(" = ", StringComparison.Ordinal) && !l.StartsWith('#'));
         html.Append("<p>").Append(H($"Lab policy ({context.PolicyFrom}): {string.Join("; ", policy)}.")).Append("</p>\n");
         var used = report.Trips.Select(t => (t.Trip.Measurement.Instrument, t.Trip.Measurement.TestedAt.Date, Trip: true))
@@ -227,7 +222,7 @@ internal static class DevicePage
             H(context.Instruments.PeriodOn(u.Name, u.Latest) is { } p
                 ? $"{p.Kind} {p.Serial}: calibrated {p.CalibratedOn:yyyy-MM-dd}, due {p.CalibrationDue:yyyy-MM-dd}"
                 : context.Instruments.Trace(u.Name, u.Latest, true)?.Message ?? ""),
-            H(context.Policy.Decision.AccuracyOf(context.Instruments, u.Name, u.Latest).Words(u.Trips, u.Trips, u.Contacts, insulation: false)),
+            H(DecisionText.Brief(context.Policy.Decision.AccuracyOf(context.Instruments, u.Name, u.Latest), u.Trips, u.Contacts)),
         }));
         html.Append("<footer>").Append(H(context.Footer)).Append("</footer></div>\n");
     }
