@@ -1,5 +1,6 @@
 using System.Text;
 using TripTestLog.Application.Worksheet;
+using TripTestLog.Domain.Verdicts;
 using TripTestLog.Reports.Html;
 
 namespace TripTestLog.Reports;
@@ -11,16 +12,25 @@ namespace TripTestLog.Reports;
 public sealed class WorksheetWriter
 {
     private readonly TextWriter _output;
+    private readonly DecisionPolicy _decision;
     private int _devices;
 
-    /// <summary>Starts the page on <paramref name="output"/>.</summary>
-    public WorksheetWriter(TextWriter output, string title, string subtitle)
+    /// <summary>
+    /// Starts the page on <paramref name="output"/>; under a guarded <paramref name="decision"/> rule each trip window is
+    /// shown with the guard-banded window beside it.
+    /// </summary>
+    public WorksheetWriter(TextWriter output, string title, string subtitle, DecisionPolicy? decision = null)
     {
         ArgumentNullException.ThrowIfNull(output);
         _output = output;
+        _decision = decision ?? DecisionPolicy.Default;
         var html = new StringBuilder();
         Layout.Begin(html, title, subtitle, back: null);
         html.Append("<p class=\"small\">").Append(Markup.H(WorksheetSection.HowToUse)).Append("</p>\n");
+        if (WorksheetSection.GuardedNote(_decision) is { } note)
+        {
+            html.Append("<p class=\"small rule\">").Append(Markup.H(note)).Append("</p>\n");
+        }
         _output.Write(html);
     }
 
@@ -30,7 +40,7 @@ public sealed class WorksheetWriter
     /// <summary>Adds one device's section.</summary>
     public void Add(DeviceWorksheet sheet)
     {
-        _output.Write(WorksheetSection.Write(sheet));
+        _output.Write(WorksheetSection.Write(sheet, _decision));
         _devices++;
     }
 

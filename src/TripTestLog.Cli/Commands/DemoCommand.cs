@@ -48,6 +48,9 @@ internal static class DemoCommand
         return command;
     }
 
+    /// <summary>The folder, beside the demo's own report, of the report written under the guarded decision rule.</summary>
+    public const string GuardedReport = "report-guarded";
+
     /// <summary>The date the bundled sample records were written for: their tests lie before it, their calibrations span it.</summary>
     public static readonly DateOnly SampleRecordsAsOf = new(2026, 12, 1);
 
@@ -96,6 +99,7 @@ internal static class DemoCommand
         var findingsJson = Path.Combine(output.FullName, "findings.json");
         var fleet = new FleetSummary(5);
         string reportPage;
+        string guardedPage;
         using (var log = Logging.BesideDatabase(db))
         using (var store = Stores.Open(cli, db, StorePurpose.Import))
         using (var textWriter = new StreamWriter(text))
@@ -126,6 +130,13 @@ internal static class DemoCommand
                 }).FleetPage;
             findingsTable.Finish();
             findingsRows.Finish();
+
+            // The same records once more under the guarded decision rule, so the pages show what it changes.
+            var guarded = policy.Policy with { DecisionRule = DecisionRule.Guarded };
+            var guardedFrom = $"{policy.From}, with decision_rule = {Domain.Codes.TextCodes.DecisionRule.Of(DecisionRule.Guarded)} for this copy";
+            var guardedContext = context with { Policy = guarded, PolicyFrom = guardedFrom };
+            guardedPage = ReportRun.Write(store, Path.Combine(output.FullName, GuardedReport), guardedContext,
+                new ReportRun.Selection(null, null, null, null, true), cli.Cancel).FleetPage;
         }
 
         cli.Out.WriteLine($"Imported the sample records from {folder}:");
@@ -144,6 +155,7 @@ internal static class DemoCommand
         cli.Out.WriteLine($"  json       {findingsJson}");
         cli.Out.WriteLine($"  log        {ImportCommand.LogPath(db)}");
         cli.Out.WriteLine($"  report     {reportPage}");
+        cli.Out.WriteLine($"  guarded    {guardedPage}");
         cli.Out.WriteLine($"Next: triptestlog check --db {db.Display}");
         cli.Out.WriteLine($"      triptestlog findings --db {db.Display}");
         cli.Out.WriteLine($"      triptestlog fleet --db {db.Display}");

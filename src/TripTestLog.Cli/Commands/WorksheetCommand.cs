@@ -95,7 +95,8 @@ internal static class WorksheetCommand
         using (var csv = new WorksheetCsv(folder))
         {
             var sheet = new WorksheetWriter(html, $"Test worksheet: {what}",
-                $"{TextCodes.Stage.Of(stage)} tests; settings in force on {options.AsOf:yyyy-MM-dd}; {selected.Count} device{(selected.Count == 1 ? "" : "s")}");
+                $"{TextCodes.Stage.Of(stage)} tests; settings in force on {options.AsOf:yyyy-MM-dd}; {selected.Count} device{(selected.Count == 1 ? "" : "s")}",
+                options.Policy.Decision);
             foreach (var history in selected)
             {
                 var plan = WorksheetPlanner.For(history, options.AsOf, stage, tables, options.Policy);

@@ -22,6 +22,9 @@ public sealed class InstrumentRegister(IReadOnlyList<InstrumentCalibration> cali
     public InstrumentAccuracy AccuracyOn(string instrument, DateOnly date) =>
         _byName[instrument].LastOrDefault(p => p.CalibratedOn <= date && date <= p.CalibrationDue && !p.Accuracy.IsEmpty)?.Accuracy ?? InstrumentAccuracy.None;
 
+    /// <summary>Whether any calibration period of <paramref name="instrument"/> states an accuracy figure.</summary>
+    public bool StatesAccuracy(string instrument) => _byName[instrument].Any(p => !p.Accuracy.IsEmpty);
+
     /// <summary>Every registered instrument's name, in order.</summary>
     public IEnumerable<string> Instruments => _byName.Select(g => g.Key).Order(StringComparer.Ordinal);
 

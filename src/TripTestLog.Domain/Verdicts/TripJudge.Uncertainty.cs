@@ -119,6 +119,40 @@ public static partial class TripJudge
         };
     }
 
+    /// <summary>
+    /// The window a trip at <paramref name="current"/> must fall in to pass under the guarded rule: each closed limit of
+    /// <paramref name="window"/> moved inward by <paramref name="guardBandFactor"/> x U, with U the expanded uncertainty of
+    /// a trip at that limit (the time accuracy at the limit, and the current's through the limit's slope, as the check
+    /// weighs them). A limit that cannot move below zero stays at zero.
+    /// </summary>
+    public static GuardedWindow GuardedWindowOf(ITripEnvelope envelope, Amperes current, TestConditions conditions, AppliedBand window, ResolvedAccuracy accuracy,
+        double guardBandFactor = 1.0)
+    {
+        ArgumentNullException.ThrowIfNull(envelope);
+        ArgumentNullException.ThrowIfNull(window);
+        ArgumentNullException.ThrowIfNull(accuracy);
+        var windowed = envelope as PointWindowEnvelope ?? PointWindowEnvelope.Of(envelope);
+        var uI = accuracy.CurrentStandard(current);
+        double? W(BandEdge edge, bool minimum)
+        {
+            if (edge.Limit is not { } limit || edge.IsOpen || (minimum && limit.Value == 0))
+            {
+                return null;
+            }
+
+            var uT = accuracy.TimeStandard(limit);
+            var slope = Slope(windowed, current, conditions, edge, minimum);
+            return guardBandFactor * accuracy.CoverageFactor * Math.Sqrt((uT * uT) + (slope * uI * slope * uI));
+        }
+
+        var wMin = W(window.Minimum, true);
+        var wMax = W(window.Maximum, false);
+        return new GuardedWindow(
+            wMin is { } n ? Seconds.Of(window.Minimum.Limit!.Value.Value + n) : null,
+            wMax is { } x ? Seconds.Of(Math.Max(0, window.Maximum.Limit!.Value.Value - x)) : null,
+            wMin, wMax);
+    }
+
     private sealed record GuardedEdge(BandEdge Edge, bool Minimum, double U, double W, double Margin)
     {
         public double Spare => Margin - W;

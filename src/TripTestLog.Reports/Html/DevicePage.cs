@@ -27,7 +27,7 @@ internal static class DevicePage
         html.Append("<section class=\"device-page\">\n");
         Register(html, report);
         Chart(html, report);
-        Trips(html, report.Trips);
+        Trips(html, report.Trips, context);
         Drift(html, report);
         Contacts(html, report);
         Insulation(html, report);
@@ -82,9 +82,17 @@ internal static class DevicePage
             .Append("</figcaption></figure>\n");
     }
 
-    private static void Trips(StringBuilder html, IReadOnlyList<JudgedTrip> trips)
+    private static void Trips(StringBuilder html, IReadOnlyList<JudgedTrip> trips, ReportContext context)
     {
         html.Append("<h2>Trip records</h2>\n");
+
+        // ISO/IEC 17025:2017, 7.8.6: a statement of conformity names the decision rule it was made under.
+        var accuracy = trips.Select(t => t.Assessment.Uncertainty?.Accuracy).OfType<string>().Distinct(StringComparer.Ordinal).ToList();
+        var insulation = Domain.Instruments.InstrumentAccuracy.None.Over(context.Policy.DefaultAccuracy);
+        html.Append("<p class=\"small rule\">").Append(H($"Decision rule: {DecisionText.Short(context.Policy)}."))
+            .Append(H(accuracy.Count == 0 ? "" : $" Beside each verdict, U is the expanded uncertainty of the deciding time and U(I) of the test current; accuracy used: {string.Join("; ", accuracy)}."))
+            .Append(H($" Insulation: ±{N(insulation.InsulationPercent)} %, k = {N(insulation.CoverageFactor)}, the lab policy's default (its records name no instrument)."))
+            .Append("</p>\n");
         Table(html, ["tested", "stage, pole, start", "current (x ref)", "result and band", "verdict", "basis, margin and source"], trips.Select(t =>
         {
             var m = t.Trip.Measurement;
@@ -97,7 +105,7 @@ internal static class DevicePage
                 H(m.TestedAt.ToString()), H($"{TextCodes.Stage.Of(m.Stage)}, {m.Pole.Code}, {TextCodes.Start.Of(m.Start)}"),
                 H($"{N(m.Current.Value, "0.##")} A ({N(m.Current.Value / t.Envelope.Reference.Value, "0.##")} x)"),
                 H(m.Outcome.ToString()) + "<br>" + Small(band),
-                $"<span class=\"verdict-{verdict}\">{H(verdict)}</span>: {H(a.Reason)}",
+                $"<span class=\"verdict-{verdict}\">{H(verdict)}</span>{H(DecisionText.Beside(a.Uncertainty))}: {H(a.Reason)}",
                 H(basis + (a.Margin.DecadesToNearerEdge is { } d ? ", " + N(d, "0.00") + " dec" : "")) + "<br>"
                     + Small(t.Trip.SourceFile + ":" + t.Trip.SourceLine.ToString(System.Globalization.CultureInfo.InvariantCulture)),
             };
@@ -197,22 +205,24 @@ internal static class DevicePage
             .Append("<tr><th>Tested by</th><td></td><th>Date</th><td></td></tr>")
             .Append("<tr><th>Checked by</th><td></td><th>Date</th><td></td></tr></tbody></table>\n");
         var standards = report.Trips.Select(t => t.Envelope.Standard).Distinct().ToList();
-        html.Append("<p>").Append(H($"Standards: {(standards.Count == 0 ? "none (no trip tests)" : string.Join("; ", standards))}.")).Append("</p>\n");
+        html.Append("<p>").Append(H($"Standards: {(standards.Count == 0 ? "none (no trip tests)" : string.Join("; ", standards))}. "
+            + $"Decision rule: {DecisionText.Short(context.Policy)}.")).Append("</p>\n");
         var policy = PolicyFile.Write(context.Policy).Split('\n').Where(l => l.Contains(" = ", StringComparison.Ordinal) && !l.StartsWith('#'));
         html.Append("<p>").Append(H($"Lab policy ({context.PolicyFrom}): {string.Join("; ", policy)}.")).Append("</p>\n");
-        var used = report.Trips.Select(t => (t.Trip.Measurement.Instrument, t.Trip.Measurement.TestedAt.Date))
-            .Concat(report.Records.Contacts.Select(c => (c.Measurement.Instrument, c.Measurement.TestedAt.Date)))
+        var used = report.Trips.Select(t => (t.Trip.Measurement.Instrument, t.Trip.Measurement.TestedAt.Date, Trip: true))
+            .Concat(report.Records.Contacts.Select(c => (c.Measurement.Instrument, c.Measurement.TestedAt.Date, Trip: false)))
             .Where(u => u.Instrument.Length > 0)
             .GroupBy(u => u.Instrument)
-            .Select(g => (Name: g.Key, Latest: g.Max(u => u.Date)))
+            .Select(g => (Name: g.Key, Latest: g.Max(u => u.Date), Trips: g.Any(u => u.Trip), Contacts: g.Any(u => !u.Trip)))
             .OrderBy(u => u.Name, StringComparer.Ordinal);
         html.Append("<h3>Instruments</h3>\n");
-        Table(html, ["instrument", "last used", "calibration on that date"], used.Select(u => new[]
+        Table(html, ["instrument", "last used", "calibration on that date", "accuracy used on that date"], used.Select(u => new[]
         {
             H(u.Name), H(u.Latest.ToString("yyyy-MM-dd")),
             H(context.Instruments.PeriodOn(u.Name, u.Latest) is { } p
                 ? $"{p.Kind} {p.Serial}: calibrated {p.CalibratedOn:yyyy-MM-dd}, due {p.CalibrationDue:yyyy-MM-dd}"
                 : context.Instruments.Trace(u.Name, u.Latest, true)?.Message ?? ""),
+            H(DecisionText.Brief(context.Policy.Decision.AccuracyOf(context.Instruments, u.Name, u.Latest), u.Trips, u.Contacts)),
         }));
         html.Append("<footer>").Append(H(context.Footer)).Append("</footer></div>\n");
     }

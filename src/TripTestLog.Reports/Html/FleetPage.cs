@@ -23,6 +23,14 @@ internal static class FleetPage
         Layout.Begin(html, "Fleet condition", $"{devices} devices at {sites.Count} sites{selection}; findings as of {context.AsOf:yyyy-MM-dd}", null);
         html.Append("<nav>Data beside this page: <a href=\"findings.csv\">findings.csv</a> <a href=\"findings.json\">findings.json</a> ")
             .Append("<a href=\"verdicts.csv\">verdicts.csv</a> <a href=\"verdicts.json\">verdicts.json</a></nav>\n");
+        // ISO/IEC 17025:2017, 7.8.6: the rule every verdict on these pages was given under, and where its accuracies came from.
+        html.Append("<p class=\"small rule\">").Append(H(DecisionText.Rule(context.Policy)));
+        if (DecisionText.Defaults(context.Instruments, context.Policy) is { } defaults)
+        {
+            html.Append(' ').Append(H(defaults));
+        }
+
+        html.Append("</p>\n");
         html.Append("<h2>Act first</h2>\n<p class=\"sub\">Worst grade first, then the soonest forecast, then overdue.</p>\n");
         Table(html, ["#", "device", "site", "grade", "next test due", "why it is here"], fleet.Summary.Priority.Select((d, i) => new[]
         {

@@ -59,7 +59,7 @@ internal static class Layout
           section.device-page ~ section.device-page { break-before: page; }
           figure.wide svg { max-height: 70mm; width: auto; } figure.wide { text-align: center; }
           .charts { gap: 4px; } .charts figure { flex: 0 1 32%; max-width: 33%; } figure.contact svg { max-height: 55mm; }
-          table.trips td { white-space: nowrap; } table.trips td:nth-child(5) { white-space: normal; }
+          table.trips { font-size: 7.5px; } table.trips td { white-space: nowrap; } table.trips td:nth-child(5) { white-space: normal; }
           td.entry { height: 1.9em; } .signoff td { height: 1.9em; }
           .small, .tick { font-size: 7px; }
           footer { margin-top: 8px; padding-top: 3px; font-size: 8px; }

@@ -5,6 +5,8 @@ using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Planning;
 using TripTestLog.Domain.Settings;
+using TripTestLog.Domain.Instruments;
+using TripTestLog.Domain.Verdicts;
 using static TripTestLog.Reports.Html.Markup;
 
 namespace TripTestLog.Reports.Html;
@@ -18,7 +20,28 @@ internal static class WorksheetSection
         + "are counted as not tested and never stored. Windows are those the check applies at the reference ambient; the check "
         + "corrects thermal points for the ambient you record.";
 
-    public static string Write(DeviceWorksheet sheet)
+    /// <summary>
+    /// Under the guarded rule, what the second line of each "Passes if" cell is; null under any other rule. The worksheet is
+    /// written before the instrument is chosen, so the guard bands use the policy's default accuracies.
+    /// </summary>
+    public static string? GuardedNote(DecisionPolicy decision)
+    {
+        if (decision.Rule != DecisionRule.Guarded)
+        {
+            return null;
+        }
+
+        var accuracy = InstrumentAccuracy.None.Over(decision.Defaults);
+        var w = decision.GuardBandFactor == 1 ? "w = U" : $"w = {N(decision.GuardBandFactor)} x U";
+        return $"Decision rule: guarded (ILAC-G8:09/2019), guard band {w}. Under each trip window, \"guarded\" gives the window a trip "
+            + "must fall in to pass under this rule: each limit moved inward by w, with U the expanded uncertainty of a trip at that limit "
+            + $"at the planned current, from the lab policy's default accuracies ({accuracy.Words(true, true, false, false)}); an instrument whose "
+            + "register entry states a better accuracy narrows it when the result is checked. A result inside the plain window but outside "
+            + "the guarded one is not assessable (within the measurement uncertainty of the limit): tick \"within U\" and retest with a more "
+            + "accurate instrument.";
+    }
+
+    public static string Write(DeviceWorksheet sheet, DecisionPolicy decision)
     {
         var d = sheet.Device;
         var html = new StringBuilder();
@@ -35,7 +58,7 @@ internal static class WorksheetSection
         else
         {
             Table(html, ["Row", "Point", "Inject", "Start", "Poles loaded", "Passes if", "Basis", "Time tested", "Current injected", "Trip time or held", "Result"],
-                sheet.Trips.Select((t, i) => Trip(sheet, t, i)), "worksheet");
+                sheet.Trips.Select((t, i) => Trip(sheet, t, i, decision)), "worksheet");
         }
 
         html.Append("<h3>Contact resistance</h3>\n");
@@ -67,7 +90,7 @@ internal static class WorksheetSection
     // Ticked by hand beside the window: the result as the technician reads it at the bench.
     private const string Tick = "<span class=\"tick\">\u2610 pass \u2610 fail</span>";
 
-    private static string?[] Trip(DeviceWorksheet sheet, PlannedTrip t, int index)
+    private static string?[] Trip(DeviceWorksheet sheet, PlannedTrip t, int index, DecisionPolicy decision)
     {
         var start = t.Conditions.Start == StartCondition.Warm
             ? t.StraightAfterPrevious ? $"warm: straight after {DeviceWorksheet.RowLabel('T', index - 1)}, no cooling" : "warm"
@@ -77,11 +100,13 @@ internal static class WorksheetSection
         var poles = t.Conditions.Loading == PoleLoading.OnePole ? "one pole only (pole 1)" : sheet.Device.Poles == 1 ? "the pole" : "all poles in series";
 
         // A drawn curve says nothing useful about a no-trip test, so its advisory is shown only where a trip is expected.
-        var passes = H(t.Acceptance) + (t.Typical is { } typical && t.HoldFor is null ? "<br>" + Small(typical) : "");
+        var passes = H(t.Acceptance) + (decision.Rule == DecisionRule.Guarded ? "<br>" + Guarded(sheet, t, decision) : "")
+            + (t.Typical is { } typical && t.HoldFor is null ? "<br>" + Small(typical) : "");
         return
         [
             H(DeviceWorksheet.RowLabel('T', index)), H(t.Label),
-            H($"{t.Current} ({t.Multiple.Value:0.###} {sheet.Envelope.ReferenceName})"), H(start), H(poles), passes, Small(t.Basis), Entry, Entry, Entry, Tick,
+            H($"{t.Current} ({t.Multiple.Value:0.###} {sheet.Envelope.ReferenceName})"), H(start), H(poles), passes, Small(t.Basis), Entry, Entry, Entry,
+            decision.Rule == DecisionRule.Guarded && t.HoldFor is null && t.Window.HasRequirement ? GuardedTick : Tick,
         ];
     }
 
@@ -97,6 +122,58 @@ internal static class WorksheetSection
         var t = trips[index];
         return t.HoldFor is not null || t.Conditions.Start == StartCondition.Warm
             || t.Window.Maximum.Limit is not { } max || max.Value >= LabPolicy.HeatingTestSeconds;
+    }
+
+    // The guarded rule has a third outcome: within the measurement uncertainty of the limit.
+    private const string GuardedTick = "<span class=\"tick\">\u2610 pass \u2610 within U \u2610 fail</span>";
+
+    // The window a trip must fall in to pass under the guarded rule, beside the plain one. A hold is judged on the hold
+    // time as the check takes it, so it has no guarded window.
+    private static string Guarded(DeviceWorksheet sheet, PlannedTrip t, DecisionPolicy decision)
+    {
+        if (t.HoldFor is not null)
+        {
+            return Small("guarded: as above (a hold is judged on the time held, as written)");
+        }
+
+        if (!t.Window.HasRequirement || t.Window.Minimum.Limit is null)
+        {
+            return Small("guarded: as above (no time limit to guard)");
+        }
+
+        var accuracy = InstrumentAccuracy.None.Over(decision.Defaults);
+        var g = TripJudge.GuardedWindowOf(sheet.Envelope, t.Current, t.Conditions, t.Window, accuracy, decision.GuardBandFactor);
+        if (g.Minimum is null && g.Maximum is null)
+        {
+            return Small("guarded: as above (no time limit to guard)");
+        }
+
+        if (g.Closed)
+        {
+            return "<strong>" + H("guarded: no trip time passes with the default accuracy") + "</strong>";
+        }
+
+        var min = g.Minimum is { } n ? $"after {T(n.Value, up: true)}" : null;
+        var max = g.Maximum is { } x ? $"before {T(x.Value, up: false)}" : null;
+        var window = (min, max) switch
+        {
+            ({ } a, { } b) => $"trip {a} and {b}",
+            ({ } a, null) => $"trip {a}",
+            (null, { } b) => $"trip {b}",
+            _ => "",
+        };
+        var bands = string.Join(", ", new[] { g.MinimumBand is { } wn ? $"w = {T(wn, up: true)} at the minimum" : null, g.MaximumBand is { } wx ? $"w = {T(wx, up: true)} at the maximum" : null }
+            .OfType<string>());
+        return "<strong>" + H($"guarded: {window}") + "</strong> " + Small($"({bands})");
+    }
+
+    // A guarded limit for a person, rounded the safe way (a minimum and a band up, a maximum down): seconds to three or four
+    // significant figures, minutes and whole seconds past ten minutes.
+    private static string T(double seconds, bool up)
+    {
+        var step = seconds >= 100 ? 1 : seconds >= 10 ? 0.1 : seconds >= 1 ? 0.01 : 0.001;
+        var r = (up ? Math.Ceiling(seconds / step - 1e-9) : Math.Floor(seconds / step + 1e-9)) * step;
+        return r >= 600 ? $"{N(Math.Floor(r / 60), "0")} min {N(r % 60, "0")} s" : N(r, "0.###") + " s";
     }
 
     private static string Small(string text) => $"<span class=\"small\">{H(text)}</span>";

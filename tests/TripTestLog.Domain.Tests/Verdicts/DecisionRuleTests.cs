@@ -9,7 +9,8 @@ using TripTestLog.Domain.Verdicts;
 namespace TripTestLog.Domain.Tests.Verdicts;
 
 /// <summary>
-/// The decision rules of ILAC-G8:09/2019 on worked examples done by hand. Each accuracy ±a is rectangular, u = a / √3
+/// The decision rules of ILAC-G8:09/2019 (the rule a statement of conformity must name, ISO/IEC 17025:2017, 7.8.6) on
+/// worked examples done by hand. Each accuracy ±a is rectangular, u = a / √3
 /// (GUM, JCGM 100:2008, 4.3.7); time and current combine through the limit's slope by root-sum-square (GUM 5.1.2);
 /// U = k u with k = 2. Limits from IEC 60898-1:2015 Table 7 row c (C16 from cold at 2.55 In = 40.8 A: 1 s &lt; t &lt; 60 s).
 /// </summary>
@@ -108,6 +109,40 @@ public sealed class DecisionRuleTests
 
         // A trip of 30 s there proves row c a fortiori at any current within the clamp's uncertainty: a pass under guarded too.
         Assert.Equal(Verdict.Pass, Under(DecisionRule.Guarded, 39.35, 30, TimerAndClamp).Verdict);
+    }
+
+    [Fact]
+    public void TheWorksheetsGuardedWindow_IsWhereTheCheckPassesUnderGuarded()
+    {
+        // Row c at 40.8 A with the timer alone, w = U at each limit (ILAC-G8:09/2019, guarded acceptance):
+        // at 60 s, U = 2 x (0.005 x 60 + 0.010) / √3 = 0.35796 s; at 1 s, U = 2 x (0.005 x 1 + 0.010) / √3 = 0.017321 s.
+        var envelope = PointWindowEnvelope.Of(new Iec60898Envelope(TripCurve.C, Amperes.Of(16)));
+        var window = envelope.At(Amperes.Of(40.8)).For(TestConditions.Reference);
+        var g = TripJudge.GuardedWindowOf(envelope, Amperes.Of(40.8), TestConditions.Reference, window, TimerOnly);
+
+        Assert.Equal(60 - 0.35796, g.Maximum!.Value.Value, 4);
+        Assert.Equal(1 + 0.017321, g.Minimum!.Value.Value, 5);
+        Assert.False(g.Closed);
+
+        // Just inside the guarded window the check passes under guarded; just outside it, it withholds the verdict.
+        Assert.Equal(Verdict.Pass, Under(DecisionRule.Guarded, 40.8, g.Maximum.Value.Value - 0.01, TimerOnly).Verdict);
+        Assert.Equal(Verdict.NotAssessable, Under(DecisionRule.Guarded, 40.8, g.Maximum.Value.Value + 0.01, TimerOnly).Verdict);
+        Assert.Equal(Verdict.Pass, Under(DecisionRule.Guarded, 40.8, g.Minimum.Value.Value + 0.001, TimerOnly).Verdict);
+        Assert.Equal(Verdict.NotAssessable, Under(DecisionRule.Guarded, 40.8, g.Minimum.Value.Value - 0.001, TimerOnly).Verdict);
+    }
+
+    [Fact]
+    public void TheWorksheetsGuardBand_CarriesTheCurrentsShareAsTheCheckDoes()
+    {
+        // With a ±2 % clamp the limit's slope adds the current's share (GUM, JCGM 100:2008, 5.1.2); a trip at the limit
+        // itself is judged with the same U the worksheet moves the limit by.
+        var envelope = PointWindowEnvelope.Of(new Iec60898Envelope(TripCurve.C, Amperes.Of(16)));
+        var window = envelope.At(Amperes.Of(40.8)).For(TestConditions.Reference);
+        var g = TripJudge.GuardedWindowOf(envelope, Amperes.Of(40.8), TestConditions.Reference, window, TimerAndClamp);
+        var atLimit = Under(DecisionRule.Simple, 40.8, 60, TimerAndClamp);
+
+        Assert.Equal(atLimit.Uncertainty!.Time!.Value.Value, g.MaximumBand!.Value, 6);
+        Assert.True(g.MaximumBand > 0.35796 * 2, "the current's share through the slope is missing");
     }
 
     [Fact]

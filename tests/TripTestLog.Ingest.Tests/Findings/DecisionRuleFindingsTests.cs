@@ -64,6 +64,28 @@ public sealed class DecisionRuleFindingsTests
 
     [Theory]
     [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
+    public void AnInsulationReadingTwoPerCentUnderItsMinimum_FailsOnlyUnderSimpleAndNonBinary(Provider provider)
+    {
+        // A 230 V breaker against the default table's 25 MOhm minimum (ANSI/NETA maintenance table, from memory) reads
+        // 24.5 MOhm at 20 °C. Insulation records name no instrument, so the policy default ±5 % applies (lab policy):
+        // a = 0.05 x 24.5 = 1.225 MOhm, u = 1.225 / √3 = 0.7073 MOhm, U = 1.41 MOhm > the 0.5 MOhm it is under by.
+        using var fleet = new FindingsStore(provider)
+            .Register("I-25,Site,Way 4,iec60898,C,16,1,230,2019-01-01,,,,")
+            .Insulation("I-25,2026-03-01,as-found,1-E,500,24.5,20,60");
+
+        Assert.Single(fleet.Device("I-25", Rule(DecisionRule.Simple)).Findings, f => f.Kind == FindingKind.InsulationBelowMinimum);
+        var guarded = fleet.Device("I-25", Rule(DecisionRule.Guarded));
+        Assert.DoesNotContain(guarded.Findings, f => f.Kind == FindingKind.InsulationBelowMinimum);
+        var retest = Assert.Single(guarded.Findings, f => f.Kind == FindingKind.RetestAccuracy);
+        Assert.Contains("U = 1.41 MOhm", retest.Message);
+        Assert.Contains("insulation ±5 %", retest.Message);
+        var nonBinary = fleet.Device("I-25", Rule(DecisionRule.NonBinary));
+        Assert.Single(nonBinary.Findings, f => f.Kind == FindingKind.InsulationBelowMinimum);
+        Assert.Single(nonBinary.Findings, f => f.Kind == FindingKind.RetestAccuracy);
+    }
+
+    [Theory]
+    [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
     public void ATripAt59_9sAgainstRowC_OpensARetestWithABetterInstrument_UnderGuarded(Provider provider)
     {
         // IEC 60898-1 Table 7 c, C16 at 2.55 In from cold: t < 60 s. U = 2 x (0.005 x 59.9 + 0.01) / √3 = 0.3574 s > 0.1 s.
