@@ -2,6 +2,7 @@ using System.Text;
 using TripTestLog.Application.Findings;
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Condition;
+using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Verdicts;
 using TripTestLog.Reports.Charts;
 using static TripTestLog.Reports.Html.Markup;
@@ -23,7 +24,8 @@ internal static class FleetPage
         Layout.Begin(html, "Fleet condition", $"{devices} devices at {sites.Count} sites{selection}; findings as of {context.AsOf:yyyy-MM-dd}", null);
         html.Append("<nav>Data beside this page: <a href=\"findings.csv\">findings.csv</a> <a href=\"findings.json\">findings.json</a> ")
             .Append("<a href=\"verdicts.csv\">verdicts.csv</a> <a href=\"verdicts.json\">verdicts.json</a></nav>\n");
-        html.Append("<h2>Act first</h2>\n<p class=\"sub\">Worst grade first, then the soonest forecast, then overdue.</p>\n");
+        html.Append("<h2>Act first</h2>\n<p class=\"sub\">Worst grade first; within a grade, the most critical (register "
+            + "criticality 1 first, 2 when not given), then furthest past its limit, then the soonest date.</p>\n");
         Table(html, ["#", "device", "site", "grade", "next test due", "why it is here"], fleet.Summary.Priority.Select((d, i) => new[]
         {
             N(i + 1), Link(d, pageOf), H(d.Device.Site), Badge(d.Grade),
@@ -89,7 +91,8 @@ internal static class FleetPage
     private static string Why(DeviceCondition device)
     {
         var more = device.Open.Count() - 1;
-        return device.WorstOpen is { } worst ? worst.Message + (more switch { 0 => "", 1 => " (and 1 more finding)", _ => $" (and {more} more findings)" }) : "";
+        var critical = device.Device.Criticality == Device.DefaultCriticality ? "" : $" (criticality {device.Device.Criticality})";
+        return device.WorstOpen is { } worst ? worst.Message + critical + (more switch { 0 => "", 1 => " (and 1 more finding)", _ => $" (and {more} more findings)" }) : "";
     }
 
     private static string Link(DeviceCondition device, Func<string, string?> pageOf) =>
