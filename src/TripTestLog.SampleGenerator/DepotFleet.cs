@@ -113,7 +113,7 @@ internal static class DepotFleet
 
     private static string Insulation(int year, Random random)
     {
-        var sb = new StringBuilder("asset_tag,tested_at,stage,path,test_voltage_v,resistance_mohm,temperature_c,duration_s\n");
+        var sb = new StringBuilder("asset_tag,tested_at,stage,path,test_voltage_v,resistance_mohm,temperature_c,duration_s,instrument\n");
         var date = new DateOnly(FirstYear + year, 5, 10);
         for (var i = 1; i <= 10; i++)
         {
@@ -135,7 +135,7 @@ internal static class DepotFleet
                     r = 4000 / Math.Pow(2, year);
                 }
 
-                Row(sb, Tag(i), Iso(date), "as-found", path, "500", F(r, "0.#"), F(18 + random.NextDouble() * 4, "0.0"), "60");
+                Row(sb, Tag(i), Iso(date), "as-found", path, "500", F(r, "0.#"), F(18 + random.NextDouble() * 4, "0.0"), "60", "IR-CWD-1");
             }
         }
 

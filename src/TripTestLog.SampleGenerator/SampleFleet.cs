@@ -93,7 +93,7 @@ internal static class SampleFleet
     private static StringBuilder Register(List<FleetDevice> fleet, Random random)
     {
         var sb = new StringBuilder("asset_tag,site,location,family,curve,rated_current_a,poles,rated_voltage_v,commissioned_on,contact_limit_uohm,make,model,serial"
-            + IndustrialFleet.RegisterTail + "\n");
+            + IndustrialFleet.RegisterTail + ",criticality\n");
         foreach (var d in fleet)
         {
             var make = Makes[d.Site];
@@ -104,12 +104,13 @@ internal static class SampleFleet
             var model = $"{make[..2].ToUpperInvariant()}{d.Poles}";
             var serial = $"{make[0]}{commissioned.Year % 100:00}{random.Next(100000, 999999)}";
             Row(sb, d.Tag, SiteNames[d.Site], d.Location, "iec60898", d.Curve.ToString(), F(d.Rated, "0"), d.Poles.ToString(CultureInfo.InvariantCulture),
-                F(voltage, "0"), commissioned.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture), F(ContactLimit(d), "0"), make, model, serial + IndustrialFleet.EmptyTail);
+                F(voltage, "0"), commissioned.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture), F(ContactLimit(d), "0"), make, model, serial + IndustrialFleet.EmptyTail + ",");
         }
 
         foreach (var row in IndustrialFleet.RegisterRows().Concat(DepotFleet.RegisterRows(IndustrialFleet.EmptyTail)))
         {
-            sb.Append(row).Append('\n');
+            // An incomer's loss stops its site: criticality 1. Every other device takes the default, 2.
+            sb.Append(row).Append(row.Contains("incomer", StringComparison.OrdinalIgnoreCase) ? ",1" : ",").Append('\n');
         }
 
         return sb;
@@ -215,7 +216,7 @@ internal static class SampleFleet
 
     private static StringBuilder Insulation(List<FleetDevice> devices, int site, int year, Random random)
     {
-        var sb = new StringBuilder("asset_tag,tested_at,stage,path,test_voltage_v,resistance_mohm,temperature_c,duration_s\n");
+        var sb = new StringBuilder("asset_tag,tested_at,stage,path,test_voltage_v,resistance_mohm,temperature_c,duration_s,instrument\n");
         var date = new DateOnly(FirstYear + year, TestMonth[site], 5);
         foreach (var d in devices)
         {
@@ -229,7 +230,9 @@ internal static class SampleFleet
                 // The policy's table asks 1000 V DC for a 400 V breaker and 500 V DC up to 250 V; in its last year one 400 V
                 // breaker was tested at 500 V DC by mistake (insulation-test-voltage).
                 var volts = d.Poles == 1 ? "500" : d.Tag == "ARW-DB1-Q06" && year == Years - 1 ? "500" : "1000";
-                Row(sb, d.Tag, Iso(date), "as-found", path, volts, text, F(16 + random.NextDouble() * 8, "0.0"), "60");
+                // In its last year one way was tested with a borrowed tester whose calibration had run out.
+                var tester = d.Tag == "ARW-DB1-Q07" && year == Years - 1 ? "IR-ARW-2" : $"IR-{SiteCodes[site]}-1";
+                Row(sb, d.Tag, Iso(date), "as-found", path, volts, text, F(16 + random.NextDouble() * 8, "0.0"), "60", tester);
             }
         }
 

@@ -14,11 +14,11 @@ internal static class DeviceMapping
 {
     public const string Columns =
         "site, location, family, curve, rated_current_a, poles, rated_voltage_v, commissioned_on, contact_limit_uohm, make, model, serial, "
-        + "settings_json, settings_from, curve_table, reference_ambient_c, ambient_table";
+        + "settings_json, settings_from, curve_table, reference_ambient_c, ambient_table, criticality";
 
     public const string Parameters =
         "$site, $location, $family, $curve, $rated, $poles, $voltage, $commissioned, $limit, $make, $model, $serial, "
-        + "$settings, $from, $table, $refamb, $ambtable";
+        + "$settings, $from, $table, $refamb, $ambtable, $criticality";
 
     public static Device Read(DbDataReader r, int first = 0) => new(
         AssetTag.Of(r.GetString(first)),
@@ -39,6 +39,7 @@ internal static class DeviceMapping
         CurveTable = r.IsDBNull(first + 15) ? null : r.GetString(first + 15),
         ReferenceAmbient = r.IsDBNull(first + 16) ? null : Celsius.Of(r.GetDouble(first + 16)),
         AmbientTable = r.IsDBNull(first + 17) ? null : r.GetString(first + 17),
+        Criticality = r.GetInt32(first + 18),
     };
 
     /// <summary>Register entries ordered by asset tag, then age (tag first, then <see cref="Columns"/>), as each device's history.</summary>
@@ -79,6 +80,7 @@ internal static class DeviceMapping
         yield return ("$table", Db(d.CurveTable));
         yield return ("$refamb", d.ReferenceAmbient is { } a ? a.Value : DBNull.Value);
         yield return ("$ambtable", Db(d.AmbientTable));
+        yield return ("$criticality", d.Criticality);
     }
 
     private static object Db(string? value) => value is null ? DBNull.Value : value;

@@ -20,8 +20,15 @@ internal static class Fingerprint
         // Built in one pooled buffer rather than as joined strings: this runs once per imported row.
         var text = new StringBuilder(256).Append(table.Table);
         Span<char> number = stackalloc char[32];
-        foreach (var value in values)
+        var hashed = values.Count;
+        while (hashed > values.Count - table.UnhashedWhenEmpty && MeasurementTable.Text(values[hashed - 1]).Length == 0)
         {
+            hashed--;
+        }
+
+        for (var i = 0; i < hashed; i++)
+        {
+            var value = values[i];
             text.Append('\u001f');
             if (value is double d && d.TryFormat(number, out var written, "R", CultureInfo.InvariantCulture))
             {

@@ -14,7 +14,11 @@ internal sealed record MeasurementRow(object[] Values, string Fingerprint, long 
 /// <param name="Table">The table name.</param>
 /// <param name="Columns">The value columns, in order.</param>
 /// <param name="TrailingOptional">How many of the last columns are usually empty, so an insert may leave them out.</param>
-internal sealed record MeasurementTable(string Table, string[] Columns, int TrailingOptional = 0)
+/// <param name="UnhashedWhenEmpty">
+/// How many of the last columns were added after records were stored: left out of the fingerprint while empty, so a
+/// record stored before keeps its fingerprint.
+/// </param>
+internal sealed record MeasurementTable(string Table, string[] Columns, int TrailingOptional = 0, int UnhashedWhenEmpty = 0)
 {
     /// <summary>Where every measurement table holds its test time among <see cref="Columns"/>: second, after the device.</summary>
     public const int TestedAtColumn = 1;
@@ -29,7 +33,8 @@ internal sealed record MeasurementTable(string Table, string[] Columns, int Trai
         ["device_id", "tested_at", "stage", "pole", "resistance_uohm", "test_current_a", "temperature_c", "instrument", "technician"]);
 
     public static MeasurementTable Insulations { get; } = new("insulation_tests",
-        ["device_id", "tested_at", "stage", "path", "test_voltage_v", "resistance_mohm", "over_range", "temperature_c", "duration_s"]);
+        ["device_id", "tested_at", "stage", "path", "test_voltage_v", "resistance_mohm", "over_range", "temperature_c", "duration_s", "instrument"],
+        UnhashedWhenEmpty: 1);
 
     /// <summary>The table measurements of <paramref name="kind"/> are stored in.</summary>
     public static MeasurementTable For(RecordKind kind) => kind switch
@@ -88,7 +93,7 @@ internal sealed record MeasurementTable(string Table, string[] Columns, int Trai
         object[] values =
         [
             device, m.TestedAt.ToString(), Codes.Of(m.Stage), m.Path, m.TestVoltage.Value, m.Resistance.Value.Value, m.Resistance.OverRange,
-            Db(m.Temperature?.Value), Db(m.Duration?.Value),
+            Db(m.Temperature?.Value), Db(m.Duration?.Value), m.Instrument,
         ];
         return new MeasurementRow(values, Fingerprint.Of(Insulations, values), line);
     }

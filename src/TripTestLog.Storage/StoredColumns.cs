@@ -15,7 +15,7 @@ internal static class StoredColumns
         "d.asset_tag, c.tested_at, c.stage, c.pole, c.resistance_uohm, c.test_current_a, c.temperature_c, c.instrument, c.technician, c.source_file_id, c.source_line";
 
     public const string Insulation =
-        "d.asset_tag, i.tested_at, i.stage, i.path, i.test_voltage_v, i.resistance_mohm, i.over_range, i.temperature_c, i.duration_s, i.source_file_id, i.source_line";
+        "d.asset_tag, i.tested_at, i.stage, i.path, i.test_voltage_v, i.resistance_mohm, i.over_range, i.temperature_c, i.duration_s, i.source_file_id, i.source_line, i.instrument";
 
     /// <summary>The alias and columns of the table a measurement kind is stored in.</summary>
     public static (string Alias, string Columns) Of(MeasurementTable table) => table.Table switch

@@ -70,7 +70,7 @@ internal sealed class StoredRows(IReadOnlyDictionary<long, string> files, Func<D
             Volts.Of(r.GetDouble(4)),
             new InsulationReading(MegaOhms.Of(r.GetDouble(5)), r.GetBoolean(6)),
             r.IsDBNull(7) ? null : Celsius.Of(r.GetDouble(7)),
-            r.IsDBNull(8) ? null : Seconds.Of(r.GetDouble(8))), _files[r.GetInt64(9)], r.GetInt64(10));
+            r.IsDBNull(8) ? null : Seconds.Of(r.GetDouble(8))) { Instrument = r.GetString(11) }, _files[r.GetInt64(9)], r.GetInt64(10));
 
     private static Amperes? A(DbDataReader r, int i) => r.IsDBNull(i) ? null : Amperes.Of(r.GetDouble(i));
 

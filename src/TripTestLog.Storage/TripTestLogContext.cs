@@ -38,11 +38,13 @@ internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> op
         {
             e.ToTable("devices");
             e.HasIndex(x => x.AssetTag).IsUnique();
+            e.Property(x => x.Criticality).HasDefaultValue(2);
             e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
         });
         modelBuilder.Entity<DeviceRevisionRow>(e =>
         {
             e.ToTable("device_revisions");
+            e.Property(x => x.Criticality).HasDefaultValue(2);
             e.HasIndex(x => x.DeviceId);
             e.HasOne<DeviceRow>().WithMany().HasForeignKey(x => x.DeviceId).OnDelete(DeleteBehavior.Restrict);
             e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
@@ -73,6 +75,7 @@ internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> op
         modelBuilder.Entity<InsulationTestRow>(e =>
         {
             e.ToTable("insulation_tests");
+            e.Property(x => x.Instrument).HasDefaultValue("");
             e.HasIndex(x => x.Fingerprint).IsUnique();
             e.HasIndex(x => new { x.DeviceId, x.TestedAt });
             e.HasOne<DeviceRow>().WithMany().HasForeignKey(x => x.DeviceId).OnDelete(DeleteBehavior.Restrict);

@@ -260,6 +260,12 @@ namespace TripTestLog.Migrations.Postgres.Migrations
                         .HasColumnType("double precision")
                         .HasColumnName("contact_limit_uohm");
 
+                    b.Property<int>("Criticality")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("integer")
+                        .HasDefaultValue(2)
+                        .HasColumnName("criticality");
+
                     b.Property<string>("Curve")
                         .IsRequired()
                         .HasColumnType("text")
@@ -375,6 +381,12 @@ namespace TripTestLog.Migrations.Postgres.Migrations
                     b.Property<double?>("ContactLimitUohm")
                         .HasColumnType("double precision")
                         .HasColumnName("contact_limit_uohm");
+
+                    b.Property<int>("Criticality")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("integer")
+                        .HasDefaultValue(2)
+                        .HasColumnName("criticality");
 
                     b.Property<string>("Curve")
                         .IsRequired()
@@ -568,6 +580,13 @@ namespace TripTestLog.Migrations.Postgres.Migrations
                         .IsRequired()
                         .HasColumnType("bytea")
                         .HasColumnName("fingerprint");
+
+                    b.Property<string>("Instrument")
+                        .IsRequired()
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("text")
+                        .HasDefaultValue("")
+                        .HasColumnName("instrument");
 
                     b.Property<bool>("OverRange")
                         .HasColumnType("boolean")

@@ -238,6 +238,12 @@ namespace TripTestLog.Migrations.Migrations
                         .HasColumnType("REAL")
                         .HasColumnName("contact_limit_uohm");
 
+                    b.Property<int>("Criticality")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER")
+                        .HasDefaultValue(2)
+                        .HasColumnName("criticality");
+
                     b.Property<string>("Curve")
                         .IsRequired()
                         .HasColumnType("TEXT")
@@ -353,6 +359,12 @@ namespace TripTestLog.Migrations.Migrations
                     b.Property<double?>("ContactLimitUohm")
                         .HasColumnType("REAL")
                         .HasColumnName("contact_limit_uohm");
+
+                    b.Property<int>("Criticality")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER")
+                        .HasDefaultValue(2)
+                        .HasColumnName("criticality");
 
                     b.Property<string>("Curve")
                         .IsRequired()
@@ -546,6 +558,13 @@ namespace TripTestLog.Migrations.Migrations
                         .IsRequired()
                         .HasColumnType("TEXT")
                         .HasColumnName("fingerprint");
+
+                    b.Property<string>("Instrument")
+                        .IsRequired()
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("TEXT")
+                        .HasDefaultValue("")
+                        .HasColumnName("instrument");
 
                     b.Property<bool>("OverRange")
                         .HasColumnType("INTEGER")

@@ -24,7 +24,7 @@ internal static class DeviceFindings
         TripRules.Drift(points, ledger, policy);
         PeerRule.Apply(points, peers, ledger, policy);
         ContactRules.States(history, device.Contacts, ledger, policy, instruments);
-        InsulationRules.States(history, device.Insulation, ledger, policy);
+        InsulationRules.States(history, device.Insulation, ledger, policy, instruments);
         InsulationRules.Falling(history, device.Insulation, ledger, policy, asOf);
 
         var last = LastTested(device);

@@ -61,8 +61,9 @@ public sealed class FleetSummary(int size)
 }
 
 /// <summary>
-/// The asset manager's order: worst grade first; within a grade, the furthest past its limit (a margin as a fraction of
-/// the limit, none last); then the soonest date (a forecast or the due date); then asset tag so the order is total.
+/// The asset manager's order: worst grade first; within a grade, the most critical (the register's criticality, 1
+/// first); then the furthest past its limit (a margin as a fraction of the limit, none last); then the soonest date (a
+/// forecast or the due date); then asset tag so the order is total.
 /// </summary>
 public sealed class PriorityOrder : IComparer<DeviceCondition>
 {
@@ -83,6 +84,12 @@ public sealed class PriorityOrder : IComparer<DeviceCondition>
         }
 
         var c = y.Grade.CompareTo(x.Grade);
+        if (c != 0)
+        {
+            return c;
+        }
+
+        c = x.Device.Criticality.CompareTo(y.Device.Criticality);
         if (c != 0)
         {
             return c;

@@ -15,13 +15,21 @@ namespace TripTestLog.Application.Findings;
 internal static class InsulationRules
 {
     internal sealed record PathResult(AssetTag Tag, string Path, TestedAt At, TestStage Stage, double Corrected, double Measured, bool OverRange,
-        bool TemperatureKnown, double TestVoltage, RecordSource Source);
+        bool TemperatureKnown, double TestVoltage, RecordSource Source, string Instrument);
 
-    /// <summary>insulation-below-minimum, test by test.</summary>
-    public static void States(DeviceHistory history, IReadOnlyList<StoredMeasurement<InsulationMeasurement>> readings, FindingLedger ledger, FindingPolicy policy)
+    /// <summary>insulation-below-minimum, the test voltage and the tester's calibration, test by test.</summary>
+    public static void States(DeviceHistory history, IReadOnlyList<StoredMeasurement<InsulationMeasurement>> readings, FindingLedger ledger, FindingPolicy policy,
+        Domain.Instruments.InstrumentRegister instruments)
     {
+        var sessionAt = (TestedAt?)null;
         foreach (var r in readings.Select(Result).OrderBy(r => r.At).ThenBy(r => r.Stage))
         {
+            if (r.Stage == TestStage.AsFound && sessionAt != r.At)
+            {
+                sessionAt = r.At;
+                Instrument([.. readings.Select(Result).Where(x => x.At == r.At && x.Stage == TestStage.AsFound)], ledger, policy, instruments);
+            }
+
             var device = history.InForceOn(r.At.Date);
             if (InsulationMinimum.For(policy.InsulationTable, device.RatedVoltage) is not { } row)
             {
@@ -29,8 +37,8 @@ internal static class InsulationRules
             }
 
             Voltage(r, row, device, ledger, policy);
-            // The decision rule: the records carry no insulation instrument, so its accuracy is the lab policy's default.
-            var accuracy = Domain.Instruments.InstrumentAccuracy.None.Over(policy.DefaultAccuracy);
+            // The decision rule: the tester's stated accuracy on the day, else the lab policy's default.
+            var accuracy = policy.Decision.AccuracyOf(instruments, r.Instrument, r.At.Date);
             var expanded = accuracy.CoverageFactor * accuracy.InsulationStandard(r.Corrected);
             var guard = Uncertain.Guard(policy, expanded);
             var within = policy.DecisionRule != Domain.Verdicts.DecisionRule.Simple && !r.OverRange && Math.Abs(r.Corrected - row.Minimum.Value) < guard;
@@ -75,6 +83,28 @@ internal static class InsulationRules
                 ledger.Confirm(subject, r.At, $"reading of path {r.Path} above the minimum");
             }
         }
+    }
+
+    // The insulation tester is judged as the other instruments are: a test session with an instrument out of
+    // calibration on the day (or unregistered, where the lab requires registered instruments) raises one finding; a
+    // later as-found session with a traceable tester closes it.
+    private static void Instrument(List<PathResult> session, FindingLedger ledger, FindingPolicy policy, Domain.Instruments.InstrumentRegister instruments)
+    {
+        var at = session[0].At;
+        var untraced = session.Select(p => (p, u: instruments.Trace(p.Instrument, at.Date, policy.RequireRegisteredInstruments))).FirstOrDefault(x => x.u is not null);
+        if (untraced.u is null)
+        {
+            ledger.Clear("instrument|insulation", at, "insulation test with a traceable instrument");
+            return;
+        }
+
+        ledger.Raise("instrument|insulation", new Finding(untraced.u.Registered ? FindingKind.CalibrationLapsed : FindingKind.InstrumentUnregistered,
+            Severity.Investigate, session[0].Tag, at, "lab policy: every measurement is made with an instrument in calibration",
+            $"insulation resistance tests on {at.Date:yyyy-MM-dd}: {untraced.u.Message}; confirm the instrument's accuracy or repeat the tests",
+            [.. session.Select(p => p.Source)])
+        {
+            Instrument = untraced.p.Instrument,
+        });
     }
 
     // insulation-test-voltage: a reading at a lower voltage than the table's says little about the insulation at the
@@ -166,7 +196,7 @@ internal static class InsulationRules
         var m = stored.Measurement;
         var corrected = m.Temperature is { } t ? InsulationCorrection.ToTwentyCelsius(m.Resistance.Value, t).Value : m.Resistance.Value.Value;
         return new PathResult(m.Tag, m.Path, m.TestedAt, m.Stage, corrected, m.Resistance.Value.Value, m.Resistance.OverRange, m.Temperature is not null,
-            m.TestVoltage.Value, new RecordSource(stored.SourceFile, stored.SourceLine));
+            m.TestVoltage.Value, new RecordSource(stored.SourceFile, stored.SourceLine), m.Instrument);
     }
 
     private static string Describe(PathResult r) => r.TemperatureKnown

@@ -50,6 +50,7 @@ internal static class FleetJson
                 json.WriteString("grade", TextCodes.Grade.Of(device.Grade));
                 json.WriteString("due_on", device.DueOn.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture));
                 json.WriteBoolean("overdue", device.Overdue);
+                json.WriteNumber("criticality", device.Device.Criticality);
                 if (device.SoonestForecast is { } on)
                 {
                     json.WriteString("soonest_forecast", on.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture));

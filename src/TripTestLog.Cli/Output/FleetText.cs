@@ -37,8 +37,9 @@ internal static class FleetText
         }
         else
         {
-            Wrapped.Write(writer, "Act first: worst grade; within a grade, furthest past its limit (as a fraction of the limit); then the soonest "
-                + "date, a forecast or the due date. Devices with one cause share a line.", 0);
+            Wrapped.Write(writer, "Act first: worst grade; within a grade, the most critical (register criticality 1 first, 2 when not given); "
+                + "then furthest past its limit (as a fraction of the limit); then the soonest date, a forecast or the due date. "
+                + "Devices with one cause share a line.", 0);
             writer.WriteLine();
             var rank = Math.Max(1, N(lines.Count).Length);
             var tag = Math.Max(5, lines.Max(l => l.Devices[0].Device.Tag.Value.Length));
@@ -95,14 +96,23 @@ internal static class FleetText
         var more = device.Open.Count() - 1;
         if (device.Grade == ConditionGrade.Untested && worst.Kind == FindingKind.TestOverdue)
         {
-            return $"never tested; due since {device.DueOn:yyyy-MM-dd}" + (more switch { 0 => "", 1 => " (and 1 more finding)", _ => $" (and {more} more findings)" });
+            return $"never tested; due since {device.DueOn:yyyy-MM-dd}" + Critical(device) + (more switch { 0 => "", 1 => " (and 1 more finding)", _ => $" (and {more} more findings)" });
         }
 
         var subject = worst.Concerns.Length == 0 ? "" : " " + worst.Concerns;
         var forecast = worst.ForecastOn is { } on ? $" by {on:yyyy-MM}" : "";
         var margin = DeviceCondition.MarginOf(worst) is { } m && m >= 0.0005 ? string.Create(CultureInfo.InvariantCulture, $", {m * 100:0.#} % past its limit") : "";
-        return $"{TextCodes.FindingKind.Of(worst.Kind)}{subject}{forecast}{margin}"
+        return $"{TextCodes.FindingKind.Of(worst.Kind)}{subject}{forecast}{margin}{Critical(device)}"
             + (more switch { 0 => "", 1 => " (and 1 more finding)", _ => $" (and {more} more findings)" });
+    }
+
+    /// <summary>", criticality N" when the register sets one other than the default, since it placed the line.</summary>
+    public static string Critical(DeviceCondition device)
+    {
+        ArgumentNullException.ThrowIfNull(device);
+        return device.Device.Criticality == Domain.Devices.Device.DefaultCriticality
+            ? ""
+            : string.Create(CultureInfo.InvariantCulture, $", criticality {device.Device.Criticality}");
     }
 
     // The longest grade word is broken after its second hyphen over two header lines, so the table keeps 100 columns.

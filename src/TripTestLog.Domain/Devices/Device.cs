@@ -43,4 +43,19 @@ public sealed record Device(
 
     /// <summary>An ambient correction (derating) table from the maker's data, when the lab has entered one.</summary>
     public string? AmbientTable { get; init; }
+
+    /// <summary>
+    /// How much the site depends on it, 1 (highest: an incomer, a supply whose loss stops the site) to 3 (lowest: a
+    /// final circuit); <see cref="DefaultCriticality"/> when the register does not say. Orders devices within a grade.
+    /// </summary>
+    public int Criticality { get; init; } = DefaultCriticality;
+
+    /// <summary>The criticality of a device whose register entry gives none: 2, the middle.</summary>
+    public const int DefaultCriticality = 2;
+
+    /// <summary>The highest criticality, 1.</summary>
+    public const int HighestCriticality = 1;
+
+    /// <summary>The lowest criticality, 3.</summary>
+    public const int LowestCriticality = 3;
 }

@@ -20,4 +20,8 @@ public sealed record InsulationMeasurement(
     Volts TestVoltage,
     InsulationReading Resistance,
     Celsius? Temperature,
-    Seconds? Duration) : IMeasurement;
+    Seconds? Duration) : IMeasurement
+{
+    /// <summary>The insulation tester's identity; empty when the record does not name one.</summary>
+    public string Instrument { get; init; } = "";
+}

@@ -34,6 +34,7 @@ internal sealed record RecordSchema(RecordKind Kind, IReadOnlyList<ColumnSpec> C
             Opt("opening_time", Quantity.Time), Opt("time_tolerance_pct"), Opt("time_tolerance_min", Quantity.Time),
             Opt("pickup_tolerance_pct"), Opt("inst_max", Quantity.Time), Opt("curve_table"),
             Opt("reference_ambient", Quantity.Temperature), Opt("ambient_table"), Opt("supply"), Opt("thermal_memory"),
+            Opt("criticality"),
         ],
         ["family", "rated_current", "rated_voltage", "commissioned_on"]);
 
@@ -62,7 +63,7 @@ internal sealed record RecordSchema(RecordKind Kind, IReadOnlyList<ColumnSpec> C
         [
             Req("asset_tag"), Req("tested_at"), Req("stage"), Req("path"), Req("test_voltage", Quantity.Voltage),
             Req("resistance", Quantity.InsulationResistance), Opt("temperature", Quantity.Temperature), Opt("duration", Quantity.Time),
-            Opt(PlanColumn),
+            Opt("instrument"), Opt(PlanColumn),
         ],
         ["path", "test_voltage"]);
 

@@ -21,6 +21,7 @@ internal static class DeviceRowParser
         var settings = family is { } fam && rated is { } r ? SettingsParser.Parse(f, fam, Amperes.Of(r)) : null;
         var settingsFrom = f.Date("settings_from");
         var referenceAmbient = f.Number("reference_ambient", false, -60, 150, "C", allowZero: true);
+        var criticality = Criticality(f);
 
         if (!f.Ok || tag is null || site is null || location is null || family is null || settings is null
             || rated is null || poles is null || voltage is null)
@@ -36,7 +37,26 @@ internal static class DeviceRowParser
             CurveTable = family == DeviceFamily.CurveTable ? null : f.OptionalText("curve_table"),
             ReferenceAmbient = referenceAmbient is { } ra ? Celsius.Of(ra) : null,
             AmbientTable = f.OptionalText("ambient_table"),
+            Criticality = criticality,
         };
+    }
+
+    private static int Criticality(RowFields f)
+    {
+        var text = f.OptionalText("criticality");
+        if (text is null)
+        {
+            return Device.DefaultCriticality;
+        }
+
+        if (!int.TryParse(text, System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out var value)
+            || value is < Device.HighestCriticality or > Device.LowestCriticality)
+        {
+            f.Fail("criticality", $"'{text}' is not a criticality; write 1 (highest), 2 or 3 (lowest), or leave it empty for 2");
+            return Device.DefaultCriticality;
+        }
+
+        return value;
     }
 
     private static DeviceFamily? Family(RowFields f)

@@ -25,7 +25,10 @@ internal static class InsulationRowParser
 
         return new InsulationMeasurement(
             tag.Value, when.Value, stage.Value, path, Volts.Of(voltage.Value), reading.Value,
-            temperature is { } t ? Celsius.Of(t) : null, duration is { } d ? Seconds.Of(d) : null);
+            temperature is { } t ? Celsius.Of(t) : null, duration is { } d ? Seconds.Of(d) : null)
+        {
+            Instrument = f.Text("instrument"),
+        };
     }
 
     private static string? Path(RowFields f)

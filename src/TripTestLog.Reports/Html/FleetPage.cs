@@ -2,6 +2,7 @@ using System.Text;
 using TripTestLog.Application.Findings;
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Condition;
+using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Verdicts;
 using TripTestLog.Reports.Charts;
 using static TripTestLog.Reports.Html.Markup;
@@ -31,7 +32,8 @@ internal static class FleetPage
         }
 
         html.Append("</p>\n");
-        html.Append("<h2>Act first</h2>\n<p class=\"sub\">Worst grade first, then the soonest forecast, then overdue.</p>\n");
+        html.Append("<h2>Act first</h2>\n<p class=\"sub\">Worst grade first; within a grade, the most critical (register "
+            + "criticality 1 first, 2 when not given), then furthest past its limit, then the soonest date.</p>\n");
         Table(html, ["#", "device", "site", "grade", "next test due", "why it is here"], fleet.Summary.Priority.Select((d, i) => new[]
         {
             N(i + 1), Link(d, pageOf), H(d.Device.Site), Badge(d.Grade),
@@ -97,7 +99,8 @@ internal static class FleetPage
     private static string Why(DeviceCondition device)
     {
         var more = device.Open.Count() - 1;
-        return device.WorstOpen is { } worst ? worst.Message + (more switch { 0 => "", 1 => " (and 1 more finding)", _ => $" (and {more} more findings)" }) : "";
+        var critical = device.Device.Criticality == Device.DefaultCriticality ? "" : $" (criticality {device.Device.Criticality})";
+        return device.WorstOpen is { } worst ? worst.Message + critical + (more switch { 0 => "", 1 => " (and 1 more finding)", _ => $" (and {more} more findings)" }) : "";
     }
 
     private static string Link(DeviceCondition device, Func<string, string?> pageOf) =>

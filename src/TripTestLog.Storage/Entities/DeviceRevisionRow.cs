@@ -45,6 +45,9 @@ internal sealed class DeviceRevisionRow
 
     public string? AmbientTable { get; set; }
 
+    /// <summary>1 (highest) to 3; 2 when the register gives none.</summary>
+    public int Criticality { get; set; } = 2;
+
     public long SourceFileId { get; set; }
 
     public long SourceLine { get; set; }

@@ -24,6 +24,9 @@ internal sealed class InsulationTestRow
 
     public double? DurationS { get; set; }
 
+    /// <summary>The insulation tester's identity; empty when the record names none.</summary>
+    public string Instrument { get; set; } = "";
+
     public long SourceFileId { get; set; }
 
     public long SourceLine { get; set; }

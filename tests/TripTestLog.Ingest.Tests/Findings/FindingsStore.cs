@@ -13,7 +13,7 @@ namespace TripTestLog.Ingest.Tests.Findings;
 internal sealed class FindingsStore : IDisposable
 {
     public static readonly DateOnly AsOf = new(2026, 12, 1);
-    private static readonly DateTimeOffset Now = new(2026, 12, 1, 9, 0, 0, TimeSpan.Zero);
+    public static readonly DateTimeOffset Now = new(2026, 12, 1, 9, 0, 0, TimeSpan.Zero);
     private readonly TempFolder _temp = new();
     private readonly TestDatabase _database;
     private readonly IRecordStore _store;
