@@ -102,7 +102,8 @@ internal static class TimeCurrentChart
         plot.Axes.Top.Label.FontSize = plot.Axes.Bottom.Label.FontSize;
         plot.Axes.Top.Label.Bold = plot.Axes.Bottom.Label.Bold;
         plot.YLabel("trip time");
-        var right = Math.Log10(cold.Multiples[^1]);
+        // A hair past the band's end, so the axis keeps the label at its last multiple (20x, say).
+        var right = Math.Log10(cold.Multiples[^1]) + 0.03;
         plot.Axes.SetLimits(0, right, Math.Log10(FloorSeconds), Math.Log10(CeilingSeconds));
         plot.Axes.SetLimitsX(0, right, plot.Axes.Top);
         plot.ShowLegend(Edge.Right);
