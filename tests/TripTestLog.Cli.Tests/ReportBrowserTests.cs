@@ -39,12 +39,51 @@ public sealed class ReportBrowserTests(SampleFleetDatabase fleet) : IClassFixtur
         Assert.Empty(errors);
         Assert.All(requests, url => Assert.StartsWith("file://", url));
 
+        // The screenshot shows the page as it prints (the print style sheet), the way a technician signs it.
+        // A 960 x 680 view keeps each picture under about 300 KB for the docs.
+        await tab.EmulateMediaAsync(new() { Media = Media.Print });
+        await tab.SetViewportSizeAsync(960, 680);
         var png = await tab.ScreenshotAsync(new() { FullPage = false });
         Assert.True(png.Length > 20_000, "the screenshot is nearly empty");
         if (screenshot is not null && Environment.GetEnvironmentVariable("UPDATE_SCREENSHOTS") == "1")
         {
             await File.WriteAllBytesAsync(Path.Combine(Golden.RepositoryRoot(), "docs", screenshot), png);
         }
+    }
+
+    [Theory]
+    [InlineData("devices/CWD-DB1-Q06.html")]
+    [InlineData("devices/BPS-DB1-Q03.html")]
+    public async Task NoLegendOrLabel_OnADevicePage_CoversAChartsDataArea(string page)
+    {
+        // Each chart carries its data area (data-plot-area, in its own units); the browser lays out every text of the
+        // chart, and none may fall inside that area: the legends sit beside the data, so a crossing is never hidden.
+        var folder = Path.Combine(fleet.Folder, "report-legends");
+        if (!File.Exists(Path.Combine(folder, "index.html")))
+        {
+            Assert.Equal(0, CliRun.Run("report", "--db", fleet.Database, "--out", folder).Exit);
+        }
+
+        using var playwright = await Playwright.CreateAsync();
+        await using var browser = await Launch(playwright);
+        var (tab, errors) = await Open(browser);
+        await tab.GotoAsync(new Uri(Path.Combine(folder, page)).AbsoluteUri);
+
+        var overlaps = await tab.EvaluateAsync<string[]>("""
+            () => [...document.querySelectorAll('svg[data-plot-area]')].flatMap((svg, i) => {
+              const [x, y, w, h] = svg.dataset.plotArea.split(' ').map(Number);
+              return [...svg.querySelectorAll('text')].filter(t => t.textContent.trim() !== '').map(t => [t, t.getBBox()])
+                .filter(([t, b]) => b.x < x + w - 1 && b.x + b.width > x + 1 && b.y < y + h - 1 && b.y + b.height > y + 1)
+                .map(([t, b]) => `chart ${i + 1}: "${t.textContent.trim()}"`);
+            })
+            """);
+        var charts = await tab.Locator("svg[data-plot-area]").CountAsync();
+        var legendTexts = await tab.Locator("svg text").AllTextContentsAsync();
+
+        Assert.True(charts >= 3, $"{page} has {charts} charts");
+        Assert.Contains(legendTexts, t => t.Trim().StartsWith("latest allowed", StringComparison.Ordinal));
+        Assert.Empty(overlaps);
+        Assert.Empty(errors);
     }
 
     [Fact]
@@ -70,6 +109,10 @@ public sealed class ReportBrowserTests(SampleFleetDatabase fleet) : IClassFixtur
         var pdf = await tab.PdfAsync(new() { Format = "A4" });
         Assert.True(CountPages(pdf) >= 24, "fewer printed pages than devices");
 
+        // The screenshot shows the page as it prints (the print style sheet), the way a technician signs it.
+        // A 960 x 680 view keeps each picture under about 300 KB for the docs.
+        await tab.EmulateMediaAsync(new() { Media = Media.Print });
+        await tab.SetViewportSizeAsync(960, 680);
         var png = await tab.ScreenshotAsync(new() { FullPage = false });
         Assert.True(png.Length > 20_000, "the screenshot is nearly empty");
         if (Environment.GetEnvironmentVariable("UPDATE_SCREENSHOTS") == "1")

@@ -21,10 +21,10 @@ internal static class Charts
         [.. System.Text.RegularExpressions.Regex.Matches(svg, "<text[^>]*>([^<]*)</text>").Select(m => m.Groups[1].Value.Trim())];
 
     /// <summary>A cold all-poles trip of the C16 at <paramref name="amps"/> after <paramref name="seconds"/>, judged for real.</summary>
-    public static JudgedTrip Trip(double amps, double seconds, int year = 2024, int line = 2)
+    public static JudgedTrip Trip(double amps, double seconds, int year = 2024, int line = 2, StartCondition start = StartCondition.Cold)
     {
         var measurement = new TripMeasurement(AssetTag.Of("C-16"), TestedAt.At(new DateTime(year, 3, 1, 12, 0, 0)), TestStage.AsFound, Pole.All,
-            Amperes.Of(amps), TripOutcome.TrippedAfter(Seconds.Of(seconds)), StartCondition.Cold, Celsius.Of(30), "", "", "");
+            Amperes.Of(amps), TripOutcome.TrippedAfter(Seconds.Of(seconds)), start, Celsius.Of(30), "", "", "");
         var result = new TripAssessor(new Dictionary<string, CurveTable>(), new Dictionary<string, AmbientTable>()).Assess(C16, measurement);
         return new JudgedTrip(new StoredTrip(measurement.Tag, measurement, "trips.csv", line), result.Device, result.Envelope, result.Assessment, []);
     }

@@ -11,6 +11,8 @@ internal static class ChartStyle
 {
     public static readonly Color Band = Color.FromHex("#d9e6d3");
     public static readonly Color Edge = Color.FromHex("#2f4a2a");
+    public static readonly Color WarmBand = Color.FromHex("#f2c894").WithAlpha(0.55);
+    public static readonly Color WarmEdge = Color.FromHex("#8a4b08");
     public static readonly Color Pass = Color.FromHex("#1d4e89");
     public static readonly Color Fail = Color.FromHex("#a4161a");
     public static readonly Color Doubt = Color.FromHex("#6c6c6c");
@@ -56,6 +58,11 @@ internal static class ChartStyle
         var svg = plot.GetSvgXml(width, height);
         var start = svg.IndexOf("<svg", StringComparison.Ordinal);
         svg = start > 0 ? svg[start..] : svg;
+
+        // The data area, in the SVG's own units, so a page test can check that no legend or label covers the data.
+        var area = plot.RenderManager.LastRender.DataRect;
+        svg = string.Concat("<svg data-plot-area=\"", string.Join(' ', new[] { area.Left, area.Top, area.Width, area.Height }
+            .Select(v => v.ToString("0.#", CultureInfo.InvariantCulture))), "\"", svg[4..]);
 
         // A view box lets the page scale the chart down (print, a narrow screen) instead of cropping it.
         return svg.Contains("viewBox", StringComparison.Ordinal)

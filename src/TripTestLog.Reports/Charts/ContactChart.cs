@@ -81,7 +81,7 @@ internal static class ContactChart
         YearAxis.Apply(plot, first, last);
         plot.YLabel("contact resistance at 20 °C, micro-ohm");
         plot.Axes.SetLimitsY(0, Math.Max(readings.Max(r => r.CorrectedMicroOhms), limitMicroOhms ?? 0) * 1.15);
-        plot.ShowLegend(Alignment.UpperLeft);
+        plot.ShowLegend(Edge.Right);
         return plot;
     }
 }

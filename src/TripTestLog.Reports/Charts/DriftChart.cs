@@ -44,11 +44,27 @@ internal static class DriftChart
 
         LogAxes.Apply(plot.Axes.Left, LogAxes.Seconds);
         YearAxis.Apply(plot, first, last);
-        var values = tests.Select(t => Math.Log10(t.Seconds)).Concat(new[] { minimumSeconds, maximumSeconds }.Where(v => v is > 0).Select(v => Math.Log10(v!.Value))).ToList();
-        plot.Axes.SetLimitsY(Math.Floor(values.Min() - 0.1), Math.Ceiling(values.Max() + 0.1));
+        var (bottom, top) = Limits(tests.Select(t => t.Seconds), minimumSeconds, maximumSeconds, exit?.Trend is { } fitted ? [fitted.At(first)] : []);
+        plot.Axes.SetLimitsY(bottom, top);
         plot.Title(title);
         plot.YLabel("trip time");
-        plot.ShowLegend(Alignment.LowerRight);
+        plot.ShowLegend(Edge.Bottom);
         return plot;
+    }
+
+    /// <summary>
+    /// The time axis limits (log10 seconds): the point's own band edges and every test and trend start, with a tenth of that
+    /// span either side, so a drift inside the band fills the chart instead of a sliver of a fixed span of decades.
+    /// </summary>
+    public static (double Bottom, double Top) Limits(IEnumerable<double> seconds, double? minimumSeconds, double? maximumSeconds, IEnumerable<double> logSeconds)
+    {
+        var values = seconds.Where(s => s > 0).Select(Math.Log10)
+            .Concat(new[] { minimumSeconds, maximumSeconds }.Where(v => v is > 0).Select(v => Math.Log10(v!.Value)))
+            .Concat(logSeconds.Where(double.IsFinite))
+            .ToList();
+        var low = values.Min();
+        var high = values.Max();
+        var pad = Math.Max(high - low, 0.2) * 0.1;
+        return (low - pad, high + pad);
     }
 }
