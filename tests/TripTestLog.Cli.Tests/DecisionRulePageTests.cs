@@ -30,7 +30,7 @@ public sealed partial class DecisionRulePageTests(SampleFleetDatabase fleet) : I
         Assert.Contains("time and current from the lab policy's defaults (not in the instrument register)", page);
         Assert.Contains("accuracy used on that date", page);
         Assert.Contains("current ±2 %, k = 2 (time, current, k: policy defaults, none in the register)", page);
-        Assert.Contains("Insulation: ±5 %, k = 2, the lab policy's default (its records name no instrument).", page);
+        Assert.Contains("Insulation: the tester's accuracy from the instrument register, or where it states none the lab policy's default, ±5 %, k = 2.", page);
     }
 
     [Fact]

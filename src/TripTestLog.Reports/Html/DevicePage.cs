@@ -76,7 +76,10 @@ internal static class DevicePage
         var latest = report.Trips[^1];
         html.Append("<figure class=\"wide\">").Append(TimeCurrentChart.Svg(latest.Envelope, report.Trips)).Append("<figcaption>")
             .Append(H($"Band of the settings in force at the latest test ({latest.Envelope.Standard}, {latest.Device.Settings.Summary}), drawn for a cold "
-                + "start with all poles loaded: shaded between the guaranteed edges (solid), typical edges dashed. Each test is marked at its current "
+                + (report.Trips.Any(t => t.Trip.Measurement.Start == Domain.Measurements.StartCondition.Warm)
+                    ? "start and, in the warm tint with brown edges, for a warm start, both with all poles loaded: "
+                    : "start with all poles loaded: ")
+                + "shaded between the guaranteed edges (solid), typical edges dashed. Each test is marked at its current "
                 + "over the setting in force on its date, by the verdict it got under its own conditions: filled circle pass at a standard's point, "
                 + "open circle pass between points, square held without tripping, bold X too early or too late, triangle not assessable."))
             .Append("</figcaption></figure>\n");
@@ -91,7 +94,7 @@ internal static class DevicePage
         var insulation = Domain.Instruments.InstrumentAccuracy.None.Over(context.Policy.DefaultAccuracy);
         html.Append("<p class=\"small rule\">").Append(H($"Decision rule: {DecisionText.Short(context.Policy)}."))
             .Append(H(accuracy.Count == 0 ? "" : $" Beside each verdict, U is the expanded uncertainty of the deciding time and U(I) of the test current; accuracy used: {string.Join("; ", accuracy)}."))
-            .Append(H($" Insulation: ±{N(insulation.InsulationPercent)} %, k = {N(insulation.CoverageFactor)}, the lab policy's default (its records name no instrument)."))
+            .Append(H($" Insulation: the tester's accuracy from the instrument register, or where it states none the lab policy's default, ±{N(insulation.InsulationPercent)} %, k = {N(insulation.CoverageFactor)}."))
             .Append("</p>\n");
         Table(html, ["tested", "stage, pole, start", "current (x ref)", "result and band", "verdict", "basis, margin and source"], trips.Select(t =>
         {

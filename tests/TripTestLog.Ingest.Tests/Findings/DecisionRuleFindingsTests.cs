@@ -67,7 +67,7 @@ public sealed class DecisionRuleFindingsTests
     public void AnInsulationReadingTwoPerCentUnderItsMinimum_FailsOnlyUnderSimpleAndNonBinary(Provider provider)
     {
         // A 230 V breaker against the default table's 25 MOhm minimum (ANSI/NETA maintenance table, from memory) reads
-        // 24.5 MOhm at 20 °C. Insulation records name no instrument, so the policy default ±5 % applies (lab policy):
+        // 24.5 MOhm at 20 °C. The record names no tester, so the policy default ±5 % applies (lab policy):
         // a = 0.05 x 24.5 = 1.225 MOhm, u = 1.225 / √3 = 0.7073 MOhm, U = 1.41 MOhm > the 0.5 MOhm it is under by.
         using var fleet = new FindingsStore(provider)
             .Register("I-25,Site,Way 4,iec60898,C,16,1,230,2019-01-01,,,,")
