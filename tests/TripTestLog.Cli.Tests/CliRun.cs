@@ -16,6 +16,15 @@ internal static class CliRun
         return (exit, output.ToString(), error.ToString());
     }
 
+    /// <summary>Runs as from a terminal: the error stream is one, so progress lines are drawn on it.</summary>
+    public static (int Exit, string Out, string Error) RunOnTerminal(params string[] args)
+    {
+        var output = new StringWriter();
+        var error = new StringWriter();
+        var exit = CliApp.Run(args, new CliContext(output, error, new FixedClock(Now), true));
+        return (exit, output.ToString(), error.ToString());
+    }
+
     private sealed class FixedClock(DateTimeOffset now) : TimeProvider
     {
         public override DateTimeOffset GetUtcNow() => now;

@@ -20,6 +20,19 @@ public sealed class DemoAndCheckTests : IDisposable
     }
 
     [Fact]
+    public void TheSampleRecords_TravelBesideTheProgram_FileForFile()
+    {
+        // The demo finds them beside the program when no sample-records folder is here or above: the packed tool carries
+        // these files (CI installs the tool and runs its demo in an empty folder).
+        var shipped = Path.Combine(AppContext.BaseDirectory, "sample-records");
+        var files = Directory.GetFiles(SampleRecords, "*", SearchOption.AllDirectories).Select(f => Path.GetRelativePath(SampleRecords, f)).Order().ToList();
+
+        Assert.NotEmpty(files);
+        Assert.Equal(files, Directory.GetFiles(shipped, "*", SearchOption.AllDirectories).Select(f => Path.GetRelativePath(shipped, f)).Order().ToList());
+        Assert.All(files, f => Assert.Equal(File.ReadAllBytes(Path.Combine(SampleRecords, f)), File.ReadAllBytes(Path.Combine(shipped, f))));
+    }
+
+    [Fact]
     public void Demo_ImportsEverySampleFile_AndFindsTheFleetsStory()
     {
         var (exit, output, _) = CliRun.Run("demo", "--records", SampleRecords, "--out", _folder);

@@ -67,6 +67,22 @@ public sealed class ReportCommandTests(SampleFleetDatabase fleet) : IClassFixtur
     }
 
     [Fact]
+    public void AReport_ShowsItsProgressOnATerminal_AndClearsItBeforeTheSummary()
+    {
+        var (exit, output, error) = CliRun.RunOnTerminal("report", "--db", fleet.Database, "--out", Path.Combine(fleet.Folder, "report-progress"));
+
+        Assert.Equal(0, exit);
+        Assert.Contains("reading the fleet for the peer groups", error);
+        Assert.Contains("] 58/58 ", error);
+        Assert.EndsWith("\r" + new string(' ', 100) + "\r", error);
+        Assert.All(error.Split('\r'), line => Assert.True(line.Length <= 100));
+        Assert.StartsWith("Wrote 58 device pages", output);
+
+        // Redirected (a script or a log), nothing is drawn.
+        Assert.Equal("", CliRun.Run("report", "--db", fleet.Database, "--out", Path.Combine(fleet.Folder, "report-quiet")).Error);
+    }
+
+    [Fact]
     public void AReportForOneSite_WritesOnlyItsDevices()
     {
         var folder = Path.Combine(fleet.Folder, "report-site");

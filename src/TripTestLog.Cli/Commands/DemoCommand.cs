@@ -16,7 +16,7 @@ internal static class DemoCommand
     {
         var records = new Option<DirectoryInfo?>("--records")
         {
-            Description = "Folder of record files (default: the project's sample-records folder)",
+            Description = "Folder of record files (default: the sample-records folder here or above, else the one shipped with the tool)",
             HelpName = "FOLDER",
         };
         var output = new Option<DirectoryInfo>("--out")
@@ -162,7 +162,10 @@ internal static class DemoCommand
         return outcomes.Any(o => o.Status == ImportStatus.Refused) ? ExitCodes.BadInput : ExitCodes.Ok;
     }
 
-    /// <summary>The sample-records folder next to the working folder or any folder above it, then above the program.</summary>
+    /// <summary>
+    /// The sample-records folder next to the working folder or any folder above it, then the one shipped beside the program
+    /// (the tool carries a copy, so the demo runs wherever it is installed).
+    /// </summary>
     private static string? FindSampleRecords()
     {
         foreach (var start in new[] { Directory.GetCurrentDirectory(), AppContext.BaseDirectory })

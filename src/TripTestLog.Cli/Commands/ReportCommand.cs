@@ -87,9 +87,17 @@ internal static class ReportCommand
         var context = new ReportContext(options.Database.Display, ReportRun.ToolVersion, options.AsOf, cli.Clock.GetUtcNow(), options.Policy,
             options.PolicyFrom, store.Instruments());
         var clock = Stopwatch.StartNew();
+        // The progress line is cleared before anything else is said, on either stream.
+        var progress = Progress.For(cli, selection.Only is null ? (int)store.Counts().Devices : 1);
         try
         {
-            var (page, devices) = ReportRun.Write(store, folder, context, selection, cli.Cancel);
+            string page;
+            int devices;
+            using (progress)
+            {
+                (page, devices) = ReportRun.Write(store, folder, context, selection, cli.Cancel, progress: progress);
+            }
+
             cli.Out.WriteLine($"Wrote {devices} device pages and the fleet page in {clock.Elapsed.TotalSeconds:0.0} s.");
             cli.Out.WriteLine($"Fleet page: {page}");
             return ExitCodes.Ok;

@@ -1,8 +1,8 @@
 namespace TripTestLog.Cli.Services;
 
 /// <summary>
-/// Progress for long imports on the error stream: a redrawn line on a terminal, nothing for a handful of files
-/// or when output is redirected (a log reader wants the summary, not a line per step).
+/// Progress for long work (files imported, devices reported) on the error stream: a redrawn line on a terminal, nothing
+/// for a handful of steps or when output is redirected (a log reader wants the summary, not a line per step).
 /// </summary>
 internal sealed class Progress : IDisposable
 {
@@ -26,6 +26,12 @@ internal sealed class Progress : IDisposable
     public void Step(string what)
     {
         _done++;
+        Show(what);
+    }
+
+    /// <summary>Says what is being done now without counting a step, e.g. the pass that comes before the first one.</summary>
+    public void Show(string what)
+    {
         _phase = what;
         if (_writer is null)
         {

@@ -34,8 +34,9 @@ internal static class ReportRun
     /// devices wait in between.
     /// </summary>
     public static (string FleetPage, int DevicePages) Write(IRecordStore store, string folder, ReportContext context, Selection selection, CancellationToken cancel,
-        Action<DeviceReport>? alsoEach = null)
+        Action<DeviceReport>? alsoEach = null, Progress? progress = null)
     {
+        progress?.Show("reading the fleet for the peer groups");
         using var writer = new ReportWriter(folder, context, selection.DevicePages);
         using var findingsCsvFile = new StreamWriter(Path.Combine(folder, "findings.csv"));
         using var findingsJsonFile = new StreamWriter(Path.Combine(folder, "findings.json"));
@@ -74,6 +75,7 @@ internal static class ReportRun
         {
             foreach (var device in FindingsPipeline.RunWithRecords(store, context.Policy, context.AsOf, selection.Only, cancel))
             {
+                progress?.Step(device.Condition.Device.Tag.Value);
                 if (selection.Site is { } site && !string.Equals(device.Condition.Device.Site, site, StringComparison.OrdinalIgnoreCase))
                 {
                     continue;
