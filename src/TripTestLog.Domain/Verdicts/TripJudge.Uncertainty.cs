@@ -133,6 +133,7 @@ public static partial class TripJudge
         ArgumentNullException.ThrowIfNull(accuracy);
         var windowed = envelope as PointWindowEnvelope ?? PointWindowEnvelope.Of(envelope);
         var uI = accuracy.CurrentStandard(current);
+        var neighbours = Neighbours(windowed, current, conditions);
         double? W(BandEdge edge, bool minimum)
         {
             if (edge.Limit is not { } limit || edge.IsOpen || (minimum && limit.Value == 0))
@@ -141,7 +142,7 @@ public static partial class TripJudge
             }
 
             var uT = accuracy.TimeStandard(limit);
-            var slope = Slope(windowed, current, conditions, edge, minimum);
+            var slope = Slope(neighbours, current, edge, minimum);
             return guardBandFactor * accuracy.CoverageFactor * Math.Sqrt((uT * uT) + (slope * uI * slope * uI));
         }
 
