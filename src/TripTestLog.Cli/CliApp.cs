@@ -38,6 +38,15 @@ internal static class CliApp
         var parse = Build(cli).Parse(args);
         var clock = System.Diagnostics.Stopwatch.StartNew();
         int exit;
+
+        // A mistyped word is one sentence with the nearest right one, not the whole help; nothing runs.
+        // (Asking for help still shows the help.)
+        if (!args.Any(a => a is "--help" or "-h" or "-?") && UsageErrors.Of(parse) is { Count: > 0 } mistakes)
+        {
+            UsageErrors.Write(cli.Error, mistakes);
+            return ExitCodes.BadInput;
+        }
+
         try
         {
             exit = parse.Invoke(new InvocationConfiguration { Output = cli.Out, Error = cli.Error, EnableDefaultExceptionHandler = false });
