@@ -1,3 +1,4 @@
+using TripTestLog.Application.Text;
 using TripTestLog.Application.Import;
 using TripTestLog.Application.Check;
 using TripTestLog.Application.Records;
@@ -70,7 +71,7 @@ internal static class ImportReport
         foreach (var o in outcomes.Where(o => o.Status == ImportStatus.Imported && o.RefusedRows > 0))
         {
             writer.WriteLine();
-            Wrapped.Write(writer, $"{o.File}: {o.RefusedRows} rows refused, the rest stored."
+            Wrapped.Write(writer, $"{o.File}: {Counted.Of(o.RefusedRows, "row")} refused, the rest stored."
                 + (o.RejectsFile is { } rejects ? $" The refused rows, with their reasons, are in {rejects}:" : ""), 0, 2);
             WriteProblems(writer, o, logPath);
         }

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Text;
 using TripTestLog.Application.Check;
 using TripTestLog.Domain.Verdicts;
 
@@ -123,7 +124,7 @@ internal sealed class VerdictTable(TextWriter writer, bool wide = false) : IVerd
             var dates = tests.Select(r => r.Trip.Measurement.TestedAt.Date).ToList();
             var devices = tests.Select(r => r.Trip.Measurement.Tag).Distinct().Count();
             var files = string.Join(", ", tests.Select(r => r.Trip.SourceFile).Distinct());
-            Item(writer, $"{group.Key}: {tests.Count} tests of {devices} devices, {dates.Min():yyyy-MM-dd} to {dates.Max():yyyy-MM-dd} [{files}]");
+            Item(writer, $"{group.Key}: {Counted.Of(tests.Count, "test")} of {Counted.Of(devices, "device")}, {dates.Min():yyyy-MM-dd} to {dates.Max():yyyy-MM-dd} [{files}]");
         }
     }
 

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Text;
 using System.Text;
 using TripTestLog.Application.Findings;
 using TripTestLog.Domain.Codes;
@@ -20,7 +21,7 @@ internal static class FleetPage
         var html = new StringBuilder(64 * 1024);
         var sites = fleet.Summary.Sites;
         var devices = sites.Values.Sum(s => s.Devices);
-        Layout.Begin(html, "Fleet condition", $"{devices} devices at {sites.Count} sites{selection}; findings as of {context.AsOf:yyyy-MM-dd}", null);
+        Layout.Begin(html, "Fleet condition", $"{Counted.Of(devices, "device")} at {Counted.Of(sites.Count, "site")}{selection}; findings as of {context.AsOf:yyyy-MM-dd}", null);
         html.Append("<nav>Data beside this page: <a href=\"findings.csv\">findings.csv</a> <a href=\"findings.json\">findings.json</a> ")
             .Append("<a href=\"verdicts.csv\">verdicts.csv</a> <a href=\"verdicts.json\">verdicts.json</a></nav>\n");
         html.Append("<h2>Act first</h2>\n<p class=\"sub\">Worst grade first, then the soonest forecast, then overdue.</p>\n");
