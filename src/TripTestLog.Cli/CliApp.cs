@@ -34,7 +34,8 @@ internal static class CliApp
     public static int Run(string[] args, CliContext cli)
     {
         // Everything printed for a person passes one guard against terminal control characters in values.
-        cli = cli with { Out = Output.Visible.Wrap(cli.Out), Error = Output.Visible.Wrap(cli.Error) };
+        // Errors longer than a 100-column terminal are wrapped, wherever they are written.
+        cli = cli with { Out = Output.Visible.Wrap(cli.Out), Error = Output.ErrorLines.Wrap(Output.Visible.Wrap(cli.Error)) };
         var parse = Build(cli).Parse(args);
         var clock = System.Diagnostics.Stopwatch.StartNew();
         int exit;
