@@ -42,8 +42,8 @@ internal static class BackupCommand
         using var store = Stores.Open(cli, db, StorePurpose.Read);
         store.Backup(target.FullName);
         var counts = store.Counts();
-        cli.Out.WriteLine($"Backed up {db.Display} to {target.FullName}: {Counted.Of(counts.Files, "file")}, {Counted.Of(counts.Devices, "device")}, "
-            + $"{Counted.Of(counts.TripTests, "trip test")}, {counts.ContactTests} contact and {Counted.Of(counts.InsulationTests, "insulation reading")}.");
+        Output.Wrapped.Write(cli.Out, $"Backed up {db.Display} to {target.FullName}: {Counted.Of(counts.Files, "file")}, {Counted.Of(counts.Devices, "device")}, "
+            + $"{Counted.Of(counts.TripTests, "trip test")}, {counts.ContactTests} contact and {Counted.Of(counts.InsulationTests, "insulation reading")}.", 0, 2);
         return ExitCodes.Ok;
     }
 }

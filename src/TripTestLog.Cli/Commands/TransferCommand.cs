@@ -54,11 +54,11 @@ internal static class TransferCommand
         var copied = files.Count(f => f.Copied);
         cli.Out.WriteLine($"Transferred {from.Display}");
         cli.Out.WriteLine($"       into {to.Display}:");
-        cli.Out.WriteLine($"  {Counted.Of(files.Count, "file")}: {copied} copied, {files.Count - copied} already there; "
-            + $"{Counted.Of(files.Sum(f => f.Added), "record")} added; {Counted.Of(changes, "correction")} copied.");
+        Output.Wrapped.Write(cli.Out, $"{Counted.Of(files.Count, "file")}: {copied} copied, {files.Count - copied} already there; "
+            + $"{Counted.Of(files.Sum(f => f.Added), "record")} added; {Counted.Of(changes, "correction")} copied.", 2, 4);
         var counts = target.Counts();
-        cli.Out.WriteLine($"  {to.Display} now holds {Counted.Of(counts.Files, "file")}, {Counted.Of(counts.Devices, "device")}, {Counted.Of(counts.TripTests, "trip test")}, "
-            + $"{counts.ContactTests} contact and {Counted.Of(counts.InsulationTests, "insulation reading")}.");
+        Output.Wrapped.Write(cli.Out, $"{to.Display} now holds {Counted.Of(counts.Files, "file")}, {Counted.Of(counts.Devices, "device")}, {Counted.Of(counts.TripTests, "trip test")}, "
+            + $"{counts.ContactTests} contact and {Counted.Of(counts.InsulationTests, "insulation reading")}.", 2, 4);
         return ExitCodes.Ok;
     }
 }
