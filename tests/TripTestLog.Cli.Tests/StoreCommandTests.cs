@@ -105,7 +105,7 @@ public sealed class StoreCommandTests(CopiedFleet fleet) : IClassFixture<CopiedF
             if (provider == Provider.Sqlite)
             {
                 Assert.Equal((0, true), (exit, File.Exists(target)));
-                Assert.Contains("72 files", output, StringComparison.Ordinal);
+                Assert.Contains("72 files", CliRun.Unwrapped(output), StringComparison.Ordinal);
             }
             else
             {

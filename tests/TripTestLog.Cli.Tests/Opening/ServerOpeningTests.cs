@@ -116,7 +116,7 @@ public sealed class ServerOpeningTests : IDisposable
             var (exit, _, error) = CliRun.Run([.. args, "--db", database.Address]);
             Assert.Equal(2, exit);
             Assert.Matches(@"was written by a newer version of TripTestLog \(its schema is 20991231000000_FromTheFuture; this version, [0-9.]+, "
-                + @"knows up to \d{14}_\w+\); use that version or a newer one", error);
+                + @"knows up to \d{14}_\w+\); use that version or a newer one", CliRun.Unwrapped(error));
         }
 
         Assert.Equal(1L, database.Count("SELECT COUNT(*) FROM source_files"));
