@@ -34,10 +34,20 @@ internal static class CliApp
     public static int Run(string[] args, CliContext cli)
     {
         // Everything printed for a person passes one guard against terminal control characters in values.
-        cli = cli with { Out = Output.Visible.Wrap(cli.Out), Error = Output.Visible.Wrap(cli.Error) };
+        // Errors longer than a 100-column terminal are wrapped, wherever they are written.
+        cli = cli with { Out = Output.Visible.Wrap(cli.Out), Error = Output.ErrorLines.Wrap(Output.Visible.Wrap(cli.Error)) };
         var parse = Build(cli).Parse(args);
         var clock = System.Diagnostics.Stopwatch.StartNew();
         int exit;
+
+        // A mistyped word is one sentence with the nearest right one, not the whole help; nothing runs.
+        // (Asking for help still shows the help.)
+        if (!args.Any(a => a is "--help" or "-h" or "-?") && UsageErrors.Of(parse) is { Count: > 0 } mistakes)
+        {
+            UsageErrors.Write(cli.Error, mistakes);
+            return ExitCodes.BadInput;
+        }
+
         try
         {
             exit = parse.Invoke(new InvocationConfiguration { Output = cli.Out, Error = cli.Error, EnableDefaultExceptionHandler = false });

@@ -52,9 +52,7 @@ internal sealed partial class CsvRecordFile
             _rows++;
             if (csv.FieldCount != csv.Headers.Count)
             {
-                yield return new ReadRow(csv.LineNumber, null, [new RowProblem(_name, csv.LineNumber, "",
-                    $"this row has {csv.FieldCount} fields but the header has {csv.Headers.Count}; check for a missing or extra "
-                    + $"'{layout.Separator}', or quote fields that hold one")], CurrentRaw);
+                yield return new ReadRow(csv.LineNumber, null, [FieldCountProblem(csv, layout)], CurrentRaw);
                 continue;
             }
 
@@ -74,6 +72,29 @@ internal sealed partial class CsvRecordFile
             yield return new ReadRow(csv.LineNumber, fields.Problems.Count == 0 ? record : null, fields.Problems, CurrentRaw);
         }
     }
+
+    // Too many fields in a comma file, two neighbours of them whole numbers: most likely numbers written with decimal
+    // commas ("6,85" read as 6 and 85). Said as its own cause, so a file of them gets one message.
+    private RowProblem FieldCountProblem(CsvHelper.CsvReader csv, Layout layout)
+    {
+        if (layout.Separator == ',' && csv.FieldCount > csv.Headers.Count)
+        {
+            for (var i = 0; i + 1 < csv.FieldCount; i++)
+            {
+                if (IsDigits(csv.GetString(i)) && IsDigits(csv.GetString(i + 1)))
+                {
+                    return new RowProblem(_name, csv.LineNumber, "", ReadProblems.DecimalCommaFields(csv.FieldCount, csv.Headers.Count,
+                        $"{csv.GetString(i)!.Trim()},{csv.GetString(i + 1)!.Trim()}")) { Cause = ReadProblems.DecimalCommaCause };
+                }
+            }
+        }
+
+        return new RowProblem(_name, csv.LineNumber, "",
+            $"this row has {csv.FieldCount} fields but the header has {csv.Headers.Count}; check for a missing or extra "
+            + $"'{layout.Separator}', or quote fields that hold one") { Cause = "field-count" };
+    }
+
+    private static bool IsDigits(string? text) => text?.Trim() is { Length: > 0 } t && t.TrimStart('-').Length > 0 && t.TrimStart('-').All(char.IsAsciiDigit);
 
     // A planned worksheet row with every result blank: the test was not made.
     private static bool IsNotTested(RecordKind kind, RowFields fields) =>

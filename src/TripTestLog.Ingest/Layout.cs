@@ -37,7 +37,8 @@ internal sealed record Layout(char Separator, bool DecimalComma, ColumnProfile? 
         var semicolon = header.Contains(';') && Recognised(';');
         return (comma, semicolon) switch
         {
-            (true, false) => new Layout(',', false, profile, null),
+            // A comma file can hold decimal commas only in quoted fields ("6,85"): read so when declared with --decimal ,.
+            (true, false) => new Layout(',', decimalMark is ',', profile, null),
             (false, true) => new Layout(';', decimalMark is not '.', profile, null),
             (true, true) => new Layout(',', false, profile, "the header reads as a record file both with commas and with semicolons; declare the separator with --delimiter"),
             _ => new Layout(',', false, profile, null),

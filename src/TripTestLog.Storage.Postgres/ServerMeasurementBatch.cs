@@ -71,6 +71,8 @@ internal sealed class ServerMeasurementBatch : IMeasurementBatch
 
     public string? Refusal { get; }
 
+    public IReadOnlyCollection<string> RegisterTags => _deviceIds.Keys;
+
     public void Add(PreparedRow prepared)
     {
         _stored++;

@@ -85,6 +85,8 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
 
     public string? Refusal { get; }
 
+    public IReadOnlyCollection<string> RegisterTags => _deviceIds.Keys;
+
     public void Add(PreparedRow prepared)
     {
         var row = ((Prepared)prepared).Row;

@@ -25,6 +25,9 @@ internal static class CliRun
         return (exit, output.ToString(), error.ToString());
     }
 
+    /// <summary>Error text with its wrapped lines joined again, so a sentence can be compared whole.</summary>
+    public static string Unwrapped(string text) => text.Trim().ReplaceLineEndings("\n").Replace("\n  ", " ", StringComparison.Ordinal);
+
     private sealed class FixedClock(DateTimeOffset now) : TimeProvider
     {
         public override DateTimeOffset GetUtcNow() => now;

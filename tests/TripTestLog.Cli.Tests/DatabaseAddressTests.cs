@@ -24,7 +24,7 @@ public sealed class DatabaseAddressTests : IDisposable
         Assert.Equal(2, exit);
         Assert.Contains($"'{scheme}://' is not a kind of database this tool knows", error);
         Assert.DoesNotContain("Secret-Pw9", output + error);
-        Assert.Single(error.Trim().Split('\n'));
+        Assert.Single(CliRun.Unwrapped(error).Split('\n'));
         Assert.False(Directory.Exists(Path.Combine(Environment.CurrentDirectory, scheme + ":")));
         Assert.Equal(before, Directory.GetFileSystemEntries(Environment.CurrentDirectory).Length);
     }

@@ -84,7 +84,7 @@ public sealed class DemoAndCheckTests : IDisposable
         var (exit, output, _) = CliRun.Run("import", file, "--db", db, "--accept-valid");
 
         Assert.Equal(1, exit);
-        Assert.Contains("1 rows refused, the rest stored", output);
+        Assert.Contains("1 row refused, the rest stored", output);
         var rejects = Path.Combine(_folder, "mixed.rejects.csv");
         Assert.Contains(rejects, output);
         Assert.Contains("'x' is not a number", File.ReadAllText(rejects));

@@ -86,7 +86,7 @@ public sealed class EnvelopeCommandTests
         Assert.True(exit == 0, error);
         Assert.Contains("2,320,40,400,curve-table,curve-table,", output);
         Assert.Equal(2, twoExit);
-        Assert.StartsWith("error: --table: curve-tables.csv holds 2 tables (HB-TM160-CURVE, CV-M32-SPECIAL); give a file with the one table to draw", twoError);
+        Assert.StartsWith("error: --table: curve-tables.csv holds 2 tables (HB-TM160-CURVE, CV-M32-SPECIAL); give a file with the one table to draw", CliRun.Unwrapped(twoError));
     }
 
     [Theory]

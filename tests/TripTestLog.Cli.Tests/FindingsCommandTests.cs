@@ -201,7 +201,7 @@ public sealed class FindingsCommandTests(SampleFleetDatabase fleet) : IClassFixt
 
         Assert.Equal(2, exit);
         Assert.StartsWith(expected, error);
-        Assert.Single(error.Trim().Split('\n'));
+        Assert.Single(CliRun.Unwrapped(error).Split('\n'));
         Assert.DoesNotContain("   at ", error + output);
     }
 

@@ -42,7 +42,7 @@ public sealed class NarrowOutputTests(SampleFleetDatabase fleet) : IClassFixture
         var (_, wide, _) = CliRun.Run("check", "--asset", "BPS-DB1-Q03", "--db", fleet.Database, "--wide");
 
         Golden.Matches("check-narrow-bps-db1-q03.txt", narrow);
-        Assert.StartsWith("Asset         Tested      Start    Current  Multiple  Result           Band", narrow);
+        Assert.StartsWith("Asset        Tested            Pole  Start  Multiple  Result           Band", narrow);
         Assert.StartsWith("Asset         Tested               Stage     Pole  Start", wide);
         Assert.Contains(wide.Split('\n'), l => l.Length > 100);
     }

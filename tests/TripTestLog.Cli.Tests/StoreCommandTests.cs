@@ -38,7 +38,7 @@ public sealed class StoreCommandTests(CopiedFleet fleet) : IClassFixture<CopiedF
 
             Assert.Equal(ExitCodes.BadInput, exit);
             Assert.StartsWith("error: the database server postgres://lab@127.0.0.1:1/records could not be used (", error, StringComparison.Ordinal);
-            Assert.Single(error.TrimEnd().Split('\n'));
+            Assert.Single(CliRun.Unwrapped(error).Split('\n'));
             Assert.DoesNotContain("hunter2", output + error, StringComparison.Ordinal);
 
             // The run is logged in the working folder (a server has no folder of its own), without the password.
@@ -105,7 +105,7 @@ public sealed class StoreCommandTests(CopiedFleet fleet) : IClassFixture<CopiedF
             if (provider == Provider.Sqlite)
             {
                 Assert.Equal((0, true), (exit, File.Exists(target)));
-                Assert.Contains("72 files", output, StringComparison.Ordinal);
+                Assert.Contains("72 files", CliRun.Unwrapped(output), StringComparison.Ordinal);
             }
             else
             {

@@ -87,7 +87,7 @@ internal static class ContactRules
         var over = policy.DecisionRule == Domain.Verdicts.DecisionRule.Guarded ? pole.Corrected > limit.Value + guard : pole.Corrected > limit.Value;
         Uncertain.Settle(ledger, "accuracy|contact|" + pole.Pole, within, asFound, pole.At, () => Make(FindingKind.RetestAccuracy, Severity.Investigate, pole.At, pole,
             $"decision rule {TextCodes.DecisionRule.Of(policy.DecisionRule)} (ILAC-G8): a reading within the guard band of its limit is not a confident decision",
-            Invariant($"pole {pole.Pole} reads {pole.Corrected:0.#} uOhm against the limit of {limit.Value:0} uOhm, within the guard band of {guard:0.##} uOhm (U = {expanded:0.##} uOhm; {accuracy.Words(false, false, true, false)}): retest with a more accurate instrument"))
+            Invariant($"pole {pole.Pole} reads {pole.Corrected:0.#} µΩ against the limit of {limit.Value:0} µΩ, within the guard band of {guard:0.##} µΩ (U = {expanded:0.##} µΩ; {accuracy.Words(false, false, true, false)}): retest with a more accurate instrument"))
             with { Value = new Reading(pole.Corrected, ReadingUnit.MicroOhms), Limit = new Reading(limit.Value, ReadingUnit.MicroOhms), Instrument = pole.Instrument,
                 Policy = PolicyFile.Setting(policy, "decision_rule") });
         if (within && !over && policy.DecisionRule == Domain.Verdicts.DecisionRule.Guarded)
@@ -99,12 +99,12 @@ internal static class ContactRules
         if (over)
         {
             ledger.Raise(subject, Make(FindingKind.ContactOverLimit, Severity.Act, pole.At, pole, "the maker's contact resistance limit (register contact_limit_uohm)",
-                Invariant($"pole {pole.Pole} reads {Describe(pole)}, over the limit of {limit.Value:0} uOhm; clean and re-torque the terminations or replace the breaker"))
+                Invariant($"pole {pole.Pole} reads {Describe(pole)}, over the limit of {limit.Value:0} µΩ; clean and re-torque the terminations or replace the breaker"))
                 with { Value = new Reading(pole.Corrected, ReadingUnit.MicroOhms), Limit = new Reading(limit.Value, ReadingUnit.MicroOhms) });
         }
         else
         {
-            Settle(ledger, subject, pole, asFound, Invariant($"reading of pole {pole.Pole} within the limit ({pole.Corrected:0} uOhm)"));
+            Settle(ledger, subject, pole, asFound, Invariant($"reading of pole {pole.Pole} within the limit ({pole.Corrected:0} µΩ)"));
         }
     }
 
@@ -123,7 +123,7 @@ internal static class ContactRules
         {
             ledger.Raise(subject, Make(FindingKind.ContactPoleSpread, Severity.Investigate, pole.At, pole,
                 "ANSI/NETA maintenance testing specifications: investigate a pole more than 50 % above the lowest (a customary guide, not a failure)",
-                Invariant($"pole {pole.Pole} reads {above:0}% above the device's lowest pole ({pole.Corrected:0} against {lowest:0} uOhm at 20 °C); investigate the connections and contacts of that pole (pole resistance alone does not predict performance)"))
+                Invariant($"pole {pole.Pole} reads {above:0}% above the device's lowest pole ({pole.Corrected:0} against {lowest:0} µΩ at 20 °C); investigate the connections and contacts of that pole (pole resistance alone does not predict performance)"))
                 with { Value = new Reading(above, ReadingUnit.Percent), Limit = new Reading(policy.ContactSpreadPercent, ReadingUnit.Percent),
                     Policy = PolicyFile.Setting(policy, "contact_spread_percent") });
         }
@@ -145,7 +145,7 @@ internal static class ContactRules
         if (rise > policy.ContactRisePercent)
         {
             ledger.Raise(subject, Make(FindingKind.ContactRise, Severity.Plan, pole.At, pole, "lab policy: contact resistance rise over the pole's first as-found test",
-                Invariant($"pole {pole.Pole} has risen {rise:0}% since {first.At.Date:yyyy-MM-dd} ({first.Corrected:0} to {pole.Corrected:0} uOhm at 20 °C); plan cleaning and re-torquing"))
+                Invariant($"pole {pole.Pole} has risen {rise:0}% since {first.At.Date:yyyy-MM-dd} ({first.Corrected:0} to {pole.Corrected:0} µΩ at 20 °C); plan cleaning and re-torquing"))
                 with { Value = new Reading(rise, ReadingUnit.Percent), Limit = new Reading(policy.ContactRisePercent, ReadingUnit.Percent),
                     Policy = PolicyFile.Setting(policy, "contact_rise_percent"), RestsOn = [.. first.Sources, .. pole.Sources] });
         }
@@ -233,7 +233,7 @@ internal static class ContactRules
             var last = found[^1];
             ledger.Add(Make(FindingKind.ContactTrendLimit, uncertain ? Severity.Investigate : Severity.Plan, last.At, last,
                 $"Theil–Sen trend (Sen 1968) of {line.Count} as-found tests against the maker's limit",
-                Forecast.Text(Invariant($"pole {last.Pole}'s readings rise {line.Slope:0} uOhm a year towards the limit of {limit.Value:0} uOhm"), "passed it", on, due, asOf,
+                Forecast.Text(Invariant($"pole {last.Pole}'s readings rise {line.Slope:0} µΩ a year towards the limit of {limit.Value:0} µΩ"), "passed it", on, due, asOf,
                     uncertain ? "the readings scatter too much for the date to be trusted: retest sooner" : "plan cleaning and re-torquing before then")) with
             {
                 Value = new Reading(last.Corrected, ReadingUnit.MicroOhms),
@@ -262,8 +262,8 @@ internal static class ContactRules
         new(kind, severity, pole.Tag, at, basis, pole.Stage == TestStage.AsLeft ? "as-left: " + message : message, pole.Sources) { Pole = pole.Pole };
 
     private static string Describe(PoleResult pole) => pole.TemperatureKnown
-        ? Invariant($"{pole.Corrected:0} uOhm at 20 °C ({pole.Measured:0} uOhm as measured)")
-        : Invariant($"{pole.Measured:0} uOhm (no temperature recorded: not corrected)");
+        ? Invariant($"{pole.Corrected:0} µΩ at 20 °C ({pole.Measured:0} µΩ as measured)")
+        : Invariant($"{pole.Measured:0} µΩ (no temperature recorded: not corrected)");
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }

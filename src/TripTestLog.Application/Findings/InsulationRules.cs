@@ -1,3 +1,4 @@
+using TripTestLog.Domain.Quantities;
 using System.Globalization;
 using TripTestLog.Application.Check;
 using TripTestLog.Domain.Codes;
@@ -45,7 +46,7 @@ internal static class InsulationRules
             var below = !r.OverRange && (policy.DecisionRule == Domain.Verdicts.DecisionRule.Guarded ? r.Corrected < row.Minimum.Value - guard : r.Corrected < row.Minimum.Value);
             Uncertain.Settle(ledger, "accuracy|insulation|" + r.Path, within, r.Stage == TestStage.AsFound, r.At, () => new Finding(FindingKind.RetestAccuracy, Severity.Investigate,
                 r.Tag, r.At, $"decision rule {TextCodes.DecisionRule.Of(policy.DecisionRule)} (ILAC-G8): a reading within the guard band of its limit is not a confident decision",
-                Invariant($"path {r.Path} reads {r.Corrected:0.##} MOhm against the minimum of {row.Minimum.Value:0.##} MOhm, within the guard band of {guard:0.##} MOhm (U = {expanded:0.##} MOhm; {accuracy.Words(false, false, false, true)}): retest with a more accurate instrument"),
+                Invariant($"path {r.Path} reads {ResistanceText.MegaOhms(r.Corrected)} against the minimum of {ResistanceText.MegaOhms(row.Minimum.Value)}, within the guard band of {ResistanceText.MegaOhms(guard)} (U = {ResistanceText.MegaOhms(expanded)}; {accuracy.Words(false, false, false, true)}): retest with a more accurate instrument"),
                 [r.Source])
             {
                 Path = r.Path,
@@ -65,7 +66,7 @@ internal static class InsulationRules
                     ? Invariant($" (tested at {r.TestVoltage:0} V DC; the table's minimum assumes {row.TestVoltage.Value:0} V DC)")
                     : "";
                 ledger.Raise(subject, new Finding(FindingKind.InsulationBelowMinimum, Severity.Act, r.Tag, r.At, row.Source,
-                    Invariant($"{(r.Stage == TestStage.AsLeft ? "as-left: " : "")}path {r.Path} reads {Describe(r)}, below the minimum of {row.Minimum.Value:0.##} MOhm for a {device.RatedVoltage.Value:0} V breaker{voltage}; find and remove the cause (moisture, dirt, damage) before returning it to service"),
+                    Invariant($"{(r.Stage == TestStage.AsLeft ? "as-left: " : "")}path {r.Path} reads {Describe(r)}, below the minimum of {ResistanceText.MegaOhms(row.Minimum.Value)} for a {device.RatedVoltage.Value:0} V breaker{voltage}; find and remove the cause (moisture, dirt, damage) before returning it to service"),
                     [r.Source])
                 {
                     Path = r.Path,
@@ -168,11 +169,11 @@ internal static class InsulationRules
             var forecast = reach is { } year && year <= line.LastYear + policy.ForecastHorizonYears ? TrendPoint.DateOf(year) : (DateOnly?)null;
             ledger.Add(new Finding(FindingKind.InsulationFalling, Severity.Plan, last.Tag, last.At,
                 $"Theil–Sen trend (Sen 1968) of {line.Count} as-found readings referred to 20 °C (halving per 10 K rule)",
-                Invariant($"path {last.Path} falls about {fall:0}% a year ({list[0].Corrected:0.#} to {last.Corrected:0.#} MOhm at 20 °C since {list[0].At.Date:yyyy-MM-dd})")
+                Invariant($"path {last.Path} falls about {fall:0}% a year ({ResistanceText.Number(list[0].Corrected, null)} to {ResistanceText.MegaOhms(last.Corrected)} at 20 °C since {list[0].At.Date:yyyy-MM-dd})")
                     + (forecast is { } on
                         ? on < asOf
-                            ? Invariant($" and has probably fallen below the minimum of {row!.Minimum.Value:0.##} MOhm since about {on:yyyy-MM-dd} (judged on {asOf:yyyy-MM-dd}): test it now")
-                            : Invariant($" and would reach the minimum of {row!.Minimum.Value:0.##} MOhm about {on:yyyy-MM-dd}")
+                            ? Invariant($" and has probably fallen below the minimum of {ResistanceText.MegaOhms(row!.Minimum.Value)} since about {on:yyyy-MM-dd} (judged on {asOf:yyyy-MM-dd}): test it now")
+                            : Invariant($" and would reach the minimum of {ResistanceText.MegaOhms(row!.Minimum.Value)} about {on:yyyy-MM-dd}")
                         : "")
                     + "; look for moisture, contamination or tracking",
                 [.. list.Select(r => r.Source)])
@@ -200,8 +201,8 @@ internal static class InsulationRules
     }
 
     private static string Describe(PathResult r) => r.TemperatureKnown
-        ? Invariant($"{r.Corrected:0.##} MOhm at 20 °C ({r.Measured:0.##} MOhm as measured)")
-        : Invariant($"{r.Measured:0.##} MOhm (no temperature recorded: not corrected)");
+        ? Invariant($"{ResistanceText.MegaOhms(r.Corrected)} at 20 °C ({ResistanceText.MegaOhms(r.Measured)} as measured)")
+        : Invariant($"{ResistanceText.MegaOhms(r.Measured)} (no temperature recorded: not corrected)");
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }

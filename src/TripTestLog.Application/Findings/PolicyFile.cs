@@ -79,7 +79,7 @@ public static class PolicyFile
         Accuracy("default_current_accuracy_a", "... plus this fixed part, A", a => a.CurrentAmperes, (a, v) => a with { CurrentAmperes = v }, 100000),
         Accuracy("default_resistance_accuracy_pct", "contact resistance accuracy where the register states none, % of reading",
             a => a.ResistancePercent, (a, v) => a with { ResistancePercent = v }, 100),
-        Accuracy("default_resistance_accuracy_uohm", "... plus this fixed part, uOhm", a => a.ResistanceMicroOhms, (a, v) => a with { ResistanceMicroOhms = v }, 1000000),
+        Accuracy("default_resistance_accuracy_uohm", "... plus this fixed part, µΩ", a => a.ResistanceMicroOhms, (a, v) => a with { ResistanceMicroOhms = v }, 1000000),
         Accuracy("default_insulation_accuracy_pct", "insulation accuracy where the register states none, % of reading",
             a => a.InsulationPercent, (a, v) => a with { InsulationPercent = v }, 100),
         Number("default_coverage_factor", "coverage factor k of U = k u where the register states none (GUM: 2, about 95 %)",

@@ -38,6 +38,9 @@ public interface IMeasurementBatch : IDisposable
     /// </summary>
     string? Refusal { get; }
 
+    /// <summary>The tags of the device register this batch checks against, to suggest the nearest to a mistyped one.</summary>
+    IReadOnlyCollection<string> RegisterTags { get; }
+
     /// <summary>Stores a prepared row; an identical stored record makes it a duplicate (or, in a correction, an unchanged
     /// record of the corrected file), counted at the end.</summary>
     void Add(PreparedRow row);

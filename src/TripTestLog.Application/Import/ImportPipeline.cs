@@ -95,6 +95,20 @@ public sealed class ImportPipeline(IImportStore store)
         using var rejects = options.AcceptValid ? file.Rejects() : null;
         var log = new ProblemLog();
         long notTested = 0;
+
+        // The register is searched once per distinct unknown tag, not once per row that carries it.
+        var near = new Dictionary<AssetTag, string?>();
+        string? NearestTag(AssetTag tag)
+        {
+            if (!near.TryGetValue(tag, out var found))
+            {
+                found = near.Count < 1000 ? Text.Spelling.Nearest(tag.Value, batch.RegisterTags) : null;
+                near[tag] = found;
+            }
+
+            return found;
+        }
+
         foreach (var (row, prepared) in ParsedAhead(file, batch, cancel))
         {
             cancel.ThrowIfCancellationRequested();
@@ -110,7 +124,7 @@ public sealed class ImportPipeline(IImportStore store)
                 // Rows after a strict file's first bad row are still stored, inside the transaction that will be rolled
                 // back, so that every unknown tag and conflict in the file is reported in one go.
                 problems = prepared is null
-                    ? [ImportProblems.UnknownTag(file.Name, row.Line, TagOf(record))]
+                    ? [ImportProblems.UnknownTag(file.Name, row.Line, TagOf(record), NearestTag(TagOf(record)))]
                     : Store(batch, prepared);
             }
 

@@ -7,6 +7,12 @@ namespace TripTestLog.Application.Records;
 /// <param name="Reason">What is wrong and what to write instead.</param>
 public sealed record RowProblem(string File, long Line, string Column, string Reason)
 {
+    /// <summary>
+    /// What kind of mistake this is, when many rows can share it (a decimal comma, one unknown tag): problems of one
+    /// cause are reported together. Null when the reason itself says it.
+    /// </summary>
+    public string? Cause { get; init; }
+
     /// <summary>One line: file:line, column, reason.</summary>
     public override string ToString() =>
         Column.Length == 0 ? $"{File}:{Line}: {Reason}" : $"{File}:{Line}, column {Column}: {Reason}";

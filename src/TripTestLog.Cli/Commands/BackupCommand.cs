@@ -1,3 +1,4 @@
+using TripTestLog.Application.Text;
 using TripTestLog.Application.Stores;
 using TripTestLog.Cli.Services;
 using System.CommandLine;
@@ -41,8 +42,8 @@ internal static class BackupCommand
         using var store = Stores.Open(cli, db, StorePurpose.Read);
         store.Backup(target.FullName);
         var counts = store.Counts();
-        cli.Out.WriteLine($"Backed up {db.Display} to {target.FullName}: {counts.Files} files, {counts.Devices} devices, "
-            + $"{counts.TripTests} trip tests, {counts.ContactTests} contact and {counts.InsulationTests} insulation readings.");
+        Output.Wrapped.Write(cli.Out, $"Backed up {db.Display} to {target.FullName}: {Counted.Of(counts.Files, "file")}, {Counted.Of(counts.Devices, "device")}, "
+            + $"{Counted.Of(counts.TripTests, "trip test")}, {counts.ContactTests} contact and {Counted.Of(counts.InsulationTests, "insulation reading")}.", 0, 2);
         return ExitCodes.Ok;
     }
 }

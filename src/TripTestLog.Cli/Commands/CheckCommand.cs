@@ -28,7 +28,7 @@ internal static class CheckCommand
         var stage = new Option<string?>("--stage") { Description = $"Only this stage ({TextCodes.Stage.Choices})", HelpName = "STAGE" };
         var family = new Option<string?>("--family") { Description = $"Only this family ({string.Join(", ", FamilyCodes.All)})", HelpName = "FAMILY" };
         var json = new Option<bool>("--json") { Description = "Write a JSON array, one object per trip test (fields in docs/judging.md)" };
-        var wide = new Option<bool>("--wide") { Description = "Write every column of the table (time, stage, pole, basis), however wide" };
+        var wide = new Option<bool>("--wide") { Description = "Write every column of the table (stage, current, basis, the whole tag), however wide" };
         var csv = new Option<bool>("--csv") { Description = "Write CSV, the same fields as --json, with formula cells neutralised" };
         var failOnFindings = new Option<bool>("--fail-on-findings") { Description = "Exit with 1 when any test shown is too early or too late, or its instrument was not traceable" };
         var registered = new Option<bool>("--require-registered-instruments") { Description = "Report tests made with an instrument missing from the instrument register" };

@@ -28,7 +28,7 @@ internal static class MigrateCommand
 
         using var store = Stores.Open(cli, db, StorePurpose.Migrate);
         var applied = Stores.AppliedMigrations(store);
-        cli.Out.WriteLine($"The schema of {db.Display} is up to date: {applied.Count} migrations, the latest {(applied.Count > 0 ? applied[^1] : "none")}.");
+        Output.Wrapped.Write(cli.Out, $"The schema of {db.Display} is up to date: {applied.Count} migrations, the latest {(applied.Count > 0 ? applied[^1] : "none")}.", 0);
         return ExitCodes.Ok;
     }
 }

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Text;
 using TripTestLog.Application.Stores;
 using System.CommandLine;
 using System.Diagnostics;
@@ -98,7 +99,7 @@ internal static class ReportCommand
                 (page, devices) = ReportRun.Write(store, folder, context, selection, cli.Cancel, progress: progress);
             }
 
-            cli.Out.WriteLine($"Wrote {devices} device pages and the fleet page in {clock.Elapsed.TotalSeconds:0.0} s.");
+            cli.Out.WriteLine($"Wrote {Counted.Of(devices, "device page")} and the fleet page in {clock.Elapsed.TotalSeconds:0.0} s.");
             cli.Out.WriteLine($"Fleet page: {page}");
             return ExitCodes.Ok;
         }

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Text;
 using TripTestLog.Application.Stores;
 using System.CommandLine;
 using TripTestLog.Application.Transfer;
@@ -53,11 +54,11 @@ internal static class TransferCommand
         var copied = files.Count(f => f.Copied);
         cli.Out.WriteLine($"Transferred {from.Display}");
         cli.Out.WriteLine($"       into {to.Display}:");
-        cli.Out.WriteLine($"  {files.Count} files: {copied} copied, {files.Count - copied} already there; "
-            + $"{files.Sum(f => f.Added)} records added; {changes} corrections copied.");
+        Output.Wrapped.Write(cli.Out, $"{Counted.Of(files.Count, "file")}: {copied} copied, {files.Count - copied} already there; "
+            + $"{Counted.Of(files.Sum(f => f.Added), "record")} added; {Counted.Of(changes, "correction")} copied.", 2, 4);
         var counts = target.Counts();
-        cli.Out.WriteLine($"  {to.Display} now holds {counts.Files} files, {counts.Devices} devices, {counts.TripTests} trip tests, "
-            + $"{counts.ContactTests} contact and {counts.InsulationTests} insulation readings.");
+        Output.Wrapped.Write(cli.Out, $"{to.Display} now holds {Counted.Of(counts.Files, "file")}, {Counted.Of(counts.Devices, "device")}, {Counted.Of(counts.TripTests, "trip test")}, "
+            + $"{counts.ContactTests} contact and {Counted.Of(counts.InsulationTests, "insulation reading")}.", 2, 4);
         return ExitCodes.Ok;
     }
 }

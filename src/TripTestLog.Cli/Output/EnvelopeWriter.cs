@@ -49,7 +49,7 @@ internal static class EnvelopeWriter
             writer.WriteLine("Normative points:");
             foreach (var p in envelope.Points)
             {
-                writer.WriteLine($"  {p.Label}: {p.Requirement}");
+                Wrapped.Write(writer, $"{p.Label}: {p.Requirement}", 2, 4);
             }
 
             writer.WriteLine();

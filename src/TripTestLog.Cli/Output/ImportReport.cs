@@ -1,3 +1,4 @@
+using TripTestLog.Application.Text;
 using TripTestLog.Application.Import;
 using TripTestLog.Application.Check;
 using TripTestLog.Application.Records;
@@ -70,7 +71,7 @@ internal static class ImportReport
         foreach (var o in outcomes.Where(o => o.Status == ImportStatus.Imported && o.RefusedRows > 0))
         {
             writer.WriteLine();
-            Wrapped.Write(writer, $"{o.File}: {o.RefusedRows} rows refused, the rest stored."
+            Wrapped.Write(writer, $"{o.File}: {Counted.Of(o.RefusedRows, "row")} refused, the rest stored."
                 + (o.RejectsFile is { } rejects ? $" The refused rows, with their reasons, are in {rejects}:" : ""), 0, 2);
             WriteProblems(writer, o, logPath);
         }
@@ -83,18 +84,53 @@ internal static class ImportReport
         }
     }
 
+    // One cause, one message: the first problem of each cause in full, then how many more rows share it and where.
     private static void WriteProblems(TextWriter writer, ImportOutcome o, string logPath)
     {
-        foreach (var p in o.Problems.Take(ProblemsShownPerFile))
+        var groups = o.Problems
+            .GroupBy(p => p.Cause ?? p.Column + "\n" + p.Reason, StringComparer.Ordinal)
+            .ToList();
+        foreach (var g in groups.Take(ProblemsShownPerFile))
         {
-            Wrapped.Write(writer, p.ToString(), 2, 4);
+            var first = g.First();
+            Wrapped.Write(writer, first.ToString(), 2, 4);
+            var others = g.Skip(1).ToList();
+            if (others.Count > 0)
+            {
+                // One problem a row: "rows" and the lines of the others; several in a row: "values" and every line they are on.
+                var rowsOnly = g.Select(p => p.Line).Distinct().Count() == g.Count();
+                var what = rowsOnly ? (others.Count == 1 ? "row" : "rows") : (others.Count == 1 ? "value" : "values");
+                var lines = (rowsOnly ? others : g.ToList()).Select(p => p.Line).ToList();
+                Wrapped.Write(writer, $"and {others.Count} more {what} like it ({Lines(lines)})", 4, 6);
+            }
         }
 
-        if (o.Problems.Count + o.ProblemsOmitted > ProblemsShownPerFile)
+        if (groups.Count > ProblemsShownPerFile || o.ProblemsOmitted > 0)
         {
+            var rest = groups.Skip(ProblemsShownPerFile).Sum(g => g.Count()) + o.ProblemsOmitted;
             var inLog = o.ProblemsOmitted > 0 ? $"the first {o.Problems.Count} are in {logPath}" : $"all are in {logPath}";
-            Wrapped.Write(writer, $"... and {o.Problems.Count + o.ProblemsOmitted - ProblemsShownPerFile} more ({inLog})", 2, 4);
+            Wrapped.Write(writer, $"... and {rest} more {(rest == 1 ? "problem" : "problems")} ({inLog})", 2, 4);
         }
+    }
+
+    /// <summary>Line numbers in order as ranges: "line 4", "lines 4-9", "lines 4-6, 9, 12-14"; the first ten runs, then "...".</summary>
+    public static string Lines(IReadOnlyCollection<long> lines)
+    {
+        var sorted = lines.Distinct().Order().ToList();
+        var runs = new List<string>();
+        for (var i = 0; i < sorted.Count; i++)
+        {
+            var start = sorted[i];
+            while (i + 1 < sorted.Count && sorted[i + 1] == sorted[i] + 1)
+            {
+                i++;
+            }
+
+            runs.Add(start == sorted[i] ? start.ToString(CultureInfo.InvariantCulture) : $"{start}-{sorted[i]}");
+        }
+
+        var text = string.Join(", ", runs.Take(10)) + (runs.Count > 10 ? ", ..." : "");
+        return (sorted.Count == 1 ? "line " : "lines ") + text;
     }
 
     public static string Kind(RecordKind kind) => kind switch

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Text;
 using TripTestLog.Application.Check;
 using TripTestLog.Domain.Verdicts;
 
@@ -5,8 +6,9 @@ namespace TripTestLog.Cli.Output;
 
 /// <summary>
 /// The verdicts as a person reads them: a table, then what needs attention with the reasons, then the caution. The table
-/// fits a 100-column terminal (date, start, current, multiple, result, band, verdict); <c>wide</c> adds the time of day,
-/// stage, pole and basis, and splits the band into its two edges.
+/// fits a 100-column terminal (date and time of day, pole, start, multiple, result, band, verdict: per-pole rows and the
+/// tests of one day told apart, a long asset tag shortened in its middle with '…'); <c>wide</c> adds the stage, the
+/// current and the basis, the full tag, and splits the band into its two edges.
 /// </summary>
 internal sealed class VerdictTable(TextWriter writer, bool wide = false) : IVerdictWriter
 {
@@ -17,11 +19,15 @@ internal sealed class VerdictTable(TextWriter writer, bool wide = false) : IVerd
         ("Multiple", 9, true), ("Result", 17, false), ("Band min", 8, true), ("Band max", 8, true), ("Verdict", 14, false), ("Basis", 9, false),
     ];
 
+    // 11 + 16 + 4 + 5 + 8 + 15 + 13 + 14 and seven gaps of two: 100 columns. The current is in --wide, --csv and --json;
+    // the multiple beside the band is what the band is judged on.
     private static readonly (string Header, int Width, bool Right)[] NarrowColumns =
     [
-        ("Asset", 12, false), ("Tested", 10, false), ("Start", 5, false), ("Current", 9, true), ("Multiple", 8, true), ("Result", 15, false),
+        ("Asset", AssetWidth, false), ("Tested", 16, false), ("Pole", 4, false), ("Start", 5, false), ("Multiple", 8, true), ("Result", 15, false),
         ("Band", 13, false), ("Verdict", 14, false),
     ];
+
+    private const int AssetWidth = 11;
 
     private (string Header, int Width, bool Right)[] Columns => wide ? WideColumns : NarrowColumns;
 
@@ -43,10 +49,10 @@ internal sealed class VerdictTable(TextWriter writer, bool wide = false) : IVerd
         if (!wide)
         {
             Row(
-                m.Tag.Value,
-                m.TestedAt.Date.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture),
+                Shortened(m.Tag.Value, AssetWidth),
+                m.TestedAt.Local.ToString(m.TestedAt.HasTime ? "yyyy-MM-dd HH:mm" : "yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture),
+                m.Pole.Code,
                 Format.Start(m.Start),
-                m.Current.ToString(),
                 Format.Multiple(r),
                 Format.Outcome(m.Outcome),
                 a.Band.HasRequirement ? $"{Format.Minimum(a.Band.Minimum)}-{Format.Maximum(a.Band.Maximum)}" : "-",
@@ -91,6 +97,13 @@ internal sealed class VerdictTable(TextWriter writer, bool wide = false) : IVerd
         Wrapped.Write(writer, Safety.Caution, 0);
     }
 
+    /// <summary>
+    /// <paramref name="text"/> within <paramref name="width"/> characters: a longer one keeps its first three and its last
+    /// characters (where tags tell devices apart) around a '…'.
+    /// </summary>
+    public static string Shortened(string text, int width) =>
+        text.Length <= width ? text : text[..3] + "…" + text[^(width - 4)..];
+
     private void Row(params string[] cells)
     {
         var sb = new System.Text.StringBuilder();
@@ -123,7 +136,7 @@ internal sealed class VerdictTable(TextWriter writer, bool wide = false) : IVerd
             var dates = tests.Select(r => r.Trip.Measurement.TestedAt.Date).ToList();
             var devices = tests.Select(r => r.Trip.Measurement.Tag).Distinct().Count();
             var files = string.Join(", ", tests.Select(r => r.Trip.SourceFile).Distinct());
-            Item(writer, $"{group.Key}: {tests.Count} tests of {devices} devices, {dates.Min():yyyy-MM-dd} to {dates.Max():yyyy-MM-dd} [{files}]");
+            Item(writer, $"{group.Key}: {Counted.Of(tests.Count, "test")} of {Counted.Of(devices, "device")}, {dates.Min():yyyy-MM-dd} to {dates.Max():yyyy-MM-dd} [{files}]");
         }
     }
 

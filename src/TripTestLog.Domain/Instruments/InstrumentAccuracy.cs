@@ -50,7 +50,7 @@ public sealed record InstrumentAccuracy
         CurrentPercent = Check(currentPercent, 0, 100, nameof(currentPercent), "%"),
         CurrentAmperes = Check(currentAmperes, 0, 100_000, nameof(currentAmperes), "A"),
         ResistancePercent = Check(resistancePercent, 0, 100, nameof(resistancePercent), "%"),
-        ResistanceMicroOhms = Check(resistanceMicroOhms, 0, 1_000_000, nameof(resistanceMicroOhms), "uOhm"),
+        ResistanceMicroOhms = Check(resistanceMicroOhms, 0, 1_000_000, nameof(resistanceMicroOhms), "µΩ"),
         InsulationPercent = Check(insulationPercent, 0, 100, nameof(insulationPercent), "%"),
         CoverageFactor = Check(coverageFactor, 1, 4, nameof(coverageFactor), "(coverage factor)"),
     };

@@ -50,12 +50,12 @@ public sealed record ResolvedAccuracy(double TimePercent, double TimeSeconds, do
 
         if (resistance)
         {
-            parts.Add(Part("resistance", ResistancePercent, ResistanceMicroOhms, "uOhm"));
+            parts.Add(Part("resistance", ResistancePercent, ResistanceMicroOhms, "µΩ"));
         }
 
         if (insulation)
         {
-            parts.Add(Part("insulation", InsulationPercent, 0, "MOhm"));
+            parts.Add(Part("insulation", InsulationPercent, 0, "MΩ"));
         }
 
         parts.Add(Invariant($"k = {CoverageFactor:0.##}"));

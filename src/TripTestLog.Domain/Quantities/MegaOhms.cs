@@ -1,5 +1,3 @@
-using System.Globalization;
-
 namespace TripTestLog.Domain.Quantities;
 
 /// <summary>An insulation resistance in megohms. Finite and above zero.</summary>
@@ -11,11 +9,11 @@ public readonly record struct MegaOhms : IComparable<MegaOhms>
     public double Value { get; }
 
     /// <summary>Creates a resistance; throws <see cref="ArgumentOutOfRangeException"/> for NaN, infinities, zero or negative values.</summary>
-    public static MegaOhms Of(double megaOhms) => new(Guard.Positive(megaOhms, nameof(megaOhms), "MOhm"));
+    public static MegaOhms Of(double megaOhms) => new(Guard.Positive(megaOhms, nameof(megaOhms), ResistanceText.MegaOhmUnit));
 
     /// <inheritdoc />
     public int CompareTo(MegaOhms other) => Value.CompareTo(other.Value);
 
     /// <inheritdoc />
-    public override string ToString() => Value.ToString("0.###", CultureInfo.InvariantCulture) + " MOhm";
+    public override string ToString() => ResistanceText.MegaOhms(Value);
 }

@@ -1,5 +1,3 @@
-using System.Globalization;
-
 namespace TripTestLog.Domain.Quantities;
 
 /// <summary>A contact resistance in micro-ohms. Finite and above zero.</summary>
@@ -11,11 +9,11 @@ public readonly record struct MicroOhms : IComparable<MicroOhms>
     public double Value { get; }
 
     /// <summary>Creates a resistance; throws <see cref="ArgumentOutOfRangeException"/> for NaN, infinities, zero or negative values.</summary>
-    public static MicroOhms Of(double microOhms) => new(Guard.Positive(microOhms, nameof(microOhms), "uOhm"));
+    public static MicroOhms Of(double microOhms) => new(Guard.Positive(microOhms, nameof(microOhms), ResistanceText.MicroOhmUnit));
 
     /// <inheritdoc />
     public int CompareTo(MicroOhms other) => Value.CompareTo(other.Value);
 
     /// <inheritdoc />
-    public override string ToString() => Value.ToString("0.#", CultureInfo.InvariantCulture) + " uOhm";
+    public override string ToString() => ResistanceText.MicroOhms(Value);
 }

@@ -13,7 +13,7 @@ internal static class ContactRowParser
         var when = f.When("tested_at");
         var stage = f.Stage();
         var pole = f.Pole();
-        var resistance = f.Number("resistance", true, 0.001, PlausibleRange.MaxContactUohm, "uOhm");
+        var resistance = f.Number("resistance", true, 0.001, PlausibleRange.MaxContactUohm, "µΩ");
         var current = f.Number("test_current", true, 0.001, 10_000, "A");
         var temperature = f.Number("temperature", false, -60, 150, "C", allowZero: true);
 

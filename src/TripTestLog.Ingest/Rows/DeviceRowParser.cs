@@ -17,7 +17,7 @@ internal static class DeviceRowParser
         var poles = Poles(f);
         var voltage = f.Number("rated_voltage", true, 1, PlausibleRange.MaxVoltageV, "V");
         var commissioned = f.Date("commissioned_on");
-        var limit = f.Number("contact_limit", false, 0.01, PlausibleRange.MaxContactUohm, "uOhm");
+        var limit = f.Number("contact_limit", false, 0.01, PlausibleRange.MaxContactUohm, "µΩ");
         var settings = family is { } fam && rated is { } r ? SettingsParser.Parse(f, fam, Amperes.Of(r)) : null;
         var settingsFrom = f.Date("settings_from");
         var referenceAmbient = f.Number("reference_ambient", false, -60, 150, "C", allowZero: true);

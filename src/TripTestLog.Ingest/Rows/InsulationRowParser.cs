@@ -56,7 +56,7 @@ internal static class InsulationRowParser
         var over = text.StartsWith('>');
         if (!over)
         {
-            var plain = f.Number("resistance", true, 0.000001, PlausibleRange.MaxInsulationMohm, "MOhm");
+            var plain = f.Number("resistance", true, 0.000001, PlausibleRange.MaxInsulationMohm, "MΩ");
             return plain is { } p ? new InsulationReading(MegaOhms.Of(p), false) : null;
         }
 

@@ -81,7 +81,7 @@ internal sealed class RowFields
         {
             if (!_decimalComma)
             {
-                Fail(column, $"'{text}' has a comma; write the decimal mark as a point, e.g. 12.5 (semicolon-separated files may use decimal commas)");
+                Problems.Add(new RowProblem(_file, Line, Header(column), ReadProblems.DecimalCommaValue(text)) { Cause = ReadProblems.DecimalCommaCause });
                 return null;
             }
 

@@ -44,7 +44,7 @@ internal static class TableRowParser
         var accuracy = InstrumentAccuracy.Of(
             f.Number("time_accuracy_pct", false, 0, 100, "%", allowZero: true), f.Number("time_accuracy_s", false, 0, 10, "s", allowZero: true),
             f.Number("current_accuracy_pct", false, 0, 100, "%", allowZero: true), f.Number("current_accuracy_a", false, 0, 100_000, "A", allowZero: true),
-            f.Number("resistance_accuracy_pct", false, 0, 100, "%", allowZero: true), f.Number("resistance_accuracy_uohm", false, 0, 1_000_000, "uOhm", allowZero: true),
+            f.Number("resistance_accuracy_pct", false, 0, 100, "%", allowZero: true), f.Number("resistance_accuracy_uohm", false, 0, 1_000_000, "µΩ", allowZero: true),
             f.Number("insulation_accuracy_pct", false, 0, 100, "%", allowZero: true), f.Number("coverage_factor", false, 1, 4, "(coverage factor)"));
         return f.Ok && name is not null && kind is not null && serial is not null && on is { } x && due is { } y
             ? new InstrumentCalibration(name, kind, serial, x, y) { Accuracy = accuracy }

@@ -3,6 +3,7 @@ using TripTestLog.Application.Check;
 using TripTestLog.Application.Findings;
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Measurements;
+using TripTestLog.Domain.Quantities;
 using TripTestLog.Domain.Trends;
 using TripTestLog.Domain.Verdicts;
 using TripTestLog.Reports.Charts;
@@ -48,7 +49,7 @@ internal static class DevicePage
             ["asset tag", H(d.Tag.Value)], ["site", H(d.Site)], ["location", H(d.Location)], ["family", H(TextCodes.Family.Of(d.Family))],
             ["rated current In", H($"{N(d.RatedCurrent.Value)} A")], ["poles", H(N(d.Poles))], ["rated voltage", H($"{N(d.RatedVoltage.Value)} V")],
             ["commissioned", H(d.CommissionedOn?.ToString("yyyy-MM-dd") ?? "not recorded")],
-            ["contact limit", H(d.ContactLimit is { } l ? $"{N(l.Value, "0")} micro-ohm" : "not recorded")],
+            ["contact limit", H(d.ContactLimit is { } l ? ResistanceText.MicroOhms(l.Value) : "not recorded")],
             ["make, model, serial", H($"{d.Make} {d.Model} {d.Serial}".Trim())],
             ["settings in force", H(d.Settings.Summary)], ["curve table", H(d.CurveTable ?? "none")], ["ambient table", H(d.AmbientTable ?? "none")],
         ];
@@ -156,8 +157,8 @@ internal static class DevicePage
             .Append("</figcaption></figure>\n");
         Table(html, ["tested", "stage", "pole", "at 20 °C", "as measured", "readings", "test current"], readings.Select(r => new[]
         {
-            H(r.Date.ToString("yyyy-MM-dd")), H(TextCodes.Stage.Of(r.Stage)), H(r.Pole), H(N(r.CorrectedMicroOhms, "0") + " micro-ohm"),
-            H(N(r.MeasuredMicroOhms, "0") + (r.TemperatureKnown ? "" : " (no temperature)")), H(N(r.Readings)), H(N(r.TestCurrentAmperes) + " A"),
+            H(r.Date.ToString("yyyy-MM-dd")), H(TextCodes.Stage.Of(r.Stage)), H(r.Pole), H(ResistanceText.MicroOhms(r.CorrectedMicroOhms)),
+            H(ResistanceText.MicroOhms(r.MeasuredMicroOhms) + (r.TemperatureKnown ? "" : " (no temperature)")), H(N(r.Readings)), H(N(r.TestCurrentAmperes) + " A"),
         }));
     }
 
@@ -174,7 +175,7 @@ internal static class DevicePage
         Table(html, ["tested", "stage", "path", "test voltage", "as measured", "at 20 °C (halving per 10 K)"], readings.Select(r => new[]
         {
             H(r.Date.ToString("yyyy-MM-dd")), H(TextCodes.Stage.Of(r.Stage)), H(r.Path), H(N(r.TestVoltageVolts, "0") + " V DC"),
-            H((r.OverRange ? ">" : "") + N(r.MeasuredMegaOhms, "0.##") + " MOhm"), H((r.OverRange ? ">" : "") + N(r.CorrectedMegaOhms, "0.##") + " MOhm"),
+            H((r.OverRange ? ">" : "") + ResistanceText.MegaOhms(r.MeasuredMegaOhms)), H((r.OverRange ? ">" : "") + ResistanceText.MegaOhms(r.CorrectedMegaOhms)),
         }));
     }
 

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Text;
 using System.Text;
 using TripTestLog.Application.Findings;
 using TripTestLog.Domain.Codes;
@@ -21,7 +22,7 @@ internal static class FleetPage
         var html = new StringBuilder(64 * 1024);
         var sites = fleet.Summary.Sites;
         var devices = sites.Values.Sum(s => s.Devices);
-        Layout.Begin(html, "Fleet condition", $"{devices} devices at {sites.Count} sites{selection}; findings as of {context.AsOf:yyyy-MM-dd}", null);
+        Layout.Begin(html, "Fleet condition", $"{Counted.Of(devices, "device")} at {Counted.Of(sites.Count, "site")}{selection}; findings as of {context.AsOf:yyyy-MM-dd}", null);
         html.Append("<nav>Data beside this page: <a href=\"findings.csv\">findings.csv</a> <a href=\"findings.json\">findings.json</a> ")
             .Append("<a href=\"verdicts.csv\">verdicts.csv</a> <a href=\"verdicts.json\">verdicts.json</a></nav>\n");
         // ISO/IEC 17025:2017, 7.8.6: the rule every verdict on these pages was given under, and where its accuracies came from.

@@ -41,7 +41,7 @@ public sealed class SqliteOpeningTests : IDisposable
 
         Assert.Equal(2, exit);
         Assert.Equal($"error: {Db} is empty (0 bytes), not a TripTestLog database; restore it from a backup, or move it aside and import again",
-            error.Trim());
+            CliRun.Unwrapped(error));
         Assert.Equal(0, new FileInfo(Db).Length);
         Assert.Equal(["lab.db"], Directory.GetFiles(_folder).Select(Path.GetFileName).Where(n => n is not ("triptestlog.log" or "t.csv")));
     }
@@ -56,7 +56,7 @@ public sealed class SqliteOpeningTests : IDisposable
         var (exit, _, error) = CliRun.Run(Args(command));
 
         Assert.Equal(2, exit);
-        Assert.Contains("is not a TripTestLog database (it is not a SQLite file)", error, StringComparison.Ordinal);
+        Assert.Contains("is not a TripTestLog database (it is not a SQLite file)", CliRun.Unwrapped(error), StringComparison.Ordinal);
         Assert.Equal("asset_tag,site\nP-01,Hill Farm\n", File.ReadAllText(Db));
     }
 
@@ -74,7 +74,7 @@ public sealed class SqliteOpeningTests : IDisposable
         var (exit, _, error) = CliRun.Run(Args("import"));
 
         Assert.Equal(2, exit);
-        Assert.Contains("is a SQLite database but not a TripTestLog one", error, StringComparison.Ordinal);
+        Assert.Contains("is a SQLite database but not a TripTestLog one", CliRun.Unwrapped(error), StringComparison.Ordinal);
         Assert.Equal(["notes"], Tables());
     }
 
@@ -94,7 +94,7 @@ public sealed class SqliteOpeningTests : IDisposable
 
         Assert.Equal(2, exit);
         Assert.Matches(@"^error: \S+lab\.db was written by a newer version of TripTestLog \(its schema is 20991231000000_FromTheFuture; this version, "
-            + @"[0-9.]+, knows up to \d{14}_\w+\); use that version or a newer one\s*$", error);
+            + @"[0-9.]+, knows up to \d{14}_\w+\); use that version or a newer one\s*$", CliRun.Unwrapped(error));
         Assert.Equal(before, Hash(Db));
     }
 
@@ -107,8 +107,8 @@ public sealed class SqliteOpeningTests : IDisposable
         var (exit, _, error) = CliRun.Run(Args("check"));
 
         Assert.Equal(2, exit);
-        Assert.Contains("its schema is fingerprint scheme 9", error, StringComparison.Ordinal);
-        Assert.Contains("knows up to fingerprint scheme 2", error, StringComparison.Ordinal);
+        Assert.Contains("its schema is fingerprint scheme 9", CliRun.Unwrapped(error), StringComparison.Ordinal);
+        Assert.Contains("knows up to fingerprint scheme 2", CliRun.Unwrapped(error), StringComparison.Ordinal);
     }
 
     [Fact]
@@ -120,13 +120,13 @@ public sealed class SqliteOpeningTests : IDisposable
         var (exit, _, error) = CliRun.Run("check", "--db", Db);
 
         Assert.Equal(2, exit);
-        Assert.Contains("has an older schema (20261201230606_InstrumentsAndAudit; this version needs ", error, StringComparison.Ordinal);
-        Assert.Contains($"run `triptestlog migrate --db {Db}` (or an import) first", error, StringComparison.Ordinal);
+        Assert.Contains("has an older schema (20261201230606_InstrumentsAndAudit; this version needs ", CliRun.Unwrapped(error), StringComparison.Ordinal);
+        Assert.Contains($"run `triptestlog migrate --db {Db}` (or an import) first", CliRun.Unwrapped(error), StringComparison.Ordinal);
         Assert.Equal(before, Hash(Db));
 
         var migrate = CliRun.Run("migrate", "--db", Db);
         Assert.Equal(0, migrate.Exit);
-        Assert.StartsWith($"The schema of {Db} is up to date: 6 migrations, the latest ", migrate.Out, StringComparison.Ordinal);
+        Assert.StartsWith($"The schema of {Db} is up to date: 6 migrations, the latest ", migrate.Out.ReplaceLineEndings(" "), StringComparison.Ordinal);
         Assert.Equal(0, CliRun.Run("check", "--db", Db).Exit);
     }
 
@@ -191,7 +191,7 @@ public sealed class SqliteOpeningTests : IDisposable
         using var reader = Child.StartWith(null, "nobody", "check", "--db", Db);
 
         Assert.Equal(2, reader.Exit(Bound));
-        Assert.Contains($"ask its owner to run `triptestlog migrate --db {Db}` once", reader.Error, StringComparison.Ordinal);
+        Assert.Contains($"ask its owner to run `triptestlog migrate --db {Db}` once", CliRun.Unwrapped(reader.Error), StringComparison.Ordinal);
         Assert.False(File.Exists(Db + "-shm"));
     }
 
@@ -223,7 +223,7 @@ public sealed class SqliteOpeningTests : IDisposable
 
         Assert.Equal(0, importer.Exit(Bound));
         Assert.True(waited, "the import never said what it waited for while the lock was held");
-        Assert.Contains($"waiting for another process writing to {Db} to finish (up to 10 minutes, lab policy store_wait_minutes)", importer.Error,
+        Assert.Contains($"waiting for another process writing to {Db} to finish (up to 10 minutes, lab policy store_wait_minutes)", CliRun.Unwrapped(importer.Error),
             StringComparison.Ordinal);
         Assert.Equal(25L, Count("SELECT COUNT(*) FROM trip_tests"));
     }
@@ -238,9 +238,9 @@ public sealed class SqliteOpeningTests : IDisposable
         using var importer = Child.Start("import", Trips("late.csv", 20, 1000), "--db", Db);
 
         Assert.Equal(2, importer.Exit(Bound));
-        Assert.Contains($"error: another process kept {Db} locked for writing longer than 3 seconds; nothing was written", importer.Error,
+        Assert.Contains($"error: another process kept {Db} locked for writing longer than 3 seconds; nothing was written", CliRun.Unwrapped(importer.Error),
             StringComparison.Ordinal);
-        Assert.DoesNotContain("   at ", importer.Error, StringComparison.Ordinal);
+        Assert.DoesNotContain("   at ", CliRun.Unwrapped(importer.Error), StringComparison.Ordinal);
         writer.Dispose();
         Assert.Equal(5L, Count("SELECT COUNT(*) FROM trip_tests"));
     }
@@ -260,7 +260,7 @@ public sealed class SqliteOpeningTests : IDisposable
         using (var reader = Child.Start("check", "--db", Db))
         {
             Assert.Equal(2, reader.Exit(TimeSpan.FromSeconds(60)));
-            Assert.Contains("run `triptestlog migrate", reader.Error, StringComparison.Ordinal);
+            Assert.Contains("run `triptestlog migrate", CliRun.Unwrapped(reader.Error), StringComparison.Ordinal);
         }
 
         var register = Path.Combine(_folder, "register.csv");
@@ -268,7 +268,7 @@ public sealed class SqliteOpeningTests : IDisposable
         using var importer = Child.Start("import", register, Trips("after.csv", 3, 5000), "--db", Db);
 
         Assert.True(importer.Exit(TimeSpan.FromSeconds(60)) == 0, importer.Out + importer.Error);
-        Assert.Contains("cleared the schema-upgrade lock taken at 2026-12-04 09:00:00+00:00", importer.Error, StringComparison.Ordinal);
+        Assert.Contains("cleared the schema-upgrade lock taken at 2026-12-04 09:00:00+00:00", CliRun.Unwrapped(importer.Error), StringComparison.Ordinal);
         Assert.Equal(0L, Count("SELECT COUNT(*) FROM \"__EFMigrationsLock\""));
         Assert.False(File.Exists(Db + "-migrating"));
     }
@@ -315,7 +315,7 @@ public sealed class SqliteOpeningTests : IDisposable
         var register = Path.Combine(_folder, "register.csv");
         File.WriteAllText(register, "asset_tag,site,location,family,curve,rated_current_a,poles,rated_voltage_v\nP-01,Hill Farm,Board 1,iec60898,C,16,1,230\n");
         var (exit, _, error) = CliRun.Run("import", register, Trips("first.csv", 5, 0), "--db", Db);
-        Assert.True(exit == 0, error);
+        Assert.True(exit == 0, CliRun.Unwrapped(error));
     }
 
     private string Trips(string name, int rows, int offsetSeconds)

@@ -116,7 +116,7 @@ public sealed class ActionableFindingsTests
 
         Assert.Equal(ConditionGrade.Watch, device.Grade);
         Assert.DoesNotContain("clean and re-torque", over.Message, StringComparison.Ordinal);
-        Assert.Contains("over the limit of 6750 uOhm", over.Message, StringComparison.Ordinal);
+        Assert.Contains("over the limit of 6750 µΩ", over.Message, StringComparison.Ordinal);
         Assert.Contains("repaired", over.Message, StringComparison.Ordinal);
     }
 

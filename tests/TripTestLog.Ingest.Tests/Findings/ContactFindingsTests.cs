@@ -45,7 +45,7 @@ public sealed class ContactFindingsTests
 
         Assert.Equal(8288.61, over.Value!.Value.Amount, 2);
         Assert.Equal((8000.0, ReadingUnit.MicroOhms), (over.Limit!.Value.Amount, over.Limit.Value.Unit));
-        Assert.Contains("7800 uOhm as measured", over.Message);
+        Assert.Contains("7800 µΩ as measured", over.Message);
         Assert.DoesNotContain(fleet.Device("WARM").Findings, f => f.Kind == FindingKind.ContactOverLimit);
     }
 

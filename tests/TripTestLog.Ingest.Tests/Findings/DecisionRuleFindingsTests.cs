@@ -37,7 +37,7 @@ public sealed class DecisionRuleFindingsTests
         Assert.DoesNotContain(simple.Findings, f => f.Kind is FindingKind.ContactOverLimit or FindingKind.RetestAccuracy);
         Assert.Equal(ConditionGrade.Sound, simple.Grade);
         var retest = Assert.Single(guarded.Findings, f => f.Kind == FindingKind.RetestAccuracy);
-        Assert.Contains("U = 92.61 uOhm", retest.Message);
+        Assert.Contains("U = 92.61 µΩ", retest.Message);
         Assert.Contains("retest with a more accurate instrument", retest.Message);
         Assert.Equal(("1", Severity.Investigate, "OHM-1"), (retest.Pole, retest.Severity, retest.Instrument));
         Assert.Equal(ConditionGrade.Watch, guarded.Grade);
@@ -56,7 +56,7 @@ public sealed class DecisionRuleFindingsTests
         Assert.Single(fleet.Device("K-101", Rule(DecisionRule.Simple)).Findings, f => f.Kind == FindingKind.ContactOverLimit);
         var guarded = fleet.Device("K-101", Rule(DecisionRule.Guarded));
         Assert.DoesNotContain(guarded.Findings, f => f.Kind == FindingKind.ContactOverLimit);
-        Assert.Contains("U = 94.45 uOhm", Assert.Single(guarded.Findings, f => f.Kind == FindingKind.RetestAccuracy).Message);
+        Assert.Contains("U = 94.45 µΩ", Assert.Single(guarded.Findings, f => f.Kind == FindingKind.RetestAccuracy).Message);
         var nonBinary = fleet.Device("K-101", Rule(DecisionRule.NonBinary));
         Assert.Single(nonBinary.Findings, f => f.Kind == FindingKind.ContactOverLimit);
         Assert.Single(nonBinary.Findings, f => f.Kind == FindingKind.RetestAccuracy);
