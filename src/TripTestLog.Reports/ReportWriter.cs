@@ -1,4 +1,3 @@
-using System.Text;
 using TripTestLog.Application.Findings;
 using TripTestLog.Reports.Html;
 
@@ -39,7 +38,7 @@ public sealed class ReportWriter
         {
             var tag = report.Condition.Device.Tag.Value;
             var page = Markup.PageName(tag);
-            File.WriteAllText(Path.Combine(_folder, "devices", page), DevicePage.Write(report, _context), Encoding.UTF8);
+            CompletedFile.WriteAllText(Path.Combine(_folder, "devices", page), DevicePage.Write(report, _context));
             _pages++;
         }
     }
@@ -49,7 +48,7 @@ public sealed class ReportWriter
     {
         var path = Path.Combine(_folder, "index.html");
         // Every device on the fleet page went through Add, so it has a page exactly when device pages are written.
-        File.WriteAllText(path, FleetPage.Write(_fleet, _context, tag => _devicePages ? Markup.PageName(tag) : null, selection), Encoding.UTF8);
+        CompletedFile.WriteAllText(path, FleetPage.Write(_fleet, _context, tag => _devicePages ? Markup.PageName(tag) : null, selection));
         return path;
     }
 }
