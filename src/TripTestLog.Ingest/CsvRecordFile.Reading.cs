@@ -36,6 +36,12 @@ internal sealed partial class CsvRecordFile
             {
                 more = csv.Read();
             }
+            catch (CsvFormatException e) when (TooLarge(e, layout.Separator, csv) is { } problem)
+            {
+                _unreadable = true;
+                _fileProblems.Add(problem);
+                yield break;
+            }
             catch (CsvFormatException e)
             {
                 // Past a malformed record the rest of the file cannot be read, so its rows cannot be accounted for.
@@ -53,6 +59,12 @@ internal sealed partial class CsvRecordFile
             if (csv.FieldCount != csv.Headers.Count)
             {
                 yield return new ReadRow(csv.LineNumber, null, [FieldCountProblem(csv, layout)], CurrentRaw);
+                continue;
+            }
+
+            if (LongField(csv) is { } longField)
+            {
+                yield return new ReadRow(csv.LineNumber, null, [longField], CurrentRaw);
                 continue;
             }
 
@@ -95,6 +107,39 @@ internal sealed partial class CsvRecordFile
     }
 
     private static bool IsDigits(string? text) => text?.Trim() is { Length: > 0 } t && t.TrimStart('-').Length > 0 && t.TrimStart('-').All(char.IsAsciiDigit);
+
+    // A field past the documented limit, named by its column: the record fitted in the reader's buffer.
+    private RowProblem? LongField(CsvReader csv)
+    {
+        for (var i = 0; i < csv.FieldCount; i++)
+        {
+            // A UTF-8 field holds no more characters than bytes: the raw length rules out nearly every field at no cost.
+            if (csv.GetRawSpan(i).Length > FieldLimits.MaxFieldCharacters && csv.GetString(i).Length is var length
+                && length > FieldLimits.MaxFieldCharacters)
+            {
+                return new RowProblem(_name, csv.LineNumber, i < csv.Headers.Count ? csv.Headers[i] : $"{i + 1}", FieldLimits.TooLong(length));
+            }
+        }
+
+        return null;
+    }
+
+    // A record too large to buffer: a second streaming look finds the field that runs past the limit, so the problem
+    // names its column; reading stops there, and the file is refused.
+    private RowProblem? TooLarge(CsvFormatException e, char separator, CsvReader csv)
+    {
+        if (!e.Message.Contains("MaxRecordSize", StringComparison.Ordinal) && !e.Message.Contains("too large", StringComparison.OrdinalIgnoreCase))
+        {
+            return null;
+        }
+
+        var field = FieldLimits.FindLongField(_path, e.LineNumber, separator);
+        return field < 0
+            ? new RowProblem(_name, e.LineNumber, "", $"this record runs past {FieldLimits.MaxRecordBytes:N0} bytes (a quote that is never closed?); "
+                + "reading stopped, so the file is refused")
+            : new RowProblem(_name, e.LineNumber, field < csv.Headers.Count ? csv.Headers[field] : $"{field + 1}",
+                FieldLimits.TooLarge + "; reading stopped, so the file is refused");
+    }
 
     // A planned worksheet row with every result blank: the test was not made.
     private static bool IsNotTested(RecordKind kind, RowFields fields) =>

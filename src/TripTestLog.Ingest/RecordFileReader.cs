@@ -54,6 +54,7 @@ public static class RecordFileReader
         TrackLineNumbers = true,
         FieldCountMismatch = CsvFieldCountHandling.Allow,
         MalformedData = CsvMalformedDataHandling.Throw,
+        MaxRecordSize = FieldLimits.MaxRecordBytes,
     };
 
     private static string? CheckReadable(string path)

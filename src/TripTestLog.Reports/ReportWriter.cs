@@ -1,6 +1,5 @@
 using System.Collections.Concurrent;
 using System.Runtime.ExceptionServices;
-using System.Text;
 using TripTestLog.Application.Findings;
 using TripTestLog.Reports.Html;
 
@@ -69,7 +68,7 @@ public sealed class ReportWriter : IDisposable
         _failure?.Throw();
         var path = Path.Combine(_folder, "index.html");
         // Every device on the fleet page went through Add, so it has a page exactly when device pages are written.
-        File.WriteAllText(path, FleetPage.Write(_fleet, _context, tag => _devicePages ? Markup.PageName(tag) : null, selection), Encoding.UTF8);
+        CompletedFile.WriteAllText(path, FleetPage.Write(_fleet, _context, tag => _devicePages ? Markup.PageName(tag) : null, selection));
         return path;
     }
 
@@ -103,7 +102,7 @@ public sealed class ReportWriter : IDisposable
             foreach (var report in _waiting!.GetConsumingEnumerable())
             {
                 var page = Markup.PageName(report.Condition.Device.Tag.Value);
-                File.WriteAllText(Path.Combine(_folder, "devices", page), DevicePage.Write(report, _context), Encoding.UTF8);
+                CompletedFile.WriteAllText(Path.Combine(_folder, "devices", page), DevicePage.Write(report, _context));
                 Interlocked.Increment(ref _pages);
             }
         }

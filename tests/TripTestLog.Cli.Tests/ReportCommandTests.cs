@@ -83,6 +83,37 @@ public sealed class ReportCommandTests(SampleFleetDatabase fleet) : IClassFixtur
     }
 
     [Fact]
+    public void AReportThatStopsPartWay_LeavesTheEarlierCompleteDataFiles_AndNoPartialOnes()
+    {
+        var folder = Path.Combine(fleet.Folder, "report-stopped");
+        Assert.Equal(0, CliRun.Run("report", "--db", fleet.Database, "--out", folder).Exit);
+        string[] data = ["findings.csv", "findings.json", "verdicts.csv", "verdicts.json", "index.html"];
+        var before = data.ToDictionary(name => name, name => File.ReadAllText(Path.Combine(folder, name)));
+
+        // The second run fails on its fourth device as a full disk would fail a write.
+        using var store = TripTestLog.Storage.RecordStore.Open(fleet.Database);
+        var context = new TripTestLog.Reports.ReportContext(fleet.Database, "test", new DateOnly(2026, 12, 1), CliRun.Now,
+            TripTestLog.Application.Findings.FindingPolicy.Default, "default", store.Instruments());
+        var written = 0;
+        var failure = Record.Exception(() => Services.ReportRun.Write(store, folder, context, new Services.ReportRun.Selection(null, null, null, null, true),
+            CancellationToken.None, _ =>
+            {
+                if (++written == 4)
+                {
+                    throw new IOException("No space left on device");
+                }
+            }));
+
+        Assert.IsType<IOException>(failure);
+        foreach (var name in data)
+        {
+            Assert.Equal(before[name], File.ReadAllText(Path.Combine(folder, name)));
+        }
+
+        Assert.Empty(Directory.GetFiles(folder, "*.partial", SearchOption.AllDirectories));
+    }
+
+    [Fact]
     public void AReportForOneSite_WritesOnlyItsDevices()
     {
         var folder = Path.Combine(fleet.Folder, "report-site");

@@ -91,6 +91,26 @@ public sealed class StoreCommandTests(CopiedFleet fleet) : IClassFixture<CopiedF
         Assert.Contains(provider == Provider.Sqlite ? "SQLite integrity check: ok" : "Page checks: left to the server's administrator", output, StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void Verify_OnADamagedFile_ReportsTheFault_AndExitsOne()
+    {
+        var copy = fleet.Copy(Provider.Sqlite);
+        using (var file = new FileStream(copy.Address, FileMode.Open, FileAccess.ReadWrite))
+        {
+            // Pages past the first overwritten with noise: the header still says SQLite, the b-trees no longer hold.
+            var noise = new byte[file.Length / 2];
+            new Random(7).NextBytes(noise);
+            file.Position = 4096 * 4;
+            file.Write(noise);
+        }
+
+        var (exit, output, error) = CliRun.Run("verify", "--db", copy.Address);
+
+        Assert.True(exit == ExitCodes.Findings, output + error);
+        Assert.Contains($"The database is damaged: {copy.Address}", output + error, StringComparison.Ordinal);
+        Assert.DoesNotContain("   at ", error, StringComparison.Ordinal);
+    }
+
     [Theory]
     [MemberData(nameof(TestDatabase.Providers), MemberType = typeof(TestDatabase))]
     public void Backup_CopiesAFile_AndOnTheServerNamesItsOwnTool(Provider provider)

@@ -84,7 +84,7 @@ internal static class DemoCommand
             return ExitCodes.BadInput;
         }
 
-        var (files, problems) = ImportRunner.Expand([folder], Ingest.ReadOptions.Default);
+        var (files, problems, _) = ImportRunner.Expand([folder], Ingest.ReadOptions.Default);
         foreach (var problem in problems)
         {
             cli.Error.WriteLine("warning: " + problem);

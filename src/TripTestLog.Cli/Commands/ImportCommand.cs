@@ -82,7 +82,7 @@ internal static class ImportCommand
             read = read with { Profile = profile };
         }
 
-        var (files, problems) = ImportRunner.Expand(paths, read);
+        var (files, problems, skipped) = ImportRunner.Expand(paths, read);
         if (problems.Count > 0)
         {
             foreach (var problem in problems)
@@ -95,6 +95,7 @@ internal static class ImportCommand
 
         if (files.Count == 0)
         {
+            skipped.ForEach(entry => cli.Error.WriteLine("refused: " + Visible.Text(entry)));
             cli.Error.WriteLine("error: no .csv files found in the paths given");
             return ExitCodes.BadInput;
         }
@@ -120,7 +121,13 @@ internal static class ImportCommand
         }
 
         ImportReport.Write(cli.Out, outcomes, LogPath(db), width);
-        return outcomes.Any(o => o.Status == ImportStatus.Refused) ? ExitCodes.BadInput
+        foreach (var entry in skipped)
+        {
+            log.Warning("Skipped {Entry}", entry);
+            cli.Error.WriteLine("refused: " + Visible.Text(entry));
+        }
+
+        return skipped.Count > 0 || outcomes.Any(o => o.Status == ImportStatus.Refused) ? ExitCodes.BadInput
             : outcomes.Any(o => o.RefusedRows > 0) ? ExitCodes.Findings
             : ExitCodes.Ok;
     }

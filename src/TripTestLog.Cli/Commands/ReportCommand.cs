@@ -105,7 +105,7 @@ internal static class ReportCommand
         }
         catch (OperationCanceledException)
         {
-            cli.Error.WriteLine("report stopped: the folder holds an incomplete report");
+            cli.Error.WriteLine("report stopped: the fleet page and the CSV and JSON files of an earlier report are left as they were; device pages may be a mix of both runs");
             return ExitCodes.BadInput;
         }
     }

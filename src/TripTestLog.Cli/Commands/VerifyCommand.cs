@@ -27,6 +27,25 @@ internal static class VerifyCommand
             return ExitCodes.BadInput;
         }
 
+        try
+        {
+            return Report(cli, db, width);
+        }
+        catch (Microsoft.Data.Sqlite.SqliteException e) when (e.SqliteErrorCode is Damaged or NotADatabase)
+        {
+            // A damaged file is what verify looks for: a fault found, not a command that failed.
+            cli.Out.WriteLine($"The database is damaged: {db.Display} ({e.Message.ReplaceLineEndings(" ").Trim()}); "
+                + "restore it from a backup, or re-import its files into a new database.");
+            return ExitCodes.Findings;
+        }
+    }
+
+    // SQLite's result codes for a file whose pages no longer hold (SQLITE_CORRUPT) or that is no database (SQLITE_NOTADB).
+    private const int Damaged = 11;
+    private const int NotADatabase = 26;
+
+    private static int Report(CliContext cli, StoreAddress db, int width)
+    {
         using var store = Stores.Open(cli, db, StorePurpose.Read);
         var report = store.Verify();
         var table = new TextTable("File", "Records>", "State");

@@ -29,10 +29,13 @@ internal sealed class ImportRunner(IRecordStore store, ILogger log, CliContext c
     /// Expands folders to the *.csv files inside them (recursively, sorted, rejects files skipped). A *.profile.json in a
     /// folder applies to the files its patterns name; <paramref name="baseOptions"/>' own profile, when given, applies to all.
     /// </summary>
-    public static (List<ImportFile> Files, List<string> Problems) Expand(IEnumerable<string> paths, ReadOptions baseOptions)
+    /// <remarks>An entry of a folder that cannot be read as a file (a link to nothing, a loop of links) is added to
+    /// Skipped by name, and the folder's other files are imported.</remarks>
+    public static (List<ImportFile> Files, List<string> Problems, List<string> Skipped) Expand(IEnumerable<string> paths, ReadOptions baseOptions)
     {
         var files = new List<ImportFile>();
         var problems = new List<string>();
+        var skipped = new List<string>();
         var profiles = new Dictionary<string, IReadOnlyList<ColumnProfile>>(StringComparer.Ordinal);
         ColumnProfile? ProfileFor(string file) => FolderProfiles(Path.GetDirectoryName(Path.GetFullPath(file))!, profiles, problems)
             .FirstOrDefault(p => p.AppliesTo(Path.GetFileName(file)));
@@ -44,9 +47,7 @@ internal sealed class ImportRunner(IRecordStore store, ILogger log, CliContext c
             }
             else if (Directory.Exists(path))
             {
-                foreach (var file in Directory.EnumerateFiles(path, "*.csv", SearchOption.AllDirectories)
-                             .Where(f => !f.EndsWith(RejectsFile.Suffix, StringComparison.OrdinalIgnoreCase))
-                             .Order(StringComparer.Ordinal))
+                foreach (var file in FolderWalk.CsvFiles(path, skipped).Where(f => !f.EndsWith(RejectsFile.Suffix, StringComparison.OrdinalIgnoreCase)))
                 {
                     files.Add(new ImportFile(file, baseOptions.Profile is null ? baseOptions with { Profile = ProfileFor(file) } : baseOptions)
                     {
@@ -60,7 +61,7 @@ internal sealed class ImportRunner(IRecordStore store, ILogger log, CliContext c
             }
         }
 
-        return (files.DistinctBy(f => Path.GetFullPath(f.Path)).ToList(), problems.Distinct().ToList());
+        return (files.DistinctBy(f => Path.GetFullPath(f.Path)).ToList(), problems.Distinct().ToList(), skipped);
     }
 
     /// <summary>

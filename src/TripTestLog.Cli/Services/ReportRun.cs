@@ -38,10 +38,12 @@ internal static class ReportRun
     {
         progress?.Show("reading the fleet for the peer groups");
         using var writer = new ReportWriter(folder, context, selection.DevicePages);
-        using var findingsCsvFile = new StreamWriter(Path.Combine(folder, "findings.csv"));
-        using var findingsJsonFile = new StreamWriter(Path.Combine(folder, "findings.json"));
-        using var verdictsCsvFile = new StreamWriter(Path.Combine(folder, "verdicts.csv"));
-        using var verdictsJsonFile = new StreamWriter(Path.Combine(folder, "verdicts.json"));
+        using var findingsCsvDone = new CompletedFile(Path.Combine(folder, "findings.csv"));
+        using var findingsJsonDone = new CompletedFile(Path.Combine(folder, "findings.json"));
+        using var verdictsCsvDone = new CompletedFile(Path.Combine(folder, "verdicts.csv"));
+        using var verdictsJsonDone = new CompletedFile(Path.Combine(folder, "verdicts.json"));
+        var (findingsCsvFile, findingsJsonFile) = (findingsCsvDone.Writer, findingsJsonDone.Writer);
+        var (verdictsCsvFile, verdictsJsonFile) = (verdictsCsvDone.Writer, verdictsJsonDone.Writer);
         var findingsCsv = new FindingCsv(findingsCsvFile);
         using var findingsJson = new FindingJson(findingsJsonFile);
         var verdicts = new VerdictWriters(new VerdictCsv(verdictsCsvFile), new VerdictJson(verdictsJsonFile), new VerdictCounts());
@@ -125,6 +127,11 @@ internal static class ReportRun
 
         findingsJson.Finish();
         verdicts.Finish();
+        foreach (var done in new[] { findingsCsvDone, findingsJsonDone, verdictsCsvDone, verdictsJsonDone })
+        {
+            done.Complete();
+        }
+
         return (writer.Finish(selection.Describe), writer.DevicePages);
     }
 

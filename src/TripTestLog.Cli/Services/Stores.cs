@@ -46,6 +46,9 @@ internal static class Stores
 
         return e switch
         {
+            Npgsql.PostgresException { SqlState: "42501" } p when p.MessageText.Contains("row-level security", StringComparison.Ordinal) =>
+                "the file names a site this role may not write: its rows are confined to its own sites (site_access on the server); "
+                + "nothing of the file was stored: ask the owner role to add the site, or import it as that site's lab",
             Npgsql.PostgresException p => $"the database could not be used ({p.MessageText})",
             Npgsql.NpgsqlException or Microsoft.Data.Sqlite.SqliteException => $"the database could not be used ({e.Message.ReplaceLineEndings(" ").Trim()})",
             _ => null,

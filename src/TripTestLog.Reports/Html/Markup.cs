@@ -19,18 +19,29 @@ internal static class Markup
 
     /// <summary>
     /// A file name for a device page: the tag's letters, digits, '.', '-' and '_' kept, anything else replaced, with a
-    /// short hash of the tag added when anything was replaced, so two tags never share a page.
+    /// short hash of the tag added when anything was replaced or the name is one Windows reserves (CON, NUL, COM1...),
+    /// so two tags never share a page and every page opens on every system.
     /// </summary>
     public static string PageName(string tag)
     {
         var safe = new string([.. tag.Select(c => char.IsAsciiLetterOrDigit(c) || c is '-' or '_' or '.' ? c : '_')]);
-        if (safe == tag && !tag.StartsWith('.'))
+        if (safe == tag && !tag.StartsWith('.') && !Reserved(tag))
         {
             return tag + ".html";
         }
 
         var hash = Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(tag)))[..8];
         return $"{safe.TrimStart('.')}-{hash}.html";
+    }
+
+    // Device names Windows reserves in any folder, whatever the case and whatever follows the first dot ("CON.html",
+    // "nul.a.html"): Microsoft's "Naming Files, Paths, and Namespaces", naming conventions.
+    private static bool Reserved(string tag)
+    {
+        var stem = tag.Split('.')[0].ToUpperInvariant();
+        return stem is "CON" or "PRN" or "AUX" or "NUL"
+            || (stem.Length == 4 && (stem.StartsWith("COM", StringComparison.Ordinal) || stem.StartsWith("LPT", StringComparison.Ordinal))
+                && stem[3] is >= '0' and <= '9');
     }
 
     /// <summary>A link target for a page name, escaped for an attribute.</summary>
