@@ -81,6 +81,19 @@ public static partial class TripJudge
             }
         }
 
+        // A pass proved by holding a no-trip point rests on the time held, read by the same timer: the hold must outlast
+        // the point's time by the guard band too (row a's hour held for exactly an hour proves it only as written).
+        if (simple.Verdict == Verdict.Pass && !m.Outcome.Tripped && simple.Point is { MustHoldFor: { } need } held
+            && string.Equals(simple.Proved, held.Requirement, StringComparison.Ordinal))
+        {
+            var u = k * uT;
+            var g = new GuardedEdge(held.HoldEdge(carried: false), true, u, guardBandFactor * u, t.Value - need.Value);
+            if (deciding is null || g.Spare < deciding.Spare)
+            {
+                deciding = g;
+            }
+        }
+
         var currentWhy = rule != DecisionRule.Simple && decides ? CurrentDoubt(simple, windowed, conditions, guardBandFactor * k * uI) : null;
         var conditional = rule != DecisionRule.Simple && decides && (deciding is { Spare: < 0 } || currentWhy is not null);
         Conformity? conformity = rule != DecisionRule.NonBinary || !decides ? null

@@ -24,11 +24,11 @@ public sealed class DecisionRuleTests
     private static readonly ResolvedAccuracy TimerAndClamp = InstrumentAccuracy.Of(timePercent: 0.5, timeSeconds: 0.01, currentPercent: 2,
         coverageFactor: 2).Over(InstrumentAccuracy.None);
 
-    private static TripAssessment Under(DecisionRule rule, double amps, double seconds, ResolvedAccuracy accuracy)
+    private static TripAssessment Under(DecisionRule rule, double amps, double seconds, ResolvedAccuracy accuracy, bool held = false)
     {
         var envelope = PointWindowEnvelope.Of(new Iec60898Envelope(TripCurve.C, Amperes.Of(16)));
         var m = new TripMeasurement(AssetTag.Of("U-1"), TestedAt.OnDate(new DateOnly(2025, 5, 6)), TestStage.AsFound, Pole.All, Amperes.Of(amps),
-            TripOutcome.TrippedAfter(Seconds.Of(seconds)), StartCondition.Cold, null, "", "", "");
+            held ? TripOutcome.HeldFor(Seconds.Of(seconds)) : TripOutcome.TrippedAfter(Seconds.Of(seconds)), StartCondition.Cold, null, "", "", "");
         var conditions = TestConditions.Reference;
         return TripJudge.ApplyRule(TripJudge.Assess(envelope, m, conditions), envelope, conditions, accuracy, rule);
     }
@@ -143,6 +143,29 @@ public sealed class DecisionRuleTests
 
         Assert.Equal(atLimit.Uncertainty!.Time!.Value.Value, g.MaximumBand!.Value, 6);
         Assert.True(g.MaximumBand > 0.35796 * 2, "the current's share through the slope is missing");
+    }
+
+    [Theory]
+    [InlineData(3600.0, Verdict.NotAssessable, Conformity.ConditionalPass)]
+    [InlineData(3620.0, Verdict.NotAssessable, Conformity.ConditionalPass)]
+    [InlineData(3621.0, Verdict.Pass, Conformity.Pass)]
+    public void AHoldOfRowAsHour_MustOutlastItByTheGuardBand(double seconds, Verdict guarded, Conformity statement)
+    {
+        // IEC 60898-1 Table 7 row a: 1.13 In (18.08 A for a C16) from cold, no trip within 1 h. The hold is timed by the
+        // same set: at 3600 s, a = 0.005 x 3600 + 0.010 = 18.01 s; u = 18.01 / √3 = 10.398 s; U = 20.796 s (20.912 s at
+        // 3620 s, 20.917 s at 3621 s). A hold of 3600 s proves the hour as written (simple), not past the guard band;
+        // 3620 s is 20 s past the hour, inside its 20.912 s; 3621 s is 21 s past, outside its 20.917 s.
+        var simple = Under(DecisionRule.Simple, 18.08, seconds, TimerOnly, held: true);
+        Assert.Equal(Verdict.Pass, simple.Verdict);
+        Assert.Equal(2 * ((0.005 * seconds) + 0.010) / Math.Sqrt(3), simple.Uncertainty!.Time!.Value.Value, 3);
+
+        var underGuard = Under(DecisionRule.Guarded, 18.08, seconds, TimerOnly, held: true);
+        Assert.Equal(guarded, underGuard.Verdict);
+        Assert.Equal(statement, Under(DecisionRule.NonBinary, 18.08, seconds, TimerOnly, held: true).Uncertainty!.Conformity);
+        if (guarded == Verdict.NotAssessable)
+        {
+            Assert.Contains("within the measurement uncertainty of the limit", underGuard.Reason);
+        }
     }
 
     [Fact]
