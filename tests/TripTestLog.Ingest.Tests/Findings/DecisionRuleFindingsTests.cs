@@ -77,7 +77,7 @@ public sealed class DecisionRuleFindingsTests
         var guarded = fleet.Device("I-25", Rule(DecisionRule.Guarded));
         Assert.DoesNotContain(guarded.Findings, f => f.Kind == FindingKind.InsulationBelowMinimum);
         var retest = Assert.Single(guarded.Findings, f => f.Kind == FindingKind.RetestAccuracy);
-        Assert.Contains("U = 1.41 MOhm", retest.Message);
+        Assert.Contains("U = 1.41 MΩ", retest.Message);
         Assert.Contains("insulation ±5 %", retest.Message);
         var nonBinary = fleet.Device("I-25", Rule(DecisionRule.NonBinary));
         Assert.Single(nonBinary.Findings, f => f.Kind == FindingKind.InsulationBelowMinimum);
