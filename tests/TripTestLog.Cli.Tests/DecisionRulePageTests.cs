@@ -39,8 +39,8 @@ public sealed partial class DecisionRulePageTests(SampleFleetDatabase fleet) : I
         var page = Text(Path.Combine(fleet.Folder, "report", "index.html"));
 
         Assert.Contains("Decision rule: simple (simple acceptance, ILAC-G8:09/2019)", page);
-        Assert.Contains("the instrument register states no accuracy for any of its 10 instruments", page);
-        Assert.Contains("time ±(0.5 % + 0.01 s), current ±2 %, contact resistance ±(1 % + 1 uOhm), insulation ±5 %, k = 2", page);
+        Assert.Contains("the instrument register states no accuracy for any of its 14 instruments", page);
+        Assert.Contains("time ±(0.5 % + 0.01 s), current ±2 %, contact resistance ±(1 % + 1 µΩ), insulation ±5 %, k = 2", page);
     }
 
     [Fact]

@@ -14,7 +14,7 @@ public sealed class ReportBrowserTests(SampleFleetDatabase fleet) : IClassFixtur
     [Theory]
     [InlineData("index.html", "devices", "report-fleet.png")]
     [InlineData("devices/BPS-DB1-Q03.html", "trip time", "report-device.png")]
-    [InlineData("devices/ARW-DB2-Q02.html", "contact resistance at 20 °C, micro-ohm", null)]
+    [InlineData("devices/ARW-DB2-Q02.html", "contact resistance at 20 °C, µΩ", null)]
     public async Task APage_RendersItsCharts_WithoutConsoleErrors(string page, string chartText, string? screenshot)
     {
         Assert.True(File.Exists(Chromium), $"{Chromium} is missing: install Debian's chromium package (apt-get install -y chromium), as .ci/run does");

@@ -47,6 +47,6 @@ public sealed class TrendChartTests
 
         var limit = plot.GetPlottables().OfType<HorizontalLine>().Single(l => l.LegendText == "maker's limit");
         Assert.Equal(8000, limit.Y);
-        Assert.Contains("contact resistance at 20 °C, micro-ohm", Charts.SvgText(ChartStyle.Svg(plot)));
+        Assert.Contains("contact resistance at 20 °C, µΩ", Charts.SvgText(ChartStyle.Svg(plot)));
     }
 }

@@ -13,6 +13,9 @@ internal sealed class ErrorLines(TextWriter inner) : TextWriter(CultureInfo.Inva
     /// <summary>The writer wrapped once; idempotent.</summary>
     public static TextWriter Wrap(TextWriter writer) => writer is ErrorLines ? writer : new ErrorLines(writer);
 
+    /// <summary>The writer underneath, for text that must pass exactly as written (a progress line's carriage returns).</summary>
+    public TextWriter Inner => inner;
+
     public override Encoding Encoding => inner.Encoding;
 
     public override void Write(char value) => inner.Write(value);

@@ -33,7 +33,12 @@ internal static class Visible
     public static TextWriter Wrap(TextWriter writer) => writer is Writer ? writer : new Writer(writer);
 
     /// <summary>The writer underneath, for output that must stay byte for byte as produced (JSON, CSV, a policy file).</summary>
-    public static TextWriter Exact(TextWriter writer) => writer is Writer w ? w.Inner : writer;
+    public static TextWriter Exact(TextWriter writer) => writer switch
+    {
+        Writer w => w.Inner,
+        ErrorLines e => Exact(e.Inner),
+        _ => writer,
+    };
 
     private static bool Hidden(char c) =>
         (char.IsControl(c) && c is not '\n' and not '\t') || c is >= '\u202a' and <= '\u202e' or >= '\u2066' and <= '\u2069' or '\u200e' or '\u200f';

@@ -79,7 +79,7 @@ internal static class ContactChart
         }
 
         YearAxis.Apply(plot, first, last);
-        plot.YLabel("contact resistance at 20 °C, micro-ohm");
+        plot.YLabel("contact resistance at 20 °C, µΩ");
         plot.Axes.SetLimitsY(0, Math.Max(readings.Max(r => r.CorrectedMicroOhms), limitMicroOhms ?? 0) * 1.15);
         plot.ShowLegend(Edge.Right);
         return plot;

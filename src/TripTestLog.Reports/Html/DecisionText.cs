@@ -76,7 +76,7 @@ internal static class DecisionText
         var none = all.Where(i => !register.StatesAccuracy(i)).ToList();
         var words = InstrumentAccuracy.None.Over(policy.DefaultAccuracy);
         var figures = $"time ±{Pair(words.TimePercent, words.TimeSeconds, "s")}, current ±{Pair(words.CurrentPercent, words.CurrentAmperes, "A")}, "
-            + $"contact resistance ±{Pair(words.ResistancePercent, words.ResistanceMicroOhms, "uOhm")}, insulation ±{N(words.InsulationPercent)} %, "
+            + $"contact resistance ±{Pair(words.ResistancePercent, words.ResistanceMicroOhms, "µΩ")}, insulation ±{N(words.InsulationPercent)} %, "
             + $"k = {N(words.CoverageFactor)}";
         if (none.Count == 0)
         {

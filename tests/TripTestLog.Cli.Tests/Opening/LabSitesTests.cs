@@ -83,7 +83,7 @@ public sealed class LabSitesTests : IDisposable
         {
             Assert.Equal(2, device.Exit(TimeSpan.FromSeconds(90)));
             Assert.Contains("the file names a site this role may not write: its rows are confined to its own sites (site_access on the server); "
-                + "nothing of the file was stored", device.Error,
+                + "nothing of the file was stored", CliRun.Unwrapped(device.Error),
                 StringComparison.Ordinal);
             Assert.DoesNotContain("   at ", device.Error, StringComparison.Ordinal);
         }
