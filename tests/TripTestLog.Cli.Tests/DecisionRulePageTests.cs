@@ -102,8 +102,9 @@ public sealed partial class DecisionRulePageTests(SampleFleetDatabase fleet) : I
         // 0.01212 s, so a pass needs a trip before 0.0879 s, written 0.087 s.
         Assert.Contains("trip before 100 ms guarded: trip before 0.087 s (w = 0.013 s at the maximum)", page);
 
-        // A hold is judged on its time as written, and a guarded result has a third box to tick.
-        Assert.Contains("no trip within 1 h guarded: as above", page);
+        // Row a's hour must be outlasted by the guard band on the time held: held = 3600 + 2 (0.005 held + 0.010) / √3,
+        // 3620.92 s, written 60 min 21 s (rounded up, the safe way for a hold); and a guarded result has a third box.
+        Assert.Contains("no trip within 1 h guarded: hold at least 60 min 21 s (w = 21 s on the time held)", page);
         Assert.Contains("pass ☐ within U ☐ fail", page);
 
         // Under simple acceptance (the default) the worksheet shows the plain windows only.

@@ -167,6 +167,24 @@ public static partial class TripJudge
             wMin, wMax);
     }
 
+    /// <summary>
+    /// The shortest hold that proves a no-trip point's <paramref name="need"/> under the guarded rule: it must outlast the
+    /// point's time by the guard band, U of the time held itself (the check's rule for a pass proved by holding).
+    /// </summary>
+    public static Seconds GuardedHold(Seconds need, ResolvedAccuracy accuracy, double guardBandFactor = 1.0)
+    {
+        ArgumentNullException.ThrowIfNull(accuracy);
+
+        // held = need + f k u(held): u grows with the time held, so a few steps settle it (each step moves by f k 0.3 %).
+        var held = need.Value;
+        for (var i = 0; i < 8; i++)
+        {
+            held = need.Value + (guardBandFactor * accuracy.CoverageFactor * accuracy.TimeStandard(Seconds.Of(held)));
+        }
+
+        return Seconds.Of(held);
+    }
+
     private sealed record GuardedEdge(BandEdge Edge, bool Minimum, double U, double W, double Margin)
     {
         public double Spare => Margin - W;

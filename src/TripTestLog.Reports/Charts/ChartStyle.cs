@@ -53,14 +53,24 @@ internal static class ChartStyle
     }
 
     /// <summary>The chart as SVG markup, ready to inline in a page (without the XML declaration, which HTML does not take).</summary>
+    private static readonly Lock Rendering = new();
+
     public static string Svg(Plot plot, int width = Width, int height = Height)
     {
-        var svg = plot.GetSvgXml(width, height);
+        // One chart renders at a time: device pages are written on several threads, and the native text shaping under
+        // the charts crashed the process when two rendered at once. The pages' other work still runs in parallel.
+        string svg;
+        PixelRect area;
+        lock (Rendering)
+        {
+            svg = plot.GetSvgXml(width, height);
+            area = plot.RenderManager.LastRender.DataRect;
+        }
+
         var start = svg.IndexOf("<svg", StringComparison.Ordinal);
         svg = start > 0 ? svg[start..] : svg;
 
         // The data area, in the SVG's own units, so a page test can check that no legend or label covers the data.
-        var area = plot.RenderManager.LastRender.DataRect;
         svg = string.Concat("<svg data-plot-area=\"", string.Join(' ', new[] { area.Left, area.Top, area.Width, area.Height }
             .Select(v => v.ToString("0.#", CultureInfo.InvariantCulture))), "\"", svg[4..]);
 

@@ -127,13 +127,15 @@ internal static class WorksheetSection
     // The guarded rule has a third outcome: within the measurement uncertainty of the limit.
     private const string GuardedTick = "<span class=\"tick\">\u2610 pass \u2610 within U \u2610 fail</span>";
 
-    // The window a trip must fall in to pass under the guarded rule, beside the plain one. A hold is judged on the hold
-    // time as the check takes it, so it has no guarded window.
+    // The window a trip must fall in to pass under the guarded rule, beside the plain one; for a hold, how long it must
+    // last: the point's time and the guard band on the time held.
     private static string Guarded(DeviceWorksheet sheet, PlannedTrip t, DecisionPolicy decision)
     {
-        if (t.HoldFor is not null)
+        if (t.HoldFor is { } need)
         {
-            return Small("guarded: as above (a hold is judged on the time held, as written)");
+            var hold = TripJudge.GuardedHold(need, InstrumentAccuracy.None.Over(decision.Defaults), decision.GuardBandFactor);
+            return "<strong>" + H($"guarded: hold at least {T(hold.Value, up: true)}") + "</strong> "
+                + Small($"(w = {T(hold.Value - need.Value, up: true)} on the time held)");
         }
 
         if (!t.Window.HasRequirement || t.Window.Minimum.Limit is null)

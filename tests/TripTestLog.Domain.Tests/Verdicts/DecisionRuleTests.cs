@@ -169,6 +169,16 @@ public sealed class DecisionRuleTests
     }
 
     [Fact]
+    public void TheWorksheetsGuardedHold_IsTheShortestHoldTheCheckPassesUnderGuarded()
+    {
+        // held = 3600 + 2 (0.005 held + 0.010) / √3: held (1 - 0.0057735) = 3600.01155, held = 3620.917 s by hand.
+        var hold = TripJudge.GuardedHold(Seconds.Of(3600), TimerOnly);
+        Assert.Equal(3620.917, hold.Value, 3);
+        Assert.Equal(Verdict.Pass, Under(DecisionRule.Guarded, 18.08, Math.Ceiling(hold.Value), TimerOnly, held: true).Verdict);
+        Assert.Equal(Verdict.NotAssessable, Under(DecisionRule.Guarded, 18.08, Math.Floor(hold.Value), TimerOnly, held: true).Verdict);
+    }
+
+    [Fact]
     public void TheRulesAndStatementsHaveOneCodeEach()
     {
         Assert.Equal(["simple", "guarded", "non-binary"], TextCodes.DecisionRule.All);
