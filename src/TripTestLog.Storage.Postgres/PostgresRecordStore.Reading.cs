@@ -14,8 +14,11 @@ public sealed partial class PostgresRecordStore : ITripSource
 {
     private static readonly string OnlyTag = $"WHERE @tag IS NULL OR {ServerSql.TagKey("d.asset_tag")} = {ServerSql.TagKey("@tag")}";
 
-    private static readonly string TripsInDeviceOrder =
-        $"SELECT {StoredColumns.Trips}, {TestTime("t")} FROM devices d JOIN trip_tests t ON t.device_id = d.id {OnlyTag} "
+    private static readonly string TripsInDeviceOrder = Trips(OnlyTag);
+
+    // The trip query for the devices <paramref name="filter"/> (a WHERE clause) picks, by device and then test time.
+    private static string Trips(string filter) =>
+        $"SELECT {StoredColumns.Trips}, {TestTime("t")} FROM devices d JOIN trip_tests t ON t.device_id = d.id {filter} "
         + "ORDER BY d.asset_tag, t.tested_at, t.source_file_id, t.source_line";
 
     private static readonly string ContactsInDeviceOrder =
@@ -39,7 +42,7 @@ public sealed partial class PostgresRecordStore : ITripSource
             $"SELECT d.asset_tag, {ServerSql.RegisterSelect("r")} FROM device_revisions r JOIN devices d ON d.id = r.device_id {PeerDevices} ORDER BY d.asset_tag, r.id", tag);
         var rows = new StoredRows(SourceFileNames(revisions.Connection!), r => ServerRows.TestedAt(r, 1, r.FieldCount - 2));
         using var entries = revisions.ExecuteReader();
-        using var trips = new TagStream<StoredTrip>(snapshot.Query(TripsInDeviceOrder.Replace(OnlyTag, PeerDevices, StringComparison.Ordinal), tag), rows.Trip);
+        using var trips = new TagStream<StoredTrip>(snapshot.Query(Trips(PeerDevices), tag), rows.Trip);
         foreach (var device in DeviceWalk.Merge(entries, trips, null, null))
         {
             yield return device;

@@ -18,10 +18,12 @@ public sealed partial class RecordStore : ITripSource
     /// fixes the join order (SQLite keeps it as written), so devices are walked by their asset-tag index, each device's
     /// tests are found by IX_trip_tests_device and only they are sorted by time: never a sort of the whole table.
     /// </summary>
-    internal const string TripsInDeviceOrder =
-        "SELECT " + StoredColumns.Trips + " FROM devices d CROSS JOIN trip_tests t ON t.device_id = d.id "
-        + "WHERE $tag IS NULL OR d.asset_tag = $tag COLLATE NOCASE "
-        + "ORDER BY d.asset_tag, t.tested_at, t.source_file_id, t.source_line";
+    internal const string TripsInDeviceOrder = TripsOf + "$tag IS NULL OR d.asset_tag = $tag COLLATE NOCASE " + TripOrder;
+
+    // The trip query's parts around its device filter: PeersOf reads the same rows in the same order for other devices.
+    private const string TripsOf = "SELECT " + StoredColumns.Trips + " FROM devices d CROSS JOIN trip_tests t ON t.device_id = d.id WHERE ";
+
+    private const string TripOrder = "ORDER BY d.asset_tag, t.tested_at, t.source_file_id, t.source_line";
 
     /// <summary>Contact readings by device, then test time: found by their (device_id, tested_at) index, as the trips are.</summary>
     internal const string ContactsInDeviceOrder =
@@ -47,7 +49,7 @@ public sealed partial class RecordStore : ITripSource
             + $"FROM device_revisions r JOIN devices d ON d.id = r.device_id WHERE {PeerDevices} ORDER BY d.asset_tag, r.id", tag);
         var rows = new StoredRows(SourceFileNames(), r => TestedAt.Parse(r.GetString(1)));
         using var entries = revisions.ExecuteReader();
-        using var trips = new TagStream<StoredTrip>(TagQuery(TripsInDeviceOrder.Replace("$tag IS NULL OR d.asset_tag = $tag COLLATE NOCASE", PeerDevices, StringComparison.Ordinal), tag), rows.Trip);
+        using var trips = new TagStream<StoredTrip>(TagQuery($"{TripsOf}{PeerDevices} {TripOrder}", tag), rows.Trip);
         foreach (var device in DeviceWalk.Merge(entries, trips, null, null))
         {
             yield return device;

@@ -66,7 +66,7 @@ internal static class ContactRules
             if (asFound)
             {
                 TestCurrent(device, session, ledger, policy);
-                Instrument(session, ledger, policy, instruments);
+                SessionInstrument.Judge("contact", session[0].Tag, session[0].At, [.. session.Select(p => (p.Instrument, (IEnumerable<RecordSource>)p.Sources))], ledger, policy, instruments);
             }
         }
     }
@@ -175,25 +175,6 @@ internal static class ContactRules
             Limit = new Reading(least, ReadingUnit.Amperes),
             Policy = PolicyFile.Setting(policy, setting),
             RestsOn = [.. low.SelectMany(p => p.Sources)],
-        });
-    }
-
-    private static void Instrument(List<PoleResult> session, FindingLedger ledger, FindingPolicy policy, InstrumentRegister instruments)
-    {
-        var at = session[0].At;
-        var untraced = session.Select(p => (p, u: instruments.Trace(p.Instrument, at.Date, policy.RequireRegisteredInstruments))).FirstOrDefault(x => x.u is not null);
-        if (untraced.u is null)
-        {
-            ledger.Clear("instrument|contact", at, "contact test with a traceable instrument");
-            return;
-        }
-
-        ledger.Raise("instrument|contact", new Finding(untraced.u.Registered ? FindingKind.CalibrationLapsed : FindingKind.InstrumentUnregistered,
-            Severity.Investigate, session[0].Tag, at, "lab policy: every measurement is made with an instrument in calibration",
-            $"contact resistance tests on {at.Date:yyyy-MM-dd}: {untraced.u.Message}; confirm the instrument's accuracy or repeat the tests",
-            [.. session.SelectMany(p => p.Sources)])
-        {
-            Instrument = untraced.p.Instrument,
         });
     }
 

@@ -28,7 +28,8 @@ internal static class InsulationRules
             if (r.Stage == TestStage.AsFound && sessionAt != r.At)
             {
                 sessionAt = r.At;
-                Instrument([.. readings.Select(Result).Where(x => x.At == r.At && x.Stage == TestStage.AsFound)], ledger, policy, instruments);
+                var session = readings.Select(Result).Where(x => x.At == r.At && x.Stage == TestStage.AsFound).ToList();
+                SessionInstrument.Judge("insulation", session[0].Tag, session[0].At, [.. session.Select(p => (p.Instrument, (IEnumerable<RecordSource>)[p.Source]))], ledger, policy, instruments);
             }
 
             var device = history.InForceOn(r.At.Date);
@@ -84,28 +85,6 @@ internal static class InsulationRules
                 ledger.Confirm(subject, r.At, $"reading of path {r.Path} above the minimum");
             }
         }
-    }
-
-    // The insulation tester is judged as the other instruments are: a test session with an instrument out of
-    // calibration on the day (or unregistered, where the lab requires registered instruments) raises one finding; a
-    // later as-found session with a traceable tester closes it.
-    private static void Instrument(List<PathResult> session, FindingLedger ledger, FindingPolicy policy, Domain.Instruments.InstrumentRegister instruments)
-    {
-        var at = session[0].At;
-        var untraced = session.Select(p => (p, u: instruments.Trace(p.Instrument, at.Date, policy.RequireRegisteredInstruments))).FirstOrDefault(x => x.u is not null);
-        if (untraced.u is null)
-        {
-            ledger.Clear("instrument|insulation", at, "insulation test with a traceable instrument");
-            return;
-        }
-
-        ledger.Raise("instrument|insulation", new Finding(untraced.u.Registered ? FindingKind.CalibrationLapsed : FindingKind.InstrumentUnregistered,
-            Severity.Investigate, session[0].Tag, at, "lab policy: every measurement is made with an instrument in calibration",
-            $"insulation resistance tests on {at.Date:yyyy-MM-dd}: {untraced.u.Message}; confirm the instrument's accuracy or repeat the tests",
-            [.. session.Select(p => p.Source)])
-        {
-            Instrument = untraced.p.Instrument,
-        });
     }
 
     // insulation-test-voltage: a reading at a lower voltage than the table's says little about the insulation at the
