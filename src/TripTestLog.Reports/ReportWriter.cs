@@ -30,7 +30,7 @@ public sealed class ReportWriter : IDisposable
         _folder = folder;
         _context = context;
         _devicePages = devicePages;
-        _fleet = new FleetReport(30) { Models = new FleetModels(context.Policy, context.AsOf) };
+        _fleet = new FleetReport(30) { Models = new FleetModels(context.Policy, context.Instruments, context.AsOf) };
         Directory.CreateDirectory(Path.Combine(folder, "devices"));
         var writers = devicePages ? Math.Max(1, Environment.ProcessorCount) : 0;
         _waiting = devicePages ? new BlockingCollection<DeviceReport>(2 * writers) : null;

@@ -21,6 +21,10 @@ internal static class ContactRules
     internal sealed record PoleResult(AssetTag Tag, string Pole, TestedAt At, TestStage Stage, double Corrected, double Measured, bool TemperatureKnown,
         double TestCurrent, string Instrument, IReadOnlyList<RecordSource> Sources);
 
+    /// <summary>Whether a pole's reading came from an instrument traceable on the day under the lab's policy.</summary>
+    internal static bool Traceable(PoleResult pole, InstrumentRegister instruments, FindingPolicy policy) =>
+        UntraceableInTrend.Traceable(instruments, policy, pole.Instrument, pole.At.Date);
+
     /// <summary>The tests, each as its poles' results, in time order (as-found before as-left on a day).</summary>
     public static IEnumerable<List<PoleResult>> Sessions(IReadOnlyList<StoredMeasurement<ContactMeasurement>> readings) =>
         readings.GroupBy(r => (r.Measurement.TestedAt.Date, r.Measurement.Stage))
@@ -89,6 +93,7 @@ internal static class ContactRules
             $"decision rule {TextCodes.DecisionRule.Of(policy.DecisionRule)} (ILAC-G8): a reading within the guard band of its limit is not a confident decision",
             Invariant($"pole {pole.Pole} reads {pole.Corrected:0.#} µΩ against the limit of {limit.Value:0} µΩ, within the guard band of {guard:0.##} µΩ (U = {expanded:0.##} µΩ; {accuracy.Words(false, false, true, false)}): retest with a more accurate instrument"))
             with { Value = new Reading(pole.Corrected, ReadingUnit.MicroOhms), Limit = new Reading(limit.Value, ReadingUnit.MicroOhms), Instrument = pole.Instrument,
+                Measured = MeasuredOf(pole), Correction = CorrectionOf(pole),
                 Policy = PolicyFile.Setting(policy, "decision_rule") });
         if (within && !over && policy.DecisionRule == Domain.Verdicts.DecisionRule.Guarded)
         {
@@ -100,7 +105,8 @@ internal static class ContactRules
         {
             ledger.Raise(subject, Make(FindingKind.ContactOverLimit, Severity.Act, pole.At, pole, "the maker's contact resistance limit (register contact_limit_uohm)",
                 Invariant($"pole {pole.Pole} reads {Describe(pole)}, over the limit of {limit.Value:0} µΩ; clean and re-torque the terminations or replace the breaker"))
-                with { Value = new Reading(pole.Corrected, ReadingUnit.MicroOhms), Limit = new Reading(limit.Value, ReadingUnit.MicroOhms) });
+                with { Value = new Reading(pole.Corrected, ReadingUnit.MicroOhms), Limit = new Reading(limit.Value, ReadingUnit.MicroOhms),
+                    Measured = MeasuredOf(pole), Correction = CorrectionOf(pole) });
         }
         else
         {
@@ -183,7 +189,7 @@ internal static class ContactRules
     /// <paramref name="window"/> (the due date before any forecast); the text names <paramref name="due"/>, the device's one due date.
     /// </summary>
     public static void TrendLimit(DeviceHistory history, IReadOnlyList<StoredMeasurement<ContactMeasurement>> readings, FindingLedger ledger,
-        FindingPolicy policy, DateOnly window, DateOnly due, DateOnly asOf)
+        FindingPolicy policy, InstrumentRegister instruments, DateOnly window, DateOnly due, DateOnly asOf)
     {
         if (history.Latest.ContactLimit is not { } limit)
         {
@@ -196,8 +202,10 @@ internal static class ContactRules
             // Readings since the pole's last as-left test: a repair starts a new trend.
             var list = pole.ToList();
             var repaired = list.FindLastIndex(p => p.Stage == TestStage.AsLeft);
-            var found = list.Skip(repaired + 1).Where(p => p.Stage == TestStage.AsFound).ToList();
-            if (found.Select(p => p.At.Date).Distinct().Count() < policy.TrendMinimumTests || found[^1].Corrected > limit.Value)
+            var since = list.Skip(repaired + 1).Where(p => p.Stage == TestStage.AsFound).ToList();
+            var found = UntraceableInTrend.Kept(since, p => Traceable(p, instruments, policy), policy);
+            var untraceable = since.Count(p => !Traceable(p, instruments, policy));
+            if (found.Count == 0 || found.Select(p => p.At.Date).Distinct().Count() < policy.TrendMinimumTests || found[^1].Corrected > limit.Value)
             {
                 continue;
             }
@@ -215,14 +223,18 @@ internal static class ContactRules
             ledger.Add(Make(FindingKind.ContactTrendLimit, uncertain ? Severity.Investigate : Severity.Plan, last.At, last,
                 $"Theil–Sen trend (Sen 1968) of {line.Count} as-found tests against the maker's limit",
                 Forecast.Text(Invariant($"pole {last.Pole}'s readings rise {line.Slope:0} µΩ a year towards the limit of {limit.Value:0} µΩ"), "passed it", on, due, asOf,
-                    uncertain ? "the readings scatter too much for the date to be trusted: retest sooner" : "plan cleaning and re-torquing before then")) with
+                    uncertain ? "the readings scatter too much for the date to be trusted: retest sooner" : "plan cleaning and re-torquing before then")
+                    + UntraceableInTrend.Note(untraceable, found.Count, policy)) with
             {
                 Value = new Reading(last.Corrected, ReadingUnit.MicroOhms),
+                Measured = MeasuredOf(last),
+                Correction = CorrectionOf(last),
                 Limit = new Reading(limit.Value, ReadingUnit.MicroOhms),
                 Policy = $"{PolicyFile.Setting(policy, "trend_min_tests")}; {PolicyFile.Setting(policy, "contact_trend_scatter_percent")}",
                 ForecastOn = on,
                 Trend = line,
                 RestsOn = [.. found.SelectMany(p => p.Sources)],
+                UntraceableReadings = untraceable == 0 ? null : untraceable,
             });
         }
     }
@@ -241,6 +253,13 @@ internal static class ContactRules
 
     private static Finding Make(FindingKind kind, Severity severity, TestedAt at, PoleResult pole, string basis, string message) =>
         new(kind, severity, pole.Tag, at, basis, pole.Stage == TestStage.AsLeft ? "as-left: " + message : message, pole.Sources) { Pole = pole.Pole };
+
+    /// <summary>The copper rule contact readings are referred to 20 °C by (a fixed rule, not lab policy).</summary>
+    public const string CopperRule = "copper, 0.00393 per K (IEC 60228)";
+
+    private static Reading MeasuredOf(PoleResult pole) => new(pole.Measured, ReadingUnit.MicroOhms);
+
+    private static string? CorrectionOf(PoleResult pole) => pole.TemperatureKnown ? CopperRule : null;
 
     private static string Describe(PoleResult pole) => pole.TemperatureKnown
         ? Invariant($"{pole.Corrected:0} µΩ at 20 °C ({pole.Measured:0} µΩ as measured)")

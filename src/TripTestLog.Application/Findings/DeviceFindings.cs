@@ -25,7 +25,7 @@ internal static class DeviceFindings
         PeerRule.Apply(points, peers, ledger, policy);
         ContactRules.States(history, device.Contacts, ledger, policy, instruments);
         InsulationRules.States(history, device.Insulation, ledger, policy, instruments);
-        InsulationRules.Falling(history, device.Insulation, ledger, policy, asOf);
+        InsulationRules.Falling(history, device.Insulation, ledger, policy, instruments, asOf);
 
         var last = LastTested(device);
         var window = DueOn(device, last, GradeOf(ledger.All(), last), policy, asOf);
@@ -34,7 +34,7 @@ internal static class DeviceFindings
         // device's one due date, which their text then names: a first pass finds them, the second writes them.
         var trial = new FindingLedger();
         TripRules.TrendExit(points, trial, policy, window, window, asOf);
-        ContactRules.TrendLimit(history, device.Contacts, trial, policy, window, window, asOf);
+        ContactRules.TrendLimit(history, device.Contacts, trial, policy, instruments, window, window, asOf);
         var grade = GradeOf([.. ledger.All(), .. trial.All()], last);
         var due = DueOn(device, last, grade, policy, asOf);
         if (Forecast.AnyPast([.. ledger.All(), .. trial.All()], asOf) && due > asOf)
@@ -43,7 +43,7 @@ internal static class DeviceFindings
         }
 
         TripRules.TrendExit(points, ledger, policy, window, due, asOf);
-        ContactRules.TrendLimit(history, device.Contacts, ledger, policy, window, due, asOf);
+        ContactRules.TrendLimit(history, device.Contacts, ledger, policy, instruments, window, due, asOf);
         if (due < asOf || (grade == ConditionGrade.Untested && due == asOf))
         {
             ledger.Add(Overdue(device, policy, grade, last, due, asOf));

@@ -66,6 +66,18 @@ public sealed record Finding(
 
     /// <summary>What changed its standing: the later test that closed it, or the as-left test that confirms a repair.</summary>
     public string? Standing { get; init; }
+
+    /// <summary>
+    /// For a value referred to a reference temperature, the reading as measured, in the value's unit; null where the
+    /// value is not a corrected reading.
+    /// </summary>
+    public Reading? Measured { get; init; }
+
+    /// <summary>The rule that referred <see cref="Value"/> to its reference temperature, as "key = value" or in words.</summary>
+    public string? Correction { get; init; }
+
+    /// <summary>For a trend, how many of the readings it rests on (or that were left out) came from an untraceable instrument.</summary>
+    public int? UntraceableReadings { get; init; }
 }
 
 /// <summary>Where a stored record came from.</summary>

@@ -71,6 +71,15 @@ public sealed record FindingPolicy
     /// <summary>insulation-below-minimum: the table of minimums (default: the ANSI/NETA maintenance table).</summary>
     public InsulationTable InsulationTable { get; init; } = InsulationTable.NetaMaintenance;
 
+    /// <summary>
+    /// How insulation readings are referred to 20 °C (default: halving per 10 K, common practice); see
+    /// <see cref="Domain.Condition.InsulationCorrection"/> for each rule and where it comes from.
+    /// </summary>
+    public InsulationCorrectionRule InsulationCorrection { get; init; } = InsulationCorrectionRule.HalvingPer10K;
+
+    /// <summary>What trends and charts do with readings from an instrument not traceable on the day (default: mark them).</summary>
+    public UntraceableReadings UntraceableReadings { get; init; } = UntraceableReadings.Mark;
+
     /// <summary>insulation-falling: a trend falling faster than this, in per cent a year (lab policy: 20).</summary>
     public double InsulationFallPercentPerYear { get; init; } = 20;
 

@@ -1,3 +1,5 @@
+using TripTestLog.Domain.Condition;
+using TripTestLog.Domain.Instruments;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Trends;
 
@@ -9,7 +11,7 @@ namespace TripTestLog.Application.Findings;
 /// its 95 % Wilson score interval (Wilson 1927), and the mean rise of contact resistance per year. Holds one counter row
 /// per group, however large the fleet.
 /// </summary>
-public sealed class FleetModels(FindingPolicy policy, DateOnly asOf)
+public sealed class FleetModels(FindingPolicy policy, InstrumentRegister instruments, DateOnly asOf)
 {
     private readonly SortedDictionary<(string Make, string Model), Counts> _models = [];
     private readonly SortedDictionary<int, Counts> _ages = [];
@@ -97,10 +99,12 @@ public sealed class FleetModels(FindingPolicy policy, DateOnly asOf)
         age.Add(tested, failed, rise);
     }
 
-    // The device's rise: for each pole, (latest - first as-found reading at 20 °C) over the years between, averaged over its poles.
-    private static double? Rise(DeviceReport report)
+    // The device's rise: for each pole, (latest - first as-found reading at 20 °C) over the years between, averaged over its
+    // poles; readings from an untraceable instrument are left out where the lab policy leaves them out of trends.
+    private double? Rise(DeviceReport report)
     {
-        var poles = ReadingHistory.Contacts(report.Records.Contacts).Where(p => p.Stage == TestStage.AsFound).GroupBy(p => p.Pole)
+        var poles = ReadingHistory.Contacts(report.Records.Contacts, policy, instruments)
+            .Where(p => p.Stage == TestStage.AsFound && (p.Traceable || policy.UntraceableReadings == UntraceableReadings.Mark)).GroupBy(p => p.Pole)
             .Select(g => (First: g.First(), Last: g.Last()))
             .Where(x => x.Last.Date > x.First.Date)
             .Select(x => (x.Last.CorrectedMicroOhms - x.First.CorrectedMicroOhms) / ((x.Last.Date.DayNumber - x.First.Date.DayNumber) / 365.25))

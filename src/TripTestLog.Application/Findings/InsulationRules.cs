@@ -10,25 +10,30 @@ using TripTestLog.Domain.Trends;
 namespace TripTestLog.Application.Findings;
 
 /// <summary>
-/// The findings a device's insulation readings raise. Each reading is referred to 20 °C by the halving-per-10-K rule
-/// where a temperature is recorded; an over-range reading ('&gt;') counts as at least its value, so it never falls below a minimum.
+/// The findings a device's insulation readings raise. Each reading is referred to 20 °C by the lab policy's rule
+/// (<see cref="FindingPolicy.InsulationCorrection"/>) where a temperature is recorded; an over-range reading ('&gt;') counts as at least its value, so it never falls below a minimum.
 /// </summary>
 internal static class InsulationRules
 {
     internal sealed record PathResult(AssetTag Tag, string Path, TestedAt At, TestStage Stage, double Corrected, double Measured, bool OverRange,
-        bool TemperatureKnown, double TestVoltage, RecordSource Source, string Instrument);
+        double? Celsius, double TestVoltage, RecordSource Source, string Instrument, bool Traceable)
+    {
+        /// <summary>Whether a temperature was recorded, so the reading was referred to 20 °C.</summary>
+        public bool TemperatureKnown => Celsius is not null;
+    }
 
     /// <summary>insulation-below-minimum, the test voltage and the tester's calibration, test by test.</summary>
     public static void States(DeviceHistory history, IReadOnlyList<StoredMeasurement<InsulationMeasurement>> readings, FindingLedger ledger, FindingPolicy policy,
         Domain.Instruments.InstrumentRegister instruments)
     {
         var sessionAt = (TestedAt?)null;
-        foreach (var r in readings.Select(Result).OrderBy(r => r.At).ThenBy(r => r.Stage))
+        var results = Results(readings, policy, instruments).ToList();
+        foreach (var r in results)
         {
             if (r.Stage == TestStage.AsFound && sessionAt != r.At)
             {
                 sessionAt = r.At;
-                var session = readings.Select(Result).Where(x => x.At == r.At && x.Stage == TestStage.AsFound).ToList();
+                var session = results.Where(x => x.At == r.At && x.Stage == TestStage.AsFound).ToList();
                 SessionInstrument.Judge("insulation", session[0].Tag, session[0].At, [.. session.Select(p => (p.Instrument, (IEnumerable<RecordSource>)[p.Source]))], ledger, policy, instruments);
             }
 
@@ -54,6 +59,8 @@ internal static class InsulationRules
                 Value = new Reading(r.Corrected, ReadingUnit.MegaOhms),
                 Limit = new Reading(row.Minimum.Value, ReadingUnit.MegaOhms),
                 Policy = PolicyFile.Setting(policy, "decision_rule"),
+                Measured = MeasuredOf(r),
+                Correction = CorrectionOf(r, policy),
             });
             if (within && !below && policy.DecisionRule == Domain.Verdicts.DecisionRule.Guarded)
             {
@@ -67,13 +74,15 @@ internal static class InsulationRules
                     ? Invariant($" (tested at {r.TestVoltage:0} V DC; the table's minimum assumes {row.TestVoltage.Value:0} V DC)")
                     : "";
                 ledger.Raise(subject, new Finding(FindingKind.InsulationBelowMinimum, Severity.Act, r.Tag, r.At, row.Source,
-                    Invariant($"{(r.Stage == TestStage.AsLeft ? "as-left: " : "")}path {r.Path} reads {Describe(r)}, below the minimum of {ResistanceText.MegaOhms(row.Minimum.Value)} for a {device.RatedVoltage.Value:0} V breaker{voltage}; find and remove the cause (moisture, dirt, damage) before returning it to service"),
+                    Invariant($"{(r.Stage == TestStage.AsLeft ? "as-left: " : "")}path {r.Path} reads {Describe(r, policy)}, below the minimum of {ResistanceText.MegaOhms(row.Minimum.Value)} for a {device.RatedVoltage.Value:0} V breaker{voltage}; find and remove the cause (moisture, dirt, damage) before returning it to service"),
                     [r.Source])
                 {
                     Path = r.Path,
                     Value = new Reading(r.Corrected, ReadingUnit.MegaOhms),
                     Limit = new Reading(row.Minimum.Value, ReadingUnit.MegaOhms),
                     Policy = PolicyFile.Setting(policy, "insulation_table"),
+                    Measured = MeasuredOf(r),
+                    Correction = CorrectionOf(r, policy),
                 });
             }
             else if (r.Stage == TestStage.AsFound)
@@ -96,7 +105,7 @@ internal static class InsulationRules
         if (r.TestVoltage < row.TestVoltage.Value)
         {
             ledger.Raise(subject, new Finding(FindingKind.InsulationTestVoltage, Severity.Investigate, r.Tag, r.At, row.Source,
-                Invariant($"{(r.Stage == TestStage.AsLeft ? "as-left: " : "")}path {r.Path} was tested at {r.TestVoltage:0} V DC; the table asks {row.TestVoltage.Value:0} V DC for a {device.RatedVoltage.Value:0} V breaker, so its reading ({Describe(r)}) does not show the insulation sound at that voltage; retest at {row.TestVoltage.Value:0} V DC"),
+                Invariant($"{(r.Stage == TestStage.AsLeft ? "as-left: " : "")}path {r.Path} was tested at {r.TestVoltage:0} V DC; the table asks {row.TestVoltage.Value:0} V DC for a {device.RatedVoltage.Value:0} V breaker, so its reading ({Describe(r, policy)}) does not show the insulation sound at that voltage; retest at {row.TestVoltage.Value:0} V DC"),
                 [r.Source])
             {
                 Path = r.Path,
@@ -117,11 +126,13 @@ internal static class InsulationRules
 
     /// <summary>insulation-falling: a Theil–Sen line through a path's log readings falls faster than the policy allows, clearly beyond their scatter.</summary>
     public static void Falling(DeviceHistory history, IReadOnlyList<StoredMeasurement<InsulationMeasurement>> readings, FindingLedger ledger, FindingPolicy policy,
-        DateOnly asOf)
+        Domain.Instruments.InstrumentRegister instruments, DateOnly asOf)
     {
-        foreach (var path in readings.Select(Result).Where(r => r.Stage == TestStage.AsFound).GroupBy(r => r.Path))
+        foreach (var path in Results(readings, policy, instruments).Where(r => r.Stage == TestStage.AsFound).GroupBy(r => r.Path))
         {
-            var list = path.OrderBy(r => r.At).ToList();
+            var all = path.OrderBy(r => r.At).ToList();
+            var list = UntraceableInTrend.Kept(all, r => r.Traceable, policy);
+            var untraceable = all.Count(r => !r.Traceable);
             if (list.Select(r => r.At.Date).Distinct().Count() < policy.TrendMinimumTests)
             {
                 continue;
@@ -147,14 +158,15 @@ internal static class InsulationRules
             var reach = row is null ? null : line.Reaches(Math.Log10(row.Minimum.Value));
             var forecast = reach is { } year && year <= line.LastYear + policy.ForecastHorizonYears ? TrendPoint.DateOf(year) : (DateOnly?)null;
             ledger.Add(new Finding(FindingKind.InsulationFalling, Severity.Plan, last.Tag, last.At,
-                $"Theil–Sen trend (Sen 1968) of {line.Count} as-found readings referred to 20 °C (halving per 10 K rule)",
+                $"Theil–Sen trend (Sen 1968) of {line.Count} as-found readings referred to 20 °C ({Setting(policy)})",
                 Invariant($"path {last.Path} falls about {fall:0}% a year ({ResistanceText.Number(list[0].Corrected, null)} to {ResistanceText.MegaOhms(last.Corrected)} at 20 °C since {list[0].At.Date:yyyy-MM-dd})")
                     + (forecast is { } on
                         ? on < asOf
                             ? Invariant($" and has probably fallen below the minimum of {ResistanceText.MegaOhms(row!.Minimum.Value)} since about {on:yyyy-MM-dd} (judged on {asOf:yyyy-MM-dd}): test it now")
                             : Invariant($" and would reach the minimum of {ResistanceText.MegaOhms(row!.Minimum.Value)} about {on:yyyy-MM-dd}")
                         : "")
-                    + "; look for moisture, contamination or tracking",
+                    + "; look for moisture, contamination or tracking"
+                    + UntraceableInTrend.Note(untraceable, list.Count, policy),
                 [.. list.Select(r => r.Source)])
             {
                 Path = last.Path,
@@ -163,24 +175,39 @@ internal static class InsulationRules
                 Policy = PolicyFile.Setting(policy, "insulation_fall_percent_per_year"),
                 ForecastOn = forecast,
                 Trend = line,
+                Measured = MeasuredOf(last),
+                Correction = CorrectionOf(last, policy),
+                UntraceableReadings = untraceable == 0 ? null : untraceable,
             });
         }
     }
 
-    /// <summary>Every reading referred to 20 °C, in time order (as-found before as-left on a day).</summary>
-    public static IEnumerable<PathResult> Results(IReadOnlyList<StoredMeasurement<InsulationMeasurement>> readings) =>
-        readings.Select(Result).OrderBy(r => r.At).ThenBy(r => r.Stage).ThenBy(r => r.Path, StringComparer.Ordinal);
+    /// <summary>Every reading referred to 20 °C under the lab policy, in time order (as-found before as-left on a day).</summary>
+    public static IEnumerable<PathResult> Results(IReadOnlyList<StoredMeasurement<InsulationMeasurement>> readings, FindingPolicy policy,
+        Domain.Instruments.InstrumentRegister instruments) =>
+        readings.Select(r => Result(r, policy, instruments)).OrderBy(r => r.At).ThenBy(r => r.Stage).ThenBy(r => r.Path, StringComparer.Ordinal);
 
-    private static PathResult Result(StoredMeasurement<InsulationMeasurement> stored)
+    /// <summary>The policy setting that names the correction rule: "insulation_correction = halving-10k".</summary>
+    public static string Setting(FindingPolicy policy) => PolicyFile.Setting(policy, "insulation_correction");
+
+    private static PathResult Result(StoredMeasurement<InsulationMeasurement> stored, FindingPolicy policy, Domain.Instruments.InstrumentRegister instruments)
     {
         var m = stored.Measurement;
-        var corrected = m.Temperature is { } t ? InsulationCorrection.ToTwentyCelsius(m.Resistance.Value, t).Value : m.Resistance.Value.Value;
-        return new PathResult(m.Tag, m.Path, m.TestedAt, m.Stage, corrected, m.Resistance.Value.Value, m.Resistance.OverRange, m.Temperature is not null,
-            m.TestVoltage.Value, new RecordSource(stored.SourceFile, stored.SourceLine), m.Instrument);
+        var corrected = m.Temperature is { } t
+            ? InsulationCorrection.ToTwentyCelsius(m.Resistance.Value, t, policy.InsulationCorrection).Value
+            : m.Resistance.Value.Value;
+        return new PathResult(m.Tag, m.Path, m.TestedAt, m.Stage, corrected, m.Resistance.Value.Value, m.Resistance.OverRange, m.Temperature?.Value,
+            m.TestVoltage.Value, new RecordSource(stored.SourceFile, stored.SourceLine), m.Instrument,
+            UntraceableInTrend.Traceable(instruments, policy, m.Instrument, m.TestedAt.Date));
     }
 
-    private static string Describe(PathResult r) => r.TemperatureKnown
-        ? Invariant($"{ResistanceText.MegaOhms(r.Corrected)} at 20 °C ({ResistanceText.MegaOhms(r.Measured)} as measured)")
+    private static Reading MeasuredOf(PathResult r) => new(r.Measured, ReadingUnit.MegaOhms);
+
+    // A reading with no temperature is not corrected, so no rule applies to it.
+    private static string? CorrectionOf(PathResult r, FindingPolicy policy) => r.TemperatureKnown ? Setting(policy) : null;
+
+    private static string Describe(PathResult r, FindingPolicy policy) => r.Celsius is { } c
+        ? Invariant($"{ResistanceText.MegaOhms(r.Corrected)} at 20 °C ({ResistanceText.MegaOhms(r.Measured)} as measured at {c:0.#} °C; {Setting(policy)})")
         : Invariant($"{ResistanceText.MegaOhms(r.Measured)} (no temperature recorded: not corrected)");
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);

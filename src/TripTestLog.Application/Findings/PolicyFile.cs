@@ -51,6 +51,14 @@ public static class PolicyFile
         new("insulation_table", "insulation-below-minimum: " + TextCodes.InsulationTable.Choices,
             p => TextCodes.InsulationTable.Of(p.InsulationTable),
             (p, v) => TextCodes.InsulationTable.TryParse(v, out var t) ? p with { InsulationTable = t } : null),
+        new("insulation_correction", "insulation readings referred to 20 °C by: " + TextCodes.InsulationCorrection.Choices
+                + " (halving-10k: halves per 10 K rise; solid-insulation: tenfold per 50 K, × 2.5 at 40 °C; none: as measured)",
+            p => TextCodes.InsulationCorrection.Of(p.InsulationCorrection),
+            (p, v) => TextCodes.InsulationCorrection.TryParse(v, out var c) ? p with { InsulationCorrection = c } : null),
+        new("untraceable_readings", "trends and charts: readings from an instrument not traceable on the day: "
+                + TextCodes.UntraceableReadings.Choices,
+            p => TextCodes.UntraceableReadings.Of(p.UntraceableReadings),
+            (p, v) => TextCodes.UntraceableReadings.TryParse(v, out var u) ? p with { UntraceableReadings = u } : null),
         Number("insulation_fall_percent_per_year", "insulation-falling: a trend falling faster than this (lab policy)",
             p => p.InsulationFallPercentPerYear, (p, v) => p with { InsulationFallPercentPerYear = v }, 1, 99),
         Number("ambient_note_kelvin", "ambient warning: a thermal verdict notes an ambient this far from its reference",

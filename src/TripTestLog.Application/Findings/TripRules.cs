@@ -249,7 +249,14 @@ internal static class TripRules
     {
         foreach (var (point, all) in points)
         {
-            var tests = SinceSettingsChanged(all);
+            var since = SinceSettingsChanged(all);
+            var tests = UntraceableInTrend.Kept(since, Traceable, policy);
+            var untraceable = since.Count(t => !Traceable(t));
+            if (tests.Count == 0)
+            {
+                continue;
+            }
+
             var last = tests[^1];
             var dates = tests.Select(t => t.Trip.Measurement.TestedAt.Date).Distinct().Count();
             if (dates < policy.TrendMinimumTests || last.Assessment.Verdict != Verdict.Pass)
@@ -286,7 +293,8 @@ internal static class TripRules
             ledger.Add(new Finding(FindingKind.TripTrendExit, uncertain ? Severity.Investigate : Severity.Plan, m.Tag, m.TestedAt,
                 $"Theil–Sen trend (Sen 1968) of {line.Count} as-found tests against {edge.Requirement}",
                 Forecast.Text(stem, "left the band", on, due, asOf,
-                    uncertain ? "the tests scatter too much for the date to be trusted: retest sooner" : "plan a service or replacement before then"),
+                    uncertain ? "the tests scatter too much for the date to be trusted: retest sooner" : "plan a service or replacement before then")
+                    + UntraceableInTrend.Note(untraceable, tests.Count, policy),
                 [.. tests.Select(Source)])
             {
                 Point = point.Label,
@@ -295,9 +303,14 @@ internal static class TripRules
                 Policy = $"{PolicyFile.Setting(policy, "trend_min_tests")}; {PolicyFile.Setting(policy, "trip_trend_scatter_band_percent")}",
                 ForecastOn = on,
                 Trend = line,
+                UntraceableReadings = untraceable == 0 ? null : untraceable,
             });
         }
     }
+
+    /// <summary>Whether the test's instrument was traceable on the day: the judge raised no instrument finding on it.</summary>
+    public static bool Traceable(JudgedTrip judged) =>
+        !judged.Findings.Any(f => f.Kind is FindingKind.CalibrationLapsed or FindingKind.InstrumentUnregistered);
 
     /// <summary>The device's comparable tests grouped by point (<see cref="TripPoint.Series"/>).</summary>
     public static IReadOnlyList<(TripPoint Point, List<JudgedTrip> Tests)> ByPoint(IReadOnlyList<JudgedTrip> trips) => TripPoint.Series(trips);

@@ -57,7 +57,7 @@ internal static class FleetCommand
         }
 
         var fleet = new FleetSummary(top);
-        var models = new FleetModels(options.Policy, options.AsOf);
+        var models = new FleetModels(options.Policy, store.Instruments(), options.AsOf);
         try
         {
             foreach (var report in FindingsPipeline.RunWithRecords(store, options.Policy, options.AsOf, options.Only, cli.Cancel))

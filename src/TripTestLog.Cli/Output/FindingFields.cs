@@ -45,6 +45,13 @@ internal static class FindingFields
         // Added later, so at the end: volts (insulation-test-voltage).
         ("value_v", (d, f) => f.Value is { Unit: ReadingUnit.Volts } v ? Math.Round(v.Amount, 4) : null),
         ("limit_v", (d, f) => f.Limit is { Unit: ReadingUnit.Volts } l ? Math.Round(l.Amount, 4) : null),
+
+        // Added later: a resistance value referred to 20 °C beside the reading as measured, the rule that referred it,
+        // and how many readings a trend took from an untraceable instrument.
+        ("measured_uohm", (d, f) => f.Measured is { Unit: ReadingUnit.MicroOhms } m ? Math.Round(m.Amount, 4) : null),
+        ("measured_mohm", (d, f) => f.Measured is { Unit: ReadingUnit.MegaOhms } m ? Math.Round(m.Amount, 4) : null),
+        ("correction", (d, f) => f.Correction),
+        ("untraceable_readings", (d, f) => f.UntraceableReadings is { } n ? (double)n : null),
     ];
 
     private static string? Date(DateOnly? date) => date?.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);

@@ -90,4 +90,13 @@ public static class TextCodes
     /// <summary>Insulation minimum tables a lab may choose.</summary>
     public static CodeBook<InsulationTable> InsulationTable { get; } = new("insulation table",
         (Condition.InsulationTable.NetaMaintenance, "neta"), (Condition.InsulationTable.Iec60364Installation, "iec60364-6"));
+
+    /// <summary>Rules that refer insulation readings to 20 °C.</summary>
+    public static CodeBook<InsulationCorrectionRule> InsulationCorrection { get; } = new("insulation correction",
+        (InsulationCorrectionRule.HalvingPer10K, "halving-10k"), (InsulationCorrectionRule.SolidInsulation, "solid-insulation"),
+        (InsulationCorrectionRule.None, "none"));
+
+    /// <summary>What a lab does with readings from an instrument not traceable on the day, in trends and charts.</summary>
+    public static CodeBook<UntraceableReadings> UntraceableReadings { get; } = new("untraceable readings",
+        (Condition.UntraceableReadings.Mark, "mark"), (Condition.UntraceableReadings.Exclude, "exclude"));
 }

@@ -44,6 +44,25 @@ internal static class ChartStyle
         points.LegendText = TimeCurrentChart.Legend(kind);
     }
 
+    /// <summary>
+    /// Rings each reading taken with an instrument not traceable on the day with a large open diamond, over whatever mark
+    /// the reading already has, so the mark survives a black-and-white print.
+    /// </summary>
+    public static void AddUntraceable(Plot plot, IReadOnlyList<(double X, double Y)> points)
+    {
+        if (points.Count == 0)
+        {
+            return;
+        }
+
+        var rings = plot.Add.ScatterPoints(points.Select(p => p.X).ToArray(), points.Select(p => p.Y).ToArray());
+        rings.MarkerShape = MarkerShape.OpenDiamond;
+        rings.MarkerSize = 18;
+        rings.MarkerLineWidth = 1.5f;
+        rings.Color = Trend;
+        rings.LegendText = "instrument not traceable";
+    }
+
     /// <summary>A plot with the shipped font and a white background.</summary>
     public static Plot NewPlot()
     {

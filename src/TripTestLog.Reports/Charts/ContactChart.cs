@@ -58,6 +58,7 @@ internal static class ContactChart
             }
         }
 
+        ChartStyle.AddUntraceable(plot, [.. readings.Where(r => !r.Traceable).Select(r => (TrendPoint.YearOf(r.Date), r.CorrectedMicroOhms))]);
         if (limitMicroOhms is { } limit)
         {
             var line = plot.Add.HorizontalLine(limit);

@@ -11,7 +11,7 @@ namespace TripTestLog.Reports.Charts;
 internal static class DriftChart
 {
     /// <summary>One test on the chart.</summary>
-    internal sealed record Point(double Year, double Seconds, MarkKind Kind);
+    internal sealed record Point(double Year, double Seconds, MarkKind Kind, bool Traceable = true);
 
     public static Plot Build(string title, IReadOnlyList<Point> tests, double? minimumSeconds, double? maximumSeconds, Finding? exit)
     {
@@ -33,6 +33,8 @@ internal static class DriftChart
         {
             ChartStyle.AddMarks(plot, group.Key, [.. group.Select(t => t.Year)], [.. group.Select(t => Math.Log10(t.Seconds))]);
         }
+
+        ChartStyle.AddUntraceable(plot, [.. tests.Where(t => !t.Traceable).Select(t => (t.Year, Math.Log10(t.Seconds)))]);
 
         if (exit?.Trend is { } trend && exit.ForecastOn is { } date)
         {

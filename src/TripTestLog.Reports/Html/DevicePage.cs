@@ -29,9 +29,9 @@ internal static class DevicePage
         Register(html, report);
         Chart(html, report);
         Trips(html, report.Trips, context);
-        Drift(html, report);
-        Contacts(html, report);
-        Insulation(html, report);
+        Drift(html, report, context);
+        Contacts(html, report, context);
+        Insulation(html, report, context);
         Findings(html, condition);
         SignOff(html, report, context);
         html.Append("</section>\n");
@@ -116,7 +116,7 @@ internal static class DevicePage
         }), "trips");
     }
 
-    private static void Drift(StringBuilder html, DeviceReport report)
+    private static void Drift(StringBuilder html, DeviceReport report, ReportContext context)
     {
         var points = TripPoint.Series(report.Trips).Where(p => p.Tests.Select(t => t.Trip.Measurement.TestedAt.Date).Distinct().Count() >= 2).ToList();
         html.Append("<h2>Trip drift at each test point</h2>\n");
@@ -132,16 +132,29 @@ internal static class DevicePage
             var band = tests[^1].Assessment.Band;
             var exit = report.Condition.Open.FirstOrDefault(f => f.Kind == FindingKind.TripTrendExit && f.Point == point.Label);
             var chart = DriftChart.Build(point.Label, [.. tests.Select(t => new DriftChart.Point(TrendPoint.YearOf(t.Trip.Measurement.TestedAt.Date),
-                t.Trip.Measurement.Outcome.Time.Value, TimeCurrentChart.KindOf(t)))], band.Minimum.Limit?.Value, band.Maximum.Limit?.Value, exit);
+                t.Trip.Measurement.Outcome.Time.Value, TimeCurrentChart.KindOf(t), ReadingHistory.Traceable(t)))], band.Minimum.Limit?.Value, band.Maximum.Limit?.Value, exit);
             html.Append("<figure>").Append(ChartStyle.Svg(chart, 400, 260)).Append("</figure>");
         }
 
         html.Append("</div>\n");
+        if (points.Any(p => p.Tests.Any(t => !ReadingHistory.Traceable(t))))
+        {
+            html.Append("<p class=\"small\">").Append(H(UntraceableCaption(context))).Append("</p>\n");
+        }
     }
 
-    private static void Contacts(StringBuilder html, DeviceReport report)
+    // The chart mark for a reading from an instrument not traceable on the day, and what the trends did with it.
+    private static string UntraceableCaption(ReportContext context) =>
+        "Ringed with a diamond: a reading from an instrument not traceable on the day (out of calibration, or not registered where the lab "
+        + (context.Policy.UntraceableReadings == Domain.Condition.UntraceableReadings.Exclude
+            ? "requires it); it is left out of every trend line (" : "requires it); it still counts in the trend lines (")
+        + UntraceableInTrendSetting(context) + ").";
+
+    private static string UntraceableInTrendSetting(ReportContext context) => PolicyFile.Setting(context.Policy, "untraceable_readings");
+
+    private static void Contacts(StringBuilder html, DeviceReport report, ReportContext context)
     {
-        var readings = ReadingHistory.Contacts(report.Records.Contacts).ToList();
+        var readings = ReadingHistory.Contacts(report.Records.Contacts, context.Policy, context.Instruments).ToList();
         html.Append("<h2>Contact resistance</h2>\n");
         if (readings.Count == 0)
         {
@@ -153,7 +166,8 @@ internal static class DevicePage
         var chart = ContactChart.Build(readings, report.Condition.Device.ContactLimit?.Value, forecasts);
         html.Append("<figure class=\"wide contact\">").Append(ChartStyle.Svg(chart)).Append("<figcaption>")
             .Append(H("Each pole's median reading at each test, referred to 20 °C for copper (IEC 60228, 0.00393 per K); dotted: each pole's first "
-                + "as-found reading; red: the maker's limit; dashed: a Theil–Sen trend to the date it reaches the limit."))
+                + "as-found reading; red: the maker's limit; dashed: a Theil–Sen trend to the date it reaches the limit."
+                + (readings.Any(r => !r.Traceable) ? " " + UntraceableCaption(context) : "")))
             .Append("</figcaption></figure>\n");
         Table(html, ["tested", "stage", "pole", "at 20 °C", "as measured", "readings", "test current"], readings.Select(r => new[]
         {
@@ -162,9 +176,9 @@ internal static class DevicePage
         }));
     }
 
-    private static void Insulation(StringBuilder html, DeviceReport report)
+    private static void Insulation(StringBuilder html, DeviceReport report, ReportContext context)
     {
-        var readings = ReadingHistory.Insulation(report.Records.Insulation).ToList();
+        var readings = ReadingHistory.Insulation(report.Records.Insulation, context.Policy, context.Instruments).ToList();
         html.Append("<h2>Insulation resistance</h2>\n");
         if (readings.Count == 0)
         {
@@ -172,10 +186,14 @@ internal static class DevicePage
             return;
         }
 
-        Table(html, ["tested", "stage", "path", "test voltage", "as measured", "at 20 °C (halving per 10 K)"], readings.Select(r => new[]
+        html.Append("<p class=\"small\">").Append(H($"Referred to 20 °C by the lab policy's rule: {ReadingHistory.InsulationCorrectionWords(context.Policy)}. "
+            + "A reading with no temperature is shown as measured.")).Append("</p>\n");
+        Table(html, ["tested", "stage", "path", "test voltage", "as measured", "temperature", "at 20 °C"], readings.Select(r => new[]
         {
             H(r.Date.ToString("yyyy-MM-dd")), H(TextCodes.Stage.Of(r.Stage)), H(r.Path), H(N(r.TestVoltageVolts, "0") + " V DC"),
-            H((r.OverRange ? ">" : "") + ResistanceText.MegaOhms(r.MeasuredMegaOhms)), H((r.OverRange ? ">" : "") + ResistanceText.MegaOhms(r.CorrectedMegaOhms)),
+            H((r.OverRange ? ">" : "") + ResistanceText.MegaOhms(r.MeasuredMegaOhms)) + (r.Traceable ? "" : "<br>" + Small("instrument not traceable")),
+            H(r.Celsius is { } c ? N(c, "0.#") + " °C" : "not recorded"),
+            H(r.Celsius is null ? "(not corrected)" : (r.OverRange ? ">" : "") + ResistanceText.MegaOhms(r.CorrectedMegaOhms)),
         }));
     }
 
