@@ -34,6 +34,31 @@ public sealed class ReportCommandTests(SampleFleetDatabase fleet) : IClassFixtur
         Assert.Equal(2239, File.ReadLines(Path.Combine(folder, "verdicts.csv")).Count() - 1);
     }
 
+    [Theory]
+    // ARW-DB1-Q07, path 1-E on 2021-03-05: 6518 MOhm read at 20.5 °C. Halving per 10 K (common practice): x 2^0.05 =
+    // 1.0353, 6748 MOhm at 20 °C. The solid-insulation columns (tenfold per 50 K, from memory): x 10^0.01 = 1.0233,
+    // 6670 MOhm. Three significant figures on the page.
+    [InlineData("halving-10k", "6750 MΩ", "halves for every 10 K rise")]
+    [InlineData("solid-insulation", "6670 MΩ", "tenfold for every 50 K rise")]
+    public void TheInsulationTable_ShowsTheReadingAsMeasured_ItsTemperature_AndTheValueByTheNamedRule(string rule, string at20, string words)
+    {
+        var folder = Path.Combine(fleet.Folder, "report-" + rule);
+        Directory.CreateDirectory(folder);
+        var policy = Path.Combine(folder, "policy.conf");
+        File.WriteAllText(policy, $"insulation_correction = {rule}\n");
+
+        Assert.Equal(0, CliRun.Run("report", "--db", fleet.Database, "--out", folder, "--policy", policy).Exit);
+
+        var page = File.ReadAllText(Path.Combine(folder, "devices", "ARW-DB1-Q07.html"));
+        var row = page[page.IndexOf("<td>2021-03-05</td><td>as-found</td><td>1-E</td>", StringComparison.Ordinal)..];
+        row = row[..row.IndexOf("</tr>", StringComparison.Ordinal)];
+        Assert.Contains("<td>6520 MΩ</td><td>20.5 &#176;C</td><td>" + at20 + "</td>", row, StringComparison.Ordinal);
+        Assert.Contains($"insulation_correction = {rule}: {words}", page, StringComparison.Ordinal);
+
+        // Its latest insulation test was made with a lapsed tester: that row says so.
+        Assert.Contains("instrument not traceable", page[page.IndexOf("<h2>Insulation resistance</h2>", StringComparison.Ordinal)..], StringComparison.Ordinal);
+    }
+
     [Fact]
     public void DevicePagesDrawnOnSeveralThreads_AreEachWholeAndNameTheirOwnDevice()
     {

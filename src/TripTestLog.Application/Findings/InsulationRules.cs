@@ -27,7 +27,8 @@ internal static class InsulationRules
         Domain.Instruments.InstrumentRegister instruments)
     {
         var sessionAt = (TestedAt?)null;
-        var results = Results(readings, policy, instruments).ToList();
+        // In the order stored within a test (not by path), so which of equal findings is named first does not move.
+        var results = readings.Select(r => Result(r, policy, instruments)).OrderBy(r => r.At).ThenBy(r => r.Stage).ToList();
         foreach (var r in results)
         {
             if (r.Stage == TestStage.AsFound && sessionAt != r.At)

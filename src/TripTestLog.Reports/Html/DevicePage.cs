@@ -29,7 +29,7 @@ internal static class DevicePage
         Register(html, report);
         Chart(html, report);
         Trips(html, report.Trips, context);
-        Drift(html, report, context);
+        Drift(html, report);
         Contacts(html, report, context);
         Insulation(html, report, context);
         Findings(html, condition);
@@ -116,7 +116,9 @@ internal static class DevicePage
         }), "trips");
     }
 
-    private static void Drift(StringBuilder html, DeviceReport report, ReportContext context)
+    // A trip test from an instrument not traceable on the day is ringed on its chart (legend "instrument not traceable");
+    // a trend line drawn through it is a trip-trend-exit finding, whose text says whether it was counted.
+    private static void Drift(StringBuilder html, DeviceReport report)
     {
         var points = TripPoint.Series(report.Trips).Where(p => p.Tests.Select(t => t.Trip.Measurement.TestedAt.Date).Distinct().Count() >= 2).ToList();
         html.Append("<h2>Trip drift at each test point</h2>\n");
@@ -137,17 +139,12 @@ internal static class DevicePage
         }
 
         html.Append("</div>\n");
-        if (points.Any(p => p.Tests.Any(t => !ReadingHistory.Traceable(t))))
-        {
-            html.Append("<p class=\"small\">").Append(H(UntraceableCaption(context))).Append("</p>\n");
-        }
     }
 
     // The chart mark for a reading from an instrument not traceable on the day, and what the trends did with it.
     private static string UntraceableCaption(ReportContext context) =>
-        "Ringed with a diamond: a reading from an instrument not traceable on the day (out of calibration, or not registered where the lab "
-        + (context.Policy.UntraceableReadings == Domain.Condition.UntraceableReadings.Exclude
-            ? "requires it); it is left out of every trend line (" : "requires it); it still counts in the trend lines (")
+        "Diamond ring: instrument not traceable on the day; "
+        + (context.Policy.UntraceableReadings == Domain.Condition.UntraceableReadings.Exclude ? "left out of the trend lines (" : "counted in the trend lines (")
         + UntraceableInTrendSetting(context) + ").";
 
     private static string UntraceableInTrendSetting(ReportContext context) => PolicyFile.Setting(context.Policy, "untraceable_readings");
