@@ -25,7 +25,7 @@ internal static class UntraceableInTrend
     public static string Note(int untraceable, int kept, FindingPolicy policy) => untraceable == 0 ? ""
         : policy.UntraceableReadings == UntraceableReadings.Exclude
             ? $"; {Counted.Of(untraceable, "reading")} from an instrument not traceable on the day left out of the trend ({Setting(policy)})"
-            : $"; {untraceable} of its {kept} readings come from an instrument not traceable on the day (marked on the chart; {Setting(policy)})";
+            : $"; {untraceable} of its {kept} readings {(untraceable == 1 ? "comes" : "come")} from an instrument not traceable on the day (marked on the chart; {Setting(policy)})";
 
     /// <summary>The policy setting a trend's finding names.</summary>
     public static string Setting(FindingPolicy policy) => $"untraceable_readings = {TextCodes.UntraceableReadings.Of(policy.UntraceableReadings)}";

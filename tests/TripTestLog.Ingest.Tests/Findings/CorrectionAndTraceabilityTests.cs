@@ -74,7 +74,7 @@ public sealed class CorrectionAndTraceabilityTests
 
         var marked = Assert.Single(fleet.Device("C-1").Findings, f => f.Kind == FindingKind.ContactTrendLimit);
         Assert.Equal(1, marked.UntraceableReadings);
-        Assert.EndsWith("1 of its 3 readings come from an instrument not traceable on the day (marked on the chart; untraceable_readings = mark)",
+        Assert.EndsWith("1 of its 3 readings comes from an instrument not traceable on the day (marked on the chart; untraceable_readings = mark)",
             marked.Message, StringComparison.Ordinal);
         Assert.InRange(marked.ForecastOn!.Value, new DateOnly(2027, 7, 1), new DateOnly(2027, 11, 1));
 
@@ -102,7 +102,7 @@ public sealed class CorrectionAndTraceabilityTests
             f => f.Kind == FindingKind.InsulationFalling);
 
         Assert.Equal(1, marked.UntraceableReadings);
-        Assert.Contains("1 of its 4 readings come from an instrument not traceable", marked.Message, StringComparison.Ordinal);
+        Assert.Contains("1 of its 4 readings comes from an instrument not traceable", marked.Message, StringComparison.Ordinal);
         Assert.Equal(1, excluded.UntraceableReadings);
         Assert.EndsWith("1 reading from an instrument not traceable on the day left out of the trend (untraceable_readings = exclude)",
             excluded.Message, StringComparison.Ordinal);
