@@ -128,7 +128,9 @@ internal static class ContactRules
         if (above > policy.ContactSpreadPercent + TripRules.Tolerance)
         {
             ledger.Raise(subject, Make(FindingKind.ContactPoleSpread, Severity.Investigate, pole.At, pole,
-                "ANSI/NETA maintenance testing specifications: investigate a pole more than 50 % above the lowest (a customary guide, not a failure)",
+                FindingPolicy.Default.ContactSpreadPercent == policy.ContactSpreadPercent
+                    ? "ANSI/NETA maintenance testing specifications: investigate a pole more than 50 % above the lowest (a customary guide, not a failure)"
+                    : Invariant($"lab policy: investigate a pole more than {policy.ContactSpreadPercent:0.###} % above the lowest (the ANSI/NETA maintenance testing specifications' customary guide is 50 %; not a failure)"),
                 Invariant($"pole {pole.Pole} reads {above:0}% above the device's lowest pole ({pole.Corrected:0} against {lowest:0} µΩ at 20 °C); investigate the connections and contacts of that pole (pole resistance alone does not predict performance)"))
                 with { Value = new Reading(above, ReadingUnit.Percent), Limit = new Reading(policy.ContactSpreadPercent, ReadingUnit.Percent),
                     Policy = PolicyFile.Setting(policy, "contact_spread_percent") });

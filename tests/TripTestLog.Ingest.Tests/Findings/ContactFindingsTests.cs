@@ -29,6 +29,11 @@ public sealed class ContactFindingsTests
         Assert.Equal(51, spread.Value!.Value.Amount, 6);
         Assert.Equal("contact_spread_percent = 50", spread.Policy);
         Assert.Contains("investigate", spread.Message);
+        Assert.Contains("more than 50 % above the lowest", spread.Basis);
+
+        // A lab that investigates at 40 % flags S-49's 49 % too, and the basis names the lab's figure, not the guide's.
+        var strict = Assert.Single(fleet.Device("S-49", FindingPolicy.Default with { ContactSpreadPercent = 40 }).Findings, f => f.Kind == FindingKind.ContactPoleSpread);
+        Assert.StartsWith("lab policy: investigate a pole more than 40 % above the lowest", strict.Basis, StringComparison.Ordinal);
     }
 
     [Theory]
