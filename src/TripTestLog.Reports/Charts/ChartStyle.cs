@@ -38,6 +38,7 @@ internal static class ChartStyle
         var (shape, color, size) = Marker(kind);
         var points = plot.Add.ScatterPoints(xs, ys);
         points.MarkerShape = shape;
+        HeldPathMarker.Apply(points.MarkerStyle);
         points.MarkerSize = size;
         points.MarkerLineWidth = kind == MarkKind.Failed ? 3 : 1.5f;
         points.Color = color;
@@ -57,6 +58,7 @@ internal static class ChartStyle
 
         var rings = plot.Add.ScatterPoints(points.Select(p => p.X).ToArray(), points.Select(p => p.Y).ToArray());
         rings.MarkerShape = MarkerShape.OpenDiamond;
+        HeldPathMarker.Apply(rings.MarkerStyle);
         rings.MarkerSize = 18;
         rings.MarkerLineWidth = 1.5f;
         rings.Color = Trend;

@@ -38,6 +38,7 @@ internal static class ContactChart
                 var series = plot.Add.Scatter(xs, ys);
                 series.Color = color;
                 series.MarkerShape = Shapes[i % Shapes.Length];
+                HeldPathMarker.Apply(series.MarkerStyle);
                 series.MarkerSize = 8;
                 series.LineWidth = 1.5f;
                 series.LegendText = $"pole {pole} as-found";
