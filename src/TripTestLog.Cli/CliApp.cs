@@ -31,7 +31,7 @@ internal static class CliApp
             DemoCommand.Create(cli),
         };
 
-    public static int Run(string[] args, CliContext cli)
+    public static async Task<int> RunAsync(string[] args, CliContext cli)
     {
         // Everything printed for a person passes one guard against terminal control characters in values.
         // Errors longer than a 100-column terminal are wrapped, wherever they are written.
@@ -51,7 +51,9 @@ internal static class CliApp
         Exception? fault = null;
         try
         {
-            exit = parse.Invoke(new InvocationConfiguration { Output = cli.Out, Error = cli.Error, EnableDefaultExceptionHandler = false });
+            // Ctrl+C is the program's own (it rolls back the file in progress), so System.CommandLine adds no handler of its own.
+            exit = await parse.InvokeAsync(new InvocationConfiguration { Output = cli.Out, Error = cli.Error, EnableDefaultExceptionHandler = false, ProcessTerminationTimeout = null })
+                .ConfigureAwait(false);
         }
         catch (Exception e) when (e is not OutOfMemoryException && Faults.IsTheUsers(e))
         {
