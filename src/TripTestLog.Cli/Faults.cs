@@ -3,8 +3,9 @@ namespace TripTestLog.Cli;
 /// <summary>
 /// Tells a problem the person can fix from a fault in the tool. The person's: what a database, its server or its driver
 /// refused (in the store's own words), a file or folder that cannot be read or written, a stored value or an address
-/// that cannot be read, an operation this kind of store does not offer, a value a domain factory refused. Anything else
-/// (a null where the tool assumed a value, a missing key, a cast that fails) is the tool's own fault.
+/// that cannot be read, an operation this kind of store does not offer, a value a domain factory refused, a stop asked
+/// for with Ctrl+C. Anything else (a null where the tool assumed a value, a missing key, a cast that fails) is the
+/// tool's own fault.
 /// </summary>
 internal static class Faults
 {
@@ -22,7 +23,9 @@ internal static class Faults
             innermost = inner;
         }
 
+        // Ctrl+C in a command that does not say more about it is the person's own stop, not a fault.
         return innermost is IOException or UnauthorizedAccessException or InvalidDataException or FormatException or NotSupportedException
+                or OperationCanceledException
             || (innermost is ArgumentException && innermost is not ArgumentNullException);
     }
 }

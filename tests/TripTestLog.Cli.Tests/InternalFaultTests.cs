@@ -23,16 +23,7 @@ public sealed class InternalFaultTests : IDisposable
     [Fact]
     public void AReadThatMeetsANullInARequiredColumn_IsAnInternalError_ExitThree_WithTheStackInTheLogOnly()
     {
-        var db = Path.Combine(_folder, "altered.db");
-        var register = Path.Combine(_folder, "register.csv");
-        File.WriteAllText(register,
-            "asset_tag,site,location,family,curve,rated_current_a,poles,rated_voltage_v,commissioned_on,contact_limit_uohm,make,model,serial\n"
-            + "F-01,Site,Way 1,iec60898,C,16,1,230,2019-01-01,,,,\n");
-        var trips = Path.Combine(_folder, "trips.csv");
-        File.WriteAllText(trips,
-            "asset_tag,tested_at,stage,pole,current_a,trip_time_s,held_s,start,ambient_c,instrument,technician,note\n"
-            + "F-01,2026-03-06T08:00,as-found,all,18.08,,3600,cold,20,INJ-1,A. Tester,\n");
-        Assert.Equal(0, CliRun.Run("import", register, trips, "--db", db).Exit);
+        var db = OneBreaker.Database(_folder, "altered.db");
         AlterUnderTheTool(db);
 
         using var child = Child.Start("check", "--db", db);
