@@ -31,7 +31,7 @@ internal static class CliApp
             DemoCommand.Create(cli),
         };
 
-    public static int Run(string[] args, CliContext cli)
+    public static async Task<int> RunAsync(string[] args, CliContext cli)
     {
         // Everything printed for a person passes one guard against terminal control characters in values.
         // Errors longer than a 100-column terminal are wrapped, wherever they are written.
@@ -48,42 +48,80 @@ internal static class CliApp
             return ExitCodes.BadInput;
         }
 
+        Exception? fault = null;
         try
         {
-            exit = parse.Invoke(new InvocationConfiguration { Output = cli.Out, Error = cli.Error, EnableDefaultExceptionHandler = false });
+            // Ctrl+C is the program's own (it rolls back the file in progress), so System.CommandLine adds no handler of its own.
+            exit = await parse.InvokeAsync(new InvocationConfiguration { Output = cli.Out, Error = cli.Error, EnableDefaultExceptionHandler = false, ProcessTerminationTimeout = null })
+                .ConfigureAwait(false);
+        }
+        catch (Exception e) when (e is not OutOfMemoryException && Faults.IsTheUsers(e))
+        {
+            // A problem the person can fix (the input, the database, the disk): one plain sentence, never a stack trace.
+            cli.Error.WriteLine($"error: {Plain(e)}");
+            exit = ExitCodes.BadInput;
         }
         catch (Exception e) when (e is not OutOfMemoryException)
         {
-            // Whatever went wrong, a person gets one plain sentence, never a stack trace.
-            cli.Error.WriteLine($"error: {Plain(e)}");
-            exit = ExitCodes.BadInput;
+            // Anything else is a fault in the tool: the person is told so and where the details are; the log gets the stack.
+            fault = e;
+            exit = ExitCodes.InternalError;
         }
 
         // System.CommandLine answers parse errors with 1; this tool keeps 1 for findings and uses 2 for bad usage.
         exit = parse.Errors.Count > 0 ? ExitCodes.BadInput : exit;
-        LogRun(parse, args, exit, clock.Elapsed);
+        var logged = LogRun(parse, args, exit, clock.Elapsed, fault);
+        if (fault is not null)
+        {
+            cli.Error.WriteLine(logged is null
+                ? "internal error: a fault in triptestlog itself, not in your input, stopped the command, and the log could not be written; please report it with the command you ran"
+                : $"internal error: a fault in triptestlog itself, not in your input, stopped the command; the details are in {logged}: please report it with that file");
+        }
+
         return exit;
     }
 
-    // Every run against a database leaves one line in the log beside it: who ran what, and how it ended.
-    private static void LogRun(ParseResult parse, string[] args, int exit, TimeSpan took)
+    // Every run against a database leaves one line in the log beside it: who ran what, and how it ended. A fault in the
+    // tool is logged whatever the command, with its stack: beside the database when the command names one whose folder
+    // exists, otherwise in the working folder. Returns the log's path when something was written there.
+    private static string? LogRun(ParseResult parse, string[] args, int exit, TimeSpan took, Exception? fault)
     {
-        if (parse.Errors.Count > 0 || parse.CommandResult.Command.Options.FirstOrDefault(o => o.Name == "--db") is not Option<Services.StoreAddress> option
-            || parse.GetValue(option) is not { Exists: true } db)
+        var db = parse.Errors.Count == 0 && parse.CommandResult.Command.Options.FirstOrDefault(o => o.Name == "--db") is Option<Services.StoreAddress> option
+            ? parse.GetValue(option)
+            : null;
+        string folder;
+        if (db is { Exists: true })
         {
-            return;
+            folder = db.Folder;
+        }
+        else if (fault is not null)
+        {
+            folder = db is not null && Directory.Exists(db.Folder) ? db.Folder : Directory.GetCurrentDirectory();
+        }
+        else
+        {
+            return null;
         }
 
         try
         {
-            using var log = Logging.BesideDatabase(db);
+            using var log = Logging.InFolder(folder);
+            var line = string.Join(' ', args.Select(a => a.Contains(' ', StringComparison.Ordinal) ? $"\"{a}\"" : a));
+            if (fault is not null)
+            {
+                log.Error(fault, "internal error in: triptestlog {Command}", line);
+            }
+
             log.Information("{User} on {Machine} ran: triptestlog {Command}; exit {Exit} ({Meaning}) after {Seconds:0.0} s",
-                Environment.UserName, Environment.MachineName, string.Join(' ', args.Select(a => a.Contains(' ', StringComparison.Ordinal) ? $"\"{a}\"" : a)),
-                exit, exit switch { ExitCodes.Ok => "done", ExitCodes.Findings => "findings", _ => "bad usage or input" }, took.TotalSeconds);
+                Environment.UserName, Environment.MachineName, line,
+                exit, exit switch { ExitCodes.Ok => "done", ExitCodes.Findings => "findings", ExitCodes.InternalError => "internal error", _ => "bad usage or input" },
+                took.TotalSeconds);
+            return Logging.PathIn(folder);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
             // A log that cannot be written never turns a finished command into a failure.
+            return null;
         }
     }
 

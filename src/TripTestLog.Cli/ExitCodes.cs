@@ -11,4 +11,7 @@ internal static class ExitCodes
 
     /// <summary>Bad usage or input that stopped the command.</summary>
     public const int BadInput = 2;
+
+    /// <summary>A fault in the tool itself: one sentence on stderr, the exception with its stack in the log.</summary>
+    public const int InternalError = 3;
 }

@@ -9,4 +9,4 @@ Console.CancelKeyPress += (_, e) =>
     cancel.Cancel();
 };
 
-return CliApp.Run(args, new CliContext(Console.Out, Console.Error, TimeProvider.System, !Console.IsErrorRedirected) { Cancel = cancel.Token });
+return await CliApp.RunAsync(args, new CliContext(Console.Out, Console.Error, TimeProvider.System, !Console.IsErrorRedirected) { Cancel = cancel.Token });

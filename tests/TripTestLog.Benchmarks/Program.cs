@@ -364,8 +364,8 @@ internal static class Program
                 using (var store = RecordStore.Open(project))
                 {
                     var context = new TripTestLog.Reports.ReportContext(project, "benchmark", today, DateTimeOffset.UtcNow, FindingPolicy.Default, "defaults", store.Instruments());
-                    var (_, pages) = TripTestLog.Cli.Services.ReportRun.Write(store, Path.Combine(work, step), context,
-                        new TripTestLog.Cli.Services.ReportRun.Selection(null, null, null, null, true), default);
+                    var (_, pages) = TripTestLog.Cli.Services.ReportRun.WriteAsync(store, Path.Combine(work, step), context,
+                        TripTestLog.Application.Reports.ReportSelection.All, default).GetAwaiter().GetResult();
                     rows = pages;
                 }
 
@@ -381,7 +381,8 @@ internal static class Program
                     var context = new TripTestLog.Reports.ReportContext(project, "benchmark", today, DateTimeOffset.UtcNow, FindingPolicy.Default, "defaults", store.Instruments());
                     if (step == "report")
                     {
-                        TripTestLog.Cli.Services.ReportRun.Write(store, folder, context, new TripTestLog.Cli.Services.ReportRun.Selection(null, null, null, null, false), default);
+                        TripTestLog.Cli.Services.ReportRun.WriteAsync(store, folder, context, TripTestLog.Application.Reports.ReportSelection.All with { DevicePages = false }, default)
+                            .GetAwaiter().GetResult();
                         rows = 1;
                     }
                     else

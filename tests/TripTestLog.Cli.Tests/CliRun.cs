@@ -12,7 +12,7 @@ internal static class CliRun
     {
         var output = new StringWriter();
         var error = new StringWriter();
-        var exit = CliApp.Run(args, new CliContext(output, error, new FixedClock(now), false));
+        var exit = CliApp.RunAsync(args, new CliContext(output, error, new FixedClock(now), false)).GetAwaiter().GetResult();
         return (exit, output.ToString(), error.ToString());
     }
 
@@ -21,7 +21,7 @@ internal static class CliRun
     {
         var output = new StringWriter();
         var error = new StringWriter();
-        var exit = CliApp.Run(args, new CliContext(output, error, new FixedClock(Now), true));
+        var exit = CliApp.RunAsync(args, new CliContext(output, error, new FixedClock(Now), true)).GetAwaiter().GetResult();
         return (exit, output.ToString(), error.ToString());
     }
 

@@ -66,7 +66,7 @@ public sealed class NoStackTraceTests : IDisposable
 
         var (exit, output, error) = CliRun.Run(resolved);
 
-        Assert.NotEqual(0, exit);
+        Assert.Equal(2, exit);
         Assert.DoesNotContain("   at ", output + error);
         Assert.DoesNotContain("Exception", output + error);
         Assert.False(string.IsNullOrWhiteSpace(error), "a mistake must say what is wrong");

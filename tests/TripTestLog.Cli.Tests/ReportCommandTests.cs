@@ -108,7 +108,7 @@ public sealed class ReportCommandTests(SampleFleetDatabase fleet) : IClassFixtur
     }
 
     [Fact]
-    public void AReportThatStopsPartWay_LeavesTheEarlierCompleteDataFiles_AndNoPartialOnes()
+    public async Task AReportThatStopsPartWay_LeavesTheEarlierCompleteDataFiles_AndNoPartialOnes()
     {
         var folder = Path.Combine(fleet.Folder, "report-stopped");
         Assert.Equal(0, CliRun.Run("report", "--db", fleet.Database, "--out", folder).Exit);
@@ -120,7 +120,7 @@ public sealed class ReportCommandTests(SampleFleetDatabase fleet) : IClassFixtur
         var context = new TripTestLog.Reports.ReportContext(fleet.Database, "test", new DateOnly(2026, 12, 1), CliRun.Now,
             TripTestLog.Application.Findings.FindingPolicy.Default, "default", store.Instruments());
         var written = 0;
-        var failure = Record.Exception(() => Services.ReportRun.Write(store, folder, context, new Services.ReportRun.Selection(null, null, null, null, true),
+        var failure = await Record.ExceptionAsync(() => Services.ReportRun.WriteAsync(store, folder, context, TripTestLog.Application.Reports.ReportSelection.All,
             CancellationToken.None, _ =>
             {
                 if (++written == 4)

@@ -2,6 +2,7 @@ using TripTestLog.Application.Stores;
 using TripTestLog.Application.Import;
 using TripTestLog.Application.Check;
 using TripTestLog.Application.Findings;
+using TripTestLog.Application.Reports;
 using System.CommandLine;
 using TripTestLog.Cli.Output;
 using TripTestLog.Cli.Services;
@@ -34,7 +35,7 @@ internal static class DemoCommand
         {
             records, output, asOf,
         };
-        command.SetAction(parse =>
+        command.SetAction(async (parse, _) =>
         {
             // The bundled records were written for one date; judging them on it gives the same answer on any machine's clock.
             var date = parse.GetValue(records) is null ? SampleRecordsAsOf : cli.Today;
@@ -43,7 +44,7 @@ internal static class DemoCommand
                 return ExitCodes.BadInput;
             }
 
-            return Run(cli, parse.GetValue(records), parse.GetValue(output)!, date);
+            return await RunAsync(cli, parse.GetValue(records), parse.GetValue(output)!, date).ConfigureAwait(false);
         });
         return command;
     }
@@ -54,7 +55,7 @@ internal static class DemoCommand
     /// <summary>The date the bundled sample records were written for: their tests lie before it, their calibrations span it.</summary>
     public static readonly DateOnly SampleRecordsAsOf = new(2026, 12, 1);
 
-    private static int Run(CliContext cli, DirectoryInfo? records, DirectoryInfo output, DateOnly asOf)
+    private static async Task<int> RunAsync(CliContext cli, DirectoryInfo? records, DirectoryInfo output, DateOnly asOf)
     {
         var folder = records?.FullName ?? FindSampleRecords();
         if (folder is null || !Directory.Exists(folder))
@@ -120,14 +121,14 @@ internal static class DemoCommand
             var findingsTable = new FindingText(findingsTextWriter, asOf.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture), policy.From);
             using var findingsRows = new FindingJson(findingsJsonWriter);
             var context = new Reports.ReportContext(db.Display, ReportRun.ToolVersion, asOf, cli.Clock.GetUtcNow(), policy.Policy, policy.From, store.Instruments());
-            reportPage = ReportRun.Write(store, Path.Combine(output.FullName, "report"), context, new ReportRun.Selection(null, null, null, null, true), cli.Cancel,
+            reportPage = (await ReportRun.WriteAsync(store, Path.Combine(output.FullName, "report"), context, ReportSelection.All, cli.Cancel,
                 device =>
                 {
                     var open = device.Condition.Open.ToList();
                     findingsTable.Add(device.Condition, open);
                     findingsRows.Add(device.Condition, open);
                     fleet.Add(device.Condition);
-                }).FleetPage;
+                }).ConfigureAwait(false)).FleetPage;
             findingsTable.Finish();
             findingsRows.Finish();
 
@@ -135,8 +136,8 @@ internal static class DemoCommand
             var guarded = policy.Policy with { DecisionRule = DecisionRule.Guarded };
             var guardedFrom = $"{policy.From}, with decision_rule = {Domain.Codes.TextCodes.DecisionRule.Of(DecisionRule.Guarded)} for this copy";
             var guardedContext = context with { Policy = guarded, PolicyFrom = guardedFrom };
-            guardedPage = ReportRun.Write(store, Path.Combine(output.FullName, GuardedReport), guardedContext,
-                new ReportRun.Selection(null, null, null, null, true), cli.Cancel).FleetPage;
+            guardedPage = (await ReportRun.WriteAsync(store, Path.Combine(output.FullName, GuardedReport), guardedContext, ReportSelection.All, cli.Cancel)
+                .ConfigureAwait(false)).FleetPage;
         }
 
         cli.Out.WriteLine($"Imported the sample records from {folder}:");

@@ -74,55 +74,45 @@ internal static class DevicesCommand
         return ExitCodes.Ok;
     }
 
-    private static void WriteJson(TextWriter output, IEnumerable<(Device Entry, int Entries)> devices)
+    private static void WriteJson(TextWriter writer, IEnumerable<(Device Entry, int Entries)> devices)
     {
-        using var stream = new MemoryStream();
-        using (var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true }))
+        using var output = new JsonOutput(writer);
+        var json = output.Json;
+        json.WriteStartArray();
+        foreach (var (d, entries) in devices)
         {
-            json.WriteStartArray();
-            foreach (var (d, entries) in devices)
+            json.WriteStartObject();
+            json.WriteString("asset_tag", d.Tag.Value);
+            json.WriteString("site", d.Site);
+            json.WriteString("location", d.Location);
+            json.WriteString("family", FamilyCodes.Of(d.Family));
+            json.WriteNumber("rated_current_a", d.RatedCurrent.Value);
+            json.WriteNumber("poles", d.Poles);
+            json.WriteNumber("rated_voltage_v", d.RatedVoltage.Value);
+            json.WriteString("settings", d.Settings.Summary);
+            Date(json, "settings_from", d.SettingsFrom);
+            Date(json, "commissioned_on", d.CommissionedOn);
+            if (d.ContactLimit is { } limit)
             {
-                json.WriteStartObject();
-                json.WriteString("asset_tag", d.Tag.Value);
-                json.WriteString("site", d.Site);
-                json.WriteString("location", d.Location);
-                json.WriteString("family", FamilyCodes.Of(d.Family));
-                json.WriteNumber("rated_current_a", d.RatedCurrent.Value);
-                json.WriteNumber("poles", d.Poles);
-                json.WriteNumber("rated_voltage_v", d.RatedVoltage.Value);
-                json.WriteString("settings", d.Settings.Summary);
-                Date(json, "settings_from", d.SettingsFrom);
-                Date(json, "commissioned_on", d.CommissionedOn);
-                if (d.ContactLimit is { } limit)
-                {
-                    json.WriteNumber("contact_limit_uohm", limit.Value);
-                }
-                else
-                {
-                    json.WriteNull("contact_limit_uohm");
-                }
-
-                json.WriteString("make", d.Make);
-                json.WriteString("model", d.Model);
-                json.WriteString("serial", d.Serial);
-                json.WriteNumber("register_entries", entries);
-                json.WriteEndObject();
-                Drain(json, stream, output);
+                json.WriteNumber("contact_limit_uohm", limit.Value);
+            }
+            else
+            {
+                json.WriteNull("contact_limit_uohm");
             }
 
-            json.WriteEndArray();
-            Drain(json, stream, output);
+            json.WriteString("make", d.Make);
+            json.WriteString("model", d.Model);
+            json.WriteString("serial", d.Serial);
+            json.WriteNumber("register_entries", entries);
+            json.WriteEndObject();
+
+            // Written out device by device, so a large register never sits whole in memory as JSON.
+            output.Flush();
         }
 
-        output.WriteLine();
-    }
-
-    // Written out device by device, so a large register never sits whole in memory as JSON.
-    private static void Drain(Utf8JsonWriter json, MemoryStream stream, TextWriter output)
-    {
-        json.Flush();
-        output.Write(System.Text.Encoding.UTF8.GetString(stream.GetBuffer(), 0, (int)stream.Length));
-        stream.SetLength(0);
+        json.WriteEndArray();
+        output.Raw("\n");
     }
 
     private static void Date(Utf8JsonWriter json, string name, DateOnly? date)

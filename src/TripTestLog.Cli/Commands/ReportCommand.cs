@@ -1,4 +1,5 @@
 using TripTestLog.Application.Text;
+using TripTestLog.Application.Reports;
 using TripTestLog.Application.Stores;
 using System.CommandLine;
 using System.Diagnostics;
@@ -26,7 +27,7 @@ internal static class ReportCommand
             command.Options.Add(option);
         }
 
-        command.SetAction(parse =>
+        command.SetAction(async (parse, _) =>
         {
             if (shared.Resolve(parse, cli) is not { } options)
             {
@@ -61,12 +62,12 @@ internal static class ReportCommand
             }
 
             var folder = parse.GetValue(output)?.FullName ?? Path.Combine(options.Database.Folder, "report");
-            return Run(cli, options, folder, new ReportRun.Selection(options.Site, options.Only, first, last, parse.GetValue(pages) == "all"));
+            return await RunAsync(cli, options, folder, new ReportSelection(options.Site, options.Only, first, last, parse.GetValue(pages) == "all")).ConfigureAwait(false);
         });
         return command;
     }
 
-    private static int Run(CliContext cli, ConditionOptions.Resolved options, string folder, ReportRun.Selection selection)
+    private static async Task<int> RunAsync(CliContext cli, ConditionOptions.Resolved options, string folder, ReportSelection selection)
     {
         try
         {
@@ -96,7 +97,7 @@ internal static class ReportCommand
             int devices;
             using (progress)
             {
-                (page, devices) = ReportRun.Write(store, folder, context, selection, cli.Cancel, progress: progress);
+                (page, devices) = await ReportRun.WriteAsync(store, folder, context, selection, cli.Cancel, progress: progress).ConfigureAwait(false);
             }
 
             cli.Out.WriteLine($"Wrote {Counted.Of(devices, "device page")} and the fleet page in {clock.Elapsed.TotalSeconds:0.0} s.");

@@ -1,4 +1,3 @@
-using System.Globalization;
 using TripTestLog.Application.Findings;
 
 namespace TripTestLog.Cli.Output;
@@ -6,24 +5,24 @@ namespace TripTestLog.Cli.Output;
 /// <summary>`findings --csv`: a header of <see cref="FindingFields"/> names, then one row per finding; text cells neutralised.</summary>
 internal sealed class FindingCsv : IFindingWriter
 {
-    private readonly TextWriter _writer;
+    private readonly CsvOutput _csv;
 
     public FindingCsv(TextWriter writer)
     {
-        _writer = writer;
-        _writer.WriteLine(string.Join(',', FindingFields.All.Select(f => f.Name)));
+        _csv = new CsvOutput(writer);
+        _csv.Header(FindingFields.All.Select(f => f.Name));
     }
 
     public void Add(DeviceCondition device, IReadOnlyList<Finding> findings)
     {
         foreach (var finding in findings)
         {
-            _writer.WriteLine(string.Join(',', FindingFields.All.Select(f => f.Value(device, finding) switch
+            foreach (var (_, value) in FindingFields.All)
             {
-                null => "",
-                double number => number.ToString("R", CultureInfo.InvariantCulture),
-                var text => CsvCell.Text((string)text),
-            })));
+                _csv.Cell(value(device, finding));
+            }
+
+            _csv.EndRow();
         }
     }
 

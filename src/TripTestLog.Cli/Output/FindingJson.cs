@@ -1,4 +1,3 @@
-using System.Text.Encodings.Web;
 using System.Text.Json;
 using TripTestLog.Application.Findings;
 
@@ -7,15 +6,13 @@ namespace TripTestLog.Cli.Output;
 /// <summary>`findings --json`: a JSON array, one object per finding with the fields of <see cref="FindingFields"/>, streamed.</summary>
 internal sealed class FindingJson : IFindingWriter, IDisposable
 {
+    private readonly JsonOutput _output;
     private readonly Utf8JsonWriter _json;
-    private readonly Stream _stream;
-    private readonly TextWriter _writer;
 
     public FindingJson(TextWriter writer)
     {
-        _writer = writer;
-        _stream = new MemoryStream();
-        _json = new Utf8JsonWriter(_stream, new JsonWriterOptions { Indented = true, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping });
+        _output = new JsonOutput(writer);
+        _json = _output.Json;
         _json.WriteStartArray();
     }
 
@@ -43,30 +40,15 @@ internal sealed class FindingJson : IFindingWriter, IDisposable
             _json.WriteEndObject();
         }
 
-        Flush();
+        // The JSON goes out device by device: memory holds one device's findings, however large the fleet.
+        _output.Flush();
     }
 
     public void Finish()
     {
         _json.WriteEndArray();
-        Flush();
-        _writer.WriteLine();
+        _output.Raw("\n");
     }
 
-    // The JSON goes out device by device: memory holds one device's findings, however large the fleet.
-    private void Flush()
-    {
-        _json.Flush();
-        if (_stream.Length > 0)
-        {
-            _writer.Write(System.Text.Encoding.UTF8.GetString(((MemoryStream)_stream).GetBuffer(), 0, (int)_stream.Length));
-            _stream.SetLength(0);
-        }
-    }
-
-    public void Dispose()
-    {
-        _json.Dispose();
-        _stream.Dispose();
-    }
+    public void Dispose() => _output.Dispose();
 }

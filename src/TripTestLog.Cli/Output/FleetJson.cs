@@ -1,5 +1,4 @@
 using System.Globalization;
-using System.Text.Encodings.Web;
 using System.Text.Json;
 using TripTestLog.Application.Findings;
 using TripTestLog.Domain.Codes;
@@ -12,92 +11,90 @@ internal static class FleetJson
 {
     public static void Write(TextWriter writer, FleetSummary fleet, string asOf, string policyFrom, FleetModels? models = null)
     {
-        using var stream = new MemoryStream();
-        using (var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping }))
+        using var output = new JsonOutput(writer);
+        var json = output.Json;
+        json.WriteStartObject();
+        json.WriteString("as_of", asOf);
+        json.WriteString("policy", policyFrom);
+        json.WriteStartArray("sites");
+        foreach (var (site, c) in fleet.Sites)
         {
             json.WriteStartObject();
-            json.WriteString("as_of", asOf);
-            json.WriteString("policy", policyFrom);
-            json.WriteStartArray("sites");
-            foreach (var (site, c) in fleet.Sites)
+            json.WriteString("site", site);
+            json.WriteNumber("devices", c.Devices);
+            foreach (var grade in Enum.GetValues<ConditionGrade>())
             {
-                json.WriteStartObject();
-                json.WriteString("site", site);
-                json.WriteNumber("devices", c.Devices);
-                foreach (var grade in Enum.GetValues<ConditionGrade>())
-                {
-                    json.WriteNumber(TextCodes.Grade.Of(grade), c.ByGrade[(int)grade]);
-                }
+                json.WriteNumber(TextCodes.Grade.Of(grade), c.ByGrade[(int)grade]);
+            }
 
-                json.WriteNumber("overdue", c.Overdue);
-                json.WriteEndObject();
+            json.WriteNumber("overdue", c.Overdue);
+            json.WriteEndObject();
+        }
+
+        json.WriteEndArray();
+        json.WriteStartArray("priority");
+        var shared = new Dictionary<object, string>(ReferenceEqualityComparer.Instance);
+        foreach (var (d, cause) in fleet.Lines.Where(l => l.Cause is not null).SelectMany(l => l.Devices.Select(d => (d, l.Cause!))))
+        {
+            shared[d] = cause;
+        }
+
+        foreach (var (device, rank) in fleet.Priority.Select((d, i) => (d, i + 1)))
+        {
+            json.WriteStartObject();
+            json.WriteNumber("rank", rank);
+            json.WriteString("asset_tag", device.Device.Tag.Value);
+            json.WriteString("site", device.Device.Site);
+            json.WriteString("grade", TextCodes.Grade.Of(device.Grade));
+            json.WriteString("due_on", device.DueOn.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture));
+            json.WriteBoolean("overdue", device.Overdue);
+            json.WriteNumber("criticality", device.Device.Criticality);
+            if (device.SoonestForecast is { } on)
+            {
+                json.WriteString("soonest_forecast", on.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture));
+            }
+            else
+            {
+                json.WriteNull("soonest_forecast");
+            }
+
+            json.WriteString("why", FleetText.Why(device));
+            json.WriteStartArray("open_kinds");
+            foreach (var kind in device.Open.Select(f => f.Kind).Distinct())
+            {
+                json.WriteStringValue(TextCodes.FindingKind.Of(kind));
             }
 
             json.WriteEndArray();
-            json.WriteStartArray("priority");
-            var shared = new Dictionary<object, string>(ReferenceEqualityComparer.Instance);
-            foreach (var (d, cause) in fleet.Lines.Where(l => l.Cause is not null).SelectMany(l => l.Devices.Select(d => (d, l.Cause!))))
+            if (device.WorstOpen is { } worst && worst.Kind != FindingKind.TestOverdue && DeviceCondition.MarginOf(worst) is { } margin)
             {
-                shared[d] = cause;
+                json.WriteNumber("margin_percent", Math.Round(margin * 100, 2));
+            }
+            else
+            {
+                json.WriteNull("margin_percent");
             }
 
-            foreach (var (device, rank) in fleet.Priority.Select((d, i) => (d, i + 1)))
+            if (shared.TryGetValue(device, out var cause))
             {
-                json.WriteStartObject();
-                json.WriteNumber("rank", rank);
-                json.WriteString("asset_tag", device.Device.Tag.Value);
-                json.WriteString("site", device.Device.Site);
-                json.WriteString("grade", TextCodes.Grade.Of(device.Grade));
-                json.WriteString("due_on", device.DueOn.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture));
-                json.WriteBoolean("overdue", device.Overdue);
-                json.WriteNumber("criticality", device.Device.Criticality);
-                if (device.SoonestForecast is { } on)
-                {
-                    json.WriteString("soonest_forecast", on.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture));
-                }
-                else
-                {
-                    json.WriteNull("soonest_forecast");
-                }
-
-                json.WriteString("why", FleetText.Why(device));
-                json.WriteStartArray("open_kinds");
-                foreach (var kind in device.Open.Select(f => f.Kind).Distinct())
-                {
-                    json.WriteStringValue(TextCodes.FindingKind.Of(kind));
-                }
-
-                json.WriteEndArray();
-                if (device.WorstOpen is { } worst && worst.Kind != FindingKind.TestOverdue && DeviceCondition.MarginOf(worst) is { } margin)
-                {
-                    json.WriteNumber("margin_percent", Math.Round(margin * 100, 2));
-                }
-                else
-                {
-                    json.WriteNull("margin_percent");
-                }
-
-                if (shared.TryGetValue(device, out var cause))
-                {
-                    json.WriteString("shared_cause", cause);
-                }
-                else
-                {
-                    json.WriteNull("shared_cause");
-                }
-
-                json.WriteEndObject();
+                json.WriteString("shared_cause", cause);
             }
-
-            json.WriteEndArray();
-            if (models is not null)
+            else
             {
-                FleetModelsOutput.WriteJson(json, models);
+                json.WriteNull("shared_cause");
             }
 
             json.WriteEndObject();
         }
 
-        writer.WriteLine(System.Text.Encoding.UTF8.GetString(stream.ToArray()));
+        json.WriteEndArray();
+        if (models is not null)
+        {
+            FleetModelsOutput.WriteJson(json, models);
+        }
+
+        json.WriteEndObject();
+
+        output.Raw("\n");
     }
 }

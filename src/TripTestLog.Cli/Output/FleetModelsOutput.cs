@@ -79,15 +79,18 @@ internal static class FleetModelsOutput
     /// <summary>The same groups as CSV, one row each, the JSON's field names as the header; an empty cell where no figure is given.</summary>
     public static void WriteCsv(TextWriter writer, FleetModels models)
     {
-        writer.WriteLine("grouping,group,devices,tested,failed,failure_rate,wilson_low,wilson_high,contact_rise_uohm_per_year,contact_rise_devices,window_from,window_to");
+        var csv = new CsvOutput(writer);
+        csv.Header(["grouping", "group", "devices", "tested", "failed", "failure_rate", "wilson_low", "wilson_high", "contact_rise_uohm_per_year",
+            "contact_rise_devices", "window_from", "window_to"]);
         foreach (var (grouping, group, c) in Rows(models))
         {
             var r = c.Rate(models.MinimumDevices);
             var rise = c.MeanRise(models.MinimumDevices);
-            writer.WriteLine(string.Join(',', CsvCell.Text(grouping), CsvCell.Text(group), N(c.Devices), N(c.Tested), N(c.Failed),
-                r is { } a ? Invariant($"{Math.Round(a.Proportion, 4)}") : "", r is { } b ? Invariant($"{Math.Round(b.Lower, 4)}") : "",
-                r is { } d ? Invariant($"{Math.Round(d.Upper, 4)}") : "", rise is { } e ? Invariant($"{Math.Round(e, 1)}") : "", N(c.RiseDevices),
-                models.From.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture), models.To.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture)));
+            csv.Cell(grouping).Cell(group).Cell(c.Devices).Cell(c.Tested).Cell(c.Failed)
+                .Cell(r is { } a ? Math.Round(a.Proportion, 4) : null).Cell(r is { } b ? Math.Round(b.Lower, 4) : null)
+                .Cell(r is { } d ? Math.Round(d.Upper, 4) : null).Cell(rise is { } e ? Math.Round(e, 1) : null).Cell(c.RiseDevices)
+                .Cell(models.From.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture)).Cell(models.To.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture))
+                .EndRow();
         }
     }
 

@@ -1,6 +1,4 @@
-using System.Globalization;
-using System.Reflection;
-using System.Text.Json;
+using System.Text.Json.Serialization.Metadata;
 using TripTestLog.Application.Check;
 
 namespace TripTestLog.Cli.Output;
@@ -9,68 +7,32 @@ namespace TripTestLog.Cli.Output;
 /// The verdicts as CSV: the `check --json` fields in the same order and with the same names, one row per trip test;
 /// lists joined with "; ", text cells neutralised against spreadsheet formulas.
 /// </summary>
+/// <remarks>
+/// The columns are the JSON contract's properties (<see cref="VerdictJsonContext"/>, made at build time): the same
+/// names and the same order as the JSON by construction, in the order the row declares them, with no reflection.
+/// Adding a field to <see cref="VerdictJson.VerdictRow"/> adds it to both files.
+/// </remarks>
 internal sealed class VerdictCsv : IVerdictWriter
 {
-    private static readonly PropertyInfo[] Fields = typeof(VerdictJson.VerdictRow).GetProperties(BindingFlags.Public | BindingFlags.Instance)
-        .Where(p => p.Name != "EqualityContract").ToArray();
+    private static readonly IReadOnlyList<JsonPropertyInfo> Fields = VerdictJsonContext.Default.VerdictRow.Properties.OrderBy(p => p.Order).ToArray();
 
-    // Getters compiled once: a million-row report reads 30 fields a row, and reflection per read is the slow part.
-    private static readonly Func<VerdictJson.VerdictRow, object?>[] Getters = [.. Fields.Select(Getter)];
-
-    private readonly System.Text.StringBuilder _line = new(512);
-
-    private readonly TextWriter _writer;
+    private readonly CsvOutput _csv;
 
     public VerdictCsv(TextWriter writer)
     {
-        _writer = writer;
-        _writer.WriteLine(string.Join(',', Fields.Select(f => JsonNamingPolicy.SnakeCaseLower.ConvertName(f.Name))));
+        _csv = new CsvOutput(writer);
+        _csv.Header(Fields.Select(f => f.Name));
     }
 
     public void Add(JudgedTrip judged)
     {
         var row = VerdictJson.Row(judged);
-        _line.Clear();
-        for (var i = 0; i < Getters.Length; i++)
+        foreach (var field in Fields)
         {
-            if (i > 0)
-            {
-                _line.Append(',');
-            }
-
-            switch (Getters[i](row))
-            {
-                case null:
-                    break;
-                case double d:
-                    _line.Append(d.ToString("R", CultureInfo.InvariantCulture));
-                    break;
-                case long l:
-                    _line.Append(l.ToString(CultureInfo.InvariantCulture));
-                    break;
-                case bool b:
-                    _line.Append(b ? "true" : "false");
-                    break;
-                case string text:
-                    _line.Append(CsvCell.Text(text));
-                    break;
-                case IEnumerable<string> list:
-                    _line.Append(CsvCell.Text(string.Join("; ", list)));
-                    break;
-                case var other:
-                    _line.Append(CsvCell.Text(Convert.ToString(other, CultureInfo.InvariantCulture)));
-                    break;
-            }
+            _csv.Cell(field.Get!(row));
         }
 
-        _writer.WriteLine(_line);
-    }
-
-    private static Func<VerdictJson.VerdictRow, object?> Getter(PropertyInfo property)
-    {
-        var row = System.Linq.Expressions.Expression.Parameter(typeof(VerdictJson.VerdictRow));
-        var body = System.Linq.Expressions.Expression.Convert(System.Linq.Expressions.Expression.Property(row, property), typeof(object));
-        return System.Linq.Expressions.Expression.Lambda<Func<VerdictJson.VerdictRow, object?>>(body, row).Compile();
+        _csv.EndRow();
     }
 
     public void Finish()

@@ -10,17 +10,19 @@ namespace TripTestLog.Cli.Output;
 /// </summary>
 internal sealed class VerdictJson(TextWriter writer) : IVerdictWriter
 {
+    private readonly JsonOutput _output = new(writer, indented: false);
     private bool _started;
 
     // One object per line inside the array: the array streams out as tests are judged, and stays valid JSON.
     public void Add(JudgedTrip judged)
     {
-        writer.Write(_started ? ",\n  " : "[\n  ");
-        writer.Write(JsonSerializer.Serialize(Row(judged), VerdictJsonContext.Default.VerdictRow));
+        _output.Raw(_started ? ",\n  " : "[\n  ");
+        JsonSerializer.Serialize(_output.Json, Row(judged), VerdictJsonContext.Default.VerdictRow);
+        _output.Flush();
         _started = true;
     }
 
-    public void Finish() => writer.WriteLine(_started ? "\n]" : "[]");
+    public void Finish() => _output.Raw(_started ? "\n]\n" : "[]\n");
 
     internal static VerdictRow Row(JudgedTrip r)
     {

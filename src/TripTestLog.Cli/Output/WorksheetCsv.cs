@@ -16,15 +16,60 @@ internal sealed class WorksheetCsv : IDisposable
     public const string ContactFile = "worksheet-contact-resistance.csv";
     public const string InsulationFile = "worksheet-insulation.csv";
 
-    private readonly StreamWriter _trips;
-    private readonly StreamWriter _contacts;
-    private readonly StreamWriter _insulation;
+    // Each file's columns in order, with what the worksheet fills in; a column without a value is left blank.
+    private static readonly (string Name, Func<DeviceWorksheet, int, object?> Value)[] TripColumns =
+    [
+        ("asset_tag", (s, i) => s.Device.Tag.Value),
+        ("tested_at", (s, i) => null),
+        ("stage", (s, i) => TextCodes.Stage.Of(s.Stage)),
+        ("pole", (s, i) => s.Trips[i].Pole.Code),
+        ("current_a", (s, i) => new CsvNumber(Exact(s.Trips[i].Current.Value))),
+        ("trip_time_s", (s, i) => null),
+        ("held_s", (s, i) => null),
+        ("start", (s, i) => TextCodes.Start.Of(s.Trips[i].Conditions.Start)),
+        ("ambient_c", (s, i) => null),
+        ("instrument", (s, i) => null),
+        ("technician", (s, i) => null),
+        ("note", (s, i) => null),
+        ("plan", (s, i) => DeviceWorksheet.RowLabel('T', i)),
+    ];
+
+    private static readonly (string Name, Func<DeviceWorksheet, int, object?> Value)[] ContactColumns =
+    [
+        ("asset_tag", (s, i) => s.Device.Tag.Value),
+        ("tested_at", (s, i) => null),
+        ("stage", (s, i) => TextCodes.Stage.Of(s.Stage)),
+        ("pole", (s, i) => s.Contacts[i].Pole.Code),
+        ("resistance_uohm", (s, i) => null),
+        ("test_current_a", (s, i) => new CsvNumber(Exact(s.Contacts[i].TestCurrent.Value))),
+        ("temperature_c", (s, i) => null),
+        ("instrument", (s, i) => null),
+        ("technician", (s, i) => null),
+        ("plan", (s, i) => DeviceWorksheet.RowLabel('C', i)),
+    ];
+
+    private static readonly (string Name, Func<DeviceWorksheet, int, object?> Value)[] InsulationColumns =
+    [
+        ("asset_tag", (s, i) => s.Device.Tag.Value),
+        ("tested_at", (s, i) => null),
+        ("stage", (s, i) => TextCodes.Stage.Of(s.Stage)),
+        ("path", (s, i) => s.Insulation[i].Path),
+        ("test_voltage_v", (s, i) => s.Insulation[i].TestVoltage is { } v ? new CsvNumber(Exact(v.Value)) : null),
+        ("resistance_mohm", (s, i) => null),
+        ("temperature_c", (s, i) => null),
+        ("duration_s", (s, i) => new CsvNumber(Exact(PlannedInsulation.Duration.Value))),
+        ("plan", (s, i) => DeviceWorksheet.RowLabel('I', i)),
+    ];
+
+    private readonly Sheet _trips;
+    private readonly Sheet _contacts;
+    private readonly Sheet _insulation;
 
     public WorksheetCsv(string folder)
     {
-        _trips = Open(Path.Combine(folder, TripFile), "asset_tag,tested_at,stage,pole,current_a,trip_time_s,held_s,start,ambient_c,instrument,technician,note,plan");
-        _contacts = Open(Path.Combine(folder, ContactFile), "asset_tag,tested_at,stage,pole,resistance_uohm,test_current_a,temperature_c,instrument,technician,plan");
-        _insulation = Open(Path.Combine(folder, InsulationFile), "asset_tag,tested_at,stage,path,test_voltage_v,resistance_mohm,temperature_c,duration_s,plan");
+        _trips = new Sheet(Path.Combine(folder, TripFile), TripColumns);
+        _contacts = new Sheet(Path.Combine(folder, ContactFile), ContactColumns);
+        _insulation = new Sheet(Path.Combine(folder, InsulationFile), InsulationColumns);
     }
 
     // The columns a person fills in at the bench; the worksheet leaves them blank.
@@ -113,26 +158,9 @@ internal sealed class WorksheetCsv : IDisposable
 
     public void Add(DeviceWorksheet sheet)
     {
-        var tag = CsvCell.Text(sheet.Device.Tag.Value);
-        var stage = TextCodes.Stage.Of(sheet.Stage);
-        for (var i = 0; i < sheet.Trips.Count; i++)
-        {
-            var t = sheet.Trips[i];
-            _trips.WriteLine($"{tag},,{stage},{t.Pole.Code},{Exact(t.Current.Value)},,,{TextCodes.Start.Of(t.Conditions.Start)},,,,,{DeviceWorksheet.RowLabel('T', i)}");
-        }
-
-        for (var i = 0; i < sheet.Contacts.Count; i++)
-        {
-            var c = sheet.Contacts[i];
-            _contacts.WriteLine($"{tag},,{stage},{c.Pole.Code},,{Exact(c.TestCurrent.Value)},,,,{DeviceWorksheet.RowLabel('C', i)}");
-        }
-
-        for (var i = 0; i < sheet.Insulation.Count; i++)
-        {
-            var p = sheet.Insulation[i];
-            var voltage = p.TestVoltage is { } v ? Exact(v.Value) : "";
-            _insulation.WriteLine($"{tag},,{stage},{CsvCell.Text(p.Path)},{voltage},,,{Exact(PlannedInsulation.Duration.Value)},{DeviceWorksheet.RowLabel('I', i)}");
-        }
+        _trips.Add(sheet, sheet.Trips.Count);
+        _contacts.Add(sheet, sheet.Contacts.Count);
+        _insulation.Add(sheet, sheet.Insulation.Count);
     }
 
     public void Dispose()
@@ -153,10 +181,34 @@ internal sealed class WorksheetCsv : IDisposable
             : value.ToString("R", CultureInfo.InvariantCulture);
     }
 
-    private static StreamWriter Open(string path, string header)
+    // One worksheet file: its columns, written through the one CSV writer.
+    private sealed class Sheet : IDisposable
     {
-        var writer = new StreamWriter(path, append: false, new UTF8Encoding(false));
-        writer.WriteLine(header);
-        return writer;
+        private readonly StreamWriter _file;
+        private readonly CsvOutput _csv;
+        private readonly (string Name, Func<DeviceWorksheet, int, object?> Value)[] _columns;
+
+        public Sheet(string path, (string Name, Func<DeviceWorksheet, int, object?> Value)[] columns)
+        {
+            _file = new StreamWriter(path, append: false, new UTF8Encoding(false));
+            _csv = new CsvOutput(_file);
+            _columns = columns;
+            _csv.Header(columns.Select(c => c.Name));
+        }
+
+        public void Add(DeviceWorksheet sheet, int rows)
+        {
+            for (var i = 0; i < rows; i++)
+            {
+                foreach (var (_, value) in _columns)
+                {
+                    _csv.Cell(value(sheet, i));
+                }
+
+                _csv.EndRow();
+            }
+        }
+
+        public void Dispose() => _file.Dispose();
     }
 }
