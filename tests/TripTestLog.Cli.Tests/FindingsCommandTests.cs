@@ -84,6 +84,21 @@ public sealed class FindingsCommandTests(SampleFleetDatabase fleet) : IClassFixt
         Assert.Equal(string.Join(",", first.EnumerateObject().Select(p => p.Name)), csv.Split('\n')[0]);
     }
 
+    [Theory]
+    // The sample fleet: BPS-DB1-Q08's 2025 trip tests used Brackenford's injection set after its calibration ran out
+    // (2025-08-31); CWD-DB1-Q06's 2026 contact readings the depot's ohmmeter before its late recalibration.
+    [InlineData("BPS-DB1-Q08", "trip-trend-exit")]
+    [InlineData("CWD-DB1-Q06", "contact-trend-limit")]
+    public void ATrendWithAnUntraceableReading_SaysSo_AndCountsIt(string asset, string kind)
+    {
+        var (_, output, _) = Run("findings", "--json", "--asset", asset);
+
+        var trend = JsonDocument.Parse(output).RootElement.EnumerateArray().Single(f => f.GetProperty("kind").GetString() == kind);
+        Assert.Equal(1, trend.GetProperty("untraceable_readings").GetDouble());
+        Assert.Contains("comes from an instrument not traceable on the day (marked on the chart; untraceable_readings = mark)",
+            trend.GetProperty("message").GetString(), StringComparison.Ordinal);
+    }
+
     [Fact]
     public void FindingsText_ForOneDevice_MatchesTheGoldenFile()
     {

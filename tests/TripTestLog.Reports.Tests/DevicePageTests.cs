@@ -73,6 +73,7 @@ public sealed class DevicePageTests
 
         Assert.EndsWith("<td>9 MΩ</td><td>40 &#176;C</td><td>" + at20 + "</td>", Row(page, "1-E"), StringComparison.Ordinal);
         Assert.Contains(named + ":", page, StringComparison.Ordinal);
+        Assert.Contains(rule == InsulationCorrectionRule.None ? "<th>compared (not corrected)</th>" : "<th>at 20 &#176;C</th>", page, StringComparison.Ordinal);
 
         // A reading with no temperature is not corrected, whatever the rule, and the row says so.
         Assert.EndsWith("<td>30 MΩ</td><td>not recorded</td><td>(not corrected)</td>", Row(page, "1-N"), StringComparison.Ordinal);

@@ -159,8 +159,8 @@ internal static class InsulationRules
             var reach = row is null ? null : line.Reaches(Math.Log10(row.Minimum.Value));
             var forecast = reach is { } year && year <= line.LastYear + policy.ForecastHorizonYears ? TrendPoint.DateOf(year) : (DateOnly?)null;
             ledger.Add(new Finding(FindingKind.InsulationFalling, Severity.Plan, last.Tag, last.At,
-                $"Theil–Sen trend (Sen 1968) of {line.Count} as-found readings referred to 20 °C ({Setting(policy)})",
-                Invariant($"path {last.Path} falls about {fall:0}% a year ({ResistanceText.Number(list[0].Corrected, null)} to {ResistanceText.MegaOhms(last.Corrected)} at 20 °C since {list[0].At.Date:yyyy-MM-dd})")
+                $"Theil–Sen trend (Sen 1968) of {line.Count} as-found readings {Referred(policy)} ({Setting(policy)})",
+                Invariant($"path {last.Path} falls about {fall:0}% a year ({ResistanceText.Number(list[0].Corrected, null)} to {ResistanceText.MegaOhms(last.Corrected)} {Compared(policy)} since {list[0].At.Date:yyyy-MM-dd})")
                     + (forecast is { } on
                         ? on < asOf
                             ? Invariant($" and has probably fallen below the minimum of {ResistanceText.MegaOhms(row!.Minimum.Value)} since about {on:yyyy-MM-dd} (judged on {asOf:yyyy-MM-dd}): test it now")
@@ -176,8 +176,9 @@ internal static class InsulationRules
                 Policy = PolicyFile.Setting(policy, "insulation_fall_percent_per_year"),
                 ForecastOn = forecast,
                 Trend = line,
-                Measured = MeasuredOf(last),
-                Correction = CorrectionOf(last, policy),
+
+                // The value is a rate, so no reading as measured stands beside it; the rule names how the line's readings were referred.
+                Correction = Setting(policy),
                 UntraceableReadings = untraceable == 0 ? null : untraceable,
             });
         }
@@ -207,8 +208,17 @@ internal static class InsulationRules
     // A reading with no temperature is not corrected, so no rule applies to it.
     private static string? CorrectionOf(PathResult r, FindingPolicy policy) => r.TemperatureKnown ? Setting(policy) : null;
 
+    // Under insulation_correction = none a reading is compared as measured, and never called a 20 °C value.
+    private static string Referred(FindingPolicy policy) =>
+        policy.InsulationCorrection == InsulationCorrectionRule.None ? "compared as measured" : "referred to 20 °C";
+
+    private static string Compared(FindingPolicy policy) =>
+        policy.InsulationCorrection == InsulationCorrectionRule.None ? "as measured" : "at 20 °C";
+
     private static string Describe(PathResult r, FindingPolicy policy) => r.Celsius is { } c
-        ? Invariant($"{ResistanceText.MegaOhms(r.Corrected)} at 20 °C ({ResistanceText.MegaOhms(r.Measured)} as measured at {c:0.#} °C; {Setting(policy)})")
+        ? policy.InsulationCorrection == InsulationCorrectionRule.None
+            ? Invariant($"{ResistanceText.MegaOhms(r.Measured)} as measured at {c:0.#} °C (not corrected: {Setting(policy)})")
+            : Invariant($"{ResistanceText.MegaOhms(r.Corrected)} at 20 °C ({ResistanceText.MegaOhms(r.Measured)} as measured at {c:0.#} °C; {Setting(policy)})")
         : Invariant($"{ResistanceText.MegaOhms(r.Measured)} (no temperature recorded: not corrected)");
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);

@@ -51,8 +51,8 @@ public static class PolicyFile
         new("insulation_table", "insulation-below-minimum: " + TextCodes.InsulationTable.Choices,
             p => TextCodes.InsulationTable.Of(p.InsulationTable),
             (p, v) => TextCodes.InsulationTable.TryParse(v, out var t) ? p with { InsulationTable = t } : null),
-        new("insulation_correction", "insulation referred to 20 °C: halving-10k (halves per 10 K rise), solid-insulation\n"
-                + "#   (tenfold per 50 K, × 2.5 at 40 °C) or none (as measured)",
+        new("insulation_correction", "insulation referred to 20 °C: halving-10k (halves per 10 K rise; over-corrects hot\n"
+                + "#   solid insulation), solid-insulation (tenfold per 50 K, × 2.5 at 40 °C) or none (as measured)",
             p => TextCodes.InsulationCorrection.Of(p.InsulationCorrection),
             (p, v) => TextCodes.InsulationCorrection.TryParse(v, out var c) ? p with { InsulationCorrection = c } : null),
         new("untraceable_readings", "trends and charts: readings from an instrument not traceable on the day: "

@@ -183,9 +183,11 @@ internal static class DevicePage
             return;
         }
 
-        html.Append("<p class=\"small\">").Append(H($"Referred to 20 °C by the lab policy's rule: {ReadingHistory.InsulationCorrectionWords(context.Policy)}. "
-            + "A reading with no temperature is shown as measured.")).Append("</p>\n");
-        Table(html, ["tested", "stage", "path", "test voltage", "as measured", "temperature", "at 20 °C"], readings.Select(r => new[]
+        var none = context.Policy.InsulationCorrection == Domain.Condition.InsulationCorrectionRule.None;
+        html.Append("<p class=\"small\">").Append(H((none ? "Not referred to 20 °C, by the lab policy's rule: " : "Referred to 20 °C by the lab policy's rule: ")
+            + $"{ReadingHistory.InsulationCorrectionWords(context.Policy)}. A reading with no temperature is shown as measured.")).Append("</p>\n");
+        var compared = none ? "compared (not corrected)" : "at 20 °C";
+        Table(html, ["tested", "stage", "path", "test voltage", "as measured", "temperature", compared], readings.Select(r => new[]
         {
             H(r.Date.ToString("yyyy-MM-dd")), H(TextCodes.Stage.Of(r.Stage)), H(r.Path), H(N(r.TestVoltageVolts, "0") + " V DC"),
             H((r.OverRange ? ">" : "") + ResistanceText.MegaOhms(r.MeasuredMegaOhms)) + (r.Traceable ? "" : "<br>" + Small("instrument not traceable")),

@@ -44,6 +44,8 @@ public sealed class CorrectionAndTraceabilityTests
         var none = Assert.Single(fleet.Device("I-1", With(InsulationCorrectionRule.None)).Findings, f => f.Kind == FindingKind.InsulationBelowMinimum);
         Assert.Equal(9, none.Value!.Value.Amount, 9);
         Assert.Equal("insulation_correction = none", none.Correction);
+        Assert.Contains("reads 9 MΩ as measured at 40 °C (not corrected: insulation_correction = none)", none.Message, StringComparison.Ordinal);
+        Assert.DoesNotContain("20 °C", none.Message, StringComparison.Ordinal);
     }
 
     [Theory]
@@ -109,6 +111,7 @@ public sealed class CorrectionAndTraceabilityTests
         Assert.Equal(50, excluded.Value!.Value.Amount, 1);
         Assert.Equal(3, excluded.RestsOn.Count);
         Assert.Equal("insulation_correction = halving-10k", excluded.Correction);
+        Assert.Null(excluded.Measured); // its value is a rate: no reading as measured stands beside it
         Assert.Contains("(insulation_correction = halving-10k)", excluded.Basis, StringComparison.Ordinal);
     }
 
