@@ -126,7 +126,7 @@ internal static class CliApp
     }
 
     // The innermost message on one line: what failed, in the words of the layer that knew.
-    private static string Plain(Exception e) => Services.Stores.Plain(e) ?? Innermost(e).Message.ReplaceLineEndings(" ").Trim();
+    private static string Plain(Exception e) => Services.Stores.Plain(e) ?? Services.WriteFailure.Sentence(e) ?? Innermost(e).Message.ReplaceLineEndings(" ").Trim();
 
     private static Exception Innermost(Exception e)
     {

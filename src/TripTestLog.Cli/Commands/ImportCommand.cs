@@ -109,14 +109,27 @@ internal static class ImportCommand
         using var log = Logging.BesideDatabase(db);
         using var store = Stores.Open(cli, db, StorePurpose.Import);
         IReadOnlyList<ImportOutcome> outcomes;
+        var runner = new ImportRunner(store, log, cli);
         try
         {
-            outcomes = new ImportRunner(store, log, cli).Run(files, options, today);
+            outcomes = runner.Run(files, options, today);
         }
         catch (OperationCanceledException)
         {
             log.Warning("Import stopped by the user");
             cli.Error.WriteLine("import stopped: the file in progress was rolled back; the files before it are stored (import again to finish)");
+            return ExitCodes.BadInput;
+        }
+        catch (Exception e) when (WriteFailure.IsFullDisk(e))
+        {
+            // What was stored is listed as on any import, then one sentence for the file that did not fit.
+            log.Error("Import stopped: the disk holding {Database} is full while storing {File}", db.Display, runner.InProgress);
+            if (runner.Finished.Count > 0)
+            {
+                ImportReport.Write(cli.Out, runner.Finished, LogPath(db), width);
+            }
+
+            cli.Error.WriteLine("error: " + FullDisk(db, runner.InProgress, runner.Finished.Count));
             return ExitCodes.BadInput;
         }
 
@@ -130,6 +143,20 @@ internal static class ImportCommand
         return skipped.Count > 0 || outcomes.Any(o => o.Status == ImportStatus.Refused) ? ExitCodes.BadInput
             : outcomes.Any(o => o.RefusedRows > 0) ? ExitCodes.Findings
             : ExitCodes.Ok;
+    }
+
+    // Names the database, the file that did not fit and what the files before it left stored.
+    private static string FullDisk(StoreAddress db, string? file, int finished)
+    {
+        var where = db.Server is null ? $"the disk holding {db.Display} is full" : $"the database server {db.Display} ran out of disk space";
+        var what = file is null ? "nothing of the file in progress was stored" : $"nothing of {Visible.Text(file)} was stored (its transaction was rolled back)";
+        var before = finished switch
+        {
+            0 => "no file before it was stored",
+            1 => "the 1 file before it is stored",
+            _ => $"the {finished} files before it are stored",
+        };
+        return $"{where}; {what}, and {before}: free space there and import again (files already stored are recognised and skipped)";
     }
 
     public static string LogPath(StoreAddress db) => Path.Combine(db.Folder, "triptestlog.log");

@@ -25,6 +25,14 @@ internal sealed record ImportFile(string Path, ReadOptions Read)
 /// </summary>
 internal sealed class ImportRunner(IRecordStore store, ILogger log, CliContext cli)
 {
+    private readonly List<ImportOutcome> _finished = [];
+
+    /// <summary>The file being stored when <see cref="Run"/> stopped, or null when none was.</summary>
+    public string? InProgress { get; private set; }
+
+    /// <summary>The files finished before the one in progress, in the order stored.</summary>
+    public IReadOnlyList<ImportOutcome> Finished => _finished;
+
     /// <summary>
     /// Expands folders to the *.csv files inside them (recursively, sorted, rejects files skipped). A *.profile.json in a
     /// folder applies to the files its patterns name; <paramref name="baseOptions"/>' own profile, when given, applies to all.
@@ -77,14 +85,20 @@ internal sealed class ImportRunner(IRecordStore store, ILogger log, CliContext c
             log.Information("Reading {Name} from {Path}", f.Name, System.IO.Path.GetFullPath(f.Path));
         }
 
-        var outcomes = new List<ImportOutcome>(files.Count);
-        foreach (var outcome in new ImportPipeline(store).Run(sources, options, today, cli.Clock.GetUtcNow, file => progress.Step(Path.GetFileName(file)), cli.Cancel))
+        foreach (var outcome in new ImportPipeline(store).Run(sources, options, today, cli.Clock.GetUtcNow, Starting, cli.Cancel))
         {
             Log(outcome);
-            outcomes.Add(outcome);
+            _finished.Add(outcome);
+            InProgress = null;
         }
 
-        return outcomes;
+        return _finished;
+
+        void Starting(string file)
+        {
+            InProgress = file;
+            progress.Step(Path.GetFileName(file));
+        }
     }
 
     // Each folder's profiles are read once per import, not once per file.
