@@ -77,6 +77,13 @@ internal sealed class Child : IDisposable
         return _process.ExitCode;
     }
 
+    /// <summary>Kills it at once, as a power cut or `kill -9` would, and waits until it is gone.</summary>
+    public void Kill()
+    {
+        _process.Kill(entireProcessTree: true);
+        _process.WaitForExit();
+    }
+
     /// <summary>True once <paramref name="condition"/> holds, false when <paramref name="limit"/> passes first.</summary>
     public static bool WaitFor(Func<bool> condition, TimeSpan limit)
     {

@@ -273,6 +273,56 @@ public sealed class SqliteOpeningTests : IDisposable
         Assert.False(File.Exists(Db + "-migrating"));
     }
 
+    /// <summary>
+    /// The same case with a real process: an import upgrading an old database is killed the moment EF Core's lock row
+    /// appears (watched from a second connection), so it dies holding the lock, as a power cut would leave it.
+    /// </summary>
+    [Fact]
+    public void AnImportKilledWhileUpgradingTheSchema_LeavesALockThatNoCommandWaitsOnSilently_AndTheNextImportClearsIt()
+    {
+        var register = Path.Combine(_folder, "register.csv");
+        File.WriteAllText(register, "asset_tag,site,location,family,curve,rated_current_a,poles,rated_voltage_v\nP-01,Hill Farm,Board 1,iec60898,C,16,1,230\n");
+        var tried = new List<string>();
+        var left = false;
+        for (var attempt = 0; attempt < 5 && !left; attempt++)
+        {
+            File.Delete(Db);
+            File.Copy(Fixture("schema-3.db"), Db);
+            using (var importer = Child.Start("import", register, "--db", Db))
+            {
+                Assert.True(Child.WaitFor(() => File.Exists(Db + "-migrating") || importer.HasExited, Bound), "the import never started");
+                using var watcher = new SqliteConnection($"Data Source={Db};Pooling=False;Mode=ReadOnly");
+                watcher.Open();
+                using var probe = watcher.CreateCommand();
+                probe.CommandText = "SELECT COUNT(*) FROM \"__EFMigrationsLock\"";
+                while (!importer.HasExited && (long)probe.ExecuteScalar()! == 0)
+                {
+                }
+
+                importer.Kill();
+            }
+
+            SqliteConnection.ClearAllPools();
+            var (locks, applied) = (Count("SELECT COUNT(*) FROM \"__EFMigrationsLock\""), Count("SELECT COUNT(*) FROM \"__EFMigrationsHistory\""));
+            tried.Add($"attempt {attempt + 1}: {locks} lock row(s), {applied} migrations");
+            left = locks > 0;
+        }
+
+        Assert.True(left, "no kill landed while the upgrade held its lock: " + string.Join("; ", tried));
+        using (var reader = Child.Start("check", "--db", Db))
+        {
+            Assert.Equal(2, reader.Exit(TimeSpan.FromSeconds(60)));
+            Assert.Contains("run `triptestlog migrate", CliRun.Unwrapped(reader.Error), StringComparison.Ordinal);
+        }
+
+        using var again = Child.Start("import", register, Trips("after.csv", 3, 5000), "--db", Db);
+        Assert.True(again.Exit(TimeSpan.FromSeconds(60)) == 0, again.Out + again.Error);
+        Assert.Contains("cleared the schema-upgrade lock taken at ", CliRun.Unwrapped(again.Error), StringComparison.Ordinal);
+        Assert.Equal((0L, 8L), (Count("SELECT COUNT(*) FROM \"__EFMigrationsLock\""), Count("SELECT COUNT(*) FROM trip_tests")));
+        Assert.Equal("ok", Text("PRAGMA integrity_check"));
+        Assert.False(File.Exists(Db + "-migrating"));
+    }
+
     [Fact]
     public void Check_DuringAFolderImport_ReadsOneSnapshot_AndNeverFails()
     {
@@ -366,6 +416,15 @@ public sealed class SqliteOpeningTests : IDisposable
         using var command = connection.CreateCommand();
         command.CommandText = sql;
         command.ExecuteNonQuery();
+    }
+
+    private string Text(string sql)
+    {
+        using var connection = new SqliteConnection($"Data Source={Db};Pooling=False;Mode=ReadOnly");
+        connection.Open();
+        using var command = connection.CreateCommand();
+        command.CommandText = sql;
+        return (string)command.ExecuteScalar()!;
     }
 
     private long Count(string sql)
