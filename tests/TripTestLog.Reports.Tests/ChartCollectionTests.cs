@@ -9,7 +9,7 @@ namespace TripTestLog.Reports.Tests;
 /// a failure, the triangle of a test that proves nothing, the diamonds) must survive a collection in the middle of
 /// their native draw: a freed path there crashes the whole process, with no exception to catch.
 /// </summary>
-public sealed class ChartCollectionTests
+public sealed partial class ChartCollectionTests
 {
     [Fact]
     public void ChartsFullOfPathMarks_RenderWhileTheCollectorRunsNonStop()
@@ -45,4 +45,58 @@ public sealed class ChartCollectionTests
             collector.Join();
         }
     }
+
+    [Fact]
+    public void ChartsRenderOnTwoThreadsAtOnce_WhileTheCollectorRunsNonStop()
+    {
+        DriftChart.Point[] tests = [.. Enumerable.Range(0, 60).Select(i => new DriftChart.Point(2000 + i / 4.0, 10 + i % 7,
+            (MarkKind)(i % 5), Traceable: i % 3 != 0))];
+        PoleReading[] readings = [.. Enumerable.Range(0, 40).Select(i => new PoleReading((1 + i % 4).ToString(System.Globalization.CultureInfo.InvariantCulture),
+            new DateOnly(2000 + i / 4, 3, 1), TestStage.AsFound, 5000 + 10 * i, 5000 + 10 * i, true, 10, 1, i % 3 != 0))];
+        using var stop = new CancellationTokenSource();
+        var collector = new Thread(() =>
+        {
+            while (!stop.IsCancellationRequested)
+            {
+                GC.Collect();
+                GC.WaitForPendingFinalizers();
+            }
+        }) { IsBackground = true };
+        collector.Start();
+        try
+        {
+            // As the report draws device pages: every core renders charts with text, marks and legends at once.
+            var svgs = new System.Collections.Concurrent.ConcurrentBag<string>();
+            Parallel.For(0, 300, new ParallelOptions { MaxDegreeOfParallelism = Math.Max(2, Environment.ProcessorCount) }, i =>
+                svgs.Add(i % 3 == 0 ? ChartStyle.Svg(ContactChart.Build(readings, 8000, [])) : ChartStyle.Svg(DriftChart.Build($"{2 + i % 5}.55 In cold", tests, 1, 60, null), 400, 260)));
+            Assert.Equal(300, svgs.Count);
+            Assert.All(svgs, svg => Assert.EndsWith("</svg>", svg.TrimEnd(), StringComparison.Ordinal));
+
+            // The same chart drawn alone and among others is the same drawing, up to its clip ids, which no two
+            // charts share (a page inlines several).
+            var alone = Unnumbered(ChartStyle.Svg(DriftChart.Build("2.55 In cold", tests, 1, 60, null), 400, 260));
+            Assert.Contains(alone, svgs.Select(Unnumbered));
+            var ids = svgs.SelectMany(svg => ClipId().Matches(svg).Select(m => m.Groups[1].Value).Distinct()).ToList();
+            Assert.NotEmpty(ids);
+            Assert.Equal(ids.Count, ids.Distinct().Count());
+        }
+        finally
+        {
+            stop.Cancel();
+            collector.Join();
+        }
+    }
+
+    // Clip ids numbered in order of first use, where defined and where used, so two drawings compare by what they draw.
+    private static string Unnumbered(string svg)
+    {
+        var seen = new Dictionary<string, int>();
+        return ClipName().Replace(svg, m => "clip" + (seen.TryGetValue(m.Value, out var n) ? n : seen[m.Value] = seen.Count));
+    }
+
+    [System.Text.RegularExpressions.GeneratedRegex("id=\"(k[0-9a-f]+_[0-9a-f]+)\"")]
+    private static partial System.Text.RegularExpressions.Regex ClipId();
+
+    [System.Text.RegularExpressions.GeneratedRegex("k[0-9a-f]+_[0-9a-f]+")]
+    private static partial System.Text.RegularExpressions.Regex ClipName();
 }

@@ -74,22 +74,22 @@ internal static class ChartStyle
     }
 
     /// <summary>The chart as SVG markup, ready to inline in a page (without the XML declaration, which HTML does not take).</summary>
-    private static readonly Lock Rendering = new();
+    private static long _drawn;
 
     public static string Svg(Plot plot, int width = Width, int height = Height)
     {
-        // One chart renders at a time: device pages are written on several threads, and the native text shaping under
-        // the charts crashed the process when two rendered at once. The pages' other work still runs in parallel.
-        string svg;
-        PixelRect area;
-        lock (Rendering)
-        {
-            svg = plot.GetSvgXml(width, height);
-            area = plot.RenderManager.LastRender.DataRect;
-        }
+        // Charts render on several threads at once (device pages are written in parallel): each plot is its own, and
+        // the marks drawn from a path hold it until the native draw returns (HeldPathMarker).
+        var svg = plot.GetSvgXml(width, height);
+        var area = plot.RenderManager.LastRender.DataRect;
 
         var start = svg.IndexOf("<svg", StringComparison.Ordinal);
         svg = start > 0 ? svg[start..] : svg;
+
+        // A page inlines several charts, so their clip-path ids must differ: each chart's get a prefix of its own rather
+        // than trusting the drawing library's counter across threads.
+        var prefix = "k" + Interlocked.Increment(ref _drawn).ToString("x", CultureInfo.InvariantCulture) + "_";
+        svg = svg.Replace("\"cl_", "\"" + prefix, StringComparison.Ordinal).Replace("(#cl_", "(#" + prefix, StringComparison.Ordinal);
 
         // The data area, in the SVG's own units, so a page test can check that no legend or label covers the data.
         svg = string.Concat("<svg data-plot-area=\"", string.Join(' ', new[] { area.Left, area.Top, area.Width, area.Height }
