@@ -118,7 +118,8 @@ internal static class TimeCurrentChart
         var warm = marks.Any(m => m.Start == StartCondition.Warm)
             ? Band(envelope, upTo, new TestConditions(StartCondition.Warm, PoleLoading.AllPoles))
             : null;
-        return ChartStyle.Svg(Build(envelope, Band(envelope, upTo), warm, marks));
+        using var plot = Build(envelope, Band(envelope, upTo), warm, marks);
+        return ChartStyle.Svg(plot);
     }
 
     /// <summary>Whether the device's chart draws a warm band beside the cold one.</summary>

@@ -133,7 +133,7 @@ internal static class DevicePage
         {
             var band = tests[^1].Assessment.Band;
             var exit = report.Condition.Open.FirstOrDefault(f => f.Kind == FindingKind.TripTrendExit && f.Point == point.Label);
-            var chart = DriftChart.Build(point.Label, [.. tests.Select(t => new DriftChart.Point(TrendPoint.YearOf(t.Trip.Measurement.TestedAt.Date),
+            using var chart = DriftChart.Build(point.Label, [.. tests.Select(t => new DriftChart.Point(TrendPoint.YearOf(t.Trip.Measurement.TestedAt.Date),
                 t.Trip.Measurement.Outcome.Time.Value, TimeCurrentChart.KindOf(t), ReadingHistory.Traceable(t)))], band.Minimum.Limit?.Value, band.Maximum.Limit?.Value, exit);
             html.Append("<figure>").Append(ChartStyle.Svg(chart, 400, 260)).Append("</figure>");
         }
@@ -160,7 +160,7 @@ internal static class DevicePage
         }
 
         var forecasts = report.Condition.Open.Where(f => f.Kind == FindingKind.ContactTrendLimit).ToList();
-        var chart = ContactChart.Build(readings, report.Condition.Device.ContactLimit?.Value, forecasts);
+        using var chart = ContactChart.Build(readings, report.Condition.Device.ContactLimit?.Value, forecasts);
         html.Append("<figure class=\"wide contact\">").Append(ChartStyle.Svg(chart)).Append("<figcaption>")
             .Append(H("Each pole's median reading at each test, referred to 20 °C for copper (IEC 60228, 0.00393 per K); dotted: each pole's first "
                 + "as-found reading; red: the maker's limit; dashed: a Theil–Sen trend to the date it reaches the limit."

@@ -47,7 +47,8 @@ internal static class FleetPage
             sites.Select(s => (string[])[H(s.Key), N(s.Value.Devices), .. s.Value.ByGrade.Select(n => N(n)), N(s.Value.Overdue)])
                 .Append(["all sites", N(devices), .. grades.Select(g => N(sites.Values.Sum(s => s.ByGrade[(int)g]))), N(sites.Values.Sum(s => s.Overdue))]));
         var totals = grades.Select(g => sites.Values.Sum(s => s.ByGrade[(int)g])).ToList();
-        html.Append("<figure class=\"wide\">").Append(ChartStyle.Svg(GradeChart.Build(totals), 640, 300)).Append("<figcaption>")
+        using var chart = GradeChart.Build(totals);
+        html.Append("<figure class=\"wide\">").Append(ChartStyle.Svg(chart, 640, 300)).Append("<figcaption>")
             .Append(H("Grades: sound, nothing open; watch, look into it; plan-work, a trend or change needs work; untested, no as-found test on record; repair, over a limit or out of "
                 + "band; take-out-of-service, may not protect its circuit until repaired and retested."))
             .Append("</figcaption></figure>\n");
