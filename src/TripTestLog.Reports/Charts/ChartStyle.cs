@@ -74,8 +74,6 @@ internal static class ChartStyle
     }
 
     /// <summary>The chart as SVG markup, ready to inline in a page (without the XML declaration, which HTML does not take).</summary>
-    private static long _drawn;
-
     public static string Svg(Plot plot, int width = Width, int height = Height)
     {
         // Charts render on several threads at once (device pages are written in parallel): each plot is its own, and
@@ -85,12 +83,9 @@ internal static class ChartStyle
 
         var start = svg.IndexOf("<svg", StringComparison.Ordinal);
         svg = start > 0 ? svg[start..] : svg;
+        svg = ClipIds.Steady(svg);
 
-        // A page inlines several charts, so their clip-path ids must differ: each chart's get a prefix of its own rather
-        // than trusting the drawing library's counter across threads.
-        var prefix = "k" + Interlocked.Increment(ref _drawn).ToString("x", CultureInfo.InvariantCulture) + "_";
-        svg = svg.Replace("\"cl_", "\"" + prefix, StringComparison.Ordinal).Replace("(#cl_", "(#" + prefix, StringComparison.Ordinal);
-
+        // The data area, in the SVG's own units, so a page test can check that no legend or label covers the data.
         // The data area, in the SVG's own units, so a page test can check that no legend or label covers the data.
         svg = string.Concat("<svg data-plot-area=\"", string.Join(' ', new[] { area.Left, area.Top, area.Width, area.Height }
             .Select(v => v.ToString("0.#", CultureInfo.InvariantCulture))), "\"", svg[4..]);
