@@ -27,6 +27,10 @@ internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> op
 
     public DbSet<InstrumentRow> Instruments => Set<InstrumentRow>();
 
+    public DbSet<PeerStampRow> PeerStamps => Set<PeerStampRow>();
+
+    public DbSet<PeerPositionRow> PeerPositions => Set<PeerPositionRow>();
+
     protected override void OnModelCreating(ModelBuilder modelBuilder)
     {
         modelBuilder.Entity<SourceFileRow>(e =>
@@ -108,6 +112,20 @@ internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> op
             e.HasIndex(x => x.Instrument);
             e.HasIndex(x => x.Fingerprint).IsUnique();
             e.HasOne<SourceFileRow>().WithMany().HasForeignKey(x => x.SourceFileId).OnDelete(DeleteBehavior.Restrict);
+        });
+
+        // Each device's place among its peers, kept by import so one device's findings read its groups, not the fleet.
+        modelBuilder.Entity<PeerStampRow>(e =>
+        {
+            e.ToTable("peer_stamps");
+            e.HasKey(x => x.DeviceId);
+            e.HasOne<DeviceRow>().WithMany().HasForeignKey(x => x.DeviceId).OnDelete(DeleteBehavior.Cascade);
+        });
+        modelBuilder.Entity<PeerPositionRow>(e =>
+        {
+            e.ToTable("peer_positions");
+            e.HasIndex(x => x.DeviceId);
+            e.HasOne<DeviceRow>().WithMany().HasForeignKey(x => x.DeviceId).OnDelete(DeleteBehavior.Cascade);
         });
 
         if (Database.ProviderName == ServerColumnTypes.Provider)

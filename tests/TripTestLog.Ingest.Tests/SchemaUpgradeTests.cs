@@ -60,7 +60,7 @@ public sealed class SchemaUpgradeTests
 
         using var store = RecordStore.Open(db);
 
-        Assert.EndsWith("_CriticalityAndInsulationInstrument", store.AppliedMigrations()[^1]);
+        Assert.EndsWith("_PeerPositions", store.AppliedMigrations()[^1]);
         var histories = store.Histories();
         Assert.Equal(2, histories["TWO-01"].Entries.Count);
         Assert.Equal(500, Assert.IsType<ElectronicTripSettings>(histories["TWO-01"].InForceOn(new DateOnly(2024, 6, 1)).Settings).Ir.Value);
@@ -84,7 +84,7 @@ public sealed class SchemaUpgradeTests
         using var store = RecordStore.Open(db);
         var outcome = store.Import(again, DateTimeOffset.UtcNow);
 
-        Assert.EndsWith("_CriticalityAndInsulationInstrument", store.AppliedMigrations()[^1]);
+        Assert.EndsWith("_PeerPositions", store.AppliedMigrations()[^1]);
         Assert.Equal(5, store.Trips().Count);
 
         // The files imported before full paths were kept apart keep their full path, which was their name, to verify by.

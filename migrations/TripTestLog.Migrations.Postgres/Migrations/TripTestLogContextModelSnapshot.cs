@@ -647,6 +647,56 @@ namespace TripTestLog.Migrations.Postgres.Migrations
                     b.ToTable("insulation_tests", (string)null);
                 });
 
+            modelBuilder.Entity("TripTestLog.Storage.Entities.PeerPositionRow", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("bigint")
+                        .HasColumnName("id");
+
+                    NpgsqlPropertyBuilderExtensions.UseIdentityByDefaultColumn(b.Property<long>("Id"));
+
+                    b.Property<long>("DeviceId")
+                        .HasColumnType("bigint")
+                        .HasColumnName("device_id");
+
+                    b.Property<string>("GroupKey")
+                        .IsRequired()
+                        .HasColumnType("text")
+                        .HasColumnName("group_key");
+
+                    b.Property<double>("Position")
+                        .HasColumnType("double precision")
+                        .HasColumnName("position");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("DeviceId");
+
+                    b.ToTable("peer_positions", (string)null);
+                });
+
+            modelBuilder.Entity("TripTestLog.Storage.Entities.PeerStampRow", b =>
+                {
+                    b.Property<long>("DeviceId")
+                        .HasColumnType("bigint")
+                        .HasColumnName("device_id");
+
+                    b.Property<string>("Basis")
+                        .IsRequired()
+                        .HasColumnType("text")
+                        .HasColumnName("basis");
+
+                    b.Property<string>("Stamp")
+                        .IsRequired()
+                        .HasColumnType("text")
+                        .HasColumnName("stamp");
+
+                    b.HasKey("DeviceId");
+
+                    b.ToTable("peer_stamps", (string)null);
+                });
+
             modelBuilder.Entity("TripTestLog.Storage.Entities.SourceFileRow", b =>
                 {
                     b.Property<long>("Id")
@@ -900,6 +950,24 @@ namespace TripTestLog.Migrations.Postgres.Migrations
                         .WithMany()
                         .HasForeignKey("SourceFileId")
                         .OnDelete(DeleteBehavior.Restrict)
+                        .IsRequired();
+                });
+
+            modelBuilder.Entity("TripTestLog.Storage.Entities.PeerPositionRow", b =>
+                {
+                    b.HasOne("TripTestLog.Storage.Entities.DeviceRow", null)
+                        .WithMany()
+                        .HasForeignKey("DeviceId")
+                        .OnDelete(DeleteBehavior.Cascade)
+                        .IsRequired();
+                });
+
+            modelBuilder.Entity("TripTestLog.Storage.Entities.PeerStampRow", b =>
+                {
+                    b.HasOne("TripTestLog.Storage.Entities.DeviceRow", null)
+                        .WithMany()
+                        .HasForeignKey("DeviceId")
+                        .OnDelete(DeleteBehavior.Cascade)
                         .IsRequired();
                 });
 

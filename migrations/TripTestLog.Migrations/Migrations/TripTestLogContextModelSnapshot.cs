@@ -618,6 +618,54 @@ namespace TripTestLog.Migrations.Migrations
                     b.ToTable("insulation_tests", (string)null);
                 });
 
+            modelBuilder.Entity("TripTestLog.Storage.Entities.PeerPositionRow", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER")
+                        .HasColumnName("id");
+
+                    b.Property<long>("DeviceId")
+                        .HasColumnType("INTEGER")
+                        .HasColumnName("device_id");
+
+                    b.Property<string>("GroupKey")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("group_key");
+
+                    b.Property<double>("Position")
+                        .HasColumnType("REAL")
+                        .HasColumnName("position");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("DeviceId");
+
+                    b.ToTable("peer_positions", (string)null);
+                });
+
+            modelBuilder.Entity("TripTestLog.Storage.Entities.PeerStampRow", b =>
+                {
+                    b.Property<long>("DeviceId")
+                        .HasColumnType("INTEGER")
+                        .HasColumnName("device_id");
+
+                    b.Property<string>("Basis")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("basis");
+
+                    b.Property<string>("Stamp")
+                        .IsRequired()
+                        .HasColumnType("TEXT")
+                        .HasColumnName("stamp");
+
+                    b.HasKey("DeviceId");
+
+                    b.ToTable("peer_stamps", (string)null);
+                });
+
             modelBuilder.Entity("TripTestLog.Storage.Entities.SourceFileRow", b =>
                 {
                     b.Property<long>("Id")
@@ -861,6 +909,24 @@ namespace TripTestLog.Migrations.Migrations
                         .WithMany()
                         .HasForeignKey("SourceFileId")
                         .OnDelete(DeleteBehavior.Restrict)
+                        .IsRequired();
+                });
+
+            modelBuilder.Entity("TripTestLog.Storage.Entities.PeerPositionRow", b =>
+                {
+                    b.HasOne("TripTestLog.Storage.Entities.DeviceRow", null)
+                        .WithMany()
+                        .HasForeignKey("DeviceId")
+                        .OnDelete(DeleteBehavior.Cascade)
+                        .IsRequired();
+                });
+
+            modelBuilder.Entity("TripTestLog.Storage.Entities.PeerStampRow", b =>
+                {
+                    b.HasOne("TripTestLog.Storage.Entities.DeviceRow", null)
+                        .WithMany()
+                        .HasForeignKey("DeviceId")
+                        .OnDelete(DeleteBehavior.Cascade)
                         .IsRequired();
                 });
 
