@@ -25,14 +25,22 @@ public static class FindingsPipeline
     {
         ArgumentNullException.ThrowIfNull(source);
         ArgumentNullException.ThrowIfNull(policy);
-        var judge = DeviceJudge.For(source, policy.RequireRegisteredInstruments, policy.AmbientNoteKelvin, policy.PointWindowPercent / 100, policy.Decision);
+        var judge = StoredPeerPositions.Judge(source, policy);
         var peers = new PeerGroups();
-        // The store is read a few devices ahead on another thread, so reading and judging overlap on two cores. For one
-        // device, only the devices that can share one of its peer groups are read: its groups come out the same.
-        foreach (var device in ReadAhead.Of(only is { } tag ? source.PeersOf(tag) : source.Devices(), 8, cancel))
+        if (only is { } one && source is IPeerPositionStore stored)
         {
-            cancel.ThrowIfCancellationRequested();
-            PeerPass.Add(device, judge, peers);
+            // One device: its peers' positions as the store keeps them, worked out afresh only where stale.
+            StoredPeerPositions.Fill(one, source, stored, policy, judge, peers, cancel);
+        }
+        else
+        {
+            // The store is read a few devices ahead on another thread, so reading and judging overlap on two cores. For
+            // one device, only the devices that can share one of its peer groups are read: its groups come out the same.
+            foreach (var device in ReadAhead.Of(only is { } tag ? source.PeersOf(tag) : source.Devices(), 8, cancel))
+            {
+                cancel.ThrowIfCancellationRequested();
+                PeerPass.Add(device, judge, peers);
+            }
         }
 
         peers.Seal();

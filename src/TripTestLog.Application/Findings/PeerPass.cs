@@ -15,6 +15,15 @@ internal static class PeerPass
 {
     public static void Add(DeviceRecords device, DeviceJudge judge, PeerGroups peers)
     {
+        foreach (var (key, position) in Positions(device, judge))
+        {
+            peers.Add(key, position);
+        }
+    }
+
+    /// <summary>The device's position at each of its points, under the peer group each belongs to.</summary>
+    public static IEnumerable<(string Group, double Position)> Positions(DeviceRecords device, DeviceJudge judge)
+    {
         var assessor = new TripAssessor(judge.Curves, judge.Ambients, judge.AmbientNoteKelvin, judge.PointWindow, judge.Decision, judge.Instruments);
         var byPoint = new Dictionary<string, (TripPoint Point, List<int> Tests)>(StringComparer.Ordinal);
         for (var i = 0; i < device.Trips.Count; i++)
@@ -48,7 +57,7 @@ internal static class PeerPass
 
                 if (result.Assessment.Margin.PositionInBand is { } position)
                 {
-                    peers.Add(PeerGroups.GroupOf(result.Device, point).Key, position);
+                    yield return (PeerGroups.GroupOf(result.Device, point).Key, position);
                 }
 
                 break;

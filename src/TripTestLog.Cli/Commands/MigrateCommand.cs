@@ -27,6 +27,12 @@ internal static class MigrateCommand
         }
 
         using var store = Stores.Open(cli, db, StorePurpose.Migrate);
+        using (var log = Logging.BesideDatabase(db))
+        {
+            // A database upgraded from before peer positions were kept gets them now, not at its next import.
+            ImportCommand.KeepPeerPositions(cli, store, db, log);
+        }
+
         var applied = Stores.AppliedMigrations(store);
         Output.Wrapped.Write(cli.Out, $"The schema of {db.Display} is up to date: {applied.Count} migrations, the latest {(applied.Count > 0 ? applied[^1] : "none")}.", 0);
         return ExitCodes.Ok;

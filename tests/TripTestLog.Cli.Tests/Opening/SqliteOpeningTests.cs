@@ -126,8 +126,18 @@ public sealed class SqliteOpeningTests : IDisposable
 
         var migrate = CliRun.Run("migrate", "--db", Db);
         Assert.Equal(0, migrate.Exit);
-        Assert.StartsWith($"The schema of {Db} is up to date: 7 migrations, the latest ", migrate.Out.ReplaceLineEndings(" "), StringComparison.Ordinal);
+        Assert.StartsWith($"The schema of {Db} is up to date: 8 migrations, the latest ", migrate.Out.ReplaceLineEndings(" "), StringComparison.Ordinal);
         Assert.Equal(0, CliRun.Run("check", "--db", Db).Exit);
+
+        // Migrate also keeps each device's peer places, which the old schema had no table for.
+        using var read = new SqliteConnection($"Data Source={Db};Pooling=False;Mode=ReadOnly");
+        read.Open();
+        using var count = read.CreateCommand();
+        count.CommandText = "SELECT (SELECT COUNT(*) FROM devices), (SELECT COUNT(*) FROM peer_stamps)";
+        using var counts = count.ExecuteReader();
+        Assert.True(counts.Read());
+        Assert.True(counts.GetInt64(0) > 0);
+        Assert.Equal(counts.GetInt64(0), counts.GetInt64(1));
     }
 
     [Fact]

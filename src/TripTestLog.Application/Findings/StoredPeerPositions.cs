@@ -1,0 +1,102 @@
+using System.Globalization;
+using TripTestLog.Application.Check;
+using TripTestLog.Application.Streams;
+using TripTestLog.Domain.Devices;
+
+namespace TripTestLog.Application.Findings;
+
+/// <summary>
+/// Peer positions kept in the store: import brings them up to date for every device whose records or judging basis
+/// changed, and one device's findings read its peers' stored positions, working out afresh only those that are stale.
+/// The groups come out the same as from judging every peer's tests, which stays the way when much is stale.
+/// </summary>
+public static class StoredPeerPositions
+{
+    // Beyond this share of stale peers, reading the whole peer set in one query is cheaper than one query per device.
+    private const double StaleShareForFullRead = 0.25;
+
+    /// <summary>
+    /// What positions depend on besides a device's own records: the policy's judging settings and the reference tables.
+    /// Positions stored under another basis are not used.
+    /// </summary>
+    public static string Basis(FindingPolicy policy, IPeerPositionStore store)
+    {
+        ArgumentNullException.ThrowIfNull(policy);
+        ArgumentNullException.ThrowIfNull(store);
+        return string.Create(CultureInfo.InvariantCulture,
+            $"1|{policy.RequireRegisteredInstruments}|{policy.AmbientNoteKelvin:R}|{policy.PointWindowPercent:R}|{policy.Decision}|{store.ReferenceStamp()}");
+    }
+
+    /// <summary>
+    /// Works out and stores the positions of every device whose stored ones are missing or stale under
+    /// <paramref name="policy"/>; returns how many devices that was. Positions are worked out before the short write.
+    /// </summary>
+    public static int Refresh(ITripSource source, IPeerPositionStore store, FindingPolicy policy, CancellationToken cancel = default)
+    {
+        ArgumentNullException.ThrowIfNull(source);
+        var basis = Basis(policy, store);
+        var stale = store.StalePeers(basis);
+        if (stale.Count == 0)
+        {
+            return 0;
+        }
+
+        var judge = Judge(source, policy);
+        var stamps = stale.ToDictionary(s => s.Tag.Value, s => s.Stamp, AssetTag.Comparer);
+        var devices = ReadAhead.Of(Read(source, stale.Select(s => s.Tag), whole: stale.Count > 64), 8, cancel)
+            .Where(d => stamps.ContainsKey(d.History.Latest.Tag.Value));
+        var positions = new List<DevicePeerPositions>(stale.Count);
+        foreach (var device in devices)
+        {
+            cancel.ThrowIfCancellationRequested();
+            var tag = device.History.Latest.Tag;
+            positions.Add(new DevicePeerPositions(tag, basis, stamps[tag.Value], [.. PeerPass.Positions(device, judge)]));
+        }
+
+        store.StorePeerPositions(positions);
+        return positions.Count;
+    }
+
+    /// <summary>
+    /// Fills <paramref name="peers"/> with the groups <paramref name="tag"/> can belong to: stored positions where they
+    /// are current, worked out afresh where not.
+    /// </summary>
+    internal static void Fill(AssetTag tag, ITripSource source, IPeerPositionStore store, FindingPolicy policy, DeviceJudge judge, PeerGroups peers,
+        CancellationToken cancel)
+    {
+        var basis = Basis(policy, store);
+        var stored = store.StoredPeersOf(tag);
+        var stale = stored.Where(p => p.Basis != basis || p.Stamp != p.StampNow).Select(p => p.Tag).ToList();
+        if (stale.Count > stored.Count * StaleShareForFullRead)
+        {
+            foreach (var device in ReadAhead.Of(source.PeersOf(tag), 8, cancel))
+            {
+                cancel.ThrowIfCancellationRequested();
+                PeerPass.Add(device, judge, peers);
+            }
+
+            return;
+        }
+
+        foreach (var peer in stored.Where(p => p.Basis == basis && p.Stamp == p.StampNow))
+        {
+            foreach (var (group, position) in peer.Positions)
+            {
+                peers.Add(group, position);
+            }
+        }
+
+        foreach (var device in Read(source, stale, whole: false))
+        {
+            cancel.ThrowIfCancellationRequested();
+            PeerPass.Add(device, judge, peers);
+        }
+    }
+
+    internal static DeviceJudge Judge(ITripSource source, FindingPolicy policy) =>
+        DeviceJudge.For(source, policy.RequireRegisteredInstruments, policy.AmbientNoteKelvin, policy.PointWindowPercent / 100, policy.Decision);
+
+    // Many devices are read in one pass over the fleet; a few, one query each.
+    private static IEnumerable<DeviceRecords> Read(ITripSource source, IEnumerable<AssetTag> tags, bool whole) =>
+        whole ? source.Devices() : tags.SelectMany(tag => source.Devices(tag));
+}
