@@ -11,13 +11,8 @@ namespace TripTestLog.Storage;
 /// Device settings stored as one JSON text column (`settings_json`), so a new family adds fields, not table columns.
 /// Field names are snake_case and carry their unit; readable with SQLite's json_extract.
 /// </summary>
-internal static class SettingsCodec
+internal static partial class SettingsCodec
 {
-    private static readonly JsonSerializerOptions Options = new()
-    {
-        PropertyNamingPolicy = JsonNamingPolicy.SnakeCaseLower,
-        DefaultIgnoreCondition = JsonIgnoreCondition.WhenWritingNull,
-    };
 
     public static string Write(DeviceSettings settings) => JsonSerializer.Serialize(settings switch
     {
@@ -37,11 +32,11 @@ internal static class SettingsCodec
         },
         CurveTableSettings s => new Dto { Kind = "curve-table", CurveTable = s.Table },
         _ => throw new ArgumentOutOfRangeException(nameof(settings), settings.GetType().Name, "no storage form for these settings"),
-    }, Options);
+    }, SettingsJson.Default.Dto);
 
     public static DeviceSettings Read(string json)
     {
-        var d = JsonSerializer.Deserialize<Dto>(json, Options) ?? throw new InvalidDataException("empty settings_json");
+        var d = JsonSerializer.Deserialize(json, SettingsJson.Default.Dto) ?? throw new InvalidDataException("empty settings_json");
         return d.Kind switch
         {
             "iec60898" => new Iec60898Settings(TextCodes.TripCurve.Decode(d.Curve!))
@@ -69,7 +64,7 @@ internal static class SettingsCodec
 
     private static Seconds? S(double? value) => value is { } v ? Seconds.Of(v) : null;
 
-    private sealed class Dto
+    internal sealed class Dto
     {
         public string Kind { get; set; } = "";
 
@@ -116,4 +111,9 @@ internal static class SettingsCodec
 
         public bool? ThermalMemory { get; set; }
     }
+
+    // Generated at build time: a command that reads one device's settings starts without building a serializer.
+    [JsonSourceGenerationOptions(PropertyNamingPolicy = JsonKnownNamingPolicy.SnakeCaseLower, DefaultIgnoreCondition = JsonIgnoreCondition.WhenWritingNull)]
+    [JsonSerializable(typeof(Dto))]
+    internal sealed partial class SettingsJson : JsonSerializerContext;
 }

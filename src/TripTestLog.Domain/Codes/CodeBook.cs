@@ -9,27 +9,56 @@ namespace TripTestLog.Domain.Codes;
 public sealed class CodeBook<T>
     where T : struct, Enum
 {
-    private readonly IReadOnlyList<(T Value, string Code)> _entries;
+    private readonly (T Value, string Code)[] _entries;
+    private readonly string[] _codes;
     private readonly string _what;
 
     /// <summary>Creates the book; <paramref name="what"/> names the kind of value in messages, e.g. "stage".</summary>
     public CodeBook(string what, params (T Value, string Code)[] entries)
     {
+        ArgumentNullException.ThrowIfNull(entries);
         _what = what;
         _entries = entries;
-        var missing = Enum.GetValues<T>().Where(v => !entries.Any(e => e.Value.Equals(v))).ToList();
-        if (missing.Count > 0 || entries.Select(e => e.Code).Distinct(StringComparer.OrdinalIgnoreCase).Count() != entries.Length)
+
+        // Plain loops, not LINQ over T: every command builds these books at start, and LINQ over a value type of our
+        // own is compiled on first use for each book, which cost a command some 60 ms before it began.
+        _codes = new string[entries.Length];
+        var distinct = new HashSet<string>(StringComparer.OrdinalIgnoreCase);
+        for (var i = 0; i < entries.Length; i++)
+        {
+            _codes[i] = entries[i].Code;
+            distinct.Add(entries[i].Code);
+        }
+
+        var missing = new List<string>();
+        foreach (var value in Enum.GetValues(typeof(T)))
+        {
+            var found = false;
+            for (var i = 0; i < entries.Length && !found; i++)
+            {
+                found = entries[i].Value.Equals(value);
+            }
+
+            if (!found)
+            {
+                missing.Add(value.ToString()!);
+            }
+        }
+
+        if (missing.Count > 0 || distinct.Count != entries.Length)
         {
             throw new ArgumentException($"every {what} needs exactly one code; missing: {string.Join(", ", missing)}", nameof(entries));
         }
+
+        All = Array.AsReadOnly(_codes);
+        Choices = _codes.Length == 1 ? _codes[0] : string.Join(", ", _codes[..^1]) + " or " + _codes[^1];
     }
 
     /// <summary>Every code, in the book's order.</summary>
-    public IEnumerable<string> All => _entries.Select(e => e.Code);
+    public IEnumerable<string> All { get; }
 
     /// <summary>The codes as a list for messages: "a, b or c".</summary>
-    public string Choices => _entries.Count == 1 ? _entries[0].Code
-        : string.Join(", ", _entries.Take(_entries.Count - 1).Select(e => e.Code)) + " or " + _entries[^1].Code;
+    public string Choices { get; }
 
     /// <summary>The code of a value.</summary>
     public string Of(T value)
