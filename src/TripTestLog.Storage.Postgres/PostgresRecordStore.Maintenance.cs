@@ -26,10 +26,12 @@ public sealed partial class PostgresRecordStore
         Scalar("SELECT COUNT(*) FROM insulation_tests"));
 
     /// <inheritdoc />
-    public IReadOnlyDictionary<string, DeviceHistory> Histories()
+    public IReadOnlyDictionary<string, DeviceHistory> Histories(AssetTag? only = null)
     {
         using var select = Command(
-            $"SELECT d.asset_tag, {ServerSql.RegisterSelect("r")} FROM device_revisions r JOIN devices d ON d.id = r.device_id ORDER BY d.asset_tag, r.id");
+            $"SELECT d.asset_tag, {ServerSql.RegisterSelect("r")} FROM device_revisions r JOIN devices d ON d.id = r.device_id "
+            + $"WHERE @tag::text IS NULL OR {ServerSql.TagKey("d.asset_tag")} = {ServerSql.TagKey("@tag")} ORDER BY d.asset_tag, r.id");
+        select.Parameters.Add(Text("tag", only?.Value));
         using var reader = select.ExecuteReader();
         return DeviceMapping.Histories(reader);
     }

@@ -48,13 +48,13 @@ public sealed partial class RecordStore
     /// <summary>Every trip test, ordered by asset tag, then test time, then file line; optionally for one device.</summary>
     public IReadOnlyList<StoredTrip> Trips(AssetTag? only = null) => Devices(only).SelectMany(d => d.Trips).ToList();
 
-    /// <summary>Every device's register entries, oldest first, by asset tag.</summary>
-    public IReadOnlyDictionary<string, DeviceHistory> Histories()
+    /// <inheritdoc />
+    public IReadOnlyDictionary<string, DeviceHistory> Histories(AssetTag? only = null)
     {
-        using var select = _connection.CreateCommand();
-        select.CommandText =
+        using var select = TagQuery(
             $"SELECT d.asset_tag, {string.Join(", ", RegisterColumns.Split(", ").Select(c => "r." + c))} "
-            + "FROM device_revisions r JOIN devices d ON d.id = r.device_id ORDER BY d.asset_tag, r.id";
+            + "FROM device_revisions r JOIN devices d ON d.id = r.device_id WHERE $tag IS NULL OR d.asset_tag = $tag COLLATE NOCASE ORDER BY d.asset_tag, r.id",
+            only);
         using var reader = select.ExecuteReader();
         return DeviceMapping.Histories(reader);
     }

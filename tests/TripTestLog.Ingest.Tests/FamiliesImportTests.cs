@@ -50,6 +50,12 @@ public sealed class FamiliesImportTests
         Assert.Equal((IdmtCurve.IeeeVeryInverse, 600.0, 2.0, 0.05), (relay.Curve, relay.Pickup.Value, relay.Tms, relay.OpeningTime.Value));
         Assert.Equal("SPECIAL", Assert.IsType<CurveTableSettings>(histories["C-1"].Latest.Settings).Table);
         Assert.Equal(TripCurve.C, Assert.IsType<Iec60898Settings>(histories["M-1"].Latest.Settings).Curve);
+
+        // One device's entries alone, its tag matched as the register matches tags (any case), both entries kept.
+        var one = store.Histories(AssetTag.Of("e-1"));
+        Assert.Equal("E-1", Assert.Single(one).Key);
+        Assert.Equal(2, one["E-1"].Entries.Count);
+        Assert.Empty(store.Histories(AssetTag.Of("NOT-THERE")));
     }
 
     [Theory]

@@ -16,8 +16,11 @@ public interface IRecordStore : IImportStore, ITripSource, IHistorySource, IReco
     /// <summary>Where the store is, for messages and logs (a file path, or a server and database; never a password).</summary>
     string Location { get; }
 
-    /// <summary>Every device's register entries, oldest first, by asset tag (compared as <see cref="AssetTag.Comparer"/> does).</summary>
-    IReadOnlyDictionary<string, DeviceHistory> Histories();
+    /// <summary>
+    /// Every device's register entries, oldest first, by asset tag (compared as <see cref="AssetTag.Comparer"/> does);
+    /// with <paramref name="only"/>, that device's alone (none when it is not in the register).
+    /// </summary>
+    IReadOnlyDictionary<string, DeviceHistory> Histories(AssetTag? only = null);
 
     /// <summary>How many of each thing the store holds.</summary>
     StoreCounts Counts();

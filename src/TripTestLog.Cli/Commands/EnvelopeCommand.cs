@@ -78,7 +78,8 @@ internal static class EnvelopeCommand
             }
 
             using var store = Stores.Open(cli, request.Database, StorePurpose.Read);
-            if (!store.Histories().TryGetValue(asset, out var history))
+            // Only this device's register entries are read; a tag that cannot be one is not in the register.
+            if (!AssetTag.IsValid(asset, out _) || !store.Histories(AssetTag.Of(asset)).TryGetValue(asset, out var history))
             {
                 return Usage(cli, $"--asset: '{asset}' is not in the device register");
             }

@@ -57,7 +57,7 @@ internal static class WorksheetCommand
     private static int Run(CliContext cli, ConditionOptions.Resolved options, TestStage stage, string folder)
     {
         using var store = Stores.Open(cli, options.Database, StorePurpose.Read);
-        var histories = store.Histories();
+        var histories = store.Histories(options.Only);
         var selected = histories.Values
             .Where(h => options.Only is { } tag ? h.Latest.Tag == tag : string.Equals(h.InForceOn(options.AsOf).Site, options.Site, StringComparison.OrdinalIgnoreCase))
             .OrderBy(h => h.Latest.Tag.Value, StringComparer.Ordinal)
