@@ -49,7 +49,7 @@ internal static partial class WriteFailure
 
         return Has<UnauthorizedAccessException>(e)
             ? $"cannot write {path}: this user may not write there; make the folder (or the file) writable for this user, or give another folder"
-            : $"cannot write {path}: {Innermost(e).Message.ReplaceLineEndings(" ").Trim()}; check the folder exists, is writable and has space";
+            : $"cannot write {path}: {Innermost(e).Message.ReplaceLineEndings(" ").Trim().TrimEnd('.')}; check the folder exists, is writable and has space";
     }
 
     // .NET names the file in the message of the outer exception ('...'); the inner one holds only the system's words.
