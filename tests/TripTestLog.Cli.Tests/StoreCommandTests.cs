@@ -158,6 +158,16 @@ public sealed class StoreCommandTests(CopiedFleet fleet) : IClassFixture<CopiedF
             var original = CliRun.Run("findings", "--json", "--db", fleet.Original, "--policy", PolicyBesideOriginal());
             var returned = CliRun.Run("findings", "--json", "--db", back, "--policy", PolicyBesideOriginal());
             Assert.Equal(original.Out, returned.Out);
+
+            // The SQLite copy keeps every device's peer places, as an import would.
+            using var read = new Microsoft.Data.Sqlite.SqliteConnection($"Data Source={back};Pooling=False;Mode=ReadOnly");
+            read.Open();
+            using var count = read.CreateCommand();
+            count.CommandText = "SELECT (SELECT COUNT(*) FROM devices) - (SELECT COUNT(*) FROM peer_stamps), (SELECT COUNT(*) FROM peer_stamps)";
+            using var counts = count.ExecuteReader();
+            Assert.True(counts.Read());
+            Assert.Equal(0L, counts.GetInt64(0));
+            Assert.True(counts.GetInt64(1) > 0);
         }
         finally
         {

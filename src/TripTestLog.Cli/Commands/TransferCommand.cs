@@ -52,6 +52,12 @@ internal static class TransferCommand
         }
 
         var copied = files.Count(f => f.Copied);
+        if (copied > 0)
+        {
+            // A SQLite copy keeps its devices' peer places as an import does, so one device's findings are quick there too.
+            ImportCommand.KeepPeerPositions(cli, target, to, log);
+        }
+
         cli.Out.WriteLine($"Transferred {from.Display}");
         cli.Out.WriteLine($"       into {to.Display}:");
         Output.Wrapped.Write(cli.Out, $"{Counted.Of(files.Count, "file")}: {copied} copied, {files.Count - copied} already there; "
