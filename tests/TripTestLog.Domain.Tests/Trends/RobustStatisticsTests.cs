@@ -33,4 +33,33 @@ public sealed class RobustStatisticsTests
 
     [Fact]
     public void Median_OfNothing_IsRefused() => Assert.Throws<ArgumentException>(() => RobustStatistics.Median([]));
+
+    [Fact]
+    public void MedianInPlace_GivesTheSortedMedian_ForOddAndEvenCounts_WithTiesAndRuns()
+    {
+        // The median by definition (sort, take the middle or the mean of the two middles) against selection, on
+        // random data of every size to 400, with ties (values drawn from a few levels), sorted and reversed runs.
+        var random = new Random(20261205);
+        for (var n = 1; n <= 400; n++)
+        {
+            foreach (var shape in new[] { "random", "ties", "sorted", "reversed", "constant" })
+            {
+                var values = shape switch
+                {
+                    "ties" => Enumerable.Range(0, n).Select(_ => (double)random.Next(5)).ToArray(),
+                    "sorted" => Enumerable.Range(0, n).Select(i => i * 0.5).ToArray(),
+                    "reversed" => Enumerable.Range(0, n).Select(i => -i * 0.5).ToArray(),
+                    "constant" => Enumerable.Repeat(3.25, n).ToArray(),
+                    _ => Enumerable.Range(0, n).Select(_ => random.NextDouble() * 200 - 100).ToArray(),
+                };
+                var sorted = values.Order().ToArray();
+                var expected = n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
+
+                Assert.Equal(expected, RobustStatistics.MedianInPlace(values));
+            }
+        }
+    }
+
+    [Fact]
+    public void MedianInPlace_OfNothing_IsRefused() => Assert.Throws<ArgumentException>(() => RobustStatistics.MedianInPlace([]));
 }

@@ -21,6 +21,44 @@ public sealed class TheilSenTests
         Assert.Equal((5, 2025.0), (line.Count, line.LastYear));
     }
 
+    [Theory]
+    [InlineData(3)]
+    [InlineData(12)]
+    [InlineData(101)]
+    [InlineData(300)]
+    public void Fit_IsExactlyTheLineByDefinition_ForLongHistoriesWithRepeatedDates(int tests)
+    {
+        // Sen (1968) by the letter: every pairwise slope at distinct times, sorted, the middle; then the median offset
+        // and the median absolute residual. The fit selects its medians instead of sorting; the numbers must not move.
+        var random = new Random(tests);
+        List<TrendPoint> points = [.. Enumerable.Range(0, tests).Select(i => new TrendPoint(2000 + random.Next(0, tests / 3 + 2) * 0.25, Math.Log10(10 + random.NextDouble() * 30)))];
+        var slopes = new List<double>();
+        for (var i = 0; i < points.Count; i++)
+        {
+            for (var j = i + 1; j < points.Count; j++)
+            {
+                if (points[j].Year != points[i].Year)
+                {
+                    slopes.Add((points[j].Value - points[i].Value) / (points[j].Year - points[i].Year));
+                }
+            }
+        }
+
+        var slope = SortedMedian(slopes);
+        var intercept = SortedMedian(points.Select(p => p.Value - slope * p.Year));
+        var spread = 1.4826 * SortedMedian(points.Select(p => Math.Abs(p.Value - intercept - slope * p.Year)));
+
+        var line = TheilSen.Fit(points)!;
+
+        Assert.Equal((slope, intercept, spread, tests, points.Max(p => p.Year)), (line.Slope, line.Intercept, line.Spread, line.Count, line.LastYear));
+    }
+
+    private static double SortedMedian(IEnumerable<double> values)
+    {
+        var sorted = values.Order().ToArray();
+        return sorted.Length % 2 == 1 ? sorted[sorted.Length / 2] : (sorted[sorted.Length / 2 - 1] + sorted[sorted.Length / 2]) / 2;
+    }
+
     [Fact]
     public void OneWildReading_DoesNotMoveTheSlope_WhereLeastSquaresWouldGiveEightTimesIt()
     {
