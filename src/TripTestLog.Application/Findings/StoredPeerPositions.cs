@@ -15,6 +15,9 @@ public static class StoredPeerPositions
     // Beyond this share of stale peers, reading the whole peer set in one query is cheaper than one query per device.
     private const double StaleShareForFullRead = 0.25;
 
+    // Beyond this many stale devices, one ordered pass over the fleet is cheaper than one query per device.
+    private const int StaleCountForFleetPass = 64;
+
     /// <summary>
     /// What positions depend on besides a device's own records: the policy's judging settings and the reference tables.
     /// Positions stored under another basis are not used.
@@ -30,8 +33,10 @@ public static class StoredPeerPositions
     /// <summary>
     /// Works out and stores the positions of every device whose stored ones are missing or stale under
     /// <paramref name="policy"/>; returns how many devices that was. Positions are worked out before the short write.
+    /// <paramref name="step"/> is called once a device, with the number of stale devices.
     /// </summary>
-    public static int Refresh(ITripSource source, IPeerPositionStore store, FindingPolicy policy, CancellationToken cancel = default)
+    public static int Refresh(ITripSource source, IPeerPositionStore store, FindingPolicy policy, CancellationToken cancel = default,
+        Action<int>? step = null)
     {
         ArgumentNullException.ThrowIfNull(source);
         var basis = Basis(policy, store);
@@ -43,12 +48,13 @@ public static class StoredPeerPositions
 
         var judge = Judge(source, policy);
         var stamps = stale.ToDictionary(s => s.Tag.Value, s => s.Stamp, AssetTag.Comparer);
-        var devices = ReadAhead.Of(Read(source, stale.Select(s => s.Tag), whole: stale.Count > 64), 8, cancel)
+        var devices = ReadAhead.Of(Read(source, stale.Select(s => s.Tag), whole: stale.Count > StaleCountForFleetPass), 8, cancel)
             .Where(d => stamps.ContainsKey(d.History.Latest.Tag.Value));
         var positions = new List<DevicePeerPositions>(stale.Count);
         foreach (var device in devices)
         {
             cancel.ThrowIfCancellationRequested();
+            step?.Invoke(stale.Count);
             var tag = device.History.Latest.Tag;
             positions.Add(new DevicePeerPositions(tag, basis, stamps[tag.Value], [.. PeerPass.Positions(device, judge)]));
         }

@@ -107,7 +107,7 @@ internal static class DemoCommand
         using (var jsonWriter = new StreamWriter(json))
         {
             outcomes = new ImportRunner(store, log, cli).Run(files, ImportOptions.Strict, asOf);
-            ImportCommand.KeepPeerPositions(cli, store, db, log);
+            PeerPlaces.Keep(cli, store, db, log);
             var writers = new VerdictWriters(new VerdictTable(textWriter), new VerdictJson(jsonWriter), counts, attention);
             foreach (var judged in CheckPipeline.Run(store, null, policy.Policy.RequireRegisteredInstruments, cli.Cancel, policy.Policy.AmbientNoteKelvin, policy.Policy.PointWindowPercent / 100, policy.Policy.Decision))
             {

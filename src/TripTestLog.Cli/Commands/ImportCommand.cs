@@ -1,4 +1,3 @@
-using TripTestLog.Application.Findings;
 using TripTestLog.Application.Stores;
 using TripTestLog.Application.Import;
 using TripTestLog.Application.Check;
@@ -137,7 +136,7 @@ internal static class ImportCommand
         ImportReport.Write(cli.Out, outcomes, LogPath(db), width);
         if (outcomes.Any(o => o.Status == ImportStatus.Imported))
         {
-            KeepPeerPositions(cli, store, db, log);
+            PeerPlaces.Keep(cli, store, db, log);
         }
 
         foreach (var entry in skipped)
@@ -149,29 +148,6 @@ internal static class ImportCommand
         return skipped.Count > 0 || outcomes.Any(o => o.Status == ImportStatus.Refused) ? ExitCodes.BadInput
             : outcomes.Any(o => o.RefusedRows > 0) ? ExitCodes.Findings
             : ExitCodes.Ok;
-    }
-
-    // Each device's place among its peers, brought up to date for what this import changed, under the lab policy
-    // beside the database. The files are stored whatever happens here: a store that cannot keep the positions leaves
-    // one device's findings to work them out, with the same result.
-    internal static void KeepPeerPositions(CliContext cli, IRecordStore store, StoreAddress db, Serilog.ILogger log)
-    {
-        if (store is not IPeerPositionStore positions || PolicyLoader.Load(null, db, out _) is not { } policy)
-        {
-            return;
-        }
-
-        try
-        {
-            var devices = StoredPeerPositions.Refresh(store, positions, policy.Policy, cli.Cancel);
-            log.Information("Peer positions brought up to date for {Devices} devices", devices);
-        }
-        catch (Exception e) when (e is not OperationCanceledException && Faults.IsTheUsers(e))
-        {
-            log.Warning(e, "Peer positions not brought up to date");
-            cli.Error.WriteLine("note: the files are stored, but each device's place among its peers could not be kept ("
-                + Visible.Text(e.Message) + "); one device's findings will work it out, more slowly");
-        }
     }
 
     // Names the database, the file that did not fit and what the files before it left stored.

@@ -30,7 +30,7 @@ internal static class MigrateCommand
         using (var log = Logging.BesideDatabase(db))
         {
             // A database upgraded from before peer positions were kept gets them now, not at its next import.
-            ImportCommand.KeepPeerPositions(cli, store, db, log);
+            PeerPlaces.Keep(cli, store, db, log);
         }
 
         var applied = Stores.AppliedMigrations(store);

@@ -55,7 +55,7 @@ internal static class TransferCommand
         if (copied > 0)
         {
             // A SQLite copy keeps its devices' peer places as an import does, so one device's findings are quick there too.
-            ImportCommand.KeepPeerPositions(cli, target, to, log);
+            PeerPlaces.Keep(cli, target, to, log);
         }
 
         cli.Out.WriteLine($"Transferred {from.Display}");

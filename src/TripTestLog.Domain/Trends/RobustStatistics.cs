@@ -13,15 +13,7 @@ public static class RobustStatistics
     public static double Median(IEnumerable<double> values)
     {
         ArgumentNullException.ThrowIfNull(values);
-        var sorted = values.ToArray();
-        if (sorted.Length == 0)
-        {
-            throw new ArgumentException("the median of no values is undefined", nameof(values));
-        }
-
-        Array.Sort(sorted);
-        var mid = sorted.Length / 2;
-        return sorted.Length % 2 == 1 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
+        return MedianInPlace(values.ToArray());
     }
 
     /// <summary>
