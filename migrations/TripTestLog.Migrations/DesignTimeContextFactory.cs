@@ -1,5 +1,6 @@
 using Microsoft.EntityFrameworkCore.Design;
 using TripTestLog.Storage;
+using TripTestLog.Storage.Sqlite;
 
 namespace TripTestLog.Migrations;
 

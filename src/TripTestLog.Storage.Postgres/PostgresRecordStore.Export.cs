@@ -60,7 +60,7 @@ public sealed partial class PostgresRecordStore : IRecordExport
         {
             using var insert = Command(
                 "INSERT INTO audit_changes (table_name, record_id, column_name, old_value, new_value, old_source_file_id, new_source_file_id, changed_at) "
-                + $"SELECT @t, r.id, @c, @o, @n, fo.id, fn.id, @at FROM {RecordStore.Table(change.Table)} r, source_files fo, source_files fn "
+                + $"SELECT @t, r.id, @c, @o, @n, fo.id, fn.id, @at FROM {MeasurementTable.Checked(change.Table)} r, source_files fo, source_files fn "
                 + "WHERE r.fingerprint = decode(@fp, 'hex') AND fo.sha256 = @os AND fn.sha256 = @ns AND NOT EXISTS (SELECT 1 FROM audit_changes a "
                 + "WHERE a.table_name = @t AND a.record_id = r.id AND a.column_name = @c AND a.old_value = @o AND a.new_value = @n AND a.changed_at = @at)",
                 transaction);

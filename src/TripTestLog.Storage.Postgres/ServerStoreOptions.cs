@@ -1,4 +1,5 @@
 using Microsoft.EntityFrameworkCore;
+using Microsoft.EntityFrameworkCore.Infrastructure;
 using Npgsql;
 
 namespace TripTestLog.Storage.Postgres;
@@ -12,5 +13,6 @@ internal static class ServerStoreOptions
     public static DbContextOptions<TripTestLogContext> For(NpgsqlConnection connection) =>
         new DbContextOptionsBuilder<TripTestLogContext>()
             .UseNpgsql(connection, o => o.MigrationsAssembly(MigrationsAssembly))
+            .ReplaceService<IModelCustomizer, ServerModel>()
             .Options;
 }

@@ -10,7 +10,7 @@ namespace TripTestLog.Storage;
 /// A content hash of a record over its values exactly as stored: the table name, then every value column as text
 /// (stored codes such as "as-found" and "cold", never enum member names; doubles in round-trip form). Two rows with the
 /// same fingerprint are the same record, whichever file they came in, and a stored row can be re-hashed from its
-/// columns alone (<see cref="FingerprintScheme"/>).
+/// columns alone (the SQLite adapter re-hashes old rows when the scheme changes).
 /// </summary>
 internal static class Fingerprint
 {

@@ -45,6 +45,11 @@ internal sealed record MeasurementTable(string Table, string[] Columns, int Trai
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "not a measurement kind"),
     };
 
+    /// <summary>A measurement table's name, checked: it is written into SQL.</summary>
+    public static string Checked(string name) => name is "trip_tests" or "contact_tests" or "insulation_tests"
+        ? name
+        : throw new ArgumentOutOfRangeException(nameof(name), name, "not a measurement table");
+
     /// <summary>A measurement as a stored row of its table.</summary>
     public static MeasurementRow RowOf(object measurement, long deviceId, long line) => measurement switch
     {

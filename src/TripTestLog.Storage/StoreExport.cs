@@ -71,7 +71,7 @@ internal sealed class StoreExport(Func<string, string> registerSelect, Func<stri
         while (r.Read())
         {
             list.Add(new StoredChange(r.GetString(1), r.GetString(2), r.GetString(3), r.GetString(4), r.GetString(5), r.GetString(6), r.GetString(7),
-                RecordStore.Moment(r.GetString(8))));
+                MomentText.Read(r.GetString(8))));
         }
 
         return list;
@@ -84,7 +84,7 @@ internal sealed class StoreExport(Func<string, string> registerSelect, Func<stri
         while (r.Read())
         {
             list.Add(new StoredFile(r.GetInt64(0), r.GetString(1), r.GetString(2), r.GetString(3), Enum.Parse<RecordKind>(r.GetString(4)), r.GetInt64(5),
-                RecordStore.Moment(r.GetString(6))));
+                MomentText.Read(r.GetString(6))));
         }
 
         return list;

@@ -4,7 +4,10 @@ using TripTestLog.Storage.Entities;
 
 namespace TripTestLog.Storage;
 
-/// <summary>The EF Core model of the store. Tables and columns are snake_case so plain SQL reads naturally.</summary>
+/// <summary>
+/// The EF Core model of the store, the same for every database. Tables and columns are snake_case so plain SQL reads
+/// naturally; what one database adds (its column types, its defaults) is its adapter's model customiser.
+/// </summary>
 internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> options) : DbContext(options)
 {
     public DbSet<SourceFileRow> SourceFiles => Set<SourceFileRow>();
@@ -128,17 +131,15 @@ internal sealed class TripTestLogContext(DbContextOptions<TripTestLogContext> op
             e.HasOne<DeviceRow>().WithMany().HasForeignKey(x => x.DeviceId).OnDelete(DeleteBehavior.Cascade);
         });
 
-        if (Database.ProviderName == ServerColumnTypes.Provider)
-        {
-            ServerColumnTypes.Apply(modelBuilder);
-        }
-        else
-        {
-            // SQLite rows written before settings were stored had none.
-            modelBuilder.Entity<DeviceRow>().Property(x => x.SettingsJson).HasDefaultValue("");
-            modelBuilder.Entity<DeviceRevisionRow>().Property(x => x.SettingsJson).HasDefaultValue("");
-        }
+        NameColumns(modelBuilder);
+    }
 
+    /// <summary>
+    /// Names every column after its property in snake_case. A database's own additions (its model customiser) may add
+    /// properties, so it names them again once it has.
+    /// </summary>
+    internal static void NameColumns(ModelBuilder modelBuilder)
+    {
         foreach (var entity in modelBuilder.Model.GetEntityTypes())
         {
             foreach (var property in entity.GetProperties())

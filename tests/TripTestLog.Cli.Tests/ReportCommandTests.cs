@@ -119,7 +119,7 @@ public sealed class ReportCommandTests(SampleFleetDatabase fleet) : IClassFixtur
         var before = data.ToDictionary(name => name, name => File.ReadAllText(Path.Combine(folder, name)));
 
         // The second run fails on its fourth device as a full disk would fail a write.
-        using var store = TripTestLog.Storage.RecordStore.Open(fleet.Database);
+        using var store = TripTestLog.Storage.Sqlite.RecordStore.Open(fleet.Database);
         var context = new TripTestLog.Reports.ReportContext(fleet.Database, "test", new DateOnly(2026, 12, 1), CliRun.Now,
             TripTestLog.Application.Findings.FindingPolicy.Default, "default", store.Instruments());
         var written = 0;

@@ -1,5 +1,5 @@
 using TripTestLog.Application.Stores;
-using TripTestLog.Storage;
+using TripTestLog.Storage.Sqlite;
 using TripTestLog.Storage.Postgres;
 
 namespace TripTestLog.Cli.Services;

@@ -4,7 +4,7 @@ using System.Globalization;
 using TripTestLog.Storage.Entities;
 using TripTestLog.Domain.Instruments;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 public sealed partial class RecordStore
 {

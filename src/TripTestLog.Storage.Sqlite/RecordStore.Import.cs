@@ -5,7 +5,7 @@ using Microsoft.Data.Sqlite;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Application.Records;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 public sealed partial class RecordStore
 {
@@ -126,7 +126,7 @@ public sealed partial class RecordStore
         insert.Parameters.AddWithValue("$sha", sha);
         insert.Parameters.AddWithValue("$kind", kind.ToString());
         insert.Parameters.AddWithValue("$rows", rows);
-        insert.Parameters.AddWithValue("$at", Utc(now));
+        insert.Parameters.AddWithValue("$at", MomentText.Write(now));
         return (long)insert.ExecuteScalar()!;
     }
 
@@ -137,8 +137,6 @@ public sealed partial class RecordStore
         command.CommandText = sql;
         return command;
     }
-
-    internal static string Utc(DateTimeOffset at) => at.ToUniversalTime().ToString("yyyy-MM-ddTHH:mm:ssZ", CultureInfo.InvariantCulture);
 
     private static object Db(double? value) => value is { } v ? v : DBNull.Value;
 }

@@ -2,7 +2,7 @@ using Microsoft.Data.Sqlite;
 using TripTestLog.Application.Import;
 using TripTestLog.Application.Records;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 public sealed partial class RecordStore
 {
@@ -16,7 +16,7 @@ public sealed partial class RecordStore
         var files = new List<EarlierFile>();
         while (reader.Read())
         {
-            files.Add(new EarlierFile(reader.GetInt64(0), reader.GetString(1), reader.GetString(2), reader.GetString(3), Moment(reader.GetString(4))));
+            files.Add(new EarlierFile(reader.GetInt64(0), reader.GetString(1), reader.GetString(2), reader.GetString(3), MomentText.Read(reader.GetString(4))));
         }
 
         return files;
@@ -58,7 +58,7 @@ public sealed partial class RecordStore
                 a[4].Value = value;
                 a[5].Value = c.OldSourceId;
                 a[6].Value = sourceId;
-                a[7].Value = Utc(now);
+                a[7].Value = MomentText.Write(now);
                 audit.ExecuteNonQuery();
             }
         }

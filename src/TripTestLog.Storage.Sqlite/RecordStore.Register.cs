@@ -2,7 +2,7 @@ using Microsoft.Data.Sqlite;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Application.Records;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 public sealed partial class RecordStore
 {
@@ -39,7 +39,7 @@ public sealed partial class RecordStore
             {
                 Bind(revision, device, sourceId, line);
                 Set(revision, "$device", id);
-                Set(revision, "$at", Utc(now));
+                Set(revision, "$at", MomentText.Write(now));
                 revision.ExecuteNonQuery();
             },
             (device, line) =>

@@ -1,6 +1,6 @@
 using TripTestLog.Application.Stores;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 /// <summary>
 /// An exclusive lock on a file beside the database (PATH-migrating) that a process holds while it creates or upgrades

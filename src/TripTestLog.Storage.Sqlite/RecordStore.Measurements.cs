@@ -1,7 +1,7 @@
 using Microsoft.Data.Sqlite;
 using TripTestLog.Application.Records;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 public sealed partial class RecordStore
 {

@@ -3,7 +3,7 @@ using Microsoft.EntityFrameworkCore.Metadata.Builders;
 using Microsoft.EntityFrameworkCore.Storage.ValueConversion;
 using TripTestLog.Storage.Entities;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Postgres;
 
 /// <summary>
 /// The same model on the PostgreSQL server, with the server's own column types where SQLite keeps text: `date` for

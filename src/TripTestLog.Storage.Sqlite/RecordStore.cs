@@ -2,7 +2,7 @@ using TripTestLog.Application.Stores;
 using TripTestLog.Application.Import;
 using Microsoft.Data.Sqlite;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 /// <summary>
 /// The SQLite store of devices and measurements. Only an import creates a database, and only where no file exists; a

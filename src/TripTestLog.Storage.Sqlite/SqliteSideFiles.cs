@@ -2,7 +2,7 @@ using System.Runtime.InteropServices;
 using Microsoft.Data.Sqlite;
 using TripTestLog.Application.Stores;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 /// <summary>
 /// The write-ahead files beside a database (PATH-wal, PATH-shm). A writer keeps them when it closes (emptied, owned by

@@ -1,7 +1,8 @@
 using Microsoft.Data.Sqlite;
 using Microsoft.EntityFrameworkCore;
+using Microsoft.EntityFrameworkCore.Infrastructure;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 /// <summary>The one place the SQLite provider and the migrations assembly are wired, shared with design-time tooling.</summary>
 internal static class StoreOptions
@@ -15,6 +16,7 @@ internal static class StoreOptions
     public static DbContextOptions<TripTestLogContext> For(SqliteConnection connection) =>
         new DbContextOptionsBuilder<TripTestLogContext>()
             .UseSqlite(connection, o => o.MigrationsAssembly(MigrationsAssembly))
+            .ReplaceService<IModelCustomizer, SqliteModel>()
             .Options;
 
     /// <summary>

@@ -2,7 +2,7 @@ using TripTestLog.Application.Records;
 using TripTestLog.Application.Transfer;
 using TripTestLog.Domain.Measurements;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 public sealed partial class RecordStore : IRecordExport
 {
@@ -54,14 +54,14 @@ public sealed partial class RecordStore : IRecordExport
         {
             using var insert = Command(transaction,
                 $"INSERT INTO audit_changes (table_name, record_id, column_name, old_value, new_value, old_source_file_id, new_source_file_id, changed_at) "
-                + $"SELECT $t, r.id, $c, $o, $n, fo.id, fn.id, $at FROM {Table(change.Table)} r, source_files fo, source_files fn "
+                + $"SELECT $t, r.id, $c, $o, $n, fo.id, fn.id, $at FROM {MeasurementTable.Checked(change.Table)} r, source_files fo, source_files fn "
                 + "WHERE r.fingerprint = $fp AND fo.sha256 = $os AND fn.sha256 = $ns AND NOT EXISTS (SELECT 1 FROM audit_changes a "
                 + "WHERE a.table_name = $t AND a.record_id = r.id AND a.column_name = $c AND a.old_value = $o AND a.new_value = $n AND a.changed_at = $at)");
             insert.Parameters.AddWithValue("$t", change.Table);
             insert.Parameters.AddWithValue("$c", change.Column);
             insert.Parameters.AddWithValue("$o", change.Old);
             insert.Parameters.AddWithValue("$n", change.New);
-            insert.Parameters.AddWithValue("$at", Utc(change.ChangedAt));
+            insert.Parameters.AddWithValue("$at", MomentText.Write(change.ChangedAt));
             insert.Parameters.AddWithValue("$fp", change.RecordFingerprint);
             insert.Parameters.AddWithValue("$os", change.OldFileSha256);
             insert.Parameters.AddWithValue("$ns", change.NewFileSha256);
@@ -71,9 +71,4 @@ public sealed partial class RecordStore : IRecordExport
         transaction.Commit();
         return added;
     }
-
-    /// <summary>A measurement table's name, checked: it is written into SQL.</summary>
-    internal static string Table(string name) => name is "trip_tests" or "contact_tests" or "insulation_tests"
-        ? name
-        : throw new ArgumentOutOfRangeException(nameof(name), name, "not a measurement table");
 }

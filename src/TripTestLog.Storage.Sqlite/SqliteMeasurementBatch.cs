@@ -4,7 +4,7 @@ using TripTestLog.Application.Records;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Measurements;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 /// <summary>
 /// One measurement file going into SQLite: BEGIN IMMEDIATE, a source row with a placeholder hash, each row written by

@@ -1,6 +1,6 @@
 using Microsoft.Data.Sqlite;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 /// <summary>
 /// A plain read transaction (BEGIN ... COMMIT) on a connection with none open: every query run until it ends reads the

@@ -2,7 +2,7 @@ using System.Globalization;
 using TripTestLog.Application.Register;
 using TripTestLog.Domain.Devices;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 public sealed partial class RecordStore : IHistorySource
 {
@@ -20,7 +20,7 @@ public sealed partial class RecordStore : IHistorySource
         var after = DeviceMapping.Columns.Split(", ").Length + 1;
         while (reader.Read())
         {
-            list.Add(new RegisterRevision(DeviceMapping.Read(reader), reader.GetString(after), reader.GetInt64(after + 1), Moment(reader.GetString(after + 2))));
+            list.Add(new RegisterRevision(DeviceMapping.Read(reader), reader.GetString(after), reader.GetInt64(after + 1), MomentText.Read(reader.GetString(after + 2))));
         }
 
         return list;
@@ -52,13 +52,9 @@ public sealed partial class RecordStore : IHistorySource
         while (reader.Read())
         {
             list.Add(new RecordCorrection(reader.GetString(0), RecordColumn.Of(reader.GetString(1), reader.GetInt64(8) != 0), reader.GetString(2), reader.GetString(3), reader.GetString(4),
-                reader.GetString(5), Moment(reader.GetString(6))));
+                reader.GetString(5), MomentText.Read(reader.GetString(6))));
         }
 
         return list;
     }
-
-    /// <summary>A moment the store wrote as ISO 8601 UTC text.</summary>
-    internal static DateTimeOffset Moment(string utc) =>
-        DateTimeOffset.Parse(utc, CultureInfo.InvariantCulture, DateTimeStyles.AssumeUniversal | DateTimeStyles.AdjustToUniversal);
 }

@@ -5,7 +5,7 @@ using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Quantities;
 using TripTestLog.Domain.Settings;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 /// <summary>
 /// The streaming read: two ordered queries (register revisions, trip tests) merged by asset tag, so one device is

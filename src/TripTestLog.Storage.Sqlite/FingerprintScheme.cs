@@ -1,6 +1,6 @@
 using Microsoft.Data.Sqlite;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 /// <summary>
 /// Keeps stored fingerprints in the current scheme. Databases written before scheme 2 hashed enum member names; on

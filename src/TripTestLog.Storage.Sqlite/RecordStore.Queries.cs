@@ -9,7 +9,7 @@ using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Quantities;
 using TripTestLog.Domain.Settings;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 public sealed partial class RecordStore
 {

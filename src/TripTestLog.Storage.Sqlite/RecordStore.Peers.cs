@@ -2,7 +2,7 @@ using Microsoft.Data.Sqlite;
 using TripTestLog.Application.Findings;
 using TripTestLog.Domain.Devices;
 
-namespace TripTestLog.Storage;
+namespace TripTestLog.Storage.Sqlite;
 
 /// <summary>
 /// Each device's stored peer positions. A device's stamp counts its trip tests and register entries with their newest
