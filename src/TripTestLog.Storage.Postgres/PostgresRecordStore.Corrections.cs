@@ -12,23 +12,6 @@ public sealed partial class PostgresRecordStore
 
     internal NpgsqlBinaryImporter Copy(string sql) => _connection.BeginBinaryImport(sql);
 
-    /// <summary>The measurement files of <paramref name="kind"/> stored so far: the candidates a correction may name.</summary>
-    internal IEnumerable<EarlierFile> EarlierFiles(NpgsqlTransaction transaction, RecordKind kind)
-    {
-        using var select = Command(
-            "SELECT id, file_name, full_path, sha256, imported_at FROM source_files WHERE kind = @kind AND sha256 NOT LIKE 'pending:%' ORDER BY id", transaction);
-        select.Parameters.Add(Text("kind", kind.ToString()));
-        using var reader = select.ExecuteReader();
-        var files = new List<EarlierFile>();
-        while (reader.Read())
-        {
-            files.Add(new EarlierFile(reader.GetInt64(0), reader.GetString(1), reader.GetString(2), reader.GetString(3),
-                new DateTimeOffset(DateTime.SpecifyKind(reader.GetDateTime(4), DateTimeKind.Utc))));
-        }
-
-        return files;
-    }
-
     /// <summary>
     /// Pairs the records of the corrected file that no row of the new file held again with the records the new file
     /// added (ids above <paramref name="lastIdBefore"/>; see <see cref="CorrectionPairing"/>): each pair is one record
@@ -47,7 +30,7 @@ public sealed partial class PostgresRecordStore
         {
             Correction correction;
             TestedAt when;
-            using (var select = Command(
+            using (var select = ServerCommand(
                 $"SELECT {string.Join(", ", columns.Select(c => "o." + c))}, {Time("o")}, {string.Join(", ", columns.Select(c => "n." + c))}, {Time("n")}, "
                 + $"encode(n.fingerprint, 'hex'), n.source_line FROM {table.Table} o, {table.Table} n WHERE o.id = @o AND n.id = @n", transaction))
             {
@@ -69,7 +52,7 @@ public sealed partial class PostgresRecordStore
                 };
             }
 
-            using (var delete = Command($"DELETE FROM {table.Table} WHERE id = @id", transaction))
+            using (var delete = ServerCommand($"DELETE FROM {table.Table} WHERE id = @id", transaction))
             {
                 delete.Parameters.Add(new NpgsqlParameter("id", NpgsqlDbType.Bigint) { Value = newId });
                 delete.ExecuteNonQuery();
@@ -83,7 +66,7 @@ public sealed partial class PostgresRecordStore
 
     private List<(long Id, long Line)> Lines(NpgsqlTransaction transaction, MeasurementTable table, string where, long earlierId, long sourceId, long lastIdBefore)
     {
-        using var select = Command($"SELECT id, source_line FROM {table.Table} WHERE {where}", transaction);
+        using var select = ServerCommand($"SELECT id, source_line FROM {table.Table} WHERE {where}", transaction);
         foreach (var (name, value) in new[] { ("old", earlierId), ("new", sourceId), ("before", lastIdBefore) }.Where(p => where.Contains("@" + p.Item1, StringComparison.Ordinal)))
         {
             select.Parameters.Add(new NpgsqlParameter(name, NpgsqlDbType.Bigint) { Value = value });
@@ -103,7 +86,7 @@ public sealed partial class PostgresRecordStore
     internal void ApplyCorrection(NpgsqlTransaction transaction, MeasurementTable table, Correction correction, TestedAt when, long sourceId, DateTimeOffset now)
     {
         var sets = string.Join(", ", table.Columns.Select((c, i) => $"{c} = @p{i}"));
-        using var update = Command(
+        using var update = ServerCommand(
             $"UPDATE {table.Table} SET {sets}, {ServerColumnTypes.OffsetColumn} = @offset, {ServerColumnTypes.HasTimeColumn} = @hastime, "
             + "fingerprint = @fp, source_file_id = @src, source_line = @line WHERE id = @id", transaction);
         var values = correction.New.Values;
@@ -125,7 +108,7 @@ public sealed partial class PostgresRecordStore
         update.Parameters.Add(new NpgsqlParameter("id", NpgsqlDbType.Bigint) { Value = correction.StoredId });
         update.ExecuteNonQuery();
 
-        using var audit = Command(
+        using var audit = ServerCommand(
             "INSERT INTO audit_changes (table_name, record_id, column_name, old_value, new_value, old_source_file_id, new_source_file_id, changed_at) "
             + "VALUES (@t, @r, @c, @o, @n, @os, @ns, @at)", transaction);
         var a = Parameters(audit, ("t", NpgsqlDbType.Text), ("r", NpgsqlDbType.Bigint), ("c", NpgsqlDbType.Text), ("o", NpgsqlDbType.Text), ("n", NpgsqlDbType.Text),

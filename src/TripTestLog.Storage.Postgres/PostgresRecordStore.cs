@@ -11,7 +11,7 @@ namespace TripTestLog.Storage.Postgres;
 /// server's column types. Opening applies pending migrations, one process at a time. Imports run side by side; each
 /// file's final write is one transaction under a server-wide lock, so two copies of one file end as one.
 /// </summary>
-public sealed partial class PostgresRecordStore : IRecordStore
+public sealed partial class PostgresRecordStore : RelationalStore, IRecordStore
 {
     // Advisory lock keys: one for schema changes, one for the final write of every import. Any two distinct numbers do;
     // these spell "TTLmigr" and "TTLimpt" so they are recognisable in pg_locks.
@@ -22,6 +22,7 @@ public sealed partial class PostgresRecordStore : IRecordStore
     private readonly NpgsqlConnection _connection;
 
     private PostgresRecordStore(ServerAddress address, NpgsqlDataSource source, NpgsqlConnection connection, StoreOpening opening)
+        : base(connection, ServerDialect.Instance)
     {
         Location = address.Display;
         _source = source;
@@ -94,7 +95,26 @@ public sealed partial class PostgresRecordStore : IRecordStore
         _source.Dispose();
     }
 
-    internal NpgsqlCommand Command(string sql, NpgsqlTransaction? transaction = null) => new(sql, _connection, transaction);
+    /// <inheritdoc />
+    protected override System.Data.Common.DbTransaction BeginWrite()
+    {
+        var transaction = _connection.BeginTransaction();
+        try
+        {
+            TakeImportLock(transaction);
+            return transaction;
+        }
+        catch
+        {
+            transaction.Dispose();
+            throw;
+        }
+    }
+
+    /// <inheritdoc />
+    protected override IReadScope BeginRead() => new ReadSnapshot(this);
+
+    internal NpgsqlCommand ServerCommand(string sql, NpgsqlTransaction? transaction = null) => new(sql, _connection, transaction);
 
     /// <summary>A new connection of the same server, for a reader that runs beside another.</summary>
     internal NpgsqlConnection Connect() => _source.OpenConnection();

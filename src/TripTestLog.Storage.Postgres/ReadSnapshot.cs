@@ -10,7 +10,7 @@ namespace TripTestLog.Storage.Postgres;
 /// side by side (a connection serves one reader at a time), and each joins the first one's exported snapshot, so an
 /// import that commits meanwhile is seen by none of them or by all. Readers take no locks that block a writer.
 /// </summary>
-internal sealed class ReadSnapshot : IDisposable
+internal sealed class ReadSnapshot : IReadScope
 {
     private readonly PostgresRecordStore _store;
     private readonly List<(NpgsqlConnection Connection, NpgsqlTransaction Transaction)> _open = [];
@@ -19,7 +19,7 @@ internal sealed class ReadSnapshot : IDisposable
     public ReadSnapshot(PostgresRecordStore store) => _store = store;
 
     /// <summary>A command on a connection of its own in the shared snapshot, with the tag filter bound (null: every device).</summary>
-    public NpgsqlCommand Query(string sql, AssetTag? only = null)
+    public System.Data.Common.DbCommand Query(string sql, AssetTag? only = null)
     {
         var connection = _store.Connect();
         var transaction = connection.BeginTransaction(IsolationLevel.RepeatableRead);
@@ -31,7 +31,11 @@ internal sealed class ReadSnapshot : IDisposable
         }
 
         var command = new NpgsqlCommand(sql, connection, transaction);
-        command.Parameters.Add(new NpgsqlParameter("tag", NpgsqlDbType.Text) { Value = (object?)only?.Value ?? DBNull.Value });
+        if (sql.Contains("@tag", StringComparison.Ordinal))
+        {
+            command.Parameters.Add(new NpgsqlParameter("tag", NpgsqlDbType.Text) { Value = (object?)only?.Value ?? DBNull.Value });
+        }
+
         return command;
     }
 

@@ -47,7 +47,7 @@ internal sealed class ServerMeasurementBatch : IMeasurementBatch
 
             _sourceId = store.InsertSourceFile(_transaction, name, path, "pending:" + Guid.NewGuid().ToString("N"), kind, 0, now);
             var staged = string.Join(", ", StagedColumns);
-            using (var create = store.Command($"CREATE TEMP TABLE {Stage} ON COMMIT DROP AS SELECT {staged} FROM {_table.Table} WITH NO DATA", _transaction))
+            using (var create = store.ServerCommand($"CREATE TEMP TABLE {Stage} ON COMMIT DROP AS SELECT {staged} FROM {_table.Table} WITH NO DATA", _transaction))
             {
                 create.ExecuteNonQuery();
             }
@@ -98,13 +98,13 @@ internal sealed class ServerMeasurementBatch : IMeasurementBatch
         var anchors = new List<(long OldLine, long NewLine)>();
         if (_earlier is { } corrected)
         {
-            using (var last = _store.Command($"SELECT COALESCE(MAX(id), 0) FROM {_table.Table}", _transaction))
+            using (var last = _store.ServerCommand($"SELECT COALESCE(MAX(id), 0) FROM {_table.Table}", _transaction))
             {
                 lastIdBefore = (long)last.ExecuteScalar()!;
             }
 
             // A row identical to a record of the corrected file takes that record over: it now cites this file and line.
-            using var move = _store.Command(
+            using var move = _store.ServerCommand(
                 $"WITH m AS (SELECT t.id, t.source_line AS old_line, s.source_line AS new_line FROM {_table.Table} t "
                 + $"JOIN (SELECT DISTINCT ON (fingerprint) fingerprint, source_line FROM {Stage} ORDER BY fingerprint, source_line) s "
                 + "ON t.fingerprint = s.fingerprint WHERE t.source_file_id = @old), "
@@ -122,7 +122,7 @@ internal sealed class ServerMeasurementBatch : IMeasurementBatch
         // In file order, so of two identical rows of one file the first line is the one kept.
         var columns = string.Join(", ", StagedColumns);
         long added;
-        using (var insert = _store.Command(
+        using (var insert = _store.ServerCommand(
             $"INSERT INTO {_table.Table} ({columns}, source_file_id) SELECT {columns}, @src FROM {Stage} ORDER BY source_line "
             + "ON CONFLICT (fingerprint) DO NOTHING", _transaction))
         {

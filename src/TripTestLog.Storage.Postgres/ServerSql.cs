@@ -43,18 +43,21 @@ internal static class ServerSql
     }
 
     /// <summary>Sets a parameter, adding it on first use; a null is sent typed as the value's column would be.</summary>
-    public static void Set(NpgsqlCommand command, string name, object value)
+    public static void Set(NpgsqlCommand command, string name, object? value)
     {
         if (!command.Parameters.Contains(name))
         {
             command.Parameters.Add(new NpgsqlParameter(name, TypeOf(name, value)));
         }
 
-        command.Parameters[name].Value = value;
+        command.Parameters[name].Value = value ?? DBNull.Value;
     }
 
-    private static NpgsqlDbType TypeOf(string name, object value) => value switch
+    private static NpgsqlDbType TypeOf(string name, object? value) => value switch
     {
+        DateTimeOffset => NpgsqlDbType.TimestampTz,
+        DateOnly => NpgsqlDbType.Date,
+        byte[] => NpgsqlDbType.Bytea,
         string => NpgsqlDbType.Text,
         double => NpgsqlDbType.Double,
         int => NpgsqlDbType.Integer,

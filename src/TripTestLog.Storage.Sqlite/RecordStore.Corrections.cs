@@ -6,22 +6,6 @@ namespace TripTestLog.Storage.Sqlite;
 
 public sealed partial class RecordStore
 {
-    /// <summary>The measurement files of <paramref name="kind"/> stored so far: the candidates a correction may name.</summary>
-    internal IEnumerable<EarlierFile> EarlierFiles(SqliteTransaction transaction, RecordKind kind)
-    {
-        using var select = Command(transaction,
-            "SELECT id, file_name, full_path, sha256, imported_at FROM source_files WHERE kind = $kind AND sha256 NOT LIKE 'pending:%' ORDER BY id");
-        select.Parameters.AddWithValue("$kind", kind.ToString());
-        using var reader = select.ExecuteReader();
-        var files = new List<EarlierFile>();
-        while (reader.Read())
-        {
-            files.Add(new EarlierFile(reader.GetInt64(0), reader.GetString(1), reader.GetString(2), reader.GetString(3), MomentText.Read(reader.GetString(4))));
-        }
-
-        return files;
-    }
-
     /// <summary>Replaces the corrected records' values and writes every old value to `audit_changes`.</summary>
     internal long ApplyCorrections(SqliteTransaction transaction, MeasurementTable table, IReadOnlyList<Correction> corrections, long sourceId, DateTimeOffset now)
     {
@@ -64,34 +48,5 @@ public sealed partial class RecordStore
         }
 
         return corrections.Count;
-    }
-
-    private (long Added, long Updated, long Duplicates) InsertInstruments(SqliteTransaction transaction, ParsedFile file, long sourceId)
-    {
-        using var insert = Command(transaction,
-            "INSERT OR IGNORE INTO instruments (instrument, kind, serial, calibrated_on, calibration_due, source_file_id, source_line, fingerprint, "
-            + InstrumentAccuracyColumns.List + ") VALUES ($i, $k, $s, $on, $due, $src, $line, $fp, $a0, $a1, $a2, $a3, $a4, $a5, $a6, $a7)");
-        var p = Parameters(insert, "$i", "$k", "$s", "$on", "$due", "$src", "$line", "$fp", "$a0", "$a1", "$a2", "$a3", "$a4", "$a5", "$a6", "$a7");
-        long added = 0;
-        foreach (var (c, line) in file.Instruments)
-        {
-            p[0].Value = c.Instrument;
-            p[1].Value = c.Kind;
-            p[2].Value = c.Serial;
-            p[3].Value = c.CalibratedOn.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture);
-            p[4].Value = c.CalibrationDue.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture);
-            p[5].Value = sourceId;
-            p[6].Value = line;
-            p[7].Value = Fingerprint.Of(c);
-            var accuracy = InstrumentAccuracyColumns.Values(c.Accuracy);
-            for (var i = 0; i < accuracy.Length; i++)
-            {
-                p[8 + i].Value = accuracy[i];
-            }
-
-            added += insert.ExecuteNonQuery();
-        }
-
-        return (added, 0, file.Instruments.Count - added);
     }
 }

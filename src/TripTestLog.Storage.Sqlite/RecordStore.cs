@@ -8,11 +8,12 @@ namespace TripTestLog.Storage.Sqlite;
 /// The SQLite store of devices and measurements. Only an import creates a database, and only where no file exists; a
 /// reader opens the file read-only and writes nothing; an import or `migrate` brings an older schema up to date.
 /// </summary>
-public sealed partial class RecordStore : IRecordStore
+public sealed partial class RecordStore : RelationalStore, IRecordStore
 {
     private readonly SqliteConnection _connection;
 
     private RecordStore(string path, SqliteConnection connection, StoreOpening opening)
+        : base(connection, SqliteDialect.Instance)
     {
         Path = path;
         _connection = connection;
@@ -87,6 +88,12 @@ public sealed partial class RecordStore : IRecordStore
             throw;
         }
     }
+
+    /// <inheritdoc />
+    protected override System.Data.Common.DbTransaction BeginWrite() => BeginWriting();
+
+    /// <inheritdoc />
+    protected override IReadScope BeginRead() => new SqliteReadScope(_connection);
 
     /// <summary>Turns SQLite's row-by-row foreign-key enforcement on or off for this connection (outside a transaction).</summary>
     internal void ForeignKeys(bool on) => Execute(_connection, on ? "PRAGMA foreign_keys=ON;" : "PRAGMA foreign_keys=OFF;");

@@ -1,0 +1,69 @@
+using System.Data.Common;
+using TripTestLog.Domain.Measurements;
+
+namespace TripTestLog.Storage;
+
+/// <summary>
+/// What one database does differently from another, and nothing else: how a parameter and a tag are written in SQL,
+/// how it keeps a test time and a moment, and how a value is turned to text. <see cref="RelationalStore"/> writes every
+/// query once with these; a third database is one more dialect.
+/// </summary>
+public abstract class StoreDialect
+{
+    /// <summary>
+    /// The join from devices to their records that walks them in the order written. SQLite keeps a CROSS JOIN's order
+    /// (devices by their tag index, then each device's records), the server plans its own.
+    /// </summary>
+    public abstract string DeviceJoin { get; }
+
+    /// <summary>The placeholder of the parameter <paramref name="name"/> in SQL.</summary>
+    public abstract string P(string name);
+
+    /// <summary>Sets the parameter <paramref name="name"/>, adding it on first use; a null is sent as the column's type would be.</summary>
+    public abstract void Set(DbCommand command, string name, object? value);
+
+    /// <summary>Sets a number parameter that may be empty: an empty one is still sent as a number.</summary>
+    public virtual void SetNumber(DbCommand command, string name, double? value) => Set(command, name, (object?)value);
+
+    /// <summary>A calendar date as the value of its column.</summary>
+    public abstract object Date(DateOnly date);
+
+    /// <summary>A record fingerprint (lower-case hex) as the value of its column.</summary>
+    public abstract object FingerprintValue(string hex);
+
+    /// <summary>The condition that <paramref name="column"/> holds the tag the parameter "tag" names, folded on A to Z as <c>AssetTag</c> folds.</summary>
+    public abstract string TagIs(string column);
+
+    /// <summary>Every device, or only the one the parameter "tag" names when it is not null.</summary>
+    public abstract string AnyOrTag(string column);
+
+    /// <summary>The register columns of <paramref name="alias"/>, readable by <c>DeviceMapping.Read</c> (dates and settings as text).</summary>
+    public abstract string RegisterSelect(string alias);
+
+    /// <summary>The register values as parameters, in the order of <c>DeviceMapping.Columns</c>, cast to the columns' types.</summary>
+    public abstract string RegisterValues { get; }
+
+    /// <summary>What follows a measurement's columns for its test time: empty where tested_at says it all.</summary>
+    public abstract string TestTimeColumns(string alias);
+
+    /// <summary>A row's test time: tested_at at <paramref name="at"/>, with whatever <see cref="TestTimeColumns"/> put last.</summary>
+    public abstract TestedAt TestedAt(DbDataReader reader, int at);
+
+    /// <summary>A row's test time as the store has always written it in a correction's record.</summary>
+    public virtual string TestedAtText(DbDataReader reader, int at) => TestedAt(reader, at).ToString();
+
+    /// <summary>A moment the tool records, as the value of its column.</summary>
+    public abstract object Moment(DateTimeOffset at);
+
+    /// <summary>A moment the tool recorded, read back.</summary>
+    public abstract DateTimeOffset Moment(DbDataReader reader, int at);
+
+    /// <summary>A number column as text inside SQL, the way the store has always shown it in a correction's record.</summary>
+    public abstract string NumberText(string column);
+
+    /// <summary>A date, timestamp or fingerprint column as text: yyyy-MM-dd, ISO 8601 UTC, lower-case hex.</summary>
+    public abstract string Text(string column);
+
+    /// <summary>A fingerprint parameter (hex text) as the column keeps it.</summary>
+    public abstract string Fingerprint(string placeholder);
+}
