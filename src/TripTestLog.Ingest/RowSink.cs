@@ -19,42 +19,42 @@ internal sealed class RowSink(RecordKind kind)
     private readonly List<Located<InstrumentCalibration>> _instruments = [];
 
     /// <summary>Parses one row of a file of <paramref name="kind"/>: the record, or null when the row has problems.</summary>
-    public static object? Parse(RecordKind kind, RowFields fields) => kind switch
+    public static ReadRecord? Parse(RecordKind kind, RowFields fields) => kind switch
     {
-        RecordKind.DeviceRegister => DeviceRowParser.Parse(fields),
-        RecordKind.TripTests => TripRowParser.Parse(fields),
-        RecordKind.ContactResistance => ContactRowParser.Parse(fields),
-        RecordKind.InsulationResistance => InsulationRowParser.Parse(fields),
-        RecordKind.CurveTable => TableRowParser.Curve(fields),
-        RecordKind.AmbientTable => TableRowParser.Ambient(fields),
-        _ => TableRowParser.Instrument(fields),
+        RecordKind.DeviceRegister => DeviceRowParser.Parse(fields) is { } d ? new RegisterRecord(d) : null,
+        RecordKind.TripTests => TripRowParser.Parse(fields) is { } t ? new TripRecord(t) : null,
+        RecordKind.ContactResistance => ContactRowParser.Parse(fields) is { } c ? new ContactRecord(c) : null,
+        RecordKind.InsulationResistance => InsulationRowParser.Parse(fields) is { } i ? new InsulationRecord(i) : null,
+        RecordKind.CurveTable => TableRowParser.Curve(fields) is { } r ? new CurveRowRecord(r) : null,
+        RecordKind.AmbientTable => TableRowParser.Ambient(fields) is { } a ? new AmbientRowRecord(a) : null,
+        _ => TableRowParser.Instrument(fields) is { } n ? new CalibrationRecord(n) : null,
     };
 
     /// <summary>Keeps a parsed record with its line.</summary>
-    public void Add(object record, long line)
+    public void Add(ReadRecord record, long line)
     {
         switch (record)
         {
-            case Device d:
-                _devices.Add(new(d, line));
+            case RegisterRecord d:
+                _devices.Add(new(d.Device, line));
                 break;
-            case TripMeasurement t:
-                _trips.Add(new(t, line));
+            case TripRecord t:
+                _trips.Add(new(t.Trip, line));
                 break;
-            case ContactMeasurement c:
-                _contacts.Add(new(c, line));
+            case ContactRecord c:
+                _contacts.Add(new(c.Contact, line));
                 break;
-            case InsulationMeasurement i:
-                _insulations.Add(new(i, line));
+            case InsulationRecord i:
+                _insulations.Add(new(i.Insulation, line));
                 break;
-            case CurveTableRow r:
-                _curveRows.Add(new(r, line));
+            case CurveRowRecord r:
+                _curveRows.Add(new(r.Row, line));
                 break;
-            case AmbientTableRow r:
-                _ambientRows.Add(new(r, line));
+            case AmbientRowRecord r:
+                _ambientRows.Add(new(r.Row, line));
                 break;
-            case InstrumentCalibration r:
-                _instruments.Add(new(r, line));
+            case CalibrationRecord r:
+                _instruments.Add(new(r.Calibration, line));
                 break;
         }
     }

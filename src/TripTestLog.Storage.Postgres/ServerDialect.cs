@@ -1,5 +1,6 @@
 using System.Data.Common;
 using Npgsql;
+using NpgsqlTypes;
 using TripTestLog.Domain.Measurements;
 
 namespace TripTestLog.Storage.Postgres;
@@ -23,7 +24,7 @@ internal sealed class ServerDialect : StoreDialect
         var parameters = ((NpgsqlCommand)command).Parameters;
         if (!parameters.Contains(name))
         {
-            parameters.Add(new NpgsqlParameter(name, NpgsqlTypes.NpgsqlDbType.Double));
+            parameters.Add(new NpgsqlParameter(name, NpgsqlDbType.Double));
         }
 
         parameters[name].Value = value is { } v ? v : DBNull.Value;
@@ -43,7 +44,31 @@ internal sealed class ServerDialect : StoreDialect
 
     public override string TestTimeColumns(string alias) => $", {alias}.{ServerColumnTypes.OffsetColumn}, {alias}.{ServerColumnTypes.HasTimeColumn}";
 
-    public override TestedAt TestedAt(DbDataReader reader, int at) => ServerRows.TestedAt(reader, at, reader.FieldCount - 2);
+    public override int TestTimeColumnCount => 2;
+
+    public override TestedAt TestedAt(DbDataReader reader, int at, int extra) => ServerRows.TestedAt(reader, at, extra);
+
+    public override string TestTimeSets => $", {ServerColumnTypes.OffsetColumn} = @offset, {ServerColumnTypes.HasTimeColumn} = @hastime";
+
+    public override void SetTestTime(DbCommand command, string name, object text, TestedAt when)
+    {
+        var parameters = ((NpgsqlCommand)command).Parameters;
+        parameters.Add(new NpgsqlParameter(name, NpgsqlDbType.Timestamp) { Value = DateTime.SpecifyKind(when.Local, DateTimeKind.Unspecified) });
+        parameters.Add(new NpgsqlParameter("offset", NpgsqlDbType.Smallint) { Value = when.Offset is { } o ? (short)o.TotalMinutes : DBNull.Value });
+        parameters.Add(new NpgsqlParameter("hastime", NpgsqlDbType.Boolean) { Value = when.HasTime });
+    }
+
+    public override void SetValue(DbCommand command, string name, object value) =>
+        ((NpgsqlCommand)command).Parameters.Add(new NpgsqlParameter(name, value switch
+        {
+            string => NpgsqlDbType.Text,
+            long => NpgsqlDbType.Bigint,
+            bool => NpgsqlDbType.Boolean,
+            _ => NpgsqlDbType.Double,
+        })
+        {
+            Value = value,
+        });
 
     public override object Moment(DateTimeOffset at) => at.ToUniversalTime();
 
@@ -54,7 +79,7 @@ internal sealed class ServerDialect : StoreDialect
     public override string Text(string column) => column switch
     {
         "calibrated_on" or "calibration_due" => $"to_char({column}, 'YYYY-MM-DD')",
-        "t.fingerprint" => "encode(t.fingerprint, 'hex')",
+        _ when column.EndsWith("fingerprint", StringComparison.Ordinal) => $"encode({column}, 'hex')",
         _ => $"to_char({column} AT TIME ZONE 'UTC', 'YYYY-MM-DD\"T\"HH24:MI:SS.US\"Z\"')",
     };
 

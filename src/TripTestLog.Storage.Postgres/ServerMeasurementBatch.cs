@@ -64,9 +64,9 @@ internal sealed class ServerMeasurementBatch : IMeasurementBatch
     private IEnumerable<string> StagedColumns =>
         _table.Columns.Concat([ServerColumnTypes.OffsetColumn, ServerColumnTypes.HasTimeColumn, "source_line", "fingerprint"]);
 
-    public PreparedRow? Prepare(object measurement, long line) =>
-        measurement is IMeasurement m && _deviceIds.TryGetValue(m.Tag.Value, out var device)
-            ? new Prepared(MeasurementTable.RowOf(measurement, device, line), m.TestedAt)
+    public PreparedRow? Prepare(MeasurementRecord measurement, long line) =>
+        _deviceIds.TryGetValue(measurement.Tag.Value, out var device)
+            ? new Prepared(MeasurementTable.RowOf(measurement, device, line), measurement.Measurement.TestedAt)
             : null;
 
     public string? Refusal { get; }

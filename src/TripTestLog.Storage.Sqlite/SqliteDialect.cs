@@ -41,9 +41,17 @@ internal sealed class SqliteDialect : StoreDialect
 
     public override string TestTimeColumns(string alias) => "";
 
-    public override TestedAt TestedAt(DbDataReader reader, int at) => Domain.Measurements.TestedAt.Parse(reader.GetString(at));
+    public override int TestTimeColumnCount => 0;
 
-    public override string TestedAtText(DbDataReader reader, int at) => reader.GetString(at);
+    public override TestedAt TestedAt(DbDataReader reader, int at, int extra) => Domain.Measurements.TestedAt.Parse(reader.GetString(at));
+
+    public override string TestedAtText(DbDataReader reader, int at, int extra) => reader.GetString(at);
+
+    public override string TestTimeSets => "";
+
+    public override void SetTestTime(DbCommand command, string name, object text, TestedAt when) => Set(command, name, text);
+
+    public override void SetValue(DbCommand command, string name, object value) => Set(command, name, value);
 
     public override object Moment(DateTimeOffset at) => MomentText.Write(at);
 

@@ -27,7 +27,6 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
     private readonly SqliteCommand? _move;
     private readonly long _lastIdBefore;
     private readonly DateTimeOffset _now;
-    private readonly Lazy<IReadOnlyDictionary<long, string>> _tags;
     private readonly List<(long OldLine, long NewLine)> _anchors = [];
     private long _stored;
     private long _added;
@@ -39,7 +38,6 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
         _store = store;
         _now = now;
         _table = MeasurementTable.For(kind);
-        _tags = new(() => _deviceIds!.ToDictionary(d => d.Value, d => d.Key));
 
         // Foreign keys are not checked row by row here: every device id comes from the register read inside this
         // transaction and the source id from the row it just wrote, and `verify` runs SQLite's foreign-key check.
@@ -80,8 +78,8 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
         }
     }
 
-    public PreparedRow? Prepare(object measurement, long line) =>
-        _deviceIds.TryGetValue(TagOf(measurement).Value, out var device) ? new Prepared(MeasurementTable.RowOf(measurement, device, line)) : null;
+    public PreparedRow? Prepare(MeasurementRecord measurement, long line) =>
+        _deviceIds.TryGetValue(measurement.Tag.Value, out var device) ? new Prepared(MeasurementTable.RowOf(measurement, device, line)) : null;
 
     public string? Refusal { get; }
 
@@ -124,7 +122,7 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
             return new BatchResult(false, 0, 0) { EarlierFile = earlier };
         }
 
-        var correction = _earlier is { } corrected ? Correct(corrected) : null;
+        var correction = _earlier is { } corrected ? _store.Correct(_transaction, _table, corrected, _sourceId, _lastIdBefore, _anchors, _deviceIds, _now) : null;
         var added = _added - (correction?.Replaced ?? 0);
         var duplicates = _stored - _added - _unchanged;
         using var update = _store.Command(_transaction,
@@ -138,68 +136,6 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
         _transaction.Commit();
         _done = true;
         return new BatchResult(true, added, duplicates) { Correction = correction };
-    }
-
-    /// <summary>
-    /// Pairs the records of the corrected file that no row of this file held again with the records this file added
-    /// (see <see cref="CorrectionPairing"/>): each pair is one record corrected, its old values kept in the audit table.
-    /// What is left of the corrected file is kept and reported. Only the line numbers are held in memory.
-    /// </summary>
-    private CorrectionResult Correct(EarlierFile earlier)
-    {
-        var (pairs, left) = CorrectionPairing.Pair(_anchors, Lines("source_file_id = $old", earlier.Id), Lines("source_file_id = $new AND id > $before", earlier.Id));
-        var columns = _table.Columns;
-        var corrections = new List<Correction>();
-        using (var select = _store.Command(_transaction,
-            $"SELECT {string.Join(", ", columns.Select(c => "o." + c))}, {string.Join(", ", columns.Select(c => "n." + c))}, n.fingerprint, n.source_line "
-            + $"FROM {_table.Table} o, {_table.Table} n WHERE o.id = $o AND n.id = $n"))
-        {
-            var p = RecordStore.Parameters(select, "$o", "$n");
-            foreach (var (oldId, newId) in pairs)
-            {
-                p[0].Value = oldId;
-                p[1].Value = newId;
-                using var reader = select.ExecuteReader();
-                reader.Read();
-                var old = Enumerable.Range(0, columns.Length).Select(reader.GetValue).ToArray();
-                var now = Enumerable.Range(columns.Length, columns.Length).Select(reader.GetValue).ToArray();
-                var at = 2 * columns.Length;
-                corrections.Add(new Correction(new MeasurementRow(now, reader.GetString(at), reader.GetInt64(at + 1)), oldId, old, earlier.Id, earlier.Name, columns)
-                {
-                    Tags = _tags.Value,
-                    AddedId = newId,
-                });
-            }
-        }
-
-        using (var delete = _store.Command(_transaction, $"DELETE FROM {_table.Table} WHERE id = $id"))
-        {
-            var id = RecordStore.Parameters(delete, "$id")[0];
-            foreach (var correction in corrections)
-            {
-                id.Value = correction.AddedId;
-                delete.ExecuteNonQuery();
-            }
-        }
-
-        _store.ApplyCorrections(_transaction, _table, corrections, _sourceId, _now);
-        return new CorrectionResult(earlier.Name, _unchanged, corrections.Count, [.. left.Take(100).Select(l => l.Line)], left.Count);
-    }
-
-    private List<(long Id, long Line)> Lines(string where, long earlierId)
-    {
-        using var select = _store.Command(_transaction, $"SELECT id, source_line FROM {_table.Table} WHERE {where}");
-        select.Parameters.AddWithValue("$old", earlierId);
-        select.Parameters.AddWithValue("$new", _sourceId);
-        select.Parameters.AddWithValue("$before", _lastIdBefore);
-        using var reader = select.ExecuteReader();
-        var lines = new List<(long, long)>();
-        while (reader.Read())
-        {
-            lines.Add((reader.GetInt64(0), reader.GetInt64(1)));
-        }
-
-        return lines;
     }
 
     public void Dispose()
@@ -255,9 +191,6 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
             $"INSERT OR IGNORE INTO {_table.Table} ({string.Join(", ", used)}) VALUES ({string.Join(", ", names)})");
         return new Statement(command, RecordStore.Parameters(command, [.. names]), columns);
     }
-
-    private static AssetTag TagOf(object record) =>
-        record is IMeasurement m ? m.Tag : throw new ArgumentOutOfRangeException(nameof(record), record.GetType().Name, "not a measurement");
 
     // The device dictionary is only read once the batch has begun, so preparing rows on another thread is safe.
     private sealed record Prepared(MeasurementRow Row) : PreparedRow(Row.Line);

@@ -1,3 +1,4 @@
+using TripTestLog.Application.Import;
 using TripTestLog.Application.Records;
 
 namespace TripTestLog.Storage;
@@ -11,9 +12,9 @@ namespace TripTestLog.Storage;
 /// <param name="Columns">The table's columns.</param>
 internal sealed record Correction(MeasurementRow New, long StoredId, object[] Old, long OldSourceId, string OldFile, string[] Columns)
 {
-    /// <summary>The columns whose values differ, with old and new text.</summary>
+    /// <summary>The columns whose values differ (<see cref="RecordChanges"/>), with old and new text.</summary>
     public IEnumerable<(string Column, string Old, string New)> Changes =>
-        Columns.Select((c, i) => (c, Shown(c, Old[i]), Shown(c, New.Values[i]))).Where(x => x.Item2 != x.Item3);
+        RecordChanges.Between(Columns, [.. Columns.Select((c, i) => Shown(c, Old[i]))], [.. Columns.Select((c, i) => Shown(c, New.Values[i]))]);
 
     /// <summary>Asset tags by device id: a change of device is written with the tags a person knows, never the ids.</summary>
     public IReadOnlyDictionary<long, string>? Tags { get; init; }

@@ -51,11 +51,11 @@ internal sealed record MeasurementTable(string Table, string[] Columns, int Trai
         : throw new ArgumentOutOfRangeException(nameof(name), name, "not a measurement table");
 
     /// <summary>A measurement as a stored row of its table.</summary>
-    public static MeasurementRow RowOf(object measurement, long deviceId, long line) => measurement switch
+    public static MeasurementRow RowOf(MeasurementRecord measurement, long deviceId, long line) => measurement switch
     {
-        TripMeasurement t => Trip(t, deviceId, line),
-        ContactMeasurement c => Contact(c, deviceId, line),
-        InsulationMeasurement i => Insulation(i, deviceId, line),
+        TripRecord t => Trip(t.Trip, deviceId, line),
+        ContactRecord c => Contact(c.Contact, deviceId, line),
+        InsulationRecord i => Insulation(i.Insulation, deviceId, line),
         _ => throw new ArgumentOutOfRangeException(nameof(measurement), measurement.GetType().Name, "not a measurement"),
     };
 

@@ -18,7 +18,7 @@ public abstract partial class RelationalStore : IRecordExport
     }
 
     /// <inheritdoc />
-    public IEnumerable<Located<object>> Records(StoredFile file)
+    public IEnumerable<Located<ReadRecord>> Records(StoredFile file)
     {
         ArgumentNullException.ThrowIfNull(file);
 

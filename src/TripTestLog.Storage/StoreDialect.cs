@@ -46,11 +46,37 @@ public abstract class StoreDialect
     /// <summary>What follows a measurement's columns for its test time: empty where tested_at says it all.</summary>
     public abstract string TestTimeColumns(string alias);
 
-    /// <summary>A row's test time: tested_at at <paramref name="at"/>, with whatever <see cref="TestTimeColumns"/> put last.</summary>
-    public abstract TestedAt TestedAt(DbDataReader reader, int at);
+    /// <summary>How many columns <see cref="TestTimeColumns"/> adds.</summary>
+    public abstract int TestTimeColumnCount { get; }
 
-    /// <summary>A row's test time as the store has always written it in a correction's record.</summary>
-    public virtual string TestedAtText(DbDataReader reader, int at) => TestedAt(reader, at).ToString();
+    /// <summary>A row's test time: tested_at at <paramref name="at"/>, with the columns <see cref="TestTimeColumns"/> added from <paramref name="extra"/>.</summary>
+    public abstract TestedAt TestedAt(DbDataReader reader, int at, int extra);
+
+    /// <summary>A row's test time, where <see cref="TestTimeColumns"/> came last in the row.</summary>
+    public TestedAt TestedAt(DbDataReader reader, int at)
+    {
+        ArgumentNullException.ThrowIfNull(reader);
+        return TestedAt(reader, at, reader.FieldCount - TestTimeColumnCount);
+    }
+
+    /// <summary>The assignments that set the columns <see cref="TestTimeColumns"/> names, after a measurement's own in an UPDATE.</summary>
+    public abstract string TestTimeSets { get; }
+
+    /// <summary>Sets a test time: the tested_at parameter <paramref name="name"/> (stored text <paramref name="text"/>) and those of <see cref="TestTimeSets"/>.</summary>
+    public abstract void SetTestTime(DbCommand command, string name, object text, TestedAt when);
+
+    /// <summary>Sets a measurement column's value as its column's type, empty ones included.</summary>
+    public abstract void SetValue(DbCommand command, string name, object value);
+
+    /// <summary>A row's test time as text, as it is stored on SQLite and hashed: where <see cref="TestTimeColumns"/> came last.</summary>
+    public string TestedAtText(DbDataReader reader, int at)
+    {
+        ArgumentNullException.ThrowIfNull(reader);
+        return TestedAtText(reader, at, reader.FieldCount - TestTimeColumnCount);
+    }
+
+    /// <summary>A row's test time as text, with the columns <see cref="TestTimeColumns"/> added from <paramref name="extra"/>.</summary>
+    public virtual string TestedAtText(DbDataReader reader, int at, int extra) => TestedAt(reader, at, extra).ToString();
 
     /// <summary>A moment the tool records, as the value of its column.</summary>
     public abstract object Moment(DateTimeOffset at);

@@ -42,24 +42,24 @@ internal sealed class StoreExport(Func<string, string> registerSelect, Func<stri
         + " ORDER BY 1";
 
     /// <summary>Reads the rows of <see cref="RecordsSql"/> as records with their lines; the reader is walked lazily.</summary>
-    public IEnumerable<Located<object>> Records(DbDataReader r, StoredFile file)
+    public IEnumerable<Located<ReadRecord>> Records(DbDataReader r, StoredFile file)
     {
         var rows = new StoredRows(new Dictionary<long, string> { [file.Id] = file.Name }, testedAt);
         while (r.Read())
         {
             yield return file.Kind switch
             {
-                RecordKind.DeviceRegister => new Located<object>(DeviceMapping.Read(r), r.GetInt64(DeviceMapping.Columns.Split(", ").Length + 1)),
-                RecordKind.TripTests => Located(rows.Trip(r)),
-                RecordKind.ContactResistance => Located(rows.Contact(r)),
-                RecordKind.InsulationResistance => Located(rows.Insulation(r)),
-                RecordKind.CurveTable => new(new CurveTableRow(r.GetString(0), new CurveTablePoint(CurrentMultiple.Of(r.GetDouble(1)), Seconds.Of(r.GetDouble(2)),
-                    r.IsDBNull(3) ? null : Seconds.Of(r.GetDouble(3)))), r.GetInt64(4)),
-                RecordKind.AmbientTable => new(new AmbientTableRow(r.GetString(0), new AmbientPoint(Celsius.Of(r.GetDouble(1)), r.GetDouble(2))), r.GetInt64(3)),
-                _ => new(new InstrumentCalibration(r.GetString(0), r.GetString(1), r.GetString(2), Date(r.GetString(3)), Date(r.GetString(4)))
+                RecordKind.DeviceRegister => new Located<ReadRecord>(new RegisterRecord(DeviceMapping.Read(r)), r.GetInt64(DeviceMapping.Columns.Split(", ").Length + 1)),
+                RecordKind.TripTests => Trip(rows.Trip(r)),
+                RecordKind.ContactResistance => Contact(rows.Contact(r)),
+                RecordKind.InsulationResistance => Insulation(rows.Insulation(r)),
+                RecordKind.CurveTable => new(new CurveRowRecord(new CurveTableRow(r.GetString(0), new CurveTablePoint(CurrentMultiple.Of(r.GetDouble(1)), Seconds.Of(r.GetDouble(2)),
+                    r.IsDBNull(3) ? null : Seconds.Of(r.GetDouble(3))))), r.GetInt64(4)),
+                RecordKind.AmbientTable => new(new AmbientRowRecord(new AmbientTableRow(r.GetString(0), new AmbientPoint(Celsius.Of(r.GetDouble(1)), r.GetDouble(2)))), r.GetInt64(3)),
+                _ => new(new CalibrationRecord(new InstrumentCalibration(r.GetString(0), r.GetString(1), r.GetString(2), Date(r.GetString(3)), Date(r.GetString(4)))
                 {
                     Accuracy = InstrumentAccuracyColumns.Read(r, 6),
-                }, r.GetInt64(5)),
+                }), r.GetInt64(5)),
             };
         }
     }
@@ -100,10 +100,11 @@ internal sealed class StoreExport(Func<string, string> registerSelect, Func<stri
             + $"WHERE {alias}.source_file_id = @id ORDER BY {alias}.source_line, {alias}.id";
     }
 
-    private static Located<object> Located<T>(StoredMeasurement<T> m)
-        where T : IMeasurement => new(m.Measurement, m.SourceLine);
+    private static Located<ReadRecord> Trip(StoredTrip t) => new(new TripRecord(t.Measurement), t.SourceLine);
 
-    private static Located<object> Located(StoredTrip t) => new(t.Measurement, t.SourceLine);
+    private static Located<ReadRecord> Contact(StoredMeasurement<ContactMeasurement> c) => new(new ContactRecord(c.Measurement), c.SourceLine);
+
+    private static Located<ReadRecord> Insulation(StoredMeasurement<InsulationMeasurement> i) => new(new InsulationRecord(i.Measurement), i.SourceLine);
 
     private static DateOnly Date(string text) => DateOnly.ParseExact(text, "yyyy-MM-dd", CultureInfo.InvariantCulture);
 }

@@ -274,7 +274,7 @@ internal static class Program
                     using var file = new CsvRecordFileSource(t, ReadOptions.Default).Open(today);
                     foreach (var row in file.Rows())
                     {
-                        rows += MeasurementTable.RowOf(row.Record!, 1, row.Line).Fingerprint.Length > 0 ? 1 : 0;
+                        rows += MeasurementTable.RowOf((Application.Records.MeasurementRecord)row.Record!, 1, row.Line).Fingerprint.Length > 0 ? 1 : 0;
                     }
                 }
 

@@ -132,14 +132,4 @@ public sealed class CorrectionTests
         Assert.Equal((ImportStatus.Imported, 1L, 4L), (chosen.Status, chosen.Replaced, chosen.Unchanged));
         Assert.Equal(9, db.Count("SELECT COUNT(*) FROM trip_tests")); // the second file's T-02 line repeats the first's
     }
-
-    [Fact]
-    public void Pairing_FollowsTheAnchors_LikeALineDiff()
-    {
-        // Earlier lines 2..6 = A B C D E; new lines 2..5 = A C D' E: B deleted, D changed.
-        var (pairs, left) = Storage.CorrectionPairing.Pair([(2, 2), (4, 3), (6, 5)], [(20, 3), (40, 5)], [(90, 4)]);
-
-        Assert.Equal([(40L, 90L)], pairs);
-        Assert.Equal([(20L, 3L)], left);
-    }
 }

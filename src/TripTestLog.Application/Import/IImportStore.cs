@@ -30,7 +30,7 @@ public interface IMeasurementBatch : IDisposable
     /// or null when the device register does not hold its tag. Pure and safe to call from another thread, so the
     /// pipeline prepares rows while the previous ones are written.
     /// </summary>
-    PreparedRow? Prepare(object measurement, long line);
+    PreparedRow? Prepare(MeasurementRecord measurement, long line);
 
     /// <summary>
     /// When the batch was begun to correct an earlier file that cannot be found, or is named ambiguously: the sentence

@@ -38,7 +38,7 @@ public interface IRecordFile : IDisposable
 /// <param name="Record">The record (a device, a measurement, a table row), or null when the row has problems.</param>
 /// <param name="Problems">Why the row was refused; empty when it parsed.</param>
 /// <param name="Raw">The row's text as written, when a rejects sink was asked for; else null.</param>
-public readonly record struct ReadRow(long Line, object? Record, IReadOnlyList<RowProblem> Problems, string? Raw = null)
+public readonly record struct ReadRow(long Line, ReadRecord? Record, IReadOnlyList<RowProblem> Problems, string? Raw = null)
 {
     /// <summary>
     /// True for a row planned on a worksheet (its plan column filled) whose results were left blank: the test was not

@@ -167,7 +167,7 @@ public sealed class ImportPipeline(IImportStore store)
     /// and the database writes then overlap. The queue is bounded, so memory stays flat; rows keep their order.
     /// </summary>
     private static IEnumerable<(ReadRow Row, PreparedRow? Prepared)> ParsedAhead(IRecordFile file, IMeasurementBatch batch, CancellationToken cancel) =>
-        ReadAhead.Of(file.Rows().Select(row => (row, row.Record is { } record && row.Problems.Count == 0 ? batch.Prepare(record, row.Line) : null)), 4096, cancel);
+        ReadAhead.Of(file.Rows().Select(row => (row, row.Record is { } record && row.Problems.Count == 0 ? batch.Prepare(Measurement(record), row.Line) : null)), 4096, cancel);
 
     private static IReadOnlyList<RowProblem> Store(IMeasurementBatch batch, PreparedRow row)
     {
@@ -175,8 +175,11 @@ public sealed class ImportPipeline(IImportStore store)
         return [];
     }
 
-    private static AssetTag TagOf(object record) =>
-        record is IMeasurement m ? m.Tag : throw new ArgumentOutOfRangeException(nameof(record), record.GetType().Name, "not a measurement");
+    private static AssetTag TagOf(ReadRecord record) => Measurement(record).Tag;
+
+    // A measurement file's rows are measurements; anything else is a fault of the reader, not of the file.
+    private static MeasurementRecord Measurement(ReadRecord record) =>
+        record as MeasurementRecord ?? throw new ArgumentOutOfRangeException(nameof(record), record.GetType().Name, "not a measurement");
 
     private static ImportOutcome Refused(string path, RecordKind? kind, long rows, IReadOnlyList<RowProblem> problems) =>
         new(path, kind, ImportStatus.Refused, rows, 0, 0, 0, problems) { RefusedRows = rows };

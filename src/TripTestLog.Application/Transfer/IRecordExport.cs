@@ -36,7 +36,7 @@ public interface IRecordExport
     /// The records that trace to <paramref name="file"/>, by line: devices for a register, measurements, curve or ambient
     /// table rows, or instrument calibrations. Streamed: a measurement file is never held whole.
     /// </summary>
-    IEnumerable<Located<object>> Records(StoredFile file);
+    IEnumerable<Located<ReadRecord>> Records(StoredFile file);
 
     /// <summary>Every correction, oldest first.</summary>
     IEnumerable<StoredChange> Changes();

@@ -48,12 +48,13 @@ public sealed class TransferPipeline(IRecordStore source, IRecordStore target)
     {
         using var batch = target.BeginMeasurements(file.Kind, file.Name, file.FullPath, file.ImportedAt);
         long records = 0;
-        foreach (var (record, line) in source.Records(file))
+        foreach (var (read, line) in source.Records(file))
         {
             cancel.ThrowIfCancellationRequested();
             records++;
+            var record = read as MeasurementRecord ?? throw new InvalidOperationException($"{file.Name}:{line}: not a measurement");
             var row = batch.Prepare(record, line)
-                ?? throw new InvalidOperationException($"{file.Name}:{line}: the target's register has no device {((IMeasurement)record).Tag}");
+                ?? throw new InvalidOperationException($"{file.Name}:{line}: the target's register has no device {record.Tag}");
             batch.Add(row);
         }
 
@@ -71,15 +72,16 @@ public sealed class TransferPipeline(IRecordStore source, IRecordStore target)
             Sha256 = file.Sha256,
             Kind = file.Kind,
             RowsRead = file.RowsRead,
-            Devices = Of<Device>(records),
-            CurveTableRows = Of<CurveTableRow>(records),
-            AmbientTableRows = Of<AmbientTableRow>(records),
-            Instruments = Of<InstrumentCalibration>(records),
+            Devices = Of(records, r => (r as RegisterRecord)?.Device),
+            CurveTableRows = Of(records, r => (r as CurveRowRecord)?.Row),
+            AmbientTableRows = Of(records, r => (r as AmbientRowRecord)?.Row),
+            Instruments = Of(records, r => (r as CalibrationRecord)?.Calibration),
         };
         var outcome = target.StoreSmallFile(parsed, file.ImportedAt);
         return new TransferredFile(file, outcome.Status == ImportStatus.Imported, records.Count, outcome.Added + outcome.Updated);
     }
 
-    private static List<Located<T>> Of<T>(List<Located<object>> records) =>
-        [.. records.Where(r => r.Record is T).Select(r => new Located<T>((T)r.Record, r.Line))];
+    private static List<Located<T>> Of<T>(List<Located<ReadRecord>> records, Func<ReadRecord, T?> pick)
+        where T : class =>
+        [.. records.Select(r => (Value: pick(r.Record), r.Line)).Where(r => r.Value is not null).Select(r => new Located<T>(r.Value!, r.Line))];
 }

@@ -1,4 +1,4 @@
-namespace TripTestLog.Storage;
+namespace TripTestLog.Application.Import;
 
 /// <summary>
 /// Lines up a correction with the file it corrects, as a line diff does. Rows whose content both files hold are
@@ -6,7 +6,7 @@ namespace TripTestLog.Storage;
 /// the records the new file added are paired in order: each pair is one record corrected. What is left over on the
 /// old side is kept (and reported); on the new side, added.
 /// </summary>
-internal static class CorrectionPairing
+public static class CorrectionPairing
 {
     /// <summary>The pairs (old record id, new record id), and the old records left unpaired.</summary>
     /// <param name="anchors">Lines of records held again unchanged: (line in the earlier file, line in the new one).</param>
