@@ -10,29 +10,33 @@ namespace TripTestLog.Storage;
 /// <param name="Line">The line of the file it came from.</param>
 internal sealed record MeasurementRow(object[] Values, string Fingerprint, long Line);
 
-/// <summary>A measurement table and the columns a row of it holds (besides id, source and fingerprint).</summary>
+/// <summary>
+/// A measurement table and the columns a row of it holds (besides id, source and fingerprint): the one list of them.
+/// Rows are written, hashed, compared and read back in this order; a test holds it equal to the EF model's columns.
+/// </summary>
 /// <param name="Table">The table name.</param>
-/// <param name="Columns">The value columns, in order.</param>
+/// <param name="Alias">The table's alias in the reading queries.</param>
+/// <param name="Columns">The value columns, in order (the order fingerprints are made in).</param>
 /// <param name="TrailingOptional">How many of the last columns are usually empty, so an insert may leave them out.</param>
 /// <param name="UnhashedWhenEmpty">
 /// How many of the last columns were added after records were stored: left out of the fingerprint while empty, so a
 /// record stored before keeps its fingerprint.
 /// </param>
-internal sealed record MeasurementTable(string Table, string[] Columns, int TrailingOptional = 0, int UnhashedWhenEmpty = 0)
+internal sealed record MeasurementTable(string Table, string Alias, string[] Columns, int TrailingOptional = 0, int UnhashedWhenEmpty = 0)
 {
     /// <summary>Where every measurement table holds its test time among <see cref="Columns"/>: second, after the device.</summary>
     public const int TestedAtColumn = 1;
 
-    public static MeasurementTable Trips { get; } = new("trip_tests",
+    public static MeasurementTable Trips { get; } = new("trip_tests", "t",
     [
         "device_id", "tested_at", "stage", "pole", "current_a", "tripped", "time_s", "start", "ambient_c", "instrument", "technician", "note",
         "found_ir_a", "found_isd_a", "found_ii_a", "found_im_a", "found_pickup_a", "found_tms",
     ], TrailingOptional: 6);
 
-    public static MeasurementTable Contacts { get; } = new("contact_tests",
+    public static MeasurementTable Contacts { get; } = new("contact_tests", "c",
         ["device_id", "tested_at", "stage", "pole", "resistance_uohm", "test_current_a", "temperature_c", "instrument", "technician"]);
 
-    public static MeasurementTable Insulations { get; } = new("insulation_tests",
+    public static MeasurementTable Insulations { get; } = new("insulation_tests", "i",
         ["device_id", "tested_at", "stage", "path", "test_voltage_v", "resistance_mohm", "over_range", "temperature_c", "duration_s", "instrument"],
         UnhashedWhenEmpty: 1);
 
@@ -43,6 +47,21 @@ internal sealed record MeasurementTable(string Table, string[] Columns, int Trai
         RecordKind.ContactResistance => Contacts,
         RecordKind.InsulationResistance => Insulations,
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "not a measurement kind"),
+    };
+
+    /// <summary>
+    /// The columns a reading query selects (the device joined as d): the device's asset tag where the row holds its id,
+    /// then the other value columns, then the source file and line. A value column keeps its place in <see cref="Columns"/>.
+    /// </summary>
+    public string Selected => string.Join(", ", ["d.asset_tag", .. Columns.Skip(1).Select(c => Alias + "." + c), Alias + ".source_file_id", Alias + ".source_line"]);
+
+    /// <summary>Where <paramref name="column"/> stands in a row of <see cref="Selected"/>.</summary>
+    public int Ordinal(string column) => column switch
+    {
+        "asset_tag" => 0,
+        "source_file_id" => Columns.Length,
+        "source_line" => Columns.Length + 1,
+        _ => Array.IndexOf(Columns, column) is > 0 and var i ? i : throw new ArgumentOutOfRangeException(nameof(column), column, $"not a column of {Table}"),
     };
 
     /// <summary>A measurement table's name, checked: it is written into SQL.</summary>

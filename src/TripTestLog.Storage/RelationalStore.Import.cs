@@ -53,7 +53,7 @@ public abstract partial class RelationalStore
         Dialect.Set(insert, "name", name);
         Dialect.Set(insert, "full", System.IO.Path.GetFullPath(path));
         Dialect.Set(insert, "sha", sha);
-        Dialect.Set(insert, "kind", kind.ToString());
+        Dialect.Set(insert, "kind", RecordKindCodes.Book.Of(kind));
         Dialect.Set(insert, "rows", rows);
         Dialect.Set(insert, "at", Dialect.Moment(now));
         return Convert.ToInt64(insert.ExecuteScalar(), CultureInfo.InvariantCulture);

@@ -70,7 +70,7 @@ public abstract partial class RelationalStore
         using var select = Command(
             $"SELECT id, file_name, full_path, sha256, imported_at FROM source_files WHERE kind = {Dialect.P("kind")} AND sha256 NOT LIKE 'pending:%' ORDER BY id",
             transaction);
-        Dialect.Set(select, "kind", kind.ToString());
+        Dialect.Set(select, "kind", RecordKindCodes.Book.Of(kind));
         using var reader = select.ExecuteReader();
         var files = new List<EarlierFile>();
         while (reader.Read())

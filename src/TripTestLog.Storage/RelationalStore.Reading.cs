@@ -21,7 +21,7 @@ public abstract partial class RelationalStore : ITripSource
     protected static string TripsInDeviceOrderOf(StoreDialect dialect)
     {
         ArgumentNullException.ThrowIfNull(dialect);
-        return MeasurementsOf(dialect, "trip_tests", "t", StoredColumns.Trips, dialect.AnyOrTag("d.asset_tag"));
+        return MeasurementsOf(dialect, MeasurementTable.Trips, dialect.AnyOrTag("d.asset_tag"));
     }
 
     // The register revisions of the devices a condition picks, by device.
@@ -31,9 +31,12 @@ public abstract partial class RelationalStore : ITripSource
     // A kind of measurement for the devices a condition picks, by device and then test time. With the dialect's device
     // join the devices are walked by their tag index and each device's records found by their device index, so only
     // one device's records are ever sorted.
-    private static string MeasurementsOf(StoreDialect dialect, string table, string alias, string columns, string filter) =>
-        $"SELECT {columns}{dialect.TestTimeColumns(alias)} FROM devices d {dialect.DeviceJoin} {table} {alias} ON {alias}.device_id = d.id WHERE {filter} "
-        + $"ORDER BY d.asset_tag, {alias}.tested_at, {alias}.source_file_id, {alias}.source_line";
+    private static string MeasurementsOf(StoreDialect dialect, MeasurementTable table, string filter)
+    {
+        var a = table.Alias;
+        return $"SELECT {table.Selected}{dialect.TestTimeColumns(a)} FROM devices d {dialect.DeviceJoin} {table.Table} {a} ON {a}.device_id = d.id WHERE {filter} "
+            + $"ORDER BY d.asset_tag, {a}.tested_at, {a}.source_file_id, {a}.source_line";
+    }
 
     /// <summary>The devices sharing a family and a rated current with some register entry of the device "tag" names.</summary>
     protected string PeerDevices =>
@@ -47,7 +50,7 @@ public abstract partial class RelationalStore : ITripSource
         using var revisions = scope.Query(RevisionsOf(PeerDevices), tag);
         var rows = new StoredRows(SourceFileNames(revisions.Connection!), r => Dialect.TestedAt(r, 1));
         using var entries = revisions.ExecuteReader();
-        using var trips = new TagStream<StoredTrip>(scope.Query(MeasurementsOf(Dialect, "trip_tests", "t", StoredColumns.Trips, PeerDevices), tag), rows.Trip);
+        using var trips = new TagStream<StoredTrip>(scope.Query(MeasurementsOf(Dialect, MeasurementTable.Trips, PeerDevices), tag), rows.Trip);
         foreach (var device in DeviceWalk.Merge(entries, trips, null, null))
         {
             yield return device;
@@ -64,10 +67,10 @@ public abstract partial class RelationalStore : ITripSource
         using var entries = revisions.ExecuteReader();
         using var trips = new TagStream<StoredTrip>(scope.Query(TripsInDeviceOrderOf(Dialect), only), rows.Trip);
         using var contacts = withResistance
-            ? new TagStream<StoredMeasurement<ContactMeasurement>>(scope.Query(MeasurementsOf(Dialect, "contact_tests", "c", StoredColumns.Contacts, any), only), rows.Contact)
+            ? new TagStream<StoredMeasurement<ContactMeasurement>>(scope.Query(MeasurementsOf(Dialect, MeasurementTable.Contacts, any), only), rows.Contact)
             : null;
         using var insulation = withResistance
-            ? new TagStream<StoredMeasurement<InsulationMeasurement>>(scope.Query(MeasurementsOf(Dialect, "insulation_tests", "i", StoredColumns.Insulation, any), only), rows.Insulation)
+            ? new TagStream<StoredMeasurement<InsulationMeasurement>>(scope.Query(MeasurementsOf(Dialect, MeasurementTable.Insulations, any), only), rows.Insulation)
             : null;
         foreach (var device in DeviceWalk.Merge(entries, trips, contacts, insulation))
         {

@@ -83,7 +83,7 @@ internal sealed class StoreExport(Func<string, string> registerSelect, Func<stri
         var list = new List<StoredFile>();
         while (r.Read())
         {
-            list.Add(new StoredFile(r.GetInt64(0), r.GetString(1), r.GetString(2), r.GetString(3), Enum.Parse<RecordKind>(r.GetString(4)), r.GetInt64(5),
+            list.Add(new StoredFile(r.GetInt64(0), r.GetString(1), r.GetString(2), r.GetString(3), RecordKindCodes.Book.Decode(r.GetString(4)), r.GetInt64(5),
                 MomentText.Read(r.GetString(6))));
         }
 
@@ -95,8 +95,8 @@ internal sealed class StoreExport(Func<string, string> registerSelect, Func<stri
 
     private string Measurements(MeasurementTable table)
     {
-        var (alias, columns) = StoredColumns.Of(table);
-        return $"SELECT {columns}{testTime(alias)} FROM {table.Table} {alias} JOIN devices d ON d.id = {alias}.device_id "
+        var alias = table.Alias;
+        return $"SELECT {table.Selected}{testTime(alias)} FROM {table.Table} {alias} JOIN devices d ON d.id = {alias}.device_id "
             + $"WHERE {alias}.source_file_id = @id ORDER BY {alias}.source_line, {alias}.id";
     }
 

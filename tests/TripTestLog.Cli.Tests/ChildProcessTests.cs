@@ -82,8 +82,8 @@ public sealed class ChildProcessTests : IDisposable
 
         Assert.Equal((0, 0), (first.WaitForExitCode(), second.WaitForExitCode()));
         Assert.Equal((150_000L, 3L), (Database.Count("SELECT COUNT(*) FROM trip_tests"), Database.Count("SELECT COUNT(*) FROM source_files")));
-        Assert.Equal((150_000L, 50_000L), (Database.Count("SELECT CAST(SUM(records_added) AS BIGINT) FROM source_files WHERE kind = 'TripTests'"),
-            Database.Count("SELECT CAST(SUM(duplicates) AS BIGINT) FROM source_files WHERE kind = 'TripTests'")));
+        Assert.Equal((150_000L, 50_000L), (Database.Count("SELECT CAST(SUM(records_added) AS BIGINT) FROM source_files WHERE kind = 'trip-tests'"),
+            Database.Count("SELECT CAST(SUM(duplicates) AS BIGINT) FROM source_files WHERE kind = 'trip-tests'")));
         if (provider == Provider.Sqlite)
         {
             Assert.Equal("ok", Database.Scalar("PRAGMA integrity_check"));

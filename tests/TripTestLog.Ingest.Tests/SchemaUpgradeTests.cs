@@ -1,3 +1,4 @@
+using TripTestLog.Application.Records;
 using TripTestLog.Application.Stores;
 using Microsoft.Data.Sqlite;
 using TripTestLog.Domain.Devices;
@@ -60,7 +61,7 @@ public sealed class SchemaUpgradeTests
 
         using var store = RecordStore.Open(db);
 
-        Assert.EndsWith("_PeerPositions", store.AppliedMigrations()[^1]);
+        Assert.EndsWith("_RecordKindCodes", store.AppliedMigrations()[^1]);
         var histories = store.Histories();
         Assert.Equal(2, histories["TWO-01"].Entries.Count);
         Assert.Equal(500, Assert.IsType<ElectronicTripSettings>(histories["TWO-01"].InForceOn(new DateOnly(2024, 6, 1)).Settings).Ir.Value);
@@ -70,6 +71,45 @@ public sealed class SchemaUpgradeTests
         Assert.Equal(4, trips.Count);
         Assert.Equal(420, trips.Single(t => t.Measurement.Note == "dial found low").Measurement.FoundSettings!.Ir!.Value.Value);
         Assert.True(store.Verify().IntegrityErrors.Count == 0);
+    }
+
+    [Fact]
+    public void AnOlderDatabase_KeepsTheKindOfEachFileAsItsCode_AfterTheUpgrade()
+    {
+        using var temp = new TempFolder();
+        var db = Path.Combine(temp.Path, "old.db");
+        File.Copy(Path.Combine(AppContext.BaseDirectory, "schemas", "schema-3.db"), db);
+        Assert.Contains("TripTests", Kinds(db));
+
+        using (var store = RecordStore.Open(db))
+        {
+            // Every kind read back is the kind it was, from its code.
+            Assert.Equal(Kinds(db).Select(RecordKindCodes.Book.Decode), store.Files().Select(f => f.Kind));
+        }
+
+        Assert.All(Kinds(db), k => Assert.Contains(k, RecordKindCodes.Book.All));
+        Assert.Contains("trip-tests", Kinds(db));
+
+        // A kind no version wrote is refused by name rather than read as another.
+        Sql.Execute(db, "UPDATE source_files SET kind = 'TripTests' WHERE id = 1");
+        using var again = RecordStore.Open(db);
+        Assert.Contains("unknown record kind 'TripTests'", Assert.Throws<InvalidDataException>(() => again.Files().ToList()).Message, StringComparison.Ordinal);
+    }
+
+    private static List<string> Kinds(string db)
+    {
+        using var connection = new SqliteConnection($"Data Source={db};Pooling=False");
+        connection.Open();
+        using var select = connection.CreateCommand();
+        select.CommandText = "SELECT kind FROM source_files ORDER BY id";
+        using var reader = select.ExecuteReader();
+        var kinds = new List<string>();
+        while (reader.Read())
+        {
+            kinds.Add(reader.GetString(0));
+        }
+
+        return kinds;
     }
 
     [Fact]
@@ -84,7 +124,7 @@ public sealed class SchemaUpgradeTests
         using var store = RecordStore.Open(db);
         var outcome = store.Import(again, DateTimeOffset.UtcNow);
 
-        Assert.EndsWith("_PeerPositions", store.AppliedMigrations()[^1]);
+        Assert.EndsWith("_RecordKindCodes", store.AppliedMigrations()[^1]);
         Assert.Equal(5, store.Trips().Count);
 
         // The files imported before full paths were kept apart keep their full path, which was their name, to verify by.

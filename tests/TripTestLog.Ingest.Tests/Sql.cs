@@ -13,4 +13,13 @@ internal static class Sql
         command.CommandText = sql;
         return (long)command.ExecuteScalar()!;
     }
+
+    public static void Execute(string db, string sql)
+    {
+        using var connection = new SqliteConnection($"Data Source={db};Pooling=False");
+        connection.Open();
+        using var command = connection.CreateCommand();
+        command.CommandText = sql;
+        command.ExecuteNonQuery();
+    }
 }

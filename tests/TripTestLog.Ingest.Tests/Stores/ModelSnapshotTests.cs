@@ -32,4 +32,22 @@ public sealed class ModelSnapshotTests
         Assert.Equal("timestamp without time zone", trips.FindProperty("TestedAt")!.GetColumnType());
         Assert.Equal(ServerColumnTypes.OffsetColumn, trips.FindProperty("TestedOffsetMin")!.GetColumnName());
     }
+
+    [Fact]
+    public void EachMeasurementTablesOneColumnList_IsTheModelsColumns()
+    {
+        using var connection = StoreOptions.Connect(":memory:");
+        using var context = new TripTestLogContext(StoreOptions.For(connection));
+
+        foreach (var table in FingerprintCheck.Tables)
+        {
+            var entity = context.Model.GetEntityTypes().Single(e => e.GetTableName() == table.Table);
+            var modelColumns = entity.GetProperties().Select(p => p.GetColumnName()).Order(StringComparer.Ordinal).ToList();
+
+            Assert.Equal(table.Columns.Concat(["id", "source_file_id", "source_line", "fingerprint"]).Order(StringComparer.Ordinal), modelColumns);
+            // The reading query selects the device's tag, then columns of this table only.
+            Assert.All(table.Selected.Split(", ").Skip(1), c => Assert.Contains(c[(table.Alias.Length + 1)..], modelColumns));
+            Assert.Equal(MeasurementTable.TestedAtColumn, table.Ordinal("tested_at"));
+        }
+    }
 }
