@@ -39,11 +39,4 @@ public sealed partial class PostgresRecordStore
             Thread.Sleep(200);
         }
     }
-
-    internal static NpgsqlParameter[] Parameters(NpgsqlCommand command, params (string Name, NpgsqlDbType Type)[] names)
-    {
-        var parameters = names.Select(n => new NpgsqlParameter(n.Name, n.Type) { Value = DBNull.Value }).ToArray();
-        command.Parameters.AddRange(parameters);
-        return parameters;
-    }
 }

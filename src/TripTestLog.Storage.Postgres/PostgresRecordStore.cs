@@ -119,9 +119,6 @@ public sealed partial class PostgresRecordStore : RelationalStore, IRecordStore
     /// <summary>A new connection of the same server, for a reader that runs beside another.</summary>
     internal NpgsqlConnection Connect() => _source.OpenConnection();
 
-    internal static NpgsqlParameter Text(string name, object? value) =>
-        new(name, NpgsqlDbType.Text) { Value = value ?? DBNull.Value };
-
     internal static void Execute(NpgsqlConnection connection, string sql)
     {
         using var command = new NpgsqlCommand(sql, connection);

@@ -1,11 +1,8 @@
 using Npgsql;
-using NpgsqlTypes;
-using TripTestLog.Application.Import;
-using TripTestLog.Application.Records;
-using TripTestLog.Domain.Measurements;
 
 namespace TripTestLog.Storage.Postgres;
 
+/// <summary>What the server's measurement batch needs of its store: a transaction and a binary COPY on its connection.</summary>
 public sealed partial class PostgresRecordStore
 {
     internal NpgsqlTransaction BeginTransaction() => _connection.BeginTransaction();
