@@ -17,7 +17,7 @@ public sealed record JudgedTrip(StoredTrip Trip, Device Device, ITripEnvelope En
     /// <summary>Whether the test needs attention: too early, too late, or made with an untraceable instrument.</summary>
     public bool IsFinding => Findings.Count > 0;
 
-    /// <summary>Why the test's instrument was not traceable on the test date, or null.</summary>
+    /// <summary>Why the test's instrument was not traceable on the test date, as the instrument register gives it, or null.</summary>
     public string? InstrumentFinding =>
-        Findings.FirstOrDefault(f => f.Kind is FindingKind.CalibrationLapsed or FindingKind.InstrumentUnregistered)?.Message;
+        Findings.Select(f => f.Facts).OfType<InstrumentFacts.Untraced>().FirstOrDefault()?.Trace.Message;
 }

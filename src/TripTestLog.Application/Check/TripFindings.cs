@@ -21,13 +21,13 @@ internal static class TripFindings
         if (assessment.IsFailure)
         {
             var edge = assessment.Verdict == Verdict.TooEarly ? assessment.Band.Minimum : assessment.Band.Maximum;
-            findings.Add(new Finding(FindingKind.TripOutOfBand, assessment.Verdict == Verdict.TooLate ? Severity.OutOfService : Severity.Act, m.Tag, m.TestedAt, edge.Requirement, assessment.Reason, [source]));
+            findings.Add(new Finding(FindingKind.TripOutOfBand, assessment.Verdict == Verdict.TooLate ? Severity.OutOfService : Severity.Act, m.Tag, m.TestedAt, new TripFacts.OutOfBand(edge.Requirement, assessment.Reason), [source]));
         }
 
         if (untraced is not null)
         {
             findings.Add(new Finding(untraced.Registered ? FindingKind.CalibrationLapsed : FindingKind.InstrumentUnregistered, Severity.Investigate,
-                m.Tag, m.TestedAt, "lab policy: every measurement is made with an instrument in calibration", untraced.Message, [source])
+                m.Tag, m.TestedAt, new InstrumentFacts.Untraced(untraced), [source])
             {
                 Instrument = m.Instrument,
             });

@@ -1,4 +1,3 @@
-using System.Globalization;
 using TripTestLog.Application.Check;
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Condition;
@@ -70,7 +69,7 @@ internal static class ContactRules
             if (asFound)
             {
                 TestCurrent(device, session, ledger, policy);
-                SessionInstrument.Judge("contact", session[0].Tag, session[0].At, [.. session.Select(p => (p.Instrument, (IEnumerable<RecordSource>)p.Sources))], ledger, policy, instruments);
+                SessionInstrument.Judge(TestKind.Contact, session[0].Tag, session[0].At, [.. session.Select(p => (p.Instrument, (IEnumerable<RecordSource>)p.Sources))], ledger, policy, instruments);
             }
         }
     }
@@ -90,8 +89,7 @@ internal static class ContactRules
         var within = policy.DecisionRule != Domain.Verdicts.DecisionRule.Simple && Math.Abs(pole.Corrected - limit.Value) < guard;
         var over = policy.DecisionRule == Domain.Verdicts.DecisionRule.Guarded ? pole.Corrected > limit.Value + guard : pole.Corrected > limit.Value;
         Uncertain.Settle(ledger, "accuracy|contact|" + pole.Pole, within, asFound, pole.At, () => Make(FindingKind.RetestAccuracy, Severity.Investigate, pole.At, pole,
-            $"decision rule {TextCodes.DecisionRule.Of(policy.DecisionRule)} (ILAC-G8): a reading within the guard band of its limit is not a confident decision",
-            Invariant($"pole {pole.Pole} reads {pole.Corrected:0.#} µΩ against the limit of {limit.Value:0} µΩ, within the guard band of {guard:0.##} µΩ (U = {expanded:0.##} µΩ; {accuracy.Words(false, false, true, false)}): retest with a more accurate instrument"))
+            new ContactFacts.WithinUncertainty(pole.Stage, pole.Pole, pole.Corrected, limit.Value, guard, expanded, accuracy, policy.DecisionRule))
             with { Value = new Reading(pole.Corrected, ReadingUnit.MicroOhms), Limit = new Reading(limit.Value, ReadingUnit.MicroOhms), Instrument = pole.Instrument,
                 Measured = MeasuredOf(pole), Correction = CorrectionOf(pole),
                 Policy = PolicyFile.Setting(policy, "decision_rule") });
@@ -103,14 +101,14 @@ internal static class ContactRules
         var subject = "over|" + pole.Pole;
         if (over)
         {
-            ledger.Raise(subject, Make(FindingKind.ContactOverLimit, Severity.Act, pole.At, pole, "the maker's contact resistance limit (register contact_limit_uohm)",
-                Invariant($"pole {pole.Pole} reads {Describe(pole)}, over the limit of {limit.Value:0} µΩ; clean and re-torque the terminations or replace the breaker"))
+            ledger.Raise(subject, Make(FindingKind.ContactOverLimit, Severity.Act, pole.At, pole,
+                new ContactFacts.OverLimit(pole.Stage, pole.Pole, ReadingOf(pole), limit.Value))
                 with { Value = new Reading(pole.Corrected, ReadingUnit.MicroOhms), Limit = new Reading(limit.Value, ReadingUnit.MicroOhms),
                     Measured = MeasuredOf(pole), Correction = CorrectionOf(pole) });
         }
         else
         {
-            Settle(ledger, subject, pole, asFound, Invariant($"reading of pole {pole.Pole} within the limit ({pole.Corrected:0} µΩ)"));
+            Settle(ledger, subject, pole, asFound, new Settler.PoleWithinLimit(pole.Pole, pole.Corrected));
         }
     }
 
@@ -127,17 +125,16 @@ internal static class ContactRules
         var above = (pole.Corrected / lowest - 1) * 100;
         if (above > policy.ContactSpreadPercent + TripRules.Tolerance)
         {
+            // The shipped default is the ANSI/NETA customary guide; any other number is the lab's own.
+            var basis = FindingPolicy.Default.ContactSpreadPercent == policy.ContactSpreadPercent ? SpreadBasis.CustomaryGuide : SpreadBasis.LabPolicy;
             ledger.Raise(subject, Make(FindingKind.ContactPoleSpread, Severity.Investigate, pole.At, pole,
-                FindingPolicy.Default.ContactSpreadPercent == policy.ContactSpreadPercent
-                    ? "ANSI/NETA maintenance testing specifications: investigate a pole more than 50 % above the lowest (a customary guide, not a failure)"
-                    : Invariant($"lab policy: investigate a pole more than {policy.ContactSpreadPercent:0.###} % above the lowest (the ANSI/NETA maintenance testing specifications' customary guide is 50 %; not a failure)"),
-                Invariant($"pole {pole.Pole} reads {above:0}% above the device's lowest pole ({pole.Corrected:0} against {lowest:0} µΩ at 20 °C); investigate the connections and contacts of that pole (pole resistance alone does not predict performance)"))
+                new ContactFacts.PoleSpread(pole.Stage, pole.Pole, above, pole.Corrected, lowest, policy.ContactSpreadPercent, basis))
                 with { Value = new Reading(above, ReadingUnit.Percent), Limit = new Reading(policy.ContactSpreadPercent, ReadingUnit.Percent),
                     Policy = PolicyFile.Setting(policy, "contact_spread_percent") });
         }
         else
         {
-            Settle(ledger, subject, pole, asFound, $"reading of pole {pole.Pole} within the spread");
+            Settle(ledger, subject, pole, asFound, new Settler.PoleWithinSpread(pole.Pole));
         }
     }
 
@@ -152,14 +149,14 @@ internal static class ContactRules
         var rise = (pole.Corrected / first.Corrected - 1) * 100;
         if (rise > policy.ContactRisePercent)
         {
-            ledger.Raise(subject, Make(FindingKind.ContactRise, Severity.Plan, pole.At, pole, "lab policy: contact resistance rise over the pole's first as-found test",
-                Invariant($"pole {pole.Pole} has risen {rise:0}% since {first.At.Date:yyyy-MM-dd} ({first.Corrected:0} to {pole.Corrected:0} µΩ at 20 °C); plan cleaning and re-torquing"))
+            ledger.Raise(subject, Make(FindingKind.ContactRise, Severity.Plan, pole.At, pole,
+                new ContactFacts.Rise(pole.Stage, pole.Pole, rise, first.At.Date, first.Corrected, pole.Corrected))
                 with { Value = new Reading(rise, ReadingUnit.Percent), Limit = new Reading(policy.ContactRisePercent, ReadingUnit.Percent),
                     Policy = PolicyFile.Setting(policy, "contact_rise_percent"), RestsOn = [.. first.Sources, .. pole.Sources] });
         }
         else
         {
-            Settle(ledger, subject, pole, asFound, $"reading of pole {pole.Pole} near its baseline");
+            Settle(ledger, subject, pole, asFound, new Settler.PoleNearBaseline(pole.Pole));
         }
     }
 
@@ -169,14 +166,13 @@ internal static class ContactRules
         var low = session.Where(p => p.TestCurrent < least).ToList();
         if (low.Count == 0)
         {
-            ledger.Clear("current", session[0].At, "test at an adequate test current");
+            ledger.Clear("current", session[0].At, new Settler.AdequateTestCurrent());
             return;
         }
 
         var current = low.Min(p => p.TestCurrent);
         ledger.Raise("current", Make(FindingKind.ContactLowTestCurrent, Severity.Investigate, session[0].At, low[0],
-            "common practice from makers' maintenance guides (lab policy, not a standard): about 10 A under 100 A rating, 100 A at and above",
-            Invariant($"contact resistance measured at {current:0.#} A DC, below the {least:0} A usual for a {device.RatedCurrent.Value:0} A breaker; a low current can miss a film or a loose joint: repeat at the usual current")) with
+            new ContactFacts.LowTestCurrent(current, least, device.RatedCurrent.Value)) with
         {
             Pole = null,
             Value = new Reading(current, ReadingUnit.Amperes),
@@ -223,10 +219,8 @@ internal static class ContactRules
             var on = TrendPoint.DateOf(year);
             var last = found[^1];
             ledger.Add(Make(FindingKind.ContactTrendLimit, uncertain ? Severity.Investigate : Severity.Plan, last.At, last,
-                $"Theil–Sen trend (Sen 1968) of {line.Count} as-found tests against the maker's limit",
-                Forecast.Text(Invariant($"pole {last.Pole}'s readings rise {line.Slope:0} µΩ a year towards the limit of {limit.Value:0} µΩ"), "passed it", on, due, asOf,
-                    uncertain ? "the readings scatter too much for the date to be trusted: retest sooner" : "plan cleaning and re-torquing before then")
-                    + UntraceableInTrend.Note(untraceable, found.Count, policy)) with
+                new ContactFacts.TrendLimit(last.Pole, line.Count, line.Slope, limit.Value, new ForecastDates(on, due, asOf), uncertain,
+                    UntraceableInTrend.Share(untraceable, found.Count, policy))) with
             {
                 Value = new Reading(last.Corrected, ReadingUnit.MicroOhms),
                 Measured = MeasuredOf(last),
@@ -241,7 +235,7 @@ internal static class ContactRules
         }
     }
 
-    private static void Settle(FindingLedger ledger, string subject, PoleResult pole, bool asFound, string what)
+    private static void Settle(FindingLedger ledger, string subject, PoleResult pole, bool asFound, Settler what)
     {
         if (asFound)
         {
@@ -253,8 +247,8 @@ internal static class ContactRules
         }
     }
 
-    private static Finding Make(FindingKind kind, Severity severity, TestedAt at, PoleResult pole, string basis, string message) =>
-        new(kind, severity, pole.Tag, at, basis, pole.Stage == TestStage.AsLeft ? "as-left: " + message : message, pole.Sources) { Pole = pole.Pole };
+    private static Finding Make(FindingKind kind, Severity severity, TestedAt at, PoleResult pole, FindingFacts facts) =>
+        new(kind, severity, pole.Tag, at, facts, pole.Sources) { Pole = pole.Pole };
 
     /// <summary>The copper rule contact readings are referred to 20 °C by (a fixed rule, not lab policy).</summary>
     public const string CopperRule = "copper, 0.00393 per K (IEC 60228)";
@@ -263,9 +257,5 @@ internal static class ContactRules
 
     private static string? CorrectionOf(PoleResult pole) => pole.TemperatureKnown ? CopperRule : null;
 
-    private static string Describe(PoleResult pole) => pole.TemperatureKnown
-        ? Invariant($"{pole.Corrected:0} µΩ at 20 °C ({pole.Measured:0} µΩ as measured)")
-        : Invariant($"{pole.Measured:0} µΩ (no temperature recorded: not corrected)");
-
-    private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
+    private static ContactFacts.PoleReading ReadingOf(PoleResult pole) => new(pole.Corrected, pole.Measured, pole.TemperatureKnown);
 }

@@ -1,4 +1,3 @@
-using System.Globalization;
 using TripTestLog.Application.Check;
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Condition;
@@ -58,16 +57,8 @@ internal static class DeviceFindings
         var months = policy.MonthsBetweenTests(latest.Family, grade);
         var at = last is { } l ? TestedAt.OnDate(l) : TestedAt.OnDate(due);
         var days = asOf.DayNumber - due.DayNumber;
-        var basis = grade == ConditionGrade.Untested
-            ? $"lab policy: a first as-found test {months} months after commissioning for a {TextCodes.Family.Of(latest.Family)} breaker"
-            : $"lab policy: an as-found test every {months} months for a {TextCodes.Family.Of(latest.Family)} breaker graded {TextCodes.Grade.Of(grade)}";
-        var message = last is not { } d
-            ? latest.CommissionedOn is { } c
-                ? Invariant($"never tested; due since {due:yyyy-MM-dd}, {days} days ago (commissioned {c:yyyy-MM-dd}): schedule an as-found test")
-                : "never tested, and the register gives no commissioning date: due now; schedule an as-found test"
-            : months == 0 ? Invariant($"graded {TextCodes.Grade.Of(grade)} on its test of {d:yyyy-MM-dd}: repair it and test it again before it returns to service")
-            : Invariant($"no as-found test since {d:yyyy-MM-dd}; the next was due on {due:yyyy-MM-dd}, {days} days ago: schedule it");
-        return new Finding(FindingKind.TestOverdue, Severity.Plan, latest.Tag, at, basis, message, [])
+        return new Finding(FindingKind.TestOverdue, Severity.Plan, latest.Tag, at,
+            new DeviceFacts.Overdue(latest.Family, grade, months, last, latest.CommissionedOn, due, days), [])
         {
             Value = new Reading(days, ReadingUnit.Days),
             Limit = new Reading(0, ReadingUnit.Days),
@@ -100,8 +91,6 @@ internal static class DeviceFindings
         var from = last ?? device.History.Latest.CommissionedOn;
         return from is { } d ? d.AddMonths(months) : asOf;
     }
-
-    private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 
     private static DateOnly? LastTested(DeviceRecords device)
     {

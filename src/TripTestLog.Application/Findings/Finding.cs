@@ -6,25 +6,38 @@ using TripTestLog.Domain.Trends;
 namespace TripTestLog.Application.Findings;
 
 /// <summary>
-/// Something a person should act on or look into, as a typed value: what kind, how urgent, the requirement or policy it
-/// rests on, and the records it rests on. Prose is made from it at the edge.
+/// Something a person should act on or look into, as a typed value: what kind, how urgent, what the rule found (the
+/// numbers, the policy's numbers and the requirement it rests on, in <see cref="Facts"/>), and the records it rests on.
+/// Prose is made from it at the edge: the wording module (TripTestLog.Wording) gives its basis, message, standing and
+/// what it concerns.
 /// </summary>
 /// <param name="Kind">What the finding is about.</param>
 /// <param name="Severity">How urgently it asks for action.</param>
 /// <param name="Asset">The device.</param>
 /// <param name="TestedAt">The latest test it rests on.</param>
-/// <param name="Basis">The standard's requirement or the lab policy it comes from.</param>
-/// <param name="Message">Plain words a technician can act on.</param>
+/// <param name="Facts">What the rule found, as values.</param>
 /// <param name="RestsOn">The stored records it rests on: file and line.</param>
 public sealed record Finding(
     FindingKind Kind,
     Severity Severity,
     AssetTag Asset,
     TestedAt TestedAt,
-    string Basis,
-    string Message,
+    FindingFacts Facts,
     IReadOnlyList<RecordSource> RestsOn)
 {
+    /// <summary>A finding whose words are given whole (<see cref="GivenWords"/>), for a caller that holds them already.</summary>
+    /// <param name="kind">What the finding is about.</param>
+    /// <param name="severity">How urgently it asks for action.</param>
+    /// <param name="asset">The device.</param>
+    /// <param name="testedAt">The latest test it rests on.</param>
+    /// <param name="basis">The requirement or policy it rests on, in words.</param>
+    /// <param name="message">What to do, in words.</param>
+    /// <param name="restsOn">The stored records it rests on.</param>
+    public Finding(FindingKind kind, Severity severity, AssetTag asset, TestedAt testedAt, string basis, string message, IReadOnlyList<RecordSource> restsOn)
+        : this(kind, severity, asset, testedAt, new GivenWords(basis, message), restsOn)
+    {
+    }
+
     /// <summary>The pole it concerns (contact resistance), when it concerns one.</summary>
     public string? Pole { get; init; }
 
@@ -33,9 +46,6 @@ public sealed record Finding(
 
     /// <summary>The trip test point it concerns, e.g. "2.55 In cold", when it concerns one.</summary>
     public string? Point { get; init; }
-
-    /// <summary>What it concerns in words: "pole 1", "path 1-E", "at 2.55 In cold", or "" for the whole device.</summary>
-    public string Concerns => Pole is not null ? $"pole {Pole}" : Path is not null ? $"path {Path}" : Point is not null ? $"at {Point}" : "";
 
     /// <summary>The value the rule judged, with its unit.</summary>
     public Reading? Value { get; init; }
@@ -64,8 +74,11 @@ public sealed record Finding(
     /// <summary>The instrument an instrument finding is about.</summary>
     public string? Instrument { get; init; }
 
-    /// <summary>What changed its standing: the later test that closed it, or the as-left test that confirms a repair.</summary>
-    public string? Standing { get; init; }
+    /// <summary>What changed its standing last: the later as-found test that closed it, or an as-left test that confirms a repair.</summary>
+    public Settlement? Settled { get; init; }
+
+    /// <summary>The first as-left test that confirmed a repair of it while it stayed open; its words then keep what was found.</summary>
+    public Settlement? Repaired { get; init; }
 
     /// <summary>
     /// For a value referred to a reference temperature, the reading as measured, in the value's unit; null where the

@@ -32,28 +32,28 @@ internal sealed class FindingLedger
     }
 
     /// <summary>An as-found test on <paramref name="subject"/> that no longer raises it closes its open finding.</summary>
-    public void Clear(string subject, TestedAt at, string what)
+    public void Clear(string subject, TestedAt at, Settler by)
     {
         if (_open.Remove(subject, out var open))
         {
-            _others.Add(open with { Open = false, Standing = $"closed by the as-found {what} on {at.Date:yyyy-MM-dd}" });
+            _others.Add(open with { Open = false, Settled = new Settlement(true, at.Date, by) });
         }
     }
 
-    /// <summary>An as-left test on <paramref name="subject"/> that passes confirms the repair of its open finding.</summary>
-    public void Confirm(string subject, TestedAt at, string what)
+    /// <summary>
+    /// An as-left test on <paramref name="subject"/> that passes confirms the repair of its open finding. The finding's
+    /// own action is done: its words (at the edge) keep what was found, from the first repair confirmed, and say what stands now.
+    /// </summary>
+    public void Confirm(string subject, TestedAt at, Settler by)
     {
         if (_open.TryGetValue(subject, out var open) && open.TestedAt.CompareTo(at) <= 0)
         {
-            // The finding's own action ("clean and re-torque") is done: its words keep what was found and say what stands now.
-            var cut = open.Message.LastIndexOf("; ", StringComparison.Ordinal);
-            var found = cut < 0 ? open.Message : open.Message[..cut];
+            var settled = new Settlement(false, at.Date, by);
             _open[subject] = open with
             {
                 Severity = Severity.Investigate,
-                Message = open.Standing is not null ? open.Message : $"found on {open.TestedAt.Date:yyyy-MM-dd}: {found}; repaired: the as-left {what} on {at.Date:yyyy-MM-dd} is good; "
-                    + "confirm it at the next as-found test",
-                Standing = $"as-left {what} on {at.Date:yyyy-MM-dd} confirms the repair; the next as-found test closes it",
+                Repaired = open.Repaired ?? settled,
+                Settled = settled,
             };
         }
     }

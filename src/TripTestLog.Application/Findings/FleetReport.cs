@@ -21,8 +21,8 @@ public sealed class FleetReport(int top)
     /// <summary>An instrument that was out of calibration or unregistered when used.</summary>
     public sealed class Lapse
     {
-        /// <summary>Why, in the words of its latest finding.</summary>
-        public string Reason { get; set; } = "";
+        /// <summary>Its latest finding, which says why (in words made at the edge).</summary>
+        public Finding? Latest { get; set; }
 
         /// <summary>Records made with it while untraceable.</summary>
         public int Records { get; set; }
@@ -83,7 +83,7 @@ public sealed class FleetReport(int top)
                         _lapses[name] = lapse = new Lapse();
                     }
 
-                    lapse.Reason = finding.Message;
+                    lapse.Latest = finding;
                     lapse.Records += finding.RestsOn.Count;
                     lapse.Devices++;
                     break;

@@ -1,5 +1,4 @@
 using TripTestLog.Domain.Quantities;
-using System.Globalization;
 using TripTestLog.Application.Check;
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Condition;
@@ -35,7 +34,7 @@ internal static class InsulationRules
             {
                 sessionAt = r.At;
                 var session = results.Where(x => x.At == r.At && x.Stage == TestStage.AsFound).ToList();
-                SessionInstrument.Judge("insulation", session[0].Tag, session[0].At, [.. session.Select(p => (p.Instrument, (IEnumerable<RecordSource>)[p.Source]))], ledger, policy, instruments);
+                SessionInstrument.Judge(TestKind.Insulation, session[0].Tag, session[0].At, [.. session.Select(p => (p.Instrument, (IEnumerable<RecordSource>)[p.Source]))], ledger, policy, instruments);
             }
 
             var device = history.InForceOn(r.At.Date);
@@ -52,8 +51,7 @@ internal static class InsulationRules
             var within = policy.DecisionRule != Domain.Verdicts.DecisionRule.Simple && !r.OverRange && Math.Abs(r.Corrected - row.Minimum.Value) < guard;
             var below = !r.OverRange && (policy.DecisionRule == Domain.Verdicts.DecisionRule.Guarded ? r.Corrected < row.Minimum.Value - guard : r.Corrected < row.Minimum.Value);
             Uncertain.Settle(ledger, "accuracy|insulation|" + r.Path, within, r.Stage == TestStage.AsFound, r.At, () => new Finding(FindingKind.RetestAccuracy, Severity.Investigate,
-                r.Tag, r.At, $"decision rule {TextCodes.DecisionRule.Of(policy.DecisionRule)} (ILAC-G8): a reading within the guard band of its limit is not a confident decision",
-                Invariant($"path {r.Path} reads {ResistanceText.MegaOhms(r.Corrected)} against the minimum of {ResistanceText.MegaOhms(row.Minimum.Value)}, within the guard band of {ResistanceText.MegaOhms(guard)} (U = {ResistanceText.MegaOhms(expanded)}; {accuracy.Words(false, false, false, true)}): retest with a more accurate instrument"),
+                r.Tag, r.At, new InsulationFacts.WithinUncertainty(r.Path, r.Corrected, row.Minimum.Value, guard, expanded, accuracy, policy.DecisionRule),
                 [r.Source])
             {
                 Path = r.Path,
@@ -71,11 +69,9 @@ internal static class InsulationRules
             var subject = "insulation|" + r.Path;
             if (below)
             {
-                var voltage = r.TestVoltage < row.TestVoltage.Value
-                    ? Invariant($" (tested at {r.TestVoltage:0} V DC; the table's minimum assumes {row.TestVoltage.Value:0} V DC)")
-                    : "";
-                ledger.Raise(subject, new Finding(FindingKind.InsulationBelowMinimum, Severity.Act, r.Tag, r.At, row.Source,
-                    Invariant($"{(r.Stage == TestStage.AsLeft ? "as-left: " : "")}path {r.Path} reads {Describe(r, policy)}, below the minimum of {ResistanceText.MegaOhms(row.Minimum.Value)} for a {device.RatedVoltage.Value:0} V breaker{voltage}; find and remove the cause (moisture, dirt, damage) before returning it to service"),
+                ledger.Raise(subject, new Finding(FindingKind.InsulationBelowMinimum, Severity.Act, r.Tag, r.At,
+                    new InsulationFacts.BelowMinimum(row.Source, r.Stage, r.Path, ReadingOf(r, policy), row.Minimum.Value, device.RatedVoltage.Value,
+                        r.TestVoltage, row.TestVoltage.Value),
                     [r.Source])
                 {
                     Path = r.Path,
@@ -88,11 +84,11 @@ internal static class InsulationRules
             }
             else if (r.Stage == TestStage.AsFound)
             {
-                ledger.Clear(subject, r.At, $"reading of path {r.Path} above the minimum");
+                ledger.Clear(subject, r.At, new Settler.PathAboveMinimum(r.Path));
             }
             else
             {
-                ledger.Confirm(subject, r.At, $"reading of path {r.Path} above the minimum");
+                ledger.Confirm(subject, r.At, new Settler.PathAboveMinimum(r.Path));
             }
         }
     }
@@ -105,8 +101,8 @@ internal static class InsulationRules
         var subject = "voltage|" + r.Path;
         if (r.TestVoltage < row.TestVoltage.Value)
         {
-            ledger.Raise(subject, new Finding(FindingKind.InsulationTestVoltage, Severity.Investigate, r.Tag, r.At, row.Source,
-                Invariant($"{(r.Stage == TestStage.AsLeft ? "as-left: " : "")}path {r.Path} was tested at {r.TestVoltage:0} V DC; the table asks {row.TestVoltage.Value:0} V DC for a {device.RatedVoltage.Value:0} V breaker, so its reading ({Describe(r, policy)}) does not show the insulation sound at that voltage; retest at {row.TestVoltage.Value:0} V DC"),
+            ledger.Raise(subject, new Finding(FindingKind.InsulationTestVoltage, Severity.Investigate, r.Tag, r.At,
+                new InsulationFacts.TestVoltage(row.Source, r.Stage, r.Path, ReadingOf(r, policy), device.RatedVoltage.Value, r.TestVoltage, row.TestVoltage.Value),
                 [r.Source])
             {
                 Path = r.Path,
@@ -117,11 +113,11 @@ internal static class InsulationRules
         }
         else if (r.Stage == TestStage.AsFound)
         {
-            ledger.Clear(subject, r.At, $"test of path {r.Path} at {r.TestVoltage:0} V DC");
+            ledger.Clear(subject, r.At, new Settler.PathAtVoltage(r.Path, r.TestVoltage));
         }
         else
         {
-            ledger.Confirm(subject, r.At, $"test of path {r.Path} at {r.TestVoltage:0} V DC");
+            ledger.Confirm(subject, r.At, new Settler.PathAtVoltage(r.Path, r.TestVoltage));
         }
     }
 
@@ -159,15 +155,8 @@ internal static class InsulationRules
             var reach = row is null ? null : line.Reaches(Math.Log10(row.Minimum.Value));
             var forecast = reach is { } year && year <= line.LastYear + policy.ForecastHorizonYears ? TrendPoint.DateOf(year) : (DateOnly?)null;
             ledger.Add(new Finding(FindingKind.InsulationFalling, Severity.Plan, last.Tag, last.At,
-                $"Theil–Sen trend (Sen 1968) of {line.Count} as-found readings {Referred(policy)} ({Setting(policy)})",
-                Invariant($"path {last.Path} falls about {fall:0}% a year ({ResistanceText.Number(list[0].Corrected, null)} to {ResistanceText.MegaOhms(last.Corrected)} {Compared(policy)} since {list[0].At.Date:yyyy-MM-dd})")
-                    + (forecast is { } on
-                        ? on < asOf
-                            ? Invariant($" and has probably fallen below the minimum of {ResistanceText.MegaOhms(row!.Minimum.Value)} since about {on:yyyy-MM-dd} (judged on {asOf:yyyy-MM-dd}): test it now")
-                            : Invariant($" and would reach the minimum of {ResistanceText.MegaOhms(row!.Minimum.Value)} about {on:yyyy-MM-dd}")
-                        : "")
-                    + "; look for moisture, contamination or tracking"
-                    + UntraceableInTrend.Note(untraceable, list.Count, policy),
+                new InsulationFacts.Falling(last.Path, line.Count, policy.InsulationCorrection, fall, list[0].Corrected, list[0].At.Date, last.Corrected,
+                    forecast is null ? null : row!.Minimum.Value, forecast, asOf, UntraceableInTrend.Share(untraceable, list.Count, policy)),
                 [.. list.Select(r => r.Source)])
             {
                 Path = last.Path,
@@ -208,18 +197,5 @@ internal static class InsulationRules
     // A reading with no temperature is not corrected, so no rule applies to it.
     private static string? CorrectionOf(PathResult r, FindingPolicy policy) => r.TemperatureKnown ? Setting(policy) : null;
 
-    // Under insulation_correction = none a reading is compared as measured, and never called a 20 °C value.
-    private static string Referred(FindingPolicy policy) =>
-        policy.InsulationCorrection == InsulationCorrectionRule.None ? "compared as measured" : "referred to 20 °C";
-
-    private static string Compared(FindingPolicy policy) =>
-        policy.InsulationCorrection == InsulationCorrectionRule.None ? "as measured" : "at 20 °C";
-
-    private static string Describe(PathResult r, FindingPolicy policy) => r.Celsius is { } c
-        ? policy.InsulationCorrection == InsulationCorrectionRule.None
-            ? Invariant($"{ResistanceText.MegaOhms(r.Measured)} as measured at {c:0.#} °C (not corrected: {Setting(policy)})")
-            : Invariant($"{ResistanceText.MegaOhms(r.Corrected)} at 20 °C ({ResistanceText.MegaOhms(r.Measured)} as measured at {c:0.#} °C; {Setting(policy)})")
-        : Invariant($"{ResistanceText.MegaOhms(r.Measured)} (no temperature recorded: not corrected)");
-
-    private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
+    private static InsulationFacts.PathReading ReadingOf(PathResult r, FindingPolicy policy) => new(r.Corrected, r.Measured, r.Celsius, policy.InsulationCorrection);
 }

@@ -1,4 +1,3 @@
-using System.Globalization;
 using TripTestLog.Application.Check;
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Trends;
@@ -25,11 +24,8 @@ internal static class PeerRule
             }
 
             var m = latest.Trip.Measurement;
-            var side = z > 0 ? "slower" : "faster";
             ledger.Add(new Finding(FindingKind.PeerOutlier, Severity.Investigate, m.Tag, m.TestedAt,
-                "modified z-score on the median absolute deviation (Iglewicz and Hoaglin 1993)",
-                string.Create(CultureInfo.InvariantCulture,
-                    $"at {point.Label} it trips {side} than its {group.Count - 1} peers ({name}): {position * 100:0}% of the way through the band against their median of {group.Median * 100:0}%; it passes, but check the release and the test"),
+                new TripFacts.PeerOutlier(point.Label, z > 0, group.Count - 1, name, position, group.Median),
                 [TripRules.Source(latest)])
             {
                 Point = point.Label,

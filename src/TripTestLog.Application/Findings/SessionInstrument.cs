@@ -15,28 +15,27 @@ namespace TripTestLog.Application.Findings;
 internal static class SessionInstrument
 {
     /// <summary>Raises or closes the session's instrument finding.</summary>
-    /// <param name="kind">The measurement in words and in the finding's subject: "contact" or "insulation".</param>
+    /// <param name="kind">The kind of test: contact or insulation.</param>
     /// <param name="tag">The device tested.</param>
     /// <param name="at">When the session was tested.</param>
     /// <param name="readings">The session's readings: each one's instrument and the records it rests on.</param>
     /// <param name="ledger">The device's findings.</param>
     /// <param name="policy">The lab policy (whether instruments must be registered).</param>
     /// <param name="instruments">The instrument register.</param>
-    public static void Judge(string kind, AssetTag tag, TestedAt at, IReadOnlyList<(string Instrument, IEnumerable<RecordSource> Sources)> readings,
+    public static void Judge(TestKind kind, AssetTag tag, TestedAt at, IReadOnlyList<(string Instrument, IEnumerable<RecordSource> Sources)> readings,
         FindingLedger ledger, FindingPolicy policy, InstrumentRegister instruments)
     {
-        var subject = $"instrument|{kind}";
+        var subject = kind == TestKind.Contact ? "instrument|contact" : "instrument|insulation";
         var untraced = readings.Select(r => (r.Instrument, u: instruments.Trace(r.Instrument, at.Date, policy.RequireRegisteredInstruments)))
             .FirstOrDefault(x => x.u is not null);
         if (untraced.u is null)
         {
-            ledger.Clear(subject, at, $"{kind} test with a traceable instrument");
+            ledger.Clear(subject, at, new Settler.TraceableInstrument(kind));
             return;
         }
 
         ledger.Raise(subject, new Finding(untraced.u.Registered ? FindingKind.CalibrationLapsed : FindingKind.InstrumentUnregistered,
-            Severity.Investigate, tag, at, "lab policy: every measurement is made with an instrument in calibration",
-            $"{kind} resistance tests on {at.Date:yyyy-MM-dd}: {untraced.u.Message}; confirm the instrument's accuracy or repeat the tests",
+            Severity.Investigate, tag, at, new InstrumentFacts.SessionUntraced(kind, at.Date, untraced.u),
             [.. readings.SelectMany(r => r.Sources)])
         {
             Instrument = untraced.Instrument,

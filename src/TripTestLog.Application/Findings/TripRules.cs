@@ -1,4 +1,3 @@
-using System.Globalization;
 using TripTestLog.Application.Check;
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Measurements;
@@ -22,9 +21,8 @@ internal static class TripRules
             if (a.IsFailure)
             {
                 var edge = a.Verdict == Verdict.TooEarly ? a.Band.Minimum : a.Band.Maximum;
-                var stage = TextCodes.Stage.Of(m.Stage);
                 ledger.Raise(subject, new Finding(FindingKind.TripOutOfBand, a.Verdict == Verdict.TooLate ? Severity.OutOfService : Severity.Act,
-                    m.Tag, m.TestedAt, edge.Requirement, $"{stage} at {point.Label}: {a.Reason}", [Source(judged)])
+                    m.Tag, m.TestedAt, new TripFacts.OutOfBandAt(m.Stage, point.Label, edge.Requirement, a.Reason), [Source(judged)])
                 {
                     Point = point.Label,
                     Value = new Reading(m.Outcome.Time.Value, ReadingUnit.Seconds),
@@ -35,11 +33,11 @@ internal static class TripRules
             {
                 if (m.Stage == TestStage.AsFound)
                 {
-                    ledger.Clear(subject, m.TestedAt, $"pass at {point.Label}");
+                    ledger.Clear(subject, m.TestedAt, new Settler.TripVerdict(Verdict.Pass, point.Label));
                 }
                 else
                 {
-                    ledger.Confirm(subject, m.TestedAt, $"pass at {point.Label}");
+                    ledger.Confirm(subject, m.TestedAt, new Settler.TripVerdict(Verdict.Pass, point.Label));
                 }
             }
 
@@ -61,17 +59,14 @@ internal static class TripRules
         {
             if (a.Verdict != Verdict.NotAssessable)
             {
-                ledger.Clear(subject, m.TestedAt, $"{Format(a.Verdict)} at {point.Label} clear of the measurement uncertainty");
+                ledger.Clear(subject, m.TestedAt, new Settler.TripVerdict(a.Verdict, point.Label, ClearOfUncertainty: true));
             }
 
             return;
         }
 
-        var statement = u.Conformity is { } c ? $" ({TextCodes.Conformity.Of(c)})" : "";
         ledger.Raise(subject, new Finding(FindingKind.RetestAccuracy, Severity.Investigate, m.Tag, m.TestedAt,
-            $"decision rule {TextCodes.DecisionRule.Of(u.Rule)} (ILAC-G8): a result within the guard band of its limit is not a confident decision",
-            $"{TextCodes.Stage.Of(m.Stage)} at {point.Label} is within the measurement uncertainty of its limit{statement}: {a.Reason}; "
-            + $"retest with a more accurate instrument", [Source(judged)])
+            new TripFacts.WithinUncertainty(m.Stage, point.Label, u.Rule, u.Conformity, a.Reason), [Source(judged)])
         {
             Point = point.Label,
             Instrument = m.Instrument,
@@ -94,10 +89,10 @@ internal static class TripRules
         if (a.Verdict != Verdict.NotAssessable)
         {
             // A test that decides clears the retest at its own point, and at the standard's point it proved or broke.
-            ledger.Clear("retest|" + point.Key, m.TestedAt, $"{Format(a.Verdict)} at {point.Label}");
+            ledger.Clear("retest|" + point.Key, m.TestedAt, new Settler.TripVerdict(a.Verdict, point.Label));
             if (a.Point is { } decided)
             {
-                ledger.Clear("retest|point|" + decided.Label, m.TestedAt, $"{Format(a.Verdict)} at {point.Label}");
+                ledger.Clear("retest|point|" + decided.Label, m.TestedAt, new Settler.TripVerdict(a.Verdict, point.Label));
             }
 
             return;
@@ -105,19 +100,11 @@ internal static class TripRules
 
         var subject = a.RetestAt is { } at ? "retest|point|" + at.Label : "retest|" + point.Key;
         ledger.Raise(subject, new Finding(FindingKind.RetestNeeded, Severity.Investigate, m.Tag, m.TestedAt,
-            "every verdict rests on a requirement: this test neither broke nor proved one",
-            $"{TextCodes.Stage.Of(m.Stage)} at {point.Label} is not assessable: {a.Reason}", [Source(judged)])
+            new TripFacts.NotAssessable(m.Stage, point.Label, a.Reason), [Source(judged)])
         {
             Point = point.Label,
         });
     }
-
-    private static string Format(Verdict v) => v switch
-    {
-        Verdict.Pass => "pass",
-        Verdict.TooEarly => "too early",
-        _ => "too late",
-    };
 
     private static void Settings(JudgedTrip judged, FindingLedger ledger)
     {
@@ -130,29 +117,25 @@ internal static class TripRules
         var (applied, notes) = found.ApplyTo(judged.Device.Settings);
         if (applied == judged.Device.Settings)
         {
-            ledger.Clear("settings", m.TestedAt, "test that read the register's settings");
+            ledger.Clear("settings", m.TestedAt, new Settler.RegisterSettings());
             return;
         }
 
         ledger.Raise("settings", new Finding(FindingKind.SettingsDiffer, Severity.Investigate, m.Tag, m.TestedAt,
-            "register entry in force on the test date", $"settings found on the device differ from the register ({string.Join("; ", notes)}); "
-            + "review protection coordination, then correct the device or the register", [Source(judged)]));
+            new TripFacts.SettingsDiffer([.. notes]), [Source(judged)]));
     }
 
     private static void Instrument(JudgedTrip judged, FindingLedger ledger)
     {
         var m = judged.Trip.Measurement;
         var untraced = judged.Findings.FirstOrDefault(f => f.Kind is FindingKind.CalibrationLapsed or FindingKind.InstrumentUnregistered);
-        if (untraced is null)
+        if (untraced?.Facts is not InstrumentFacts.Untraced { Trace: var trace })
         {
-            ledger.Clear("instrument|trip", m.TestedAt, "trip test with a traceable instrument");
+            ledger.Clear("instrument|trip", m.TestedAt, new Settler.TraceableInstrument(TestKind.Trip));
             return;
         }
 
-        ledger.Raise("instrument|trip", untraced with
-        {
-            Message = $"trip tests on {m.TestedAt.Date:yyyy-MM-dd}: {untraced.Message}; confirm the instrument's accuracy or repeat the tests",
-        });
+        ledger.Raise("instrument|trip", untraced with { Facts = new InstrumentFacts.SessionUntraced(TestKind.Trip, m.TestedAt.Date, trace) });
     }
 
     /// <summary>The latest tripped as-found test at each point with its band position, for the peer comparison.</summary>
@@ -219,16 +202,12 @@ internal static class TripRules
                 continue;
             }
 
-            var (t0, t1) = (first.Trip.Measurement.Outcome.Time, last.Trip.Measurement.Outcome.Time);
-            var slower = drift.Decades >= 0 ? "slower" : "faster";
-            var compared = byTime
-                ? Invariant($"{slower} by a factor of {Math.Pow(10, Math.Abs(drift.Decades)):0.00} (the policy's limit: {1 + policy.TripDriftTimePercent / 100:0.00} either way on a log scale)")
-                : Invariant($"its place in the band moved {shift * 100:+0;-0} % of the band, from {p0!.Value * 100:0} % to {p1!.Value * 100:0} % (0 % = earliest allowed, 100 % = latest; the policy's limit: {policy.TripDriftBandPercent:0} %)");
             var m = last.Trip.Measurement;
-            var restarted = tests.Count < all.Count ? Invariant($" (since the settings changed on {first.Trip.Measurement.TestedAt.Date:yyyy-MM-dd})") : "";
-            ledger.Add(new Finding(FindingKind.TripDrift, Severity.Investigate, m.Tag, m.TestedAt, "lab policy: trip-time drift from the device's first as-found tests at its present settings",
-                Invariant($"as-found trip time at {point.Label} moved from {t0} ({first.Trip.Measurement.TestedAt.Date:yyyy-MM-dd}) to {t1} ({m.TestedAt.Date:yyyy-MM-dd}){restarted}: {compared}; look for wear or dirt before it leaves the band"),
-                [Source(first), Source(last)])
+            var from = first.Trip.Measurement;
+            var facts = new TripFacts.Drift(point.Label, from.Outcome.Time, from.TestedAt.Date, m.Outcome.Time, m.TestedAt.Date,
+                tests.Count < all.Count ? from.TestedAt.Date : null, byTime, drift.Decades >= 0, Math.Pow(10, Math.Abs(drift.Decades)),
+                policy.TripDriftTimePercent, shift, p0!.Value, p1!.Value, policy.TripDriftBandPercent);
+            ledger.Add(new Finding(FindingKind.TripDrift, Severity.Investigate, m.Tag, m.TestedAt, facts, [Source(first), Source(last)])
             {
                 Point = point.Label,
                 Value = byTime ? new Reading(factorPercent, ReadingUnit.Percent) : new Reading(shift * 100, ReadingUnit.Percent),
@@ -288,13 +267,9 @@ internal static class TripRules
             var uncertain = width is { } w && line.Spread > w * policy.TripTrendScatterBandPercent / 100;
             var on = TrendPoint.DateOf(year);
             var m = last.Trip.Measurement;
-            var side = line.Slope > 0 ? "latest allowed time" : "earliest allowed time";
-            var stem = Invariant($"as-found trip times at {point.Label} trend towards the {side} ({limit})");
             ledger.Add(new Finding(FindingKind.TripTrendExit, uncertain ? Severity.Investigate : Severity.Plan, m.Tag, m.TestedAt,
-                $"Theil–Sen trend (Sen 1968) of {line.Count} as-found tests against {edge.Requirement}",
-                Forecast.Text(stem, "left the band", on, due, asOf,
-                    uncertain ? "the tests scatter too much for the date to be trusted: retest sooner" : "plan a service or replacement before then")
-                    + UntraceableInTrend.Note(untraceable, tests.Count, policy),
+                new TripFacts.TrendExit(point.Label, line.Count, edge.Requirement, line.Slope > 0, limit, new ForecastDates(on, due, asOf), uncertain,
+                    UntraceableInTrend.Share(untraceable, tests.Count, policy)),
                 [.. tests.Select(Source)])
             {
                 Point = point.Label,
@@ -320,6 +295,4 @@ internal static class TripRules
     // Thresholds are compared at a stated precision, 1e-9 of a per cent, so a value exactly at a limit that arrives a
     // rounding error away from it (a ratio of corrected readings, a logarithm) is judged as exactly at it.
     internal const double Tolerance = 1e-9;
-
-    private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }

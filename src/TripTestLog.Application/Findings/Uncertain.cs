@@ -17,7 +17,7 @@ internal static class Uncertain
         }
         else if (asFound)
         {
-            ledger.Clear(subject, at, "a reading clear of the measurement uncertainty of its limit");
+            ledger.Clear(subject, at, new Settler.ReadingClearOfUncertainty());
         }
     }
 }

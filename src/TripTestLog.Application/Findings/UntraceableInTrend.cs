@@ -1,4 +1,3 @@
-using TripTestLog.Application.Text;
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Condition;
 using TripTestLog.Domain.Instruments;
@@ -19,14 +18,6 @@ internal static class UntraceableInTrend
     public static List<T> Kept<T>(IEnumerable<T> readings, Func<T, bool> traceable, FindingPolicy policy) =>
         policy.UntraceableReadings == UntraceableReadings.Exclude ? [.. readings.Where(traceable)] : [.. readings];
 
-    /// <summary>
-    /// The sentence a trend's finding ends with when untraceable readings are in it or were left out of it, else "".
-    /// </summary>
-    public static string Note(int untraceable, int kept, FindingPolicy policy) => untraceable == 0 ? ""
-        : policy.UntraceableReadings == UntraceableReadings.Exclude
-            ? $"; {Counted.Of(untraceable, "reading")} from an instrument not traceable on the day left out of the trend ({Setting(policy)})"
-            : $"; {untraceable} of its {kept} readings {(untraceable == 1 ? "comes" : "come")} from an instrument not traceable on the day (marked on the chart; {Setting(policy)})";
-
-    /// <summary>The policy setting a trend's finding names.</summary>
-    public static string Setting(FindingPolicy policy) => $"untraceable_readings = {TextCodes.UntraceableReadings.Of(policy.UntraceableReadings)}";
+    /// <summary>How many readings of a trend were untraceable, with what the policy did with them, for the edge to word.</summary>
+    public static UntraceableShare Share(int untraceable, int kept, FindingPolicy policy) => new(untraceable, kept, policy.UntraceableReadings);
 }

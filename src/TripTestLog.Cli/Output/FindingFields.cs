@@ -1,6 +1,7 @@
 using System.Globalization;
 using TripTestLog.Application.Findings;
 using TripTestLog.Domain.Codes;
+using TripTestLog.Wording;
 
 namespace TripTestLog.Cli.Output;
 

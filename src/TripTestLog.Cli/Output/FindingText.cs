@@ -1,5 +1,6 @@
 using TripTestLog.Application.Findings;
 using TripTestLog.Domain.Codes;
+using TripTestLog.Wording;
 
 namespace TripTestLog.Cli.Output;
 
@@ -36,9 +37,9 @@ internal sealed class FindingText(TextWriter writer, string asOf, string policyF
             var since = f.FirstSeen is { } first && first != f.TestedAt.Date ? $", since {first:yyyy-MM-dd}" : "";
             Wrapped.Write(writer, $"[{status}] {TextCodes.FindingKind.Of(f.Kind)}{subject}, tested {f.TestedAt.Date:yyyy-MM-dd}{since}", 2);
             Wrapped.Write(writer, f.Message, 6);
-            if (f.Standing is not null)
+            if (f.Standing is { } standing)
             {
-                Wrapped.Write(writer, f.Standing, 6);
+                Wrapped.Write(writer, standing, 6);
             }
 
             Wrapped.Write(writer, f.Policy is null ? $"basis: {f.Basis}" : $"basis: {f.Basis}; policy: {f.Policy}", 6);

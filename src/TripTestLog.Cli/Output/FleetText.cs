@@ -2,6 +2,7 @@ using System.Globalization;
 using TripTestLog.Application.Findings;
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Condition;
+using TripTestLog.Wording;
 
 namespace TripTestLog.Cli.Output;
 

@@ -7,6 +7,7 @@ using TripTestLog.Domain.Quantities;
 using TripTestLog.Domain.Trends;
 using TripTestLog.Domain.Verdicts;
 using TripTestLog.Reports.Charts;
+using TripTestLog.Wording;
 using static TripTestLog.Reports.Html.Markup;
 
 namespace TripTestLog.Reports.Html;

@@ -1,11 +1,12 @@
-using TripTestLog.Application.Text;
 using System.Text;
 using TripTestLog.Application.Findings;
+using TripTestLog.Application.Text;
 using TripTestLog.Domain.Codes;
 using TripTestLog.Domain.Condition;
 using TripTestLog.Domain.Devices;
 using TripTestLog.Domain.Verdicts;
 using TripTestLog.Reports.Charts;
+using TripTestLog.Wording;
 using static TripTestLog.Reports.Html.Markup;
 
 namespace TripTestLog.Reports.Html;
@@ -83,7 +84,7 @@ internal static class FleetPage
         html.Append("<h2>Instruments used while untraceable</h2>\n");
         Table(html, ["instrument", "records touched", "devices", "why"], fleet.Lapses.Select(l => new[]
         {
-            H(l.Key), N(l.Value.Records), N(l.Value.Devices), H(l.Value.Reason),
+            H(l.Key), N(l.Value.Records), N(l.Value.Devices), H(l.Value.Latest?.Message ?? ""),
         }));
         FleetModelsSection.Write(html, fleet.Models);
         Layout.End(html, context.Footer);
