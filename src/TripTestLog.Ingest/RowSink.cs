@@ -56,6 +56,8 @@ internal sealed class RowSink(RecordKind kind)
             case CalibrationRecord r:
                 _instruments.Add(new(r.Calibration, line));
                 break;
+            default:
+                throw new ArgumentOutOfRangeException(nameof(record), record.GetType().Name, "a kind of record this file keeps no list for");
         }
     }
 

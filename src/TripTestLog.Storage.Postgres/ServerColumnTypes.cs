@@ -13,9 +13,6 @@ namespace TripTestLog.Storage.Postgres;
 /// </summary>
 internal static class ServerColumnTypes
 {
-    /// <summary>The EF Core provider name of PostgreSQL.</summary>
-    public const string Provider = "Npgsql.EntityFrameworkCore.PostgreSQL";
-
     /// <summary>The column that holds a test's UTC offset in minutes, when its record gave one.</summary>
     public const string OffsetColumn = "tested_offset_min";
 

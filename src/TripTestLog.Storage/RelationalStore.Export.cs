@@ -22,7 +22,8 @@ public abstract partial class RelationalStore : IRecordExport
     {
         ArgumentNullException.ThrowIfNull(file);
 
-        // A read scope of its own: the records stream while this store may be written to.
+        // One read scope while the records stream: on SQLite it holds a read transaction on the store's connection, so
+        // nothing may write through this store until the enumeration ends (transfer only reads its source).
         using var scope = BeginRead();
         using var select = scope.Query(Export.RecordsSql(file.Kind));
         var id = select.CreateParameter();

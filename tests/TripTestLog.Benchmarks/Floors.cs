@@ -71,7 +71,7 @@ internal static class Floors
         using var connection = new SqliteConnection($"Data Source={db};Pooling=False");
         connection.Open();
         Execute(connection, "PRAGMA journal_mode=WAL; PRAGMA synchronous=NORMAL; PRAGMA cache_size=-262144; PRAGMA temp_store=MEMORY;");
-        Execute(connection, "INSERT INTO source_files (file_name, sha256, kind, rows_read, records_added, duplicates, imported_at) VALUES ('x', 'x', 'TripTests', 0, 0, 0, '2026-12-02T00:00:00Z')");
+        Execute(connection, "INSERT INTO source_files (file_name, sha256, kind, rows_read, records_added, duplicates, imported_at) VALUES ('x', 'x', 'trip-tests', 0, 0, 0, '2026-12-02T00:00:00Z')");
         var ids = new Dictionary<string, long>(StringComparer.Ordinal);
         using (var select = connection.CreateCommand())
         {
