@@ -17,17 +17,10 @@ internal sealed class ServerDialect : StoreDialect
 
     public override string P(string name) => "@" + name;
 
-    public override void Set(DbCommand command, string name, object? value) => ServerSql.Set((NpgsqlCommand)command, name, value);
-
-    public override void SetNumber(DbCommand command, string name, double? value)
+    protected override DbParameter Parameter(DbCommand command, string name)
     {
         var parameters = ((NpgsqlCommand)command).Parameters;
-        if (!parameters.Contains(name))
-        {
-            parameters.Add(new NpgsqlParameter(name, NpgsqlDbType.Double));
-        }
-
-        parameters[name].Value = value is { } v ? v : DBNull.Value;
+        return parameters.Contains(name) ? parameters[name] : parameters.Add(new NpgsqlParameter { ParameterName = name });
     }
 
     public override object Date(DateOnly date) => date;
@@ -50,8 +43,11 @@ internal sealed class ServerDialect : StoreDialect
 
     public override string TestTimeSets => $", {ServerColumnTypes.OffsetColumn} = @offset, {ServerColumnTypes.HasTimeColumn} = @hastime";
 
-    public override void SetTestTime(DbCommand command, string name, object text, TestedAt when)
+    public override object TestTime(DbDataReader reader, int at, int extra) => ServerRows.TestedAt(reader, at, extra);
+
+    public override void SetTestTime(DbCommand command, string name, object time)
     {
+        var when = (TestedAt)time;
         var parameters = ((NpgsqlCommand)command).Parameters;
         parameters.Add(new NpgsqlParameter(name, NpgsqlDbType.Timestamp) { Value = DateTime.SpecifyKind(when.Local, DateTimeKind.Unspecified) });
         parameters.Add(new NpgsqlParameter("offset", NpgsqlDbType.Smallint) { Value = when.Offset is { } o ? (short)o.TotalMinutes : DBNull.Value });

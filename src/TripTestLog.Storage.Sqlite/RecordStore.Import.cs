@@ -54,12 +54,12 @@ public sealed partial class RecordStore
         }
     }
 
-    internal SqliteCommand Command(SqliteTransaction transaction, string sql)
+    /// <summary>A command as SQLite's own type, for statements the batch prepares and binds by position.</summary>
+    internal SqliteCommand NativeCommand(string sql, SqliteTransaction transaction)
     {
         var command = _connection.CreateCommand();
         command.Transaction = transaction;
         command.CommandText = sql;
         return command;
     }
-
 }

@@ -84,10 +84,10 @@ public sealed partial class RecordStore : IPeerPositionStore
     public void StorePeerPositions(IEnumerable<DevicePeerPositions> devices)
     {
         using var transaction = BeginWriting();
-        using var id = Command(transaction, "SELECT id FROM devices WHERE asset_tag = $tag COLLATE NOCASE");
-        using var clear = Command(transaction, "DELETE FROM peer_positions WHERE device_id = $id");
-        using var stamp = Command(transaction, "INSERT OR REPLACE INTO peer_stamps (device_id, basis, stamp) VALUES ($id, $basis, $stamp)");
-        using var insert = Command(transaction, "INSERT INTO peer_positions (device_id, group_key, position) VALUES ($id, $group, $position)");
+        using var id = NativeCommand("SELECT id FROM devices WHERE asset_tag = $tag COLLATE NOCASE", transaction);
+        using var clear = NativeCommand("DELETE FROM peer_positions WHERE device_id = $id", transaction);
+        using var stamp = NativeCommand("INSERT OR REPLACE INTO peer_stamps (device_id, basis, stamp) VALUES ($id, $basis, $stamp)", transaction);
+        using var insert = NativeCommand("INSERT INTO peer_positions (device_id, group_key, position) VALUES ($id, $group, $position)", transaction);
         var tagParameter = id.Parameters.Add("$tag", SqliteType.Text);
         var clearId = clear.Parameters.Add("$id", SqliteType.Integer);
         var (stampId, basis, stampValue) = (stamp.Parameters.Add("$id", SqliteType.Integer), stamp.Parameters.Add("$basis", SqliteType.Text), stamp.Parameters.Add("$stamp", SqliteType.Text));

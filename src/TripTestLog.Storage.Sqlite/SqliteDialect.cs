@@ -13,18 +13,11 @@ internal sealed class SqliteDialect : StoreDialect
 
     public override string P(string name) => "$" + name;
 
-    public override void Set(DbCommand command, string name, object? value)
+    protected override DbParameter Parameter(DbCommand command, string name)
     {
         var parameters = ((SqliteCommand)command).Parameters;
         var key = P(name);
-        if (parameters.Contains(key))
-        {
-            parameters[key].Value = value ?? DBNull.Value;
-        }
-        else
-        {
-            parameters.AddWithValue(key, value ?? DBNull.Value);
-        }
+        return parameters.Contains(key) ? parameters[key] : parameters.Add(new SqliteParameter { ParameterName = key });
     }
 
     public override object Date(DateOnly date) => date.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture);
@@ -37,7 +30,7 @@ internal sealed class SqliteDialect : StoreDialect
 
     public override string RegisterSelect(string alias) => string.Join(", ", DeviceMapping.Columns.Split(", ").Select(c => alias + "." + c));
 
-    public override string RegisterValues => DeviceMapping.Parameters;
+    public override string RegisterValues { get; } = string.Join(", ", DeviceMapping.Parameters.Select(p => "$" + p));
 
     public override string TestTimeColumns(string alias) => "";
 
@@ -49,9 +42,12 @@ internal sealed class SqliteDialect : StoreDialect
 
     public override string TestTimeSets => "";
 
-    public override void SetTestTime(DbCommand command, string name, object text, TestedAt when) => Set(command, name, text);
+    public override object TestTime(DbDataReader reader, int at, int extra) => reader.GetString(at);
 
-    public override void SetValue(DbCommand command, string name, object value) => Set(command, name, value);
+    public override void SetTestTime(DbCommand command, string name, object time) => Set(command, name, time);
+
+    // SQLite keeps a value as given, an empty one (DBNull) included: a column has no type to send it as.
+    public override void SetValue(DbCommand command, string name, object value) => Parameter(command, name).Value = value;
 
     public override object Moment(DateTimeOffset at) => MomentText.Write(at);
 

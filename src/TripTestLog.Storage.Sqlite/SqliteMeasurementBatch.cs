@@ -50,7 +50,7 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
             if (corrects is not null)
             {
                 (_earlier, Refusal) = EarlierFiles.Find(store.EarlierFiles(_transaction, kind), corrects, kind);
-                using var last = store.Command(_transaction, $"SELECT COALESCE(MAX(id), 0) FROM {_table.Table}");
+                using var last = store.NativeCommand($"SELECT COALESCE(MAX(id), 0) FROM {_table.Table}", _transaction);
                 _lastIdBefore = (long)last.ExecuteScalar()!;
             }
 
@@ -64,10 +64,10 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
             if (_earlier is { } earlier)
             {
                 // A row identical to a record of the corrected file takes that record over: it now cites this file and line.
-                _find = store.Command(_transaction, $"SELECT id, source_line FROM {_table.Table} WHERE fingerprint = $fp AND source_file_id = $old");
-                RecordStore.Parameters(_find, "$fp", "$old")[1].Value = earlier.Id;
-                _move = store.Command(_transaction, $"UPDATE {_table.Table} SET source_file_id = $new, source_line = $line WHERE id = $id");
-                RecordStore.Parameters(_move, "$new", "$line", "$id")[0].Value = _sourceId;
+                _find = store.NativeCommand($"SELECT id, source_line FROM {_table.Table} WHERE fingerprint = $fp AND source_file_id = $old", _transaction);
+                Unbound(_find, "$fp", "$old")[1].Value = earlier.Id;
+                _move = store.NativeCommand($"UPDATE {_table.Table} SET source_file_id = $new, source_line = $line WHERE id = $id", _transaction);
+                Unbound(_move, "$new", "$line", "$id")[0].Value = _sourceId;
             }
         }
         catch
@@ -125,14 +125,7 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
         var correction = _earlier is { } corrected ? _store.Correct(_transaction, _table, corrected, _sourceId, _lastIdBefore, _anchors, _deviceIds, _now) : null;
         var added = _added - (correction?.Replaced ?? 0);
         var duplicates = _stored - _added - _unchanged;
-        using var update = _store.Command(_transaction,
-            "UPDATE source_files SET sha256 = $sha, rows_read = $rows, records_added = $a, duplicates = $d WHERE id = $id");
-        update.Parameters.AddWithValue("$sha", sha256);
-        update.Parameters.AddWithValue("$rows", rowsRead);
-        update.Parameters.AddWithValue("$a", _added + _unchanged);
-        update.Parameters.AddWithValue("$d", duplicates);
-        update.Parameters.AddWithValue("$id", _sourceId);
-        update.ExecuteNonQuery();
+        _store.RecordCounts(_transaction, _sourceId, rowsRead, _added + _unchanged, duplicates, sha256);
         _transaction.Commit();
         _done = true;
         return new BatchResult(true, added, duplicates) { Correction = correction };
@@ -187,9 +180,23 @@ internal sealed class SqliteMeasurementBatch : IMeasurementBatch
     {
         var used = _table.Columns.Take(columns).Concat(["source_file_id", "source_line", "fingerprint"]).ToList();
         var names = used.Select((_, c) => "$p" + c).ToList();
-        var command = _store.Command(_transaction,
-            $"INSERT OR IGNORE INTO {_table.Table} ({string.Join(", ", used)}) VALUES ({string.Join(", ", names)})");
-        return new Statement(command, RecordStore.Parameters(command, [.. names]), columns);
+        var command = _store.NativeCommand($"INSERT OR IGNORE INTO {_table.Table} ({string.Join(", ", used)}) VALUES ({string.Join(", ", names)})", _transaction);
+        return new Statement(command, Unbound(command, [.. names]), columns);
+    }
+
+    // Adds the named parameters, empty, and prepares the statement: the rows then only set values by position.
+    private static SqliteParameter[] Unbound(SqliteCommand command, params string[] names)
+    {
+        var parameters = names.Select(n =>
+        {
+            var parameter = command.CreateParameter();
+            parameter.ParameterName = n;
+            parameter.Value = DBNull.Value;
+            command.Parameters.Add(parameter);
+            return parameter;
+        }).ToArray();
+        command.Prepare();
+        return parameters;
     }
 
     // The device dictionary is only read once the batch has begun, so preparing rows on another thread is safe.

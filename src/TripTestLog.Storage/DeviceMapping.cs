@@ -16,9 +16,12 @@ internal static class DeviceMapping
         "site, location, family, curve, rated_current_a, poles, rated_voltage_v, commissioned_on, contact_limit_uohm, make, model, serial, "
         + "settings_json, settings_from, curve_table, reference_ambient_c, ambient_table, criticality";
 
-    public const string Parameters =
-        "$site, $location, $family, $curve, $rated, $poles, $voltage, $commissioned, $limit, $make, $model, $serial, "
-        + "$settings, $from, $table, $refamb, $ambtable, $criticality";
+    /// <summary>The parameter names of <see cref="Columns"/>, in order; a dialect writes their placeholders.</summary>
+    public static readonly string[] Parameters =
+    [
+        "site", "location", "family", "curve", "rated", "poles", "voltage", "commissioned", "limit", "make", "model", "serial",
+        "settings", "from", "table", "refamb", "ambtable", "criticality",
+    ];
 
     public static Device Read(DbDataReader r, int first = 0) => new(
         AssetTag.Of(r.GetString(first)),
@@ -60,30 +63,28 @@ internal static class DeviceMapping
         return entries.ToDictionary(kv => kv.Key, kv => new DeviceHistory(kv.Value), AssetTag.Comparer);
     }
 
-    /// <summary>The values for <see cref="Parameters"/>, in order, with their names.</summary>
-    public static IEnumerable<(string Name, object Value)> Values(Device d)
+    /// <summary>Sets <see cref="Parameters"/> to a device's values; an empty one is sent typed as its column.</summary>
+    public static void Bind(StoreDialect dialect, DbCommand command, Device d)
     {
-        yield return ("$site", d.Site);
-        yield return ("$location", d.Location);
-        yield return ("$family", Codes.Of(d.Family));
-        yield return ("$curve", d.Settings switch { Iec60898Settings s => s.Curve.ToString(), RelaySettings s => CurveCodes.Of(s.Curve), _ => "" });
-        yield return ("$rated", d.RatedCurrent.Value);
-        yield return ("$poles", d.Poles);
-        yield return ("$voltage", d.RatedVoltage.Value);
-        yield return ("$commissioned", Db(d.CommissionedOn?.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture)));
-        yield return ("$limit", d.ContactLimit is { } l ? l.Value : DBNull.Value);
-        yield return ("$make", d.Make);
-        yield return ("$model", d.Model);
-        yield return ("$serial", d.Serial);
-        yield return ("$settings", SettingsCodec.Write(d.Settings));
-        yield return ("$from", Db(d.SettingsFrom?.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture)));
-        yield return ("$table", Db(d.CurveTable));
-        yield return ("$refamb", d.ReferenceAmbient is { } a ? a.Value : DBNull.Value);
-        yield return ("$ambtable", Db(d.AmbientTable));
-        yield return ("$criticality", d.Criticality);
+        dialect.Set(command, "site", d.Site);
+        dialect.Set(command, "location", d.Location);
+        dialect.Set(command, "family", Codes.Of(d.Family));
+        dialect.Set(command, "curve", d.Settings switch { Iec60898Settings s => s.Curve.ToString(), RelaySettings s => CurveCodes.Of(s.Curve), _ => "" });
+        dialect.Set(command, "rated", d.RatedCurrent.Value);
+        dialect.Set(command, "poles", d.Poles);
+        dialect.Set(command, "voltage", d.RatedVoltage.Value);
+        dialect.SetText(command, "commissioned", d.CommissionedOn?.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture));
+        dialect.SetNumber(command, "limit", d.ContactLimit?.Value);
+        dialect.Set(command, "make", d.Make);
+        dialect.Set(command, "model", d.Model);
+        dialect.Set(command, "serial", d.Serial);
+        dialect.Set(command, "settings", SettingsCodec.Write(d.Settings));
+        dialect.SetText(command, "from", d.SettingsFrom?.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture));
+        dialect.SetText(command, "table", d.CurveTable);
+        dialect.SetNumber(command, "refamb", d.ReferenceAmbient?.Value);
+        dialect.SetText(command, "ambtable", d.AmbientTable);
+        dialect.Set(command, "criticality", d.Criticality);
     }
-
-    private static object Db(string? value) => value is null ? DBNull.Value : value;
 
     private static DateOnly? Date(DbDataReader r, int i) =>
         r.IsDBNull(i) ? null : DateOnly.ParseExact(r.GetString(i), "yyyy-MM-dd", CultureInfo.InvariantCulture);

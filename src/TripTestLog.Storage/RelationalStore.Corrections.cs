@@ -29,7 +29,7 @@ public abstract partial class RelationalStore
         foreach (var (oldId, newId) in pairs)
         {
             Correction correction;
-            Domain.Measurements.TestedAt when;
+            object time;
             Dialect.Set(select, "o", oldId);
             Dialect.Set(select, "n", newId);
             using (var reader = select.ExecuteReader())
@@ -39,8 +39,8 @@ public abstract partial class RelationalStore
                 old[MeasurementTable.TestedAtColumn] = Dialect.TestedAtText(reader, MeasurementTable.TestedAtColumn, n);
                 var start = n + extra;
                 var values = Enumerable.Range(start, n).Select(reader.GetValue).ToArray();
-                when = Dialect.TestedAt(reader, start + MeasurementTable.TestedAtColumn, start + n);
                 values[MeasurementTable.TestedAtColumn] = Dialect.TestedAtText(reader, start + MeasurementTable.TestedAtColumn, start + n);
+                time = Dialect.TestTime(reader, start + MeasurementTable.TestedAtColumn, start + n);
                 var at = 2 * (n + extra);
                 correction = new Correction(new MeasurementRow(values, reader.GetString(at), reader.GetInt64(at + 1)), oldId, old, earlier.Id, earlier.Name, columns)
                 {
@@ -52,7 +52,7 @@ public abstract partial class RelationalStore
             // The added copy goes first: the old record takes over its fingerprint, which is unique.
             Dialect.Set(delete, "id", newId);
             delete.ExecuteNonQuery();
-            ApplyCorrection(transaction, table, correction, when, sourceId, now);
+            ApplyCorrection(transaction, table, correction, time, sourceId, now);
         }
 
         return new CorrectionResult(earlier.Name, anchors.Count, pairs.Count, [.. left.Take(100).Select(l => l.Line)], left.Count);
@@ -79,7 +79,7 @@ public abstract partial class RelationalStore
     }
 
     // Gives a corrected record its new values and writes every old value to `audit_changes`.
-    private void ApplyCorrection(DbTransaction transaction, MeasurementTable table, Correction correction, Domain.Measurements.TestedAt when, long sourceId, DateTimeOffset now)
+    private void ApplyCorrection(DbTransaction transaction, MeasurementTable table, Correction correction, object time, long sourceId, DateTimeOffset now)
     {
         var sets = string.Join(", ", table.Columns.Select((c, i) => $"{c} = {Dialect.P("p" + i)}"));
         using var update = Command(
@@ -90,7 +90,7 @@ public abstract partial class RelationalStore
         {
             if (i == MeasurementTable.TestedAtColumn)
             {
-                Dialect.SetTestTime(update, "p" + i, values[i], when);
+                Dialect.SetTestTime(update, "p" + i, time);
             }
             else
             {

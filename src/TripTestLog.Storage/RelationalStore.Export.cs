@@ -7,7 +7,7 @@ public abstract partial class RelationalStore : IRecordExport
 {
     private StoreExport? _export;
 
-    private StoreExport Export => _export ??= new(Dialect.RegisterSelect, Dialect.TestTimeColumns, Dialect.Text, r => Dialect.TestedAt(r, 1));
+    private StoreExport Export => _export ??= new(Dialect);
 
     /// <inheritdoc />
     public IEnumerable<StoredFile> Files()
@@ -26,10 +26,7 @@ public abstract partial class RelationalStore : IRecordExport
         // nothing may write through this store until the enumeration ends (transfer only reads its source).
         using var scope = BeginRead();
         using var select = scope.Query(Export.RecordsSql(file.Kind));
-        var id = select.CreateParameter();
-        id.ParameterName = "@id";
-        id.Value = file.Id;
-        select.Parameters.Add(id);
+        Dialect.Set(select, "id", file.Id);
         using var reader = select.ExecuteReader();
         foreach (var record in Export.Records(reader, file))
         {

@@ -68,7 +68,7 @@ public abstract partial class RelationalStore
         Dialect.Set(update, "rows", rows);
         Dialect.Set(update, "a", added);
         Dialect.Set(update, "d", duplicates);
-        Dialect.Set(update, "sha", sha);
+        Dialect.SetText(update, "sha", sha);
         Dialect.Set(update, "id", sourceId);
         update.ExecuteNonQuery();
     }

@@ -82,7 +82,7 @@ public abstract partial class RelationalStore : ITripSource
     public IReadOnlyDictionary<string, DeviceHistory> Histories(AssetTag? only = null)
     {
         using var select = Command(RevisionsOf(Dialect.AnyOrTag("d.asset_tag")));
-        Dialect.Set(select, "tag", only?.Value);
+        Dialect.SetText(select, "tag", only?.Value);
         using var reader = select.ExecuteReader();
         return DeviceMapping.Histories(reader);
     }

@@ -51,10 +51,7 @@ public abstract partial class RelationalStore
     private void Bind(DbCommand command, Device device, long sourceId, long line)
     {
         Dialect.Set(command, "tag", device.Tag.Value);
-        foreach (var (name, value) in DeviceMapping.Values(device))
-        {
-            Dialect.Set(command, name[1..], value);
-        }
+        DeviceMapping.Bind(Dialect, command, device);
 
         Dialect.Set(command, "source", sourceId);
         Dialect.Set(command, "line", line);

@@ -1,3 +1,4 @@
+using System.Data;
 using System.Data.Common;
 using TripTestLog.Domain.Measurements;
 
@@ -19,11 +20,36 @@ public abstract class StoreDialect
     /// <summary>The placeholder of the parameter <paramref name="name"/> in SQL.</summary>
     public abstract string P(string name);
 
-    /// <summary>Sets the parameter <paramref name="name"/>, adding it on first use; a null is sent as the column's type would be.</summary>
-    public abstract void Set(DbCommand command, string name, object? value);
+    /// <summary>
+    /// Sets the parameter <paramref name="name"/>, adding it on first use, to a value that is never empty: its type
+    /// follows the value's. An empty value has no type to follow, so it goes through <see cref="SetText"/> or
+    /// <see cref="SetNumber"/>, which say the column's type.
+    /// </summary>
+    public void Set(DbCommand command, string name, object value)
+    {
+        if (value is null or DBNull)
+        {
+            throw new ArgumentException($"parameter '{name}' was given no value; an empty value is set through SetText or SetNumber", nameof(value));
+        }
+
+        Parameter(command, name).Value = value;
+    }
+
+    /// <summary>Sets a text parameter that may be empty: an empty one is still sent as text.</summary>
+    public void SetText(DbCommand command, string name, string? value) => Typed(command, name, DbType.String, value);
 
     /// <summary>Sets a number parameter that may be empty: an empty one is still sent as a number.</summary>
-    public virtual void SetNumber(DbCommand command, string name, double? value) => Set(command, name, (object?)value);
+    public void SetNumber(DbCommand command, string name, double? value) => Typed(command, name, DbType.Double, value);
+
+    /// <summary>The parameter <paramref name="name"/> of <paramref name="command"/>, added on first use.</summary>
+    protected abstract DbParameter Parameter(DbCommand command, string name);
+
+    private void Typed(DbCommand command, string name, DbType type, object? value)
+    {
+        var parameter = Parameter(command, name);
+        parameter.DbType = type;
+        parameter.Value = value ?? DBNull.Value;
+    }
 
     /// <summary>A calendar date as the value of its column.</summary>
     public abstract object Date(DateOnly date);
@@ -62,8 +88,11 @@ public abstract class StoreDialect
     /// <summary>The assignments that set the columns <see cref="TestTimeColumns"/> names, after a measurement's own in an UPDATE.</summary>
     public abstract string TestTimeSets { get; }
 
-    /// <summary>Sets a test time: the tested_at parameter <paramref name="name"/> (stored text <paramref name="text"/>) and those of <see cref="TestTimeSets"/>.</summary>
-    public abstract void SetTestTime(DbCommand command, string name, object text, TestedAt when);
+    /// <summary>A row's test time as this database writes it back (<see cref="SetTestTime"/>): read as kept, nothing parsed that need not be.</summary>
+    public abstract object TestTime(DbDataReader reader, int at, int extra);
+
+    /// <summary>Sets a test time read by <see cref="TestTime"/>: the tested_at parameter <paramref name="name"/> and those of <see cref="TestTimeSets"/>.</summary>
+    public abstract void SetTestTime(DbCommand command, string name, object time);
 
     /// <summary>Sets a measurement column's value as its column's type, empty ones included.</summary>
     public abstract void SetValue(DbCommand command, string name, object value);

@@ -12,31 +12,27 @@ using TripTestLog.Domain.Settings;
 namespace TripTestLog.Storage;
 
 /// <summary>
-/// The queries and readers a store's export shares with the other store: one file's records by line, and the trail of
-/// corrections. A store says how it writes a register column list, a test time and a date as text; the rest is common.
+/// The queries and readers of a store's export: one file's records by line, and the trail of corrections, written with
+/// the store's <see cref="StoreDialect"/>.
 /// </summary>
-/// <param name="registerSelect">The register columns of an alias, readable by <see cref="DeviceMapping.Read"/>.</param>
-/// <param name="testTime">What follows a measurement's columns for its test time (empty when tested_at says it all).</param>
-/// <param name="text">A date, timestamp or fingerprint column as text: yyyy-MM-dd, ISO 8601 UTC, lower-case hex.</param>
-/// <param name="testedAt">Reads a measurement row's test time.</param>
-internal sealed class StoreExport(Func<string, string> registerSelect, Func<string, string> testTime, Func<string, string> text, Func<DbDataReader, TestedAt> testedAt)
+internal sealed class StoreExport(StoreDialect dialect)
 {
-    /// <summary>The records of one file, by line (then as stored), with the file's id bound as @id.</summary>
+    /// <summary>The records of one file, by line (then as stored), with the file's id as the parameter "id".</summary>
     public string RecordsSql(RecordKind kind) => kind switch
     {
         RecordKind.DeviceRegister =>
-            $"SELECT d.asset_tag, {registerSelect("r")}, r.source_line FROM device_revisions r JOIN devices d ON d.id = r.device_id "
-            + "WHERE r.source_file_id = @id ORDER BY r.source_line, r.id",
+            $"SELECT d.asset_tag, {dialect.RegisterSelect("r")}, r.source_line FROM device_revisions r JOIN devices d ON d.id = r.device_id "
+            + $"WHERE r.source_file_id = {Id} ORDER BY r.source_line, r.id",
         RecordKind.TripTests or RecordKind.ContactResistance or RecordKind.InsulationResistance => Measurements(MeasurementTable.For(kind)),
-        RecordKind.CurveTable => "SELECT table_name, multiple, min_s, max_s, source_line FROM curve_table_rows WHERE source_file_id = @id ORDER BY source_line, id",
-        RecordKind.AmbientTable => "SELECT table_name, ambient_c, current_factor, source_line FROM ambient_table_rows WHERE source_file_id = @id ORDER BY source_line, id",
-        _ => $"SELECT instrument, kind, serial, {text("calibrated_on")}, {text("calibration_due")}, source_line, {InstrumentAccuracyColumns.List} "
-            + "FROM instruments WHERE source_file_id = @id ORDER BY source_line, id",
+        RecordKind.CurveTable => $"SELECT table_name, multiple, min_s, max_s, source_line FROM curve_table_rows WHERE source_file_id = {Id} ORDER BY source_line, id",
+        RecordKind.AmbientTable => $"SELECT table_name, ambient_c, current_factor, source_line FROM ambient_table_rows WHERE source_file_id = {Id} ORDER BY source_line, id",
+        _ => $"SELECT instrument, kind, serial, {dialect.Text("calibrated_on")}, {dialect.Text("calibration_due")}, source_line, {InstrumentAccuracyColumns.List} "
+            + $"FROM instruments WHERE source_file_id = {Id} ORDER BY source_line, id",
     };
 
     /// <summary>Every correction, oldest first: table, record fingerprint, column, old, new, old and new file hashes, time.</summary>
     public string ChangesSql => string.Join(" UNION ALL ", new[] { "trip_tests", "contact_tests", "insulation_tests" }.Select(table =>
-            $"SELECT a.id, a.table_name, {text("t.fingerprint")}, a.column_name, a.old_value, a.new_value, fo.sha256, fn.sha256, {text("a.changed_at")} "
+            $"SELECT a.id, a.table_name, {dialect.Text("t.fingerprint")}, a.column_name, a.old_value, a.new_value, fo.sha256, fn.sha256, {dialect.Text("a.changed_at")} "
             + $"FROM audit_changes a JOIN {table} t ON a.table_name = '{table}' AND t.id = a.record_id "
             + "JOIN source_files fo ON fo.id = a.old_source_file_id JOIN source_files fn ON fn.id = a.new_source_file_id"))
         + " ORDER BY 1";
@@ -44,7 +40,7 @@ internal sealed class StoreExport(Func<string, string> registerSelect, Func<stri
     /// <summary>Reads the rows of <see cref="RecordsSql"/> as records with their lines; the reader is walked lazily.</summary>
     public IEnumerable<Located<ReadRecord>> Records(DbDataReader r, StoredFile file)
     {
-        var rows = new StoredRows(new Dictionary<long, string> { [file.Id] = file.Name }, testedAt);
+        var rows = new StoredRows(new Dictionary<long, string> { [file.Id] = file.Name }, r => dialect.TestedAt(r, 1));
         while (r.Read())
         {
             yield return file.Kind switch
@@ -91,13 +87,15 @@ internal sealed class StoreExport(Func<string, string> registerSelect, Func<stri
     }
 
     /// <summary>Every committed imported file, oldest first (an import in progress has a placeholder hash and is left out).</summary>
-    public string FilesSql => $"SELECT id, file_name, full_path, sha256, kind, rows_read, {text("imported_at")} FROM source_files WHERE sha256 NOT LIKE 'pending:%' ORDER BY id";
+    public string FilesSql => $"SELECT id, file_name, full_path, sha256, kind, rows_read, {dialect.Text("imported_at")} FROM source_files WHERE sha256 NOT LIKE 'pending:%' ORDER BY id";
+
+    private string Id => dialect.P("id");
 
     private string Measurements(MeasurementTable table)
     {
         var alias = table.Alias;
-        return $"SELECT {table.Selected}{testTime(alias)} FROM {table.Table} {alias} JOIN devices d ON d.id = {alias}.device_id "
-            + $"WHERE {alias}.source_file_id = @id ORDER BY {alias}.source_line, {alias}.id";
+        return $"SELECT {table.Selected}{dialect.TestTimeColumns(alias)} FROM {table.Table} {alias} JOIN devices d ON d.id = {alias}.device_id "
+            + $"WHERE {alias}.source_file_id = {Id} ORDER BY {alias}.source_line, {alias}.id";
     }
 
     private static Located<ReadRecord> Trip(StoredTrip t) => new(new TripRecord(t.Measurement), t.SourceLine);

@@ -7,8 +7,9 @@ using TripTestLog.Domain.Settings;
 namespace TripTestLog.Application.Records;
 
 /// <summary>
-/// One record as a file or a store gives it: a closed set, one type a kind of record, so the import and transfer
-/// ports pass typed records and a switch over them is checked for every kind.
+/// One record as a file or a store gives it: one type a kind of record, so the import and transfer ports pass typed
+/// records. The set is closed (no other assembly can add a kind), but the compiler cannot prove a switch over it
+/// complete: every switch ends in a case that throws, so a kind one of them missed fails loudly.
 /// </summary>
 public abstract record ReadRecord
 {
