@@ -16,7 +16,8 @@ internal static class FleetText
         Wrapped.Write(writer, $"Fleet condition as of {asOf} (policy: {policyFrom})", 0);
         writer.WriteLine();
         // Headers are the grade codes themselves; the site column gives up width to keep the table within 100 columns.
-        var counts = new TextTable(["site", "devices>", .. Grades.Select(g => Head(TextCodes.Grade.Of(g)) + ">"), "overdue>"]);
+        var counts = new TextTable(
+            [TextColumn.Left("site", shortening: Shortening.Front), TextColumn.Right("devices"), .. Grades.Select(g => TextColumn.Right(Head(TextCodes.Grade.Of(g)))), TextColumn.Right("overdue")]);
         foreach (var (site, c) in fleet.Sites)
         {
             counts.Add([site, N(c.Devices), .. c.ByGrade.Select(N), N(c.Overdue)]);
