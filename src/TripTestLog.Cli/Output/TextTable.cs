@@ -3,10 +3,11 @@ namespace TripTestLog.Cli.Output;
 /// <summary>
 /// The one writer of plain text tables: declared columns, two spaces between them, a rule of dashes under the header, no
 /// colour and no box drawing, so a table reads the same in a terminal, a redirected file and a golden test file. Rows
-/// are held and the columns measured from them (<see cref="WriteTo"/>). Cells are measured as they will be shown: a
-/// control character counts as its code.
+/// are held and the columns measured from them (<see cref="WriteTo"/>), or, when every column declares its width,
+/// written as they come (<see cref="StreamTo"/>) so memory stays flat however many there are. Cells are measured as
+/// they will be shown: a control character counts as its code.
 /// </summary>
-internal sealed class TextTable
+internal sealed partial class TextTable
 {
     private const string Gap = "  ";
 
