@@ -15,7 +15,7 @@ internal sealed partial class TextTable
     private const int MinimumElastic = 12;
 
     private readonly TextColumn[] _columns;
-    private readonly List<string[]> _rows = [];
+    private readonly List<(string[] Cells, string? Note)> _rows = [];
 
     /// <summary>A table of <paramref name="columns"/>; at most one of them may shorten its cells.</summary>
     /// <exception cref="ArgumentException">No columns, or more than one with a shortening rule.</exception>
@@ -39,7 +39,11 @@ internal sealed partial class TextTable
 
     /// <summary>Holds a row for <see cref="WriteTo"/>.</summary>
     /// <exception cref="ArgumentException">The row does not have one cell per column.</exception>
-    public void Add(params string[] cells) => _rows.Add(Shown(cells));
+    public void Add(params string[] cells) => _rows.Add((Shown(cells), null));
+
+    /// <summary>Holds a row with a note written beneath it, wrapped within 100 columns and indented to the second column.</summary>
+    /// <exception cref="ArgumentException">The row does not have one cell per column.</exception>
+    public void Add(string[] cells, string note) => _rows.Add((Shown(cells), note));
 
     /// <summary>
     /// Writes the held rows within <paramref name="maxWidth"/> columns (a 100-column terminal unless asked otherwise): when
@@ -47,7 +51,7 @@ internal sealed partial class TextTable
     /// </summary>
     public void WriteTo(TextWriter writer, int maxWidth = Wrapped.Width)
     {
-        var widths = _columns.Select((c, i) => c.Width ?? Math.Max(c.HeaderLines.Max(p => p.Length), _rows.Count == 0 ? 0 : _rows.Max(r => r[i].Length))).ToArray();
+        var widths = _columns.Select((c, i) => c.Width ?? Math.Max(c.HeaderLines.Max(p => p.Length), _rows.Count == 0 ? 0 : _rows.Max(r => r.Cells[i].Length))).ToArray();
         var total = widths.Sum() + Gap.Length * (widths.Length - 1);
         var elastic = Array.FindIndex(_columns, c => c.Shortening != Shortening.None);
         if (total > maxWidth && elastic >= 0)
@@ -57,9 +61,13 @@ internal sealed partial class TextTable
         }
 
         WriteHeader(writer, widths);
-        foreach (var row in _rows)
+        foreach (var (cells, note) in _rows)
         {
-            writer.WriteLine(Line(row, widths));
+            writer.WriteLine(Line(cells, widths));
+            if (note is not null)
+            {
+                Wrapped.Write(writer, note, widths[0] + Gap.Length);
+            }
         }
     }
 
