@@ -31,7 +31,7 @@ public sealed class DevicePageTests
         new(new InsulationMeasurement(Charts.C16.Latest.Tag, TestedAt.At(new DateTime(2026, 3, 1, 11, 0, 0)), TestStage.AsFound, path, Volts.Of(500),
             new InsulationReading(MegaOhms.Of(megaOhms), false), celsius is { } c ? Celsius.Of(c) : null, Seconds.Of(60)) { Instrument = "" }, "insulation.csv", 2);
 
-    private static string Page(FindingPolicy policy)
+    internal static string Page(FindingPolicy policy)
     {
         var trip = Charts.Trip(40.9, 22.5, year: 2026);
         var records = new DeviceRecords(Charts.C16, [trip.Trip])

@@ -27,11 +27,10 @@ public sealed class FleetPageTests
             Limit = new Reading(limit, ReadingUnit.MicroOhms),
         };
 
-    [Fact]
-    public void TheFleetPage_ListsWorstFirst_MarksTheOverdue_AndCarriesTheCautionAndTheRule()
+    // A repair (a pole over its limit) comes before a watch (an overdue device with a finding to look into); a sound
+    // device has nothing to act on. The order rests on the grades' order in docs/findings.md (lab policy, no source).
+    internal static string Page()
     {
-        // A repair (a pole over its limit) comes before a watch (an overdue device with a finding to look into); a sound
-        // device has nothing to act on. The order rests on the grades' order in docs/findings.md (lab policy, no source).
         var fleet = new FleetReport(30);
         fleet.Add(Report("A-SOUND", ConditionGrade.Sound, new DateOnly(2028, 3, 1)));
         fleet.Add(Report("C-WATCH", ConditionGrade.Watch, new DateOnly(2026, 9, 1),
@@ -39,8 +38,13 @@ public sealed class FleetPageTests
             Open("C-WATCH", FindingKind.TestOverdue, Severity.Plan, 91, 0) with { Value = new Reading(91, ReadingUnit.Days), Limit = new Reading(0, ReadingUnit.Days) }));
         fleet.Add(Report("B-REPAIR", ConditionGrade.Repair, new DateOnly(2025, 6, 1), Open("B-REPAIR", FindingKind.ContactOverLimit, Severity.Act, 7200, 6750)));
         var context = new ReportContext("lab.db", "test", AsOf, DateTimeOffset.UnixEpoch, FindingPolicy.Default, "test policy", InstrumentRegister.Empty);
+        return FleetPage.Write(fleet, context, tag => tag + ".html", "");
+    }
 
-        var page = FleetPage.Write(fleet, context, tag => tag + ".html", "");
+    [Fact]
+    public void TheFleetPage_ListsWorstFirst_MarksTheOverdue_AndCarriesTheCautionAndTheRule()
+    {
+        var page = Page();
 
         var act = page[page.IndexOf("<h2>Act first</h2>", StringComparison.Ordinal)..page.IndexOf("<h2>Devices by site", StringComparison.Ordinal)];
         var repair = act.IndexOf("B-REPAIR", StringComparison.Ordinal);

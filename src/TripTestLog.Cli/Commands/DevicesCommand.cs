@@ -62,7 +62,9 @@ internal static class DevicesCommand
         {
             cli.Out.WriteLine();
             cli.Out.WriteLine($"{group.Key} ({group.Count()} device{(group.Count() == 1 ? "" : "s")})");
-            var table = new TextTable("Asset", "Family", "In>", "Poles>", "Settings") { Elastic = 4 };
+            var table = new TextTable(
+                TextColumn.Left("Asset"), TextColumn.Left("Family"), TextColumn.Right("In"), TextColumn.Right("Poles"),
+                TextColumn.Left("Settings", shortening: Shortening.End));
             foreach (var (d, _) in group)
             {
                 table.Add(d.Tag.Value, FamilyCodes.Of(d.Family), d.RatedCurrent.ToString(), d.Poles.ToString(CultureInfo.InvariantCulture), d.Settings.Summary);

@@ -34,7 +34,9 @@ internal static class InstrumentsCommand
 
             using var store = Stores.Open(cli, file, StorePurpose.Read);
             var register = store.Instruments();
-            var table = new TextTable("Instrument", "Kind", "Serial", "Calibrated", "Due", "State") { Elastic = 5 };
+            var table = new TextTable(
+                TextColumn.Left("Instrument"), TextColumn.Left("Kind"), TextColumn.Left("Serial"), TextColumn.Left("Calibrated"), TextColumn.Left("Due"),
+                TextColumn.Left("State", shortening: Shortening.End));
             var lapsed = 0;
             foreach (var name in register.Instruments)
             {

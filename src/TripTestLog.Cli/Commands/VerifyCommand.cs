@@ -48,7 +48,7 @@ internal static class VerifyCommand
     {
         using var store = Stores.Open(cli, db, StorePurpose.Read);
         var report = store.Verify();
-        var table = new TextTable("File", "Records>", "State");
+        var table = new TextTable(TextColumn.Left("File", shortening: Shortening.Front), TextColumn.Right("Records"), TextColumn.Left("State"));
         foreach (var f in report.Files)
         {
             table.Add(f.Path, f.Records.ToString(), f.State switch

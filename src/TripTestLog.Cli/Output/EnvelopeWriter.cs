@@ -25,7 +25,10 @@ internal static class EnvelopeWriter
         Wrapped.Write(writer, title, 0, 2);
         writer.WriteLine($"Band for a test {conditions}.");
         writer.WriteLine();
-        var table = new TextTable($"x {envelope.ReferenceName}>", "Current>", "Min>", "Max>", "Typical min>", "Typical max>", "Min from", "Max from", "Point");
+        var table = new TextTable(
+            TextColumn.Right($"x {envelope.ReferenceName}", shortening: Shortening.Front), TextColumn.Right("Current"), TextColumn.Right("Min"),
+            TextColumn.Right("Max"), TextColumn.Right("Typical min"), TextColumn.Right("Typical max"), TextColumn.Left("Min from"),
+            TextColumn.Left("Max from"), TextColumn.Left("Point"));
         foreach (var m in Multiples(envelope))
         {
             var band = BandAt(envelope, m, conditions);

@@ -20,7 +20,9 @@ internal static class FleetModelsOutput
             + $"and how many had one outside its band, with a 95 % Wilson score interval (Wilson 1927); contact rise is the mean of each device's "
             + $"poles at 20 °C, first to latest as-found test. No figure for fewer than {models.MinimumDevices} devices.", 0);
         writer.WriteLine();
-        var table = new TextTable("group", "devices>", "tested>", "failed>", "failure rate (95 %)>", "rise µΩ/y>", "of>");
+        var table = new TextTable(
+            TextColumn.Left("group", shortening: Shortening.Front), TextColumn.Right("devices"), TextColumn.Right("tested"), TextColumn.Right("failed"),
+            TextColumn.Right("failure rate (95 %)"), TextColumn.Right("rise µΩ/y"), TextColumn.Right("of"));
         foreach (var (grouping, group, c) in Rows(models))
         {
             table.Add(grouping == "age-band" ? "age " + group : group, N(c.Devices), N(c.Tested), N(c.Failed),

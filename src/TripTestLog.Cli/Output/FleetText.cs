@@ -16,7 +16,8 @@ internal static class FleetText
         Wrapped.Write(writer, $"Fleet condition as of {asOf} (policy: {policyFrom})", 0);
         writer.WriteLine();
         // Headers are the grade codes themselves; the site column gives up width to keep the table within 100 columns.
-        var counts = new TextTable(["site", "devices>", .. Grades.Select(g => Head(TextCodes.Grade.Of(g)) + ">"), "overdue>"]);
+        var counts = new TextTable(
+            [TextColumn.Left("site", shortening: Shortening.Front), TextColumn.Right("devices"), .. Grades.Select(g => TextColumn.Right(Head(TextCodes.Grade.Of(g)))), TextColumn.Right("overdue")]);
         foreach (var (site, c) in fleet.Sites)
         {
             counts.Add([site, N(c.Devices), .. c.ByGrade.Select(N), N(c.Overdue)]);
@@ -42,17 +43,15 @@ internal static class FleetText
                 + "then furthest past its limit (as a fraction of the limit); then the soonest date, a forecast or the due date. "
                 + "Devices with one cause share a line.", 0);
             writer.WriteLine();
-            var rank = Math.Max(1, N(lines.Count).Length);
-            var tag = Math.Max(5, lines.Max(l => l.Devices[0].Device.Tag.Value.Length));
-            var grade = Math.Max(5, lines.Max(l => TextCodes.Grade.Of(l.Devices[0].Grade).Length));
-            writer.WriteLine($"{"#".PadLeft(rank)}  {"asset".PadRight(tag)}  {"grade".PadRight(grade)}  due");
-            writer.WriteLine($"{new string('-', rank)}  {new string('-', tag)}  {new string('-', grade)}  {new string('-', 20)}");
+            // Nothing shortens here: a tag is shown whole, and the due column is as wide as "yyyy-MM-dd (overdue)".
+            var priority = new TextTable(TextColumn.Right("#"), TextColumn.Left("asset"), TextColumn.Left("grade"), TextColumn.Left("due", 20));
             foreach (var (line, i) in lines.Select((l, i) => (l, i + 1)))
             {
                 var first = line.Devices[0];
-                writer.WriteLine($"{N(i).PadLeft(rank)}  {first.Device.Tag.Value.PadRight(tag)}  {TextCodes.Grade.Of(first.Grade).PadRight(grade)}  {Due(first)}");
-                Wrapped.Write(writer, Why(line), rank + 2);
+                priority.Add([N(i), first.Device.Tag.Value, TextCodes.Grade.Of(first.Grade), Due(first)], Why(line));
             }
+
+            priority.WriteTo(writer);
         }
 
         if (models is not null)

@@ -17,16 +17,17 @@ internal static class ImportReport
         // Columns that are zero for every file are left out, so the table stays narrow; the sentence below names them all.
         var counts = new (string Header, Func<ImportOutcome, long> Count, bool Always)[]
         {
-            ("Rows>", o => o.RowsRead, true),
-            ("Added>", o => o.Added, true),
-            ("Updated>", o => o.Updated, false),
-            ("Unchanged>", o => o.Unchanged, false),
-            ("Duplicates>", o => o.Duplicates, true),
-            ("Replaced>", o => o.Replaced, false),
-            ("Not tested>", o => o.NotTested, false),
-            ("Refused>", o => o.RefusedRows, true),
+            ("Rows", o => o.RowsRead, true),
+            ("Added", o => o.Added, true),
+            ("Updated", o => o.Updated, false),
+            ("Unchanged", o => o.Unchanged, false),
+            ("Duplicates", o => o.Duplicates, true),
+            ("Replaced", o => o.Replaced, false),
+            ("Not tested", o => o.NotTested, false),
+            ("Refused", o => o.RefusedRows, true),
         }.Where(c => c.Always || outcomes.Any(o => c.Count(o) != 0)).ToList();
-        var table = new TextTable(["File", "Kind", "Result", .. counts.Select(c => c.Header)]);
+        var table = new TextTable(
+            [TextColumn.Left("File", shortening: Shortening.Front), TextColumn.Left("Kind"), TextColumn.Left("Result"), .. counts.Select(c => TextColumn.Right(c.Header))]);
         foreach (var o in outcomes)
         {
             table.Add([

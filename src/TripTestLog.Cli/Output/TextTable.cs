@@ -1,97 +1,101 @@
-using System.Text;
-
 namespace TripTestLog.Cli.Output;
 
 /// <summary>
-/// A plain text table with aligned columns, no colour and no box drawing, so it reads the same in a terminal, a
-/// redirected file and a golden test file.
+/// The one writer of plain text tables: declared columns, two spaces between them, a rule of dashes under the header, no
+/// colour and no box drawing, so a table reads the same in a terminal, a redirected file and a golden test file. Rows
+/// are held and the columns measured from them (<see cref="WriteTo"/>), or, when every column declares its width,
+/// written as they come (<see cref="StreamTo"/>) so memory stays flat however many there are. Cells are measured as
+/// they will be shown: a control character counts as its code.
 /// </summary>
-internal sealed class TextTable
+internal sealed partial class TextTable
 {
-    private readonly string[] _headers;
-    private readonly bool[] _rightAligned;
-    private readonly List<string[]> _rows = [];
+    private const string Gap = "  ";
 
-    /// <summary>
-    /// Columns whose header ends with '>' are right-aligned (the marker is not printed). A header may hold a line break:
-    /// it is then printed over two lines, so a long word does not widen its column of short numbers.
-    /// </summary>
-    public TextTable(params string[] headers)
+    // An elastic column never gives up so much width that its header or a useful part of a name no longer fits.
+    private const int MinimumElastic = 12;
+
+    private readonly TextColumn[] _columns;
+    private readonly List<(string[] Cells, string? Note)> _rows = [];
+
+    /// <summary>A table of <paramref name="columns"/>; at most one of them may shorten its cells.</summary>
+    /// <exception cref="ArgumentException">No columns, or more than one with a shortening rule.</exception>
+    public TextTable(params TextColumn[] columns)
     {
-        _rightAligned = headers.Select(h => h.EndsWith('>')).ToArray();
-        _headers = headers.Select(h => h.TrimEnd('>')).ToArray();
+        ArgumentNullException.ThrowIfNull(columns);
+        if (columns.Length == 0)
+        {
+            throw new ArgumentException("a table needs at least one column", nameof(columns));
+        }
+
+        if (columns.Count(c => c.Shortening != Shortening.None) > 1)
+        {
+            throw new ArgumentException("at most one column of a table may shorten its cells", nameof(columns));
+        }
+
+        _columns = columns;
     }
 
     public int RowCount => _rows.Count;
 
-    public void Add(params string[] cells)
-    {
-        if (cells.Length != _headers.Length)
-        {
-            throw new ArgumentException($"a row needs {_headers.Length} cells; got {cells.Length}", nameof(cells));
-        }
+    /// <summary>Holds a row for <see cref="WriteTo"/>.</summary>
+    /// <exception cref="ArgumentException">The row does not have one cell per column.</exception>
+    public void Add(params string[] cells) => _rows.Add((Shown(cells), null));
 
-        // Measured as it will be shown, so a value's control characters cannot push the table past its width.
-        _rows.Add([.. cells.Select(Visible.Text)]);
-    }
+    /// <summary>Holds a row with a note written beneath it, wrapped within 100 columns and indented to the second column.</summary>
+    /// <exception cref="ArgumentException">The row does not have one cell per column.</exception>
+    public void Add(string[] cells, string note) => _rows.Add((Shown(cells), note));
 
     /// <summary>
-    /// The column that gives up width when the table is too wide: the first (a file name, shortened from the front so the
-    /// end of a path, the part that tells files apart, stays) unless set; any other is shortened at its end.
-    /// </summary>
-    public int Elastic { get; init; }
-
-    /// <summary>
-    /// Writes the table within <paramref name="maxWidth"/> columns (a 100-column terminal unless asked otherwise): when it
-    /// is wider, the <see cref="Elastic"/> column gives up the difference, its long cells shortened with '…'.
+    /// Writes the held rows within <paramref name="maxWidth"/> columns (a 100-column terminal unless asked otherwise): when
+    /// the table is wider, the column with a shortening rule gives up the difference and its long cells are cut.
     /// </summary>
     public void WriteTo(TextWriter writer, int maxWidth = Wrapped.Width)
     {
-        var heads = _headers.Select(h => h.Split('\n')).ToArray();
-        var widths = heads.Select((h, i) => Math.Max(h.Max(p => p.Length), _rows.Count == 0 ? 0 : _rows.Max(r => r[i].Length))).ToArray();
-        var total = widths.Sum() + 2 * (widths.Length - 1);
-        var e = Elastic;
-        if (total > maxWidth)
+        var widths = _columns.Select((c, i) => c.Width ?? Math.Max(c.HeaderLines.Max(p => p.Length), _rows.Count == 0 ? 0 : _rows.Max(r => r.Cells[i].Length))).ToArray();
+        var total = widths.Sum() + Gap.Length * (widths.Length - 1);
+        var elastic = Array.FindIndex(_columns, c => c.Shortening != Shortening.None);
+        if (total > maxWidth && elastic >= 0)
         {
-            widths[e] = Math.Max(Math.Max(heads[e].Max(p => p.Length), 12), widths[e] - (total - maxWidth));
+            var head = _columns[elastic].HeaderLines.Max(p => p.Length);
+            widths[elastic] = Math.Max(Math.Max(head, MinimumElastic), widths[elastic] - (total - maxWidth));
         }
 
+        WriteHeader(writer, widths);
+        foreach (var (cells, note) in _rows)
+        {
+            writer.WriteLine(Line(cells, widths));
+            if (note is not null)
+            {
+                Wrapped.Write(writer, note, widths[0] + Gap.Length);
+            }
+        }
+    }
+
+    private string[] Shown(string[] cells)
+    {
+        ArgumentNullException.ThrowIfNull(cells);
+        if (cells.Length != _columns.Length)
+        {
+            throw new ArgumentException($"a row needs {_columns.Length} cells; got {cells.Length}", nameof(cells));
+        }
+
+        // Measured as it will be shown, so a value's control characters cannot push the table past its width.
+        return [.. cells.Select(Visible.Text)];
+    }
+
+    private void WriteHeader(TextWriter writer, int[] widths)
+    {
+        var heads = _columns.Select(c => c.HeaderLines).ToArray();
         var lines = heads.Max(h => h.Length);
         for (var l = 0; l < lines; l++)
         {
-            // A header of fewer lines sits on the last of them.
-            writer.WriteLine(Line([.. heads.Select(h => l - (lines - h.Length) is var k && k >= 0 ? h[k] : "")], widths));
+            // A header of fewer lines sits on the last of them; a header is never cut.
+            var cells = heads.Select((h, i) => _columns[i].Pad(l - (lines - h.Length) is var k && k >= 0 ? h[k] : "", widths[i]));
+            writer.WriteLine(string.Join(Gap, cells).TrimEnd());
         }
 
-        writer.WriteLine(string.Join("  ", widths.Select(w => new string('-', w))));
-        foreach (var row in _rows)
-        {
-            if (row[e].Length > widths[e])
-            {
-                var cells = (string[])row.Clone();
-                cells[e] = e == 0 ? "…" + row[e][^(widths[e] - 1)..] : row[e][..(widths[e] - 1)] + "…";
-                writer.WriteLine(Line(cells, widths));
-            }
-            else
-            {
-                writer.WriteLine(Line(row, widths));
-            }
-        }
+        writer.WriteLine(string.Join(Gap, widths.Select(w => new string('-', w))));
     }
 
-    private string Line(string[] cells, int[] widths)
-    {
-        var sb = new StringBuilder();
-        for (var i = 0; i < cells.Length; i++)
-        {
-            if (i > 0)
-            {
-                sb.Append("  ");
-            }
-
-            sb.Append(_rightAligned[i] ? cells[i].PadLeft(widths[i]) : cells[i].PadRight(widths[i]));
-        }
-
-        return sb.ToString().TrimEnd();
-    }
+    private string Line(string[] cells, int[] widths) => string.Join(Gap, cells.Select((cell, i) => _columns[i].Fit(cell, widths[i]))).TrimEnd();
 }

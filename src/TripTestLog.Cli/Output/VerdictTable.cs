@@ -13,43 +13,36 @@ namespace TripTestLog.Cli.Output;
 internal sealed class VerdictTable(TextWriter writer, bool wide = false) : IVerdictWriter
 {
     // Fixed widths, so each row is written as it is judged; a longer cell pushes its row out rather than holding the table.
-    private static readonly (string Header, int Width, bool Right)[] WideColumns =
+    private static readonly TextColumn[] WideColumns =
     [
-        ("Asset", 12, false), ("Tested", 19, false), ("Stage", 8, false), ("Pole", 4, false), ("Start", 5, false), ("Current", 9, true),
-        ("Multiple", 9, true), ("Result", 17, false), ("Band min", 8, true), ("Band max", 8, true), ("Verdict", 14, false), ("Basis", 9, false),
+        TextColumn.Left("Asset", 12), TextColumn.Left("Tested", 19), TextColumn.Left("Stage", 8), TextColumn.Left("Pole", 4),
+        TextColumn.Left("Start", 5), TextColumn.Right("Current", 9), TextColumn.Right("Multiple", 9), TextColumn.Left("Result", 17),
+        TextColumn.Right("Band min", 8), TextColumn.Right("Band max", 8), TextColumn.Left("Verdict", 14), TextColumn.Left("Basis", 9),
     ];
 
     // 11 + 16 + 4 + 5 + 8 + 15 + 13 + 14 and seven gaps of two: 100 columns. The current is in --wide, --csv and --json;
     // the multiple beside the band is what the band is judged on.
-    private static readonly (string Header, int Width, bool Right)[] NarrowColumns =
+    private static readonly TextColumn[] NarrowColumns =
     [
-        ("Asset", AssetWidth, false), ("Tested", 16, false), ("Pole", 4, false), ("Start", 5, false), ("Multiple", 8, true), ("Result", 15, false),
-        ("Band", 13, false), ("Verdict", 14, false),
+        TextColumn.Left("Asset", AssetWidth, Shortening.Middle), TextColumn.Left("Tested", 16), TextColumn.Left("Pole", 4),
+        TextColumn.Left("Start", 5), TextColumn.Right("Multiple", 8), TextColumn.Left("Result", 15), TextColumn.Left("Band", 13),
+        TextColumn.Left("Verdict", 14),
     ];
 
     private const int AssetWidth = 11;
 
-    private (string Header, int Width, bool Right)[] Columns => wide ? WideColumns : NarrowColumns;
-
+    private readonly TextTable.RowStream _table = new TextTable(wide ? WideColumns : NarrowColumns).StreamTo(writer);
     private readonly VerdictCounts _counts = new();
     private readonly List<JudgedTrip> _attention = [];
-    private bool _started;
 
     public void Add(JudgedTrip r)
     {
-        if (!_started)
-        {
-            Row(Columns.Select(c => c.Header).ToArray());
-            writer.WriteLine(string.Join("  ", Columns.Select(c => new string('-', c.Width))));
-            _started = true;
-        }
-
         var m = r.Trip.Measurement;
         var a = r.Assessment;
         if (!wide)
         {
-            Row(
-                Shortened(m.Tag.Value, AssetWidth),
+            _table.Add(
+                m.Tag.Value,
                 m.TestedAt.Local.ToString(m.TestedAt.HasTime ? "yyyy-MM-dd HH:mm" : "yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture),
                 m.Pole.Code,
                 Format.Start(m.Start),
@@ -60,19 +53,19 @@ internal sealed class VerdictTable(TextWriter writer, bool wide = false) : IVerd
         }
         else
         {
-            Row(
-            m.Tag.Value,
-            m.TestedAt.ToString(),
-            Format.Stage(m.Stage),
-            m.Pole.Code,
-            Format.Start(m.Start),
-            m.Current.ToString(),
-            Format.Multiple(r),
-            Format.Outcome(m.Outcome),
-            a.Band.HasRequirement ? Format.Minimum(a.Band.Minimum) : "-",
-            a.Band.HasRequirement ? Format.Maximum(a.Band.Maximum) : "-",
-            Format.Verdict(a.Verdict),
-            Format.Basis(a.Basis));
+            _table.Add(
+                m.Tag.Value,
+                m.TestedAt.ToString(),
+                Format.Stage(m.Stage),
+                m.Pole.Code,
+                Format.Start(m.Start),
+                m.Current.ToString(),
+                Format.Multiple(r),
+                Format.Outcome(m.Outcome),
+                a.Band.HasRequirement ? Format.Minimum(a.Band.Minimum) : "-",
+                a.Band.HasRequirement ? Format.Maximum(a.Band.Maximum) : "-",
+                Format.Verdict(a.Verdict),
+                Format.Basis(a.Basis));
         }
 
         _counts.Add(r);
@@ -98,27 +91,10 @@ internal sealed class VerdictTable(TextWriter writer, bool wide = false) : IVerd
     }
 
     /// <summary>
-    /// <paramref name="text"/> within <paramref name="width"/> characters: a longer one keeps its first three and its last
-    /// characters (where tags tell devices apart) around a '…'.
+    /// <paramref name="text"/> within <paramref name="width"/> characters as the Asset column shows it: a longer one keeps
+    /// its first three and its last characters (where tags tell devices apart) around a '…'.
     /// </summary>
-    public static string Shortened(string text, int width) =>
-        text.Length <= width ? text : text[..3] + "…" + text[^(width - 4)..];
-
-    private void Row(params string[] cells)
-    {
-        var sb = new System.Text.StringBuilder();
-        for (var i = 0; i < cells.Length; i++)
-        {
-            if (i > 0)
-            {
-                sb.Append("  ");
-            }
-
-            sb.Append(Columns[i].Right ? cells[i].PadLeft(Columns[i].Width) : cells[i].PadRight(Columns[i].Width));
-        }
-
-        writer.WriteLine(sb.ToString().TrimEnd());
-    }
+    public static string Shortened(string text, int width) => TextColumn.Cut(text, width, Shortening.Middle);
 
     private void WriteInstrumentFindings(TextWriter writer, IEnumerable<JudgedTrip> results)
     {
