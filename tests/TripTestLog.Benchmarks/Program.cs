@@ -421,7 +421,13 @@ internal static class Program
         }
 
         var seconds = clock.Elapsed.TotalSeconds;
-        Console.WriteLine(JsonSerializer.Serialize(new StepResult(seconds, rows, Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0)));
+        Console.WriteLine(JsonSerializer.Serialize(new StepResult(seconds, rows, Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0)
+        {
+            AllocatedMb = GC.GetTotalAllocatedBytes() / 1048576.0,
+            GcPauseSeconds = GC.GetTotalPauseDuration().TotalSeconds,
+            Gen0Collections = GC.CollectionCount(0),
+            Gen2Collections = GC.CollectionCount(2),
+        }));
         return 0;
     }
 
@@ -462,7 +468,17 @@ internal static class Program
         return rows;
     }
 
-    private sealed record StepResult(double Seconds, long Rows, double PeakMb);
+    // What a step allocated and how long the collector paused it: where a step's time goes when it is not in its own code.
+    private sealed record StepResult(double Seconds, long Rows, double PeakMb)
+    {
+        public double AllocatedMb { get; init; }
+
+        public double GcPauseSeconds { get; init; }
+
+        public int Gen0Collections { get; init; }
+
+        public int Gen2Collections { get; init; }
+    }
 
     private sealed record Options(IReadOnlyList<long> Rows, int Devices, int Files, string Work, string? Step, int Pairs = 0, string? Server = null)
     {
