@@ -1,3 +1,4 @@
+using System.Collections.Concurrent;
 using System.Globalization;
 using TripTestLog.Domain.Quantities;
 using TripTestLog.Domain.Settings;
@@ -16,11 +17,17 @@ public sealed class PointWindowEnvelope : ITripEnvelope
     private readonly ITripEnvelope _inner;
     private readonly AmbientShift _ambient;
 
+    // A band is read several times for each test judged (at its current and either side of it), a million times in a
+    // large check: the ambient's note and each requirement it extends are written once per envelope, not per reading.
+    private readonly string _ambientNote;
+    private readonly ConcurrentDictionary<string, string> _movedRequirements = new(StringComparer.Ordinal);
+
     private PointWindowEnvelope(ITripEnvelope inner, double window, AmbientShift ambient)
     {
         _inner = inner;
         Window = Guard.InRange(window, 0, 0.1, nameof(window), "(fraction)");
         _ambient = ambient;
+        _ambientNote = ambient.IsNone ? "" : $", moved for the ambient ({ambient.Words})";
     }
 
     /// <summary>The relative test-current tolerance within which a test is a test of a point.</summary>
@@ -70,10 +77,15 @@ public sealed class PointWindowEnvelope : ITripEnvelope
     {
         var band = _inner.At(current);
         var m = (current / Reference).Value;
-        var minimums = band.Minimums.Select(e => Moved(e, m, minimum: true)).Where(e => e is not null).Select(e => e!.Value).ToList();
-        var maximums = band.Maximums.Select(e => Moved(e, m, minimum: false)).Where(e => e is not null).Select(e => e!.Value).ToList();
-        foreach (var p in Points.Where(p => p.Within(m, Window)))
+        var minimums = Moved(band.Minimums, m, minimum: true);
+        var maximums = Moved(band.Maximums, m, minimum: false);
+        foreach (var p in Points)
         {
+            if (!p.Within(m, Window))
+            {
+                continue;
+            }
+
             var u = p.HighestUltimate;
             var mp = p.Multiple.Value;
             if (p.MustTripWithin is { } t && m < mp && OffsetBound.Stretch(m * Lo(p), mp, u) is var s && !double.IsInfinity(s))
@@ -97,37 +109,66 @@ public sealed class PointWindowEnvelope : ITripEnvelope
 
     private double Hi(NormativePoint p) => p.HighestUltimate is null ? 1.0 : _ambient.Upper;
 
+    // The edges with the ambient's moves, room left for the points' own (at most one of each kind a point).
+    private List<BandEdge> Moved(IReadOnlyList<BandEdge> edges, double m, bool minimum)
+    {
+        var moved = new List<BandEdge>(edges.Count + 2);
+        foreach (var e in edges)
+        {
+            if (Moved(e, m, minimum) is { } kept)
+            {
+                moved.Add(kept);
+            }
+        }
+
+        return moved;
+    }
+
     // A point's own edge carried here keeps its limit unless the ambient moves the current it acts at past the point.
     private BandEdge? Moved(BandEdge e, double m, bool minimum)
     {
         if (_ambient.IsNone || e.Strength != EdgeStrength.Guaranteed || e.PointLabel is not { } label
-            || Points.FirstOrDefault(p => p.Label == label) is not { HighestUltimate: { } u } p || e.Limit is not { } limit)
+            || Labelled(label) is not { HighestUltimate: { } u } p || e.Limit is not { } limit)
         {
             return e;
         }
 
         var mp = p.Multiple.Value;
-        var note = $", moved for the ambient ({_ambient.Words})";
         if (e.Source == EdgeSource.Derived)
         {
             var hi = m * _ambient.Upper;
             var floor = hi < mp ? limit.Value / (_ambient.Upper * _ambient.Upper) : (p.MustHoldFor?.Value ?? 0) * OffsetBound.Shrink(hi, mp, u);
-            return floor > 0 ? e with { Limit = Seconds.Of(floor), Requirement = e.Requirement + note } : null;
+            return floor > 0 ? e with { Limit = Seconds.Of(floor), Requirement = MovedRequirement(e.Requirement) } : null;
         }
 
         if (minimum && p.MustHoldFor is { } h)
         {
             var k = OffsetBound.Shrink(m * _ambient.Upper, mp, u);
-            return k > 0 ? e with { Limit = Seconds.Of(Math.Min(limit.Value, h.Value * k)), Requirement = k < 1 ? e.Requirement + note : e.Requirement } : null;
+            return k > 0 ? e with { Limit = Seconds.Of(Math.Min(limit.Value, h.Value * k)), Requirement = k < 1 ? MovedRequirement(e.Requirement) : e.Requirement } : null;
         }
 
         if (!minimum && p.MustTripWithin is { } t)
         {
             var s = OffsetBound.Stretch(m * _ambient.Lower, mp, u);
-            return double.IsInfinity(s) ? null : e with { Limit = Seconds.Of(Math.Max(limit.Value, t.Value * s)), Requirement = s > 1 ? e.Requirement + note : e.Requirement };
+            return double.IsInfinity(s) ? null : e with { Limit = Seconds.Of(Math.Max(limit.Value, t.Value * s)), Requirement = s > 1 ? MovedRequirement(e.Requirement) : e.Requirement };
         }
 
         return e;
+    }
+
+    private string MovedRequirement(string requirement) => _movedRequirements.GetOrAdd(requirement, static (r, note) => r + note, _ambientNote);
+
+    private NormativePoint? Labelled(string label)
+    {
+        foreach (var p in Points)
+        {
+            if (p.Label == label)
+            {
+                return p;
+            }
+        }
+
+        return null;
     }
 
     private string Offset(NormativePoint p, double m, double factor)
