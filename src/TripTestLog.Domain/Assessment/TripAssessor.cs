@@ -29,6 +29,9 @@ public sealed partial class TripAssessor(IReadOnlyDictionary<string, CurveTable>
 
     private readonly Dictionary<(Device, DeviceSettings, double, AmbientShift), ITripEnvelope> _envelopes = [];
 
+    // The family's envelope does not depend on the ambient's shift, which differs from test to test: built once a setting.
+    private readonly Dictionary<(Device, DeviceSettings, double), ITripEnvelope> _families = [];
+
     /// <summary>The result of judging one test: the envelope used and the assessment.</summary>
     /// <param name="Device">The register entry in force on the test date.</param>
     /// <param name="Envelope">The envelope the test was judged against.</param>
@@ -119,7 +122,13 @@ public sealed partial class TripAssessor(IReadOnlyDictionary<string, CurveTable>
     {
         if (!_envelopes.TryGetValue((device, settings, factor, shift), out var envelope))
         {
-            envelope = PointWindowEnvelope.Of(EnvelopeFactory.For(device, settings, factor, curveTables), pointWindow, shift);
+            if (!_families.TryGetValue((device, settings, factor), out var family))
+            {
+                family = EnvelopeFactory.For(device, settings, factor, curveTables);
+                _families[(device, settings, factor)] = family;
+            }
+
+            envelope = PointWindowEnvelope.Of(family, pointWindow, shift);
             _envelopes[(device, settings, factor, shift)] = envelope;
         }
 

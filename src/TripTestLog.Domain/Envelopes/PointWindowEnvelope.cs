@@ -20,7 +20,7 @@ public sealed class PointWindowEnvelope : ITripEnvelope
     // A band is read several times for each test judged (at its current and either side of it), a million times in a
     // large check: the ambient's note and each requirement it extends are written once per envelope, not per reading.
     private readonly string _ambientNote;
-    private readonly ConcurrentDictionary<string, string> _movedRequirements = new(StringComparer.Ordinal);
+    private ConcurrentDictionary<string, string>? _movedRequirements;
 
     private PointWindowEnvelope(ITripEnvelope inner, double window, AmbientShift ambient)
     {
@@ -156,7 +156,7 @@ public sealed class PointWindowEnvelope : ITripEnvelope
         return e;
     }
 
-    private string MovedRequirement(string requirement) => _movedRequirements.GetOrAdd(requirement, static (r, note) => r + note, _ambientNote);
+    private string MovedRequirement(string requirement) => LazyInitializer.EnsureInitialized(ref _movedRequirements, static () => new(StringComparer.Ordinal)).GetOrAdd(requirement, static (r, note) => r + note, _ambientNote);
 
     private NormativePoint? Labelled(string label)
     {
