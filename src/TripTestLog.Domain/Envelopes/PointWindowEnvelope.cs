@@ -17,8 +17,8 @@ public sealed class PointWindowEnvelope : ITripEnvelope
     private readonly ITripEnvelope _inner;
     private readonly AmbientShift _ambient;
 
-    // A band is read several times for each test judged (at its current and either side of it), a million times in a
-    // large check: the ambient's note and each requirement it extends are written once per envelope, not per reading.
+    // A band is read for every test judged (and either side of its current when a decision rule needs the slope), a
+    // million times in a large check: the ambient's note and each requirement it extends are written once per envelope.
     private readonly string _ambientNote;
     private ConcurrentDictionary<string, string>? _movedRequirements;
 
@@ -156,7 +156,9 @@ public sealed class PointWindowEnvelope : ITripEnvelope
         return e;
     }
 
-    private string MovedRequirement(string requirement) => LazyInitializer.EnsureInitialized(ref _movedRequirements, static () => new(StringComparer.Ordinal)).GetOrAdd(requirement, static (r, note) => r + note, _ambientNote);
+    private string MovedRequirement(string requirement) =>
+        LazyInitializer.EnsureInitialized(ref _movedRequirements, static () => new(StringComparer.Ordinal))
+            .GetOrAdd(requirement, static (r, note) => r + note, _ambientNote);
 
     private NormativePoint? Labelled(string label)
     {

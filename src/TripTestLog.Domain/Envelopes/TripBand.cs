@@ -60,8 +60,8 @@ public sealed record TripBand(
 
     /// <summary>
     /// The latest minimum that a test run no hotter than it assumes could break, or the earliest maximum that a test run at
-    /// least as hot could, among the edges of one strength. Read three times for every test judged, so it walks the list
-    /// by index with no delegate or enumerator to allocate.
+    /// least as hot could, among the edges of one strength. Four calls for every band a test is held to, so it walks the
+    /// list by index with no delegate or enumerator to allocate.
     /// </summary>
     private static BandEdge? Tightest(IReadOnlyList<BandEdge> edges, EdgeStrength strength, TestConditions conditions, bool minimum)
     {
