@@ -48,19 +48,39 @@ internal static class DeviceMapping
     /// <summary>Register entries ordered by asset tag, then age (tag first, then <see cref="Columns"/>), as each device's history.</summary>
     public static IReadOnlyDictionary<string, DeviceHistory> Histories(DbDataReader r)
     {
-        var entries = new Dictionary<string, List<Device>>(AssetTag.Comparer);
+        // The rows come ordered by tag, so each device's entries are gathered in one list and made a history when the tag changes.
+        var histories = new Dictionary<string, DeviceHistory>(AssetTag.Comparer);
+        var entries = new List<Device>();
         while (r.Read())
         {
-            var device = DeviceMapping.Read(r);
-            if (!entries.TryGetValue(device.Tag.Value, out var list))
+            var device = Read(r);
+            if (entries.Count > 0 && !AssetTag.Comparer.Equals(entries[0].Tag.Value, device.Tag.Value))
             {
-                entries[device.Tag.Value] = list = [];
+                Add(histories, entries);
+                entries = [];
             }
 
-            list.Add(device);
+            entries.Add(device);
         }
 
-        return entries.ToDictionary(kv => kv.Key, kv => new DeviceHistory(kv.Value), AssetTag.Comparer);
+        if (entries.Count > 0)
+        {
+            Add(histories, entries);
+        }
+
+        return histories;
+    }
+
+    private static void Add(Dictionary<string, DeviceHistory> histories, List<Device> entries)
+    {
+        var tag = entries[0].Tag.Value;
+        if (histories.TryGetValue(tag, out var earlier))
+        {
+            // Not expected (the query orders by tag), kept so an unordered reader still gives whole histories.
+            entries.InsertRange(0, earlier.Entries);
+        }
+
+        histories[tag] = new DeviceHistory(entries);
     }
 
     /// <summary>Sets <see cref="Parameters"/> to a device's values; an empty one is sent typed as its column.</summary>

@@ -14,13 +14,28 @@ public sealed class DeviceHistory
             throw new ArgumentException("a device history needs at least one register entry", nameof(entries));
         }
 
-        if (entries.Any(e => e.Tag != entries[0].Tag))
+        var ordered = new Device[entries.Count];
+        for (var i = 0; i < ordered.Length; i++)
         {
-            throw new ArgumentException("a device history holds the entries of one device only", nameof(entries));
+            var entry = entries[i];
+            if (entry.Tag != entries[0].Tag)
+            {
+                throw new ArgumentException("a device history holds the entries of one device only", nameof(entries));
+            }
+
+            // Stable order: by the date the settings took effect (none = from the start), then as imported. An insertion
+            // sort, not LINQ: most devices hold one or two entries, and every command reads every device's history.
+            var at = i;
+            while (at > 0 && From(ordered[at - 1]) > From(entry))
+            {
+                ordered[at] = ordered[at - 1];
+                at--;
+            }
+
+            ordered[at] = entry;
         }
 
-        // Stable order: by the date the settings took effect (none = from the start), then as imported.
-        _entries = entries.Select((e, i) => (e, i)).OrderBy(x => x.e.SettingsFrom ?? DateOnly.MinValue).ThenBy(x => x.i).Select(x => x.e).ToList();
+        _entries = ordered;
     }
 
     /// <summary>The entries, oldest settings first.</summary>
@@ -30,6 +45,18 @@ public sealed class DeviceHistory
     public Device Latest => _entries[^1];
 
     /// <summary>The entry in force on <paramref name="date"/>: the last whose settings took effect on or before it, else the first.</summary>
-    public Device InForceOn(DateOnly date) =>
-        _entries.LastOrDefault(e => (e.SettingsFrom ?? DateOnly.MinValue) <= date) ?? _entries[0];
+    public Device InForceOn(DateOnly date)
+    {
+        for (var i = _entries.Count - 1; i > 0; i--)
+        {
+            if (From(_entries[i]) <= date)
+            {
+                return _entries[i];
+            }
+        }
+
+        return _entries[0];
+    }
+
+    private static DateOnly From(Device entry) => entry.SettingsFrom ?? DateOnly.MinValue;
 }
