@@ -1,4 +1,5 @@
 using TripTestLog.Domain.Codes;
+using System.Collections.Concurrent;
 using System.Text.Json;
 using System.Text.Json.Serialization;
 using TripTestLog.Domain.Devices;
@@ -34,9 +35,31 @@ internal static partial class SettingsCodec
         _ => throw new ArgumentOutOfRangeException(nameof(settings), settings.GetType().Name, "no storage form for these settings"),
     }, SettingsJson.Default.Dto);
 
+    // Settings are immutable records, and a fleet holds few distinct ones (a model's settings repeat across its devices),
+    // so each text is parsed once per process; the bound keeps memory flat for a register of all-different settings.
+    private const int ReadCacheLimit = 4096;
+    private static readonly ConcurrentDictionary<string, DeviceSettings> ReadCache = new(StringComparer.Ordinal);
+
+    /// <summary>The settings a stored <c>settings_json</c> text holds.</summary>
     public static DeviceSettings Read(string json)
     {
-        var d = JsonSerializer.Deserialize(json, SettingsJson.Default.Dto) ?? throw new InvalidDataException("empty settings_json");
+        if (ReadCache.TryGetValue(json, out var known))
+        {
+            return known;
+        }
+
+        var settings = Parse(json);
+        if (ReadCache.Count < ReadCacheLimit)
+        {
+            ReadCache.TryAdd(json, settings);
+        }
+
+        return settings;
+    }
+
+    private static DeviceSettings Parse(string json)
+    {
+        var d = SettingsJsonReader.Read(json);
         return d.Kind switch
         {
             "iec60898" => new Iec60898Settings(TextCodes.TripCurve.Decode(d.Curve!))
