@@ -149,7 +149,7 @@ internal static class CheckCommand
         }
 
         using var store = Stores.Open(cli, db, StorePurpose.Read);
-        if (only is { } tag && !store.Devices(tag).Any())
+        if (only is { } tag && store.Histories(tag).Count == 0)
         {
             return Usage(cli, $"--asset: '{tag}' is not in the device register of {db.Display}");
         }

@@ -92,7 +92,7 @@ internal static class FindingsCommand
     private static int Run(CliContext cli, ConditionOptions.Resolved options, Filter filter, bool json, bool csv, bool failOnFindings)
     {
         using var store = Stores.Open(cli, options.Database, StorePurpose.Read);
-        if (options.Only is { } tag && !store.Devices(tag).Any())
+        if (options.Only is { } tag && store.Histories(tag).Count == 0)
         {
             cli.Error.WriteLine($"error: --asset: '{tag}' is not in the device register of {options.Database.Display}");
             return ExitCodes.BadInput;
