@@ -63,6 +63,7 @@ public sealed partial class RecordStore : IPeerPositionStore
     /// <inheritdoc />
     public IReadOnlyList<(AssetTag Tag, string Stamp)> StalePeers(string basis)
     {
+        ReadingMany();
         using var snapshot = ReadTransaction.Begin(_connection);
         using var select = _connection.CreateCommand();
         select.CommandText = $"SELECT d.asset_tag, {DeviceStamp} AS now, s.basis, s.stamp FROM devices d LEFT JOIN peer_stamps s ON s.device_id = d.id ORDER BY d.asset_tag";

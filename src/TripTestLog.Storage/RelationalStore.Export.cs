@@ -24,6 +24,7 @@ public abstract partial class RelationalStore : IRecordExport
 
         // One read scope while the records stream: on SQLite it holds a read transaction on the store's connection, so
         // nothing may write through this store until the enumeration ends (transfer only reads its source).
+        ReadingMany();
         using var scope = BeginRead();
         using var select = scope.Query(Export.RecordsSql(file.Kind));
         Dialect.Set(select, "id", file.Id);

@@ -25,6 +25,7 @@ public abstract partial class RelationalStore
     /// </summary>
     public VerifyReport Verify()
     {
+        ReadingMany();
         var (integrity, broken) = DatabaseChecks();
         long untraced = 0;
         foreach (var table in RecordTables)

@@ -46,6 +46,7 @@ public abstract partial class RelationalStore : ITripSource
     /// <inheritdoc />
     public IEnumerable<DeviceRecords> PeersOf(AssetTag tag)
     {
+        ReadingMany();
         using var scope = BeginRead();
         using var revisions = scope.Query(RevisionsOf(PeerDevices), tag);
         var rows = new StoredRows(SourceFileNames(revisions.Connection!), r => Dialect.TestedAt(r, 1));
@@ -60,6 +61,11 @@ public abstract partial class RelationalStore : ITripSource
     /// <inheritdoc />
     public IEnumerable<DeviceRecords> Devices(AssetTag? only = null, bool withResistance = false)
     {
+        if (only is null)
+        {
+            ReadingMany();
+        }
+
         using var scope = BeginRead();
         var any = Dialect.AnyOrTag("d.asset_tag");
         using var revisions = scope.Query(RevisionsOf(any), only);

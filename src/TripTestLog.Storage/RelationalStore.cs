@@ -28,6 +28,11 @@ public abstract partial class RelationalStore
     /// <summary>Begins a read of one consistent state.</summary>
     protected abstract IReadScope BeginRead();
 
+    /// <summary>Called before a read of many devices or a whole file's records, for a store that reads those differently.</summary>
+    protected virtual void ReadingMany()
+    {
+    }
+
     /// <summary>A command on the store's connection, in <paramref name="transaction"/> when given.</summary>
     protected DbCommand Command(string sql, DbTransaction? transaction = null)
     {
