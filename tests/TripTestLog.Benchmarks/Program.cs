@@ -21,7 +21,9 @@ namespace TripTestLog.Benchmarks;
 /// the same fleet is also imported into, checked and judged on the server, against the server's own COPY and read floors.
 /// With --pairs N, only the import against the insert floor at the largest --rows, N times alternated, and the median ratio.
 /// Diagnostic steps, run one at a time on a fleet written with --step generate: --step NAME --work DIR, where NAME is
-/// floor-schema (the raw insert into the project's own table), parse-only, rows-only, open-only, read-only, judge-only.
+/// floor-schema (the raw insert into the project's own table), parse-only, rows-only, open-only, read-only, judge-only, and on the
+/// server (with --server) server-floor-staged, server-floor-staged-indexes and server-floor-staged-keys (the COPY floor
+/// through a staging table, then into a table with the device and file ids and their indexes, then with foreign keys too).
 /// With --one-device DB --asset TAG [--runs 10] [--before TOOL], the one-device commands as processes against a bare --version
 /// (OneDevice); --tool names the triptestlog to time (default: the build beside the benchmark, e.g. an installed tool
 /// instead), --before an earlier build's to time beside it in the same run.
@@ -305,6 +307,15 @@ internal static class Program
                 break;
             case "server-floor-insert":
                 rows = ServerFloors.Insert(Server(), trips);
+                break;
+            case "server-floor-staged":
+                rows = ServerFloors.Insert(Server(), trips, ServerFloors.Way.Staged);
+                break;
+            case "server-floor-staged-indexes":
+                rows = ServerFloors.Insert(Server(), trips, ServerFloors.Way.StagedWithIndexes);
+                break;
+            case "server-floor-staged-keys":
+                rows = ServerFloors.Insert(Server(), trips, ServerFloors.Way.StagedWithKeys);
                 break;
             case "server-floor-read":
                 rows = ServerFloors.ReadAsJson(Server(), Path.Combine(work, "server-floor.jsonl"));

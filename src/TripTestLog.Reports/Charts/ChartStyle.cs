@@ -86,7 +86,6 @@ internal static class ChartStyle
         svg = ClipIds.Steady(svg);
 
         // The data area, in the SVG's own units, so a page test can check that no legend or label covers the data.
-        // The data area, in the SVG's own units, so a page test can check that no legend or label covers the data.
         svg = string.Concat("<svg data-plot-area=\"", string.Join(' ', new[] { area.Left, area.Top, area.Width, area.Height }
             .Select(v => v.ToString("0.#", CultureInfo.InvariantCulture))), "\"", svg[4..]);
 
