@@ -82,6 +82,41 @@ public sealed partial class RecordStore : IPeerPositionStore
     }
 
     /// <inheritdoc />
+    public IReadOnlyList<AssetTag> CurrentPositions(string basis, Action<string, double> add)
+    {
+        ArgumentNullException.ThrowIfNull(add);
+        ReadingMany();
+        using var snapshot = ReadTransaction.Begin(_connection);
+        using var select = _connection.CreateCommand();
+        select.CommandText = $"WITH now AS (SELECT d.id, d.asset_tag, {DeviceStamp} AS stamp FROM devices d) "
+            + "SELECT now.asset_tag, IFNULL(s.basis = $basis AND s.stamp = now.stamp, 0), p.group_key, p.position FROM now "
+            + "LEFT JOIN peer_stamps s ON s.device_id = now.id LEFT JOIN peer_positions p ON p.device_id = now.id ORDER BY now.asset_tag";
+        select.Parameters.AddWithValue("$basis", basis);
+        using var reader = select.ExecuteReader();
+        var stale = new List<AssetTag>();
+        string? last = null;
+        while (reader.Read())
+        {
+            if (reader.GetInt64(1) == 0)
+            {
+                // A stale device's stored rows, one for each of its old positions: it is listed once.
+                var tag = reader.GetString(0);
+                if (tag != last)
+                {
+                    stale.Add(AssetTag.Of(tag));
+                    last = tag;
+                }
+            }
+            else if (!reader.IsDBNull(2))
+            {
+                add(reader.GetString(2), reader.GetDouble(3));
+            }
+        }
+
+        return stale;
+    }
+
+    /// <inheritdoc />
     public void StorePeerPositions(IEnumerable<DevicePeerPositions> devices)
     {
         using var transaction = BeginWriting();

@@ -53,6 +53,25 @@ public sealed class StoredPeerPositionsTests : IDisposable
     }
 
     [Fact]
+    public void TheWholeFleetsFindings_ReadTheKeptPlaces_AndMatchTheFindingsWorkedOutFromEveryTest()
+    {
+        var kept = Everything();
+
+        // Without the kept places every device's place is worked out from its tests: the same findings.
+        Sql("DELETE FROM peer_positions; DELETE FROM peer_stamps");
+        Assert.Equal(kept, Everything());
+
+        // Kept again by the next import, and read: every peer placed where the outlier is, it is no outlier any more.
+        Assert.Equal(0, CliRun.Run("import", OneTrip("extra.csv", "BPS-DB1-Q03", "2026-11-20T09:00:00"), "--db", Db).Exit);
+        Assert.Equal(Count("SELECT COUNT(*) FROM devices"), Count("SELECT COUNT(*) FROM peer_stamps"));
+        Assert.Contains("peer-outlier", KindsInFleet(Outlier));
+        Sql($"UPDATE peer_positions SET position = (SELECT o.position FROM peer_positions o JOIN devices d ON d.id = o.device_id "
+            + $"WHERE d.asset_tag = '{Outlier}' AND o.group_key = peer_positions.group_key) WHERE group_key IN (SELECT o.group_key FROM peer_positions o "
+            + $"JOIN devices d ON d.id = o.device_id WHERE d.asset_tag = '{Outlier}')");
+        Assert.DoesNotContain("peer-outlier", KindsInFleet(Outlier));
+    }
+
+    [Fact]
     public void AnImport_WorksOutAgainOnlyTheDevicesWhoseRecordsChanged_AndACorrectionAllOfThem()
     {
         var changed = "BPS-DB1-Q03";
@@ -93,6 +112,12 @@ public sealed class StoredPeerPositionsTests : IDisposable
     private List<string> WholeFleet(string tag) =>
         [.. JsonDocument.Parse(CliRun.Run("findings", "--json", "--include-closed", "--as-of", "2026-12-01", "--db", Db).Out)
             .RootElement.EnumerateArray().Where(f => f.GetProperty("asset_tag").GetString() == tag).Select(f => f.GetRawText())];
+
+    private string Everything() =>
+        CliRun.Run("findings", "--json", "--include-closed", "--as-of", "2026-12-01", "--db", Db).Out;
+
+    private List<string> KindsInFleet(string tag) =>
+        [.. WholeFleet(tag).Select(f => JsonDocument.Parse(f).RootElement.GetProperty("kind").GetString()!)];
 
     private List<string> Kinds(string tag) =>
         [.. Findings(tag).Select(f => JsonDocument.Parse(f).RootElement.GetProperty("kind").GetString()!)];

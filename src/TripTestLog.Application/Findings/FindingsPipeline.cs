@@ -27,12 +27,7 @@ public static class FindingsPipeline
         ArgumentNullException.ThrowIfNull(policy);
         var judge = StoredPeerPositions.Judge(source, policy);
         var peers = new PeerGroups();
-        if (only is { } one && source is IPeerPositionStore stored)
-        {
-            // One device: its peers' positions as the store keeps them, worked out afresh only where stale.
-            StoredPeerPositions.Fill(one, source, stored, policy, judge, peers, cancel);
-        }
-        else
+        if (!FromKeptPlaces(source, policy, judge, peers, only, cancel))
         {
             // The store is read a few devices ahead on another thread, so reading and judging overlap on two cores. For
             // one device, only the devices that can share one of its peer groups are read: its groups come out the same.
@@ -50,5 +45,25 @@ public static class FindingsPipeline
             var trips = judge.Judge(device).ToList();
             yield return new DeviceReport(device, trips, DeviceFindings.Of(device, trips, peers, policy, judge.Instruments, asOf));
         }
+    }
+
+    // The peer groups from the places the store keeps: for one device, its peers' places; for the whole fleet, every
+    // device's while few are stale. Stale places are worked out afresh. False when the store keeps none, or when so many
+    // are stale that one pass over the devices is cheaper.
+    private static bool FromKeptPlaces(ITripSource source, FindingPolicy policy, DeviceJudge judge, PeerGroups peers, AssetTag? only,
+        CancellationToken cancel)
+    {
+        if (source is not IPeerPositionStore stored)
+        {
+            return false;
+        }
+
+        if (only is { } one)
+        {
+            StoredPeerPositions.Fill(one, source, stored, policy, judge, peers, cancel);
+            return true;
+        }
+
+        return StoredPeerPositions.FillFleet(source, stored, policy, judge, peers, cancel);
     }
 }

@@ -22,6 +22,13 @@ public interface IPeerPositionStore
     /// <summary>Every device whose stored positions are missing, or were worked out from another basis or other records.</summary>
     IReadOnlyList<(AssetTag Tag, string Stamp)> StalePeers(string basis);
 
+    /// <summary>
+    /// Every device's stored positions read in one consistent state: those still current under <paramref name="basis"/>
+    /// are passed to <paramref name="add"/> as they are read; the devices whose positions are missing or stale are
+    /// returned, in asset-tag order, to be worked out.
+    /// </summary>
+    IReadOnlyList<AssetTag> CurrentPositions(string basis, Action<string, double> add);
+
     /// <summary>Replaces the stored positions of each device given, in one transaction.</summary>
     void StorePeerPositions(IEnumerable<DevicePeerPositions> devices);
 }

@@ -99,6 +99,32 @@ public static class StoredPeerPositions
         }
     }
 
+    /// <summary>
+    /// Fills <paramref name="peers"/> with every device's positions for a run over the whole fleet: the stored ones
+    /// where they are current, and the few stale devices worked out afresh. Returns false, having added nothing, when
+    /// more than a few are stale (a first run, a policy changed since the last import): then one pass over the fleet is
+    /// the cheaper way, and the caller makes it.
+    /// </summary>
+    internal static bool FillFleet(ITripSource source, IPeerPositionStore store, FindingPolicy policy, DeviceJudge judge, PeerGroups peers,
+        CancellationToken cancel)
+    {
+        var basis = Basis(policy, store);
+        if (store.StalePeers(basis).Count > StaleCountForFleetPass)
+        {
+            return false;
+        }
+
+        // Read again with the positions, in one state: a device written since the count above is among the stale.
+        var stale = store.CurrentPositions(basis, peers.Add);
+        foreach (var device in Read(source, stale, whole: false))
+        {
+            cancel.ThrowIfCancellationRequested();
+            PeerPass.Add(device, judge, peers);
+        }
+
+        return true;
+    }
+
     internal static DeviceJudge Judge(ITripSource source, FindingPolicy policy) =>
         DeviceJudge.For(source, policy.RequireRegisteredInstruments, policy.AmbientNoteKelvin, policy.PointWindowPercent / 100, policy.Decision);
 
