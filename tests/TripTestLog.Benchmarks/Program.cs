@@ -14,7 +14,8 @@ namespace TripTestLog.Benchmarks;
 
 /// <summary>
 /// The benchmark: for each fleet size it writes an invented fleet, then times in separate child processes (so each
-/// step's peak memory is its own) the raw SQLite insert floor, the project's import, a re-import, the raw read floor and
+/// step's peak memory is its own) the raw SQLite insert floor, the project's import, a re-import, the peer places an
+/// import through the command keeps (findings and reports read them), the raw read floor and
 /// check with JSON output, and prints rows per second, the ratios to the floors and peak memory.
 /// Usage: dotnet run -c Release --project tests/TripTestLog.Benchmarks -- [--rows 100000,300000,1000000] [--devices 10000] [--files 20] [--work DIR]
 /// [--server CONNECTION]. With --server (a PostgreSQL connection string; the password from PGPASSWORD or a .pgpass file),
@@ -32,7 +33,7 @@ internal static class Program
 {
     private static string? server;
 
-    private static readonly string[] Steps = ["floor-insert", "import", "reimport", "floor-read", "check", "findings", "fleet-page", "report", "pages", "full-report"];
+    private static readonly string[] Steps = ["floor-insert", "import", "reimport", "places", "floor-read", "check", "findings", "fleet-page", "report", "pages", "full-report"];
 
     private static readonly string[] ServerSteps = ["server-floor-insert", "server-import", "server-floor-read", "server-check", "server-findings"];
 
@@ -84,7 +85,7 @@ internal static class Program
             {
                 Console.Error.WriteLine($"  {step} ...");
                 results[step] = Child(step, work);
-                if (results[step].Rows != rows && step is not "reimport" and not "findings" and not "fleet-page" and not "report" and not "pages" and not "full-report")
+                if (results[step].Rows != rows && step is not "reimport" and not "places" and not "findings" and not "fleet-page" and not "report" and not "pages" and not "full-report")
                 {
                     throw new InvalidOperationException($"{step} handled {results[step].Rows} rows, not {rows}");
                 }
@@ -93,6 +94,8 @@ internal static class Program
             Print(rows, "floor-insert", results["floor-insert"], null);
             Print(rows, "import", results["import"], results["floor-insert"]);
             Print(rows, "reimport", results["reimport"], results["floor-insert"]);
+            Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                $"{rows,8}  {"places",-12}  {results["places"].Seconds,8:0.00}  {results["places"].Rows} devices placed among their peers, as import does ({results["places"].PeakMb:0} MB peak)"));
             Print(rows, "floor-read", results["floor-read"], null);
             Print(rows, "check --json", results["check"], results["floor-read"], slower: true);
             Print(rows, "findings", results["findings"], results["floor-read"], slower: true);
@@ -244,6 +247,15 @@ internal static class Program
                     {
                         rows += outcome.Status == ImportStatus.Imported ? outcome.Added : outcome.RowsRead;
                     }
+                }
+
+                break;
+            case "places":
+                // What an import through the command does after its files: each device's place among its peers, which
+                // findings and reports then read instead of a pass over the fleet.
+                using (var store = RecordStore.Open(project))
+                {
+                    rows = StoredPeerPositions.Refresh(store, store, FindingPolicy.Default);
                 }
 
                 break;
