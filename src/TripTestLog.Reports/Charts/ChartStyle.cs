@@ -76,25 +76,35 @@ internal static class ChartStyle
     }
 
     /// <summary>The chart as SVG markup, ready to inline in a page (without the XML declaration, which HTML does not take).</summary>
-    public static string Svg(Plot plot, int width = Width, int height = Height)
+    public static string Svg(Plot plot, int width = Width, int height = Height) => AppendSvg(new StringBuilder(), plot, width, height).ToString();
+
+    /// <summary>
+    /// Appends the chart as SVG markup to <paramref name="html"/>: the markup is decoded once and copied once, into the
+    /// page, where each step of making it used to copy it again (about 3 MB of short-lived strings a device page).
+    /// </summary>
+    public static StringBuilder AppendSvg(StringBuilder html, Plot plot, int width = Width, int height = Height)
     {
+        ArgumentNullException.ThrowIfNull(html);
+
         // Charts render on several threads at once (device pages are written in parallel): each plot is its own, and
         // the marks drawn from a path hold it until the native draw returns (HeldPathMarker).
         var svg = SvgOf(plot, width, height);
         var area = plot.RenderManager.LastRender.DataRect;
-
-        var start = svg.IndexOf("<svg", StringComparison.Ordinal);
-        svg = start > 0 ? svg[start..] : svg;
-        svg = ClipIds.Steady(svg);
-
-        // The data area, in the SVG's own units, so a page test can check that no legend or label covers the data.
-        svg = string.Concat("<svg data-plot-area=\"", string.Join(' ', new[] { area.Left, area.Top, area.Width, area.Height }
-            .Select(v => v.ToString("0.#", CultureInfo.InvariantCulture))), "\"", svg[4..]);
+        var start = Math.Max(0, svg.IndexOf("<svg", StringComparison.Ordinal));
 
         // A view box lets the page scale the chart down (print, a narrow screen) instead of cropping it.
-        return svg.Contains("viewBox", StringComparison.Ordinal)
-            ? svg
-            : string.Concat("<svg viewBox=\"0 0 ", width.ToString(CultureInfo.InvariantCulture), " ", height.ToString(CultureInfo.InvariantCulture), "\"", svg[4..]);
+        html.Append("<svg");
+        if (svg.IndexOf("viewBox", start, StringComparison.Ordinal) < 0)
+        {
+            html.Append(CultureInfo.InvariantCulture, $" viewBox=\"0 0 {width} {height}\"");
+        }
+
+        // The data area, in the SVG's own units, so a page test can check that no legend or label covers the data.
+        html.Append(" data-plot-area=\"");
+        html.AppendJoin(' ', area.Left.ToString("0.#", CultureInfo.InvariantCulture), area.Top.ToString("0.#", CultureInfo.InvariantCulture),
+            area.Width.ToString("0.#", CultureInfo.InvariantCulture), area.Height.ToString("0.#", CultureInfo.InvariantCulture));
+        html.Append('"');
+        return ClipIds.AppendSteady(html, svg, start, skip: 4);
     }
 
     // The plot library's own SVG export draws every chart twice: once to a bitmap, to lay it out, then to the SVG

@@ -1,3 +1,4 @@
+using System.Text;
 using ScottPlot;
 using TripTestLog.Application.Check;
 using TripTestLog.Domain.Envelopes;
@@ -111,7 +112,10 @@ internal static class TimeCurrentChart
     }
 
     /// <summary>The chart of a device's envelope and tests as SVG: the warm band is drawn when a warm test is shown.</summary>
-    public static string Svg(ITripEnvelope envelope, IReadOnlyList<JudgedTrip> trips)
+    public static string Svg(ITripEnvelope envelope, IReadOnlyList<JudgedTrip> trips) => AppendSvg(new StringBuilder(), envelope, trips).ToString();
+
+    /// <summary>As <see cref="Svg"/>, appended to a page.</summary>
+    public static StringBuilder AppendSvg(StringBuilder html, ITripEnvelope envelope, IReadOnlyList<JudgedTrip> trips)
     {
         var marks = Marks(trips);
         var upTo = Math.Max(20, marks.Count == 0 ? 0 : marks.Max(m => m.Multiple) * 1.5);
@@ -119,7 +123,7 @@ internal static class TimeCurrentChart
             ? Band(envelope, upTo, new TestConditions(StartCondition.Warm, PoleLoading.AllPoles))
             : null;
         using var plot = Build(envelope, Band(envelope, upTo), warm, marks);
-        return ChartStyle.Svg(plot);
+        return ChartStyle.AppendSvg(html, plot);
     }
 
     /// <summary>Whether the device's chart draws a warm band beside the cold one.</summary>

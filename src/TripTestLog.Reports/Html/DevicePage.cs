@@ -76,7 +76,7 @@ internal static class DevicePage
         }
 
         var latest = report.Trips[^1];
-        html.Append("<figure class=\"wide\">").Append(TimeCurrentChart.Svg(latest.Envelope, report.Trips)).Append("<figcaption>")
+        TimeCurrentChart.AppendSvg(html.Append("<figure class=\"wide\">"), latest.Envelope, report.Trips).Append("<figcaption>")
             .Append(H($"Band of the settings in force at the latest test ({latest.Envelope.Standard}, {latest.Device.Settings.Summary}), drawn for a cold "
                 + (report.Trips.Any(t => t.Trip.Measurement.Start == Domain.Measurements.StartCondition.Warm)
                     ? "start and, in the warm tint with brown edges, for a warm start, both with all poles loaded: "
@@ -136,7 +136,7 @@ internal static class DevicePage
             var exit = report.Condition.Open.FirstOrDefault(f => f.Kind == FindingKind.TripTrendExit && f.Point == point.Label);
             using var chart = DriftChart.Build(point.Label, [.. tests.Select(t => new DriftChart.Point(TrendPoint.YearOf(t.Trip.Measurement.TestedAt.Date),
                 t.Trip.Measurement.Outcome.Time.Value, TimeCurrentChart.KindOf(t), ReadingHistory.Traceable(t)))], band.Minimum.Limit?.Value, band.Maximum.Limit?.Value, exit);
-            html.Append("<figure>").Append(ChartStyle.Svg(chart, 400, 260)).Append("</figure>");
+            ChartStyle.AppendSvg(html.Append("<figure>"), chart, 400, 260).Append("</figure>");
         }
 
         html.Append("</div>\n");
@@ -162,7 +162,7 @@ internal static class DevicePage
 
         var forecasts = report.Condition.Open.Where(f => f.Kind == FindingKind.ContactTrendLimit).ToList();
         using var chart = ContactChart.Build(readings, report.Condition.Device.ContactLimit?.Value, forecasts);
-        html.Append("<figure class=\"wide contact\">").Append(ChartStyle.Svg(chart)).Append("<figcaption>")
+        ChartStyle.AppendSvg(html.Append("<figure class=\"wide contact\">"), chart).Append("<figcaption>")
             .Append(H("Each pole's median reading at each test, referred to 20 °C for copper (IEC 60228, 0.00393 per K); dotted: each pole's first "
                 + "as-found reading; red: the maker's limit; dashed: a Theil–Sen trend to the date it reaches the limit."
                 + (readings.Any(r => !r.Traceable) ? " " + UntraceableCaption(context) : "")))

@@ -49,7 +49,7 @@ internal static class FleetPage
                 .Append(["all sites", N(devices), .. grades.Select(g => N(sites.Values.Sum(s => s.ByGrade[(int)g]))), N(sites.Values.Sum(s => s.Overdue))]));
         var totals = grades.Select(g => sites.Values.Sum(s => s.ByGrade[(int)g])).ToList();
         using var chart = GradeChart.Build(totals);
-        html.Append("<figure class=\"wide\">").Append(ChartStyle.Svg(chart, 640, 300)).Append("<figcaption>")
+        ChartStyle.AppendSvg(html.Append("<figure class=\"wide\">"), chart, 640, 300).Append("<figcaption>")
             .Append(H("Grades: sound, nothing open; watch, look into it; plan-work, a trend or change needs work; untested, no as-found test on record; repair, over a limit or out of "
                 + "band; take-out-of-service, may not protect its circuit until repaired and retested."))
             .Append("</figcaption></figure>\n");
