@@ -54,6 +54,9 @@ internal static class CliApp
             // Ctrl+C is the program's own (it rolls back the file in progress), so System.CommandLine adds no handler of its own.
             exit = await parse.InvokeAsync(new InvocationConfiguration { Output = cli.Out, Error = cli.Error, EnableDefaultExceptionHandler = false, ProcessTerminationTimeout = null })
                 .ConfigureAwait(false);
+
+            // Standard output may be buffered (Program): a failure to write the last of it (a full disk) is the command's.
+            cli.Out.Flush();
         }
         catch (Exception e) when (e is not OutOfMemoryException && Faults.IsTheUsers(e))
         {

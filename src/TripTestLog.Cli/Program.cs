@@ -1,5 +1,6 @@
 using System.Text;
 using TripTestLog.Cli;
+using TripTestLog.Cli.Output;
 
 using var cancel = new CancellationTokenSource();
 
@@ -12,14 +13,23 @@ Console.CancelKeyPress += (_, e) =>
 
 // Output sent to a file or a program is buffered: the console's own writer makes one system call a line, which was a
 // fifth of listing a 10,000-device register. A terminal keeps the console's writer, so a person sees each line at once.
-var output = Console.IsOutputRedirected
-    ? new StreamWriter(Console.OpenStandardOutput(), new UTF8Encoding(false), 1 << 16) { AutoFlush = false }
-    : Console.Out;
+// The command flushes it (CliApp), where a failure to write is reported like any other; errors flush it first.
+var redirected = Console.IsOutputRedirected;
+var encoding = Console.OutputEncoding.CodePage == Encoding.UTF8.CodePage ? new UTF8Encoding(false) : Console.OutputEncoding;
+var output = redirected ? new StreamWriter(Console.OpenStandardOutput(), encoding, 1 << 16) { AutoFlush = false } : Console.Out;
+var error = redirected ? new ErrorAfterOutput(Console.Error, output) : Console.Error;
 try
 {
-    return await CliApp.RunAsync(args, new CliContext(output, Console.Error, TimeProvider.System, !Console.IsErrorRedirected) { Cancel = cancel.Token });
+    return await CliApp.RunAsync(args, new CliContext(output, error, TimeProvider.System, !Console.IsErrorRedirected) { Cancel = cancel.Token });
 }
 finally
 {
-    output.Flush();
+    try
+    {
+        output.Flush();
+    }
+    catch (IOException)
+    {
+        // Already reported by the command, which flushed its output before it ended.
+    }
 }
