@@ -52,7 +52,7 @@ internal static class SettingsJsonReader
             }
         }
 
-        if (reader.TokenType != JsonTokenType.EndObject)
+        if (reader.TokenType != JsonTokenType.EndObject || reader.Read())
         {
             throw new InvalidDataException($"settings_json is not a whole JSON object: {json}");
         }

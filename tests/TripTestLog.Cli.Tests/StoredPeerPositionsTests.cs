@@ -69,6 +69,10 @@ public sealed class StoredPeerPositionsTests : IDisposable
             + $"WHERE d.asset_tag = '{Outlier}' AND o.group_key = peer_positions.group_key) WHERE group_key IN (SELECT o.group_key FROM peer_positions o "
             + $"JOIN devices d ON d.id = o.device_id WHERE d.asset_tag = '{Outlier}')");
         Assert.DoesNotContain("peer-outlier", KindsInFleet(Outlier));
+
+        // A policy that judges otherwise is another basis: the altered places are not used, and the outlier is back.
+        File.AppendAllText(Path.Combine(_folder, "lab-policy.conf"), "\npoint_window_pct = 4\n");
+        Assert.Contains("peer-outlier", KindsInFleet(Outlier));
     }
 
     [Fact]

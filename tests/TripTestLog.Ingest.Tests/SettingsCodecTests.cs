@@ -36,12 +36,16 @@ public sealed class SettingsCodecTests
     [Fact]
     public void TheReader_FillsEveryFieldTheSerializerWrites()
     {
-        // Every field set to a value of its own, so a name the reader spells differently from the serializer shows up.
-        var all = new SettingsCodec.Dto { Kind = "k", Curve = "c", CurveTable = "t", Supply = "dc", TsdI2t = true, ThermalMemory = false };
+        // Every field set to a value of its own, whatever its type, so a name the reader spells differently from the
+        // serializer, or a field it does not read, shows up.
+        var all = new SettingsCodec.Dto();
         var number = 1.0;
-        foreach (var property in typeof(SettingsCodec.Dto).GetProperties().Where(p => p.PropertyType == typeof(double?)))
+        foreach (var property in typeof(SettingsCodec.Dto).GetProperties())
         {
-            property.SetValue(all, number += 1.25);
+            property.SetValue(all, property.PropertyType == typeof(double?) ? number += 1.25
+                : property.PropertyType == typeof(bool?) ? (object)(property.Name.Length % 2 == 0)
+                : property.Name.ToUpperInvariant());
+            Assert.NotNull(property.GetValue(all));
         }
 
         var json = JsonSerializer.Serialize(all, SettingsCodec.SettingsJson.Default.Dto);

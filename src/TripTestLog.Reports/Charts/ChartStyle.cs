@@ -120,13 +120,17 @@ internal static class ChartStyle
         using var stream = new MemoryStream();
         var clears = plot.RenderManager.ClearCanvasBeforeEachRender;
         plot.RenderManager.ClearCanvasBeforeEachRender = false;
-        using (var canvas = SKSvgCanvas.Create(new SKRect(0, 0, width, height), stream))
+        try
         {
+            using var canvas = SKSvgCanvas.Create(new SKRect(0, 0, width, height), stream);
             plot.Render(canvas, width, height);
         }
+        finally
+        {
+            plot.RenderManager.ClearCanvasBeforeEachRender = clears;
+        }
 
-        plot.RenderManager.ClearCanvasBeforeEachRender = clears;
-        return Encoding.UTF8.GetString(stream.ToArray());
+        return Encoding.UTF8.GetString(stream.GetBuffer(), 0, (int)stream.Length);
     }
 }
 
