@@ -36,9 +36,7 @@ public sealed class StoredPeerPositionsTests : IDisposable
         Assert.Contains("peer-outlier", Kinds(Outlier));
 
         // Every peer placed where the outlier is: if the stored figures are what is read, it is no outlier any more.
-        Sql($"UPDATE peer_positions SET position = (SELECT o.position FROM peer_positions o JOIN devices d ON d.id = o.device_id "
-            + $"WHERE d.asset_tag = '{Outlier}' AND o.group_key = peer_positions.group_key) WHERE group_key IN (SELECT o.group_key FROM peer_positions o "
-            + $"JOIN devices d ON d.id = o.device_id WHERE d.asset_tag = '{Outlier}')");
+        PlaceEveryPeerWhereTheOutlierIs();
         Assert.DoesNotContain("peer-outlier", Kinds(Outlier));
 
         // A policy that judges otherwise (another point window) is another basis: the stored figures are not used.
@@ -65,9 +63,7 @@ public sealed class StoredPeerPositionsTests : IDisposable
         Assert.Equal(0, CliRun.Run("import", OneTrip("extra.csv", "BPS-DB1-Q03", "2026-11-20T09:00:00"), "--db", Db).Exit);
         Assert.Equal(Count("SELECT COUNT(*) FROM devices"), Count("SELECT COUNT(*) FROM peer_stamps"));
         Assert.Contains("peer-outlier", KindsInFleet(Outlier));
-        Sql($"UPDATE peer_positions SET position = (SELECT o.position FROM peer_positions o JOIN devices d ON d.id = o.device_id "
-            + $"WHERE d.asset_tag = '{Outlier}' AND o.group_key = peer_positions.group_key) WHERE group_key IN (SELECT o.group_key FROM peer_positions o "
-            + $"JOIN devices d ON d.id = o.device_id WHERE d.asset_tag = '{Outlier}')");
+        PlaceEveryPeerWhereTheOutlierIs();
         Assert.DoesNotContain("peer-outlier", KindsInFleet(Outlier));
 
         // A policy that judges otherwise is another basis: the altered places are not used, and the outlier is back.
@@ -99,6 +95,12 @@ public sealed class StoredPeerPositionsTests : IDisposable
         Assert.Equal(Count("SELECT COUNT(*) FROM devices"), Count("SELECT COUNT(*) FROM peer_stamps"));
         Assert.Equal(WholeFleet(changed), Findings(changed));
     }
+
+    // Every kept place in the outlier's groups set to the outlier's own: read, they make it no outlier.
+    private void PlaceEveryPeerWhereTheOutlierIs() =>
+        Sql($"UPDATE peer_positions SET position = (SELECT o.position FROM peer_positions o JOIN devices d ON d.id = o.device_id "
+            + $"WHERE d.asset_tag = '{Outlier}' AND o.group_key = peer_positions.group_key) WHERE group_key IN (SELECT o.group_key FROM peer_positions o "
+            + $"JOIN devices d ON d.id = o.device_id WHERE d.asset_tag = '{Outlier}')");
 
     // One trip test for the device at 2.55 In (the sample's C16 miniature breakers' cold point), 61 s.
     private string OneTrip(string name, string tag, string at)

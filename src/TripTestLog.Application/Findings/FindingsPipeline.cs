@@ -47,9 +47,8 @@ public static class FindingsPipeline
         }
     }
 
-    // The peer groups from the places the store keeps: for one device, its peers' places; for the whole fleet, every
-    // device's while few are stale. Stale places are worked out afresh. False when the store keeps none, or when so many
-    // are stale that one pass over the devices is cheaper.
+    // The peer groups from the places the store keeps (for one device, its peers'; for the whole fleet, every device's),
+    // the stale ones worked out afresh. False when the store keeps none.
     private static bool FromKeptPlaces(ITripSource source, FindingPolicy policy, DeviceJudge judge, PeerGroups peers, AssetTag? only,
         CancellationToken cancel)
     {
@@ -64,6 +63,7 @@ public static class FindingsPipeline
             return true;
         }
 
-        return StoredPeerPositions.FillFleet(source, stored, policy, judge, peers, cancel);
+        StoredPeerPositions.FillFleet(source, stored, policy, judge, peers, cancel);
+        return true;
     }
 }

@@ -48,10 +48,8 @@ public static class StoredPeerPositions
 
         var judge = Judge(source, policy);
         var stamps = stale.ToDictionary(s => s.Tag.Value, s => s.Stamp, AssetTag.Comparer);
-        var devices = ReadAhead.Of(Read(source, stale.Select(s => s.Tag), whole: stale.Count > StaleCountForFleetPass), 8, cancel)
-            .Where(d => stamps.ContainsKey(d.History.Latest.Tag.Value));
         var positions = new List<DevicePeerPositions>(stale.Count);
-        foreach (var device in devices)
+        foreach (var device in ReadStale(source, [.. stale.Select(s => s.Tag)], cancel))
         {
             cancel.ThrowIfCancellationRequested();
             step?.Invoke(stale.Count);
@@ -101,32 +99,34 @@ public static class StoredPeerPositions
 
     /// <summary>
     /// Fills <paramref name="peers"/> with every device's positions for a run over the whole fleet: the stored ones
-    /// where they are current, and the few stale devices worked out afresh. Returns false, having added nothing, when
-    /// more than a few are stale (a first run, a policy changed since the last import): then one pass over the fleet is
-    /// the cheaper way, and the caller makes it.
+    /// where they are current, and the stale devices worked out afresh (after a policy change, all of them).
     /// </summary>
-    internal static bool FillFleet(ITripSource source, IPeerPositionStore store, FindingPolicy policy, DeviceJudge judge, PeerGroups peers,
+    internal static void FillFleet(ITripSource source, IPeerPositionStore store, FindingPolicy policy, DeviceJudge judge, PeerGroups peers,
         CancellationToken cancel)
     {
-        var basis = Basis(policy, store);
-        if (store.StalePeers(basis).Count > StaleCountForFleetPass)
-        {
-            return false;
-        }
-
-        // Read again with the positions, in one state: a device written since the count above is among the stale.
-        var stale = store.CurrentPositions(basis, peers.Add);
-        foreach (var device in Read(source, stale, whole: false))
+        var stale = store.CurrentPositions(Basis(policy, store), peers.Add);
+        foreach (var device in ReadStale(source, stale, cancel))
         {
             cancel.ThrowIfCancellationRequested();
             PeerPass.Add(device, judge, peers);
         }
-
-        return true;
     }
 
     internal static DeviceJudge Judge(ITripSource source, FindingPolicy policy) =>
         DeviceJudge.For(source, policy.RequireRegisteredInstruments, policy.AmbientNoteKelvin, policy.PointWindowPercent / 100, policy.Decision);
+
+    // The stale devices' records, read ahead: one query each when few, else one pass over the fleet keeping only them.
+    private static IEnumerable<DeviceRecords> ReadStale(ITripSource source, IReadOnlyList<AssetTag> stale, CancellationToken cancel)
+    {
+        var wanted = new HashSet<string>(AssetTag.Comparer);
+        foreach (var tag in stale)
+        {
+            wanted.Add(tag.Value);
+        }
+
+        return ReadAhead.Of(Read(source, stale, whole: stale.Count > StaleCountForFleetPass), 8, cancel)
+            .Where(d => wanted.Contains(d.History.Latest.Tag.Value));
+    }
 
     // Many devices are read in one pass over the fleet; a few, one query each.
     private static IEnumerable<DeviceRecords> Read(ITripSource source, IEnumerable<AssetTag> tags, bool whole) =>
