@@ -12,7 +12,7 @@ namespace TripTestLog.Domain.Envelopes;
 /// <param name="Source">Where the value comes from: a standard's point, a formula, a setting, a drawn line.</param>
 /// <param name="Requirement">Plain words naming the requirement, e.g. "IEC 60898-1 Table 7 c: 2.55 In from cold, trip after more than 1 s".</param>
 /// <param name="Start">The start condition the requirement assumes (ignored when <see cref="AnyStart"/>).</param>
-public readonly record struct BandEdge(Seconds? Limit, EdgeSource Source, string Requirement, StartCondition Start)
+public sealed record BandEdge(Seconds? Limit, EdgeSource Source, string Requirement, StartCondition Start)
 {
     /// <summary>Guaranteed edges may fail a breaker; typical ones only raise an advisory.</summary>
     public EdgeStrength Strength { get; init; }

@@ -24,7 +24,7 @@ internal sealed class EdgeCandidates
         }
 
         var earliest = _minimums.MinBy(e => e.Limit?.Value ?? double.PositiveInfinity);
-        return earliest.IsOpen ? null : earliest;
+        return earliest!.IsOpen ? null : earliest;
     }
 
     /// <summary>The earliest maximum, or null when no function must act.</summary>

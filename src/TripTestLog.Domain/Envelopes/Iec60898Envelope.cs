@@ -121,21 +121,19 @@ public sealed class Iec60898Envelope : ITripEnvelope
     // Float division can land a hair off a table point (e.g. 40.8 A / 16 A); within a part in 10^9 it is the point.
     private double Snap(double i)
     {
-        foreach (var p in new[] { _t.A, _t.B, _t.C, _t.D, _t.E, _t.SinglePole ?? 0 })
-        {
-            if (Math.Abs(i - p) <= 1e-9 * p)
-            {
-                return p;
-            }
-        }
-
-        return i;
+        var t = _t;
+        return Near(i, t.A) ?? Near(i, t.B) ?? Near(i, t.C) ?? Near(i, t.D) ?? Near(i, t.E) ?? Near(i, t.SinglePole ?? 0) ?? i;
     }
+
+    private static double? Near(double i, double p) => Math.Abs(i - p) <= 1e-9 * p ? p : null;
+
+    // At most five edges on a side at any current (a list is made for every band read, so it is made to size).
+    private const int MostEdges = 5;
 
     private List<BandEdge> Minimums(double i)
     {
         var t = _t;
-        var edges = new List<BandEdge>();
+        var edges = new List<BandEdge>(MostEdges);
 
         // Above d the magnetic release may act at once, whatever the thermal rows say; a large ambient factor can even
         // move row c above d, so this comes first.
@@ -174,7 +172,7 @@ public sealed class Iec60898Envelope : ITripEnvelope
     private List<BandEdge> Maximums(double i)
     {
         var t = _t;
-        var edges = new List<BandEdge>();
+        var edges = new List<BandEdge>(MostEdges);
         if (i >= t.B)
         {
             edges.Add(i > t.B ? _bTripCarried : _bTrip);

@@ -43,7 +43,7 @@ public static partial class TripJudge
         var point = judged.Verdict switch
         {
             Verdict.Pass => judged.Proved.Any(p => p.Point is { } pp && pp == aimedAt) ? aimedAt : null,
-            Verdict.TooEarly or Verdict.TooLate => judged.Edge?.PointLabel is { } label && judged.Edge.Value.Source == EdgeSource.NormativePoint
+            Verdict.TooEarly or Verdict.TooLate => judged.Edge is { PointLabel: { } label, Source: EdgeSource.NormativePoint }
                 && windowed.Points.FirstOrDefault(p => p.Label == label) is { } broken && broken.Within(multiple, windowed.Window) ? broken : null,
             _ => aimedAt,
         };

@@ -125,9 +125,9 @@ public sealed class Iec60898EnvelopeTests
 
         var band = new Iec60898Envelope(TripCurve.C, Amperes.Of(16)).At(Amperes.Of(32)).For(TestConditions.Reference);
 
-        Assert.Equal(expected, band.TypicalMinimum!.Value.Limit!.Value.Value, 1e-6);
-        Assert.Equal(11.52, band.TypicalMinimum!.Value.Limit!.Value.Value, 0.01);
-        Assert.Equal(EdgeStrength.Typical, band.TypicalMinimum!.Value.Strength);
+        Assert.Equal(expected, band.TypicalMinimum!.Limit!.Value.Value, 1e-6);
+        Assert.Equal(11.52, band.TypicalMinimum!.Limit!.Value.Value, 0.01);
+        Assert.Equal(EdgeStrength.Typical, band.TypicalMinimum!.Strength);
         Assert.Equal(1.625625, band.Minimum.Limit!.Value.Value, 1e-9);
         Assert.Equal(EdgeSource.Derived, band.Minimum.Source);
     }
@@ -138,8 +138,8 @@ public sealed class Iec60898EnvelopeTests
         // Drawn: I²t = constant from row c; by hand for C 16 A at 4 In: 60 s x (2.55 / 4)² = 24.384 s. Guaranteed: 60 s.
         var band = new Iec60898Envelope(TripCurve.C, Amperes.Of(16)).At(Amperes.Of(64)).For(TestConditions.Reference);
 
-        Assert.Equal(24.384, band.TypicalMaximum!.Value.Limit!.Value.Value, 0.001);
-        Assert.Equal(EdgeSource.Extrapolated, band.TypicalMaximum!.Value.Source);
+        Assert.Equal(24.384, band.TypicalMaximum!.Limit!.Value.Value, 0.001);
+        Assert.Equal(EdgeSource.Extrapolated, band.TypicalMaximum!.Source);
         Assert.Equal(60, band.Maximum.Limit!.Value.Value, Tolerance);
         Assert.Contains("carried to higher currents", band.Maximum.Requirement);
     }

@@ -52,7 +52,7 @@ public sealed class DrawnEdgeTests
 
         Assert.Equal(expected, a.Verdict);
         Assert.Equal(60, a.Band.Maximum.Limit!.Value.Value, 9);
-        Assert.Equal(24.384, a.Band.TypicalMaximum!.Value.Limit!.Value.Value, 3);
+        Assert.Equal(24.384, a.Band.TypicalMaximum!.Limit!.Value.Value, 3);
         Assert.Equal(advisories, a.Advisories.Count);
     }
 
