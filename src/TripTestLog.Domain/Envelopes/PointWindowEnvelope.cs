@@ -1,4 +1,3 @@
-using System.Collections.Concurrent;
 using System.Globalization;
 using TripTestLog.Domain.Quantities;
 using TripTestLog.Domain.Settings;
@@ -14,13 +13,14 @@ namespace TripTestLog.Domain.Envelopes;
 /// </summary>
 public sealed class PointWindowEnvelope : ITripEnvelope
 {
+    private const int MostMovedKept = 8;
     private readonly ITripEnvelope _inner;
     private readonly AmbientShift _ambient;
 
     // A band is read for every test judged (and either side of its current when a decision rule needs the slope), a
     // million times in a large check: the ambient's note and each requirement it extends are written once per envelope.
     private readonly string _ambientNote;
-    private ConcurrentDictionary<string, string>? _movedRequirements;
+    private (string From, string To)[] _movedRequirements = [];
 
     private PointWindowEnvelope(ITripEnvelope inner, double window, AmbientShift ambient)
     {
@@ -73,14 +73,26 @@ public sealed class PointWindowEnvelope : ITripEnvelope
     public bool IsThermal(Amperes current) => _inner.IsThermal(current);
 
     /// <inheritdoc />
-    public TripBand At(Amperes current)
+    public TripBand At(Amperes current) => At(current, worded: true);
+
+    /// <summary>
+    /// The band at <paramref name="current"/> for its limits: a point's limit moved for the current's offset is named by
+    /// its point's requirement alone, without the words on how far it moved. The judge reads the band a step either side
+    /// of every test's current this way, for the slope of a limit, where only the limits and which requirement each is
+    /// are used.
+    /// </summary>
+    internal TripBand LimitsAt(Amperes current) => At(current, worded: false);
+
+    private TripBand At(Amperes current, bool worded)
     {
         var band = _inner.At(current);
         var m = (current / Reference).Value;
         var minimums = Moved(band.Minimums, m, minimum: true);
         var maximums = Moved(band.Maximums, m, minimum: false);
-        foreach (var p in Points)
+        var points = Points;
+        for (var i = 0; i < points.Count; i++)
         {
+            var p = points[i];
             if (!p.Within(m, Window))
             {
                 continue;
@@ -90,12 +102,12 @@ public sealed class PointWindowEnvelope : ITripEnvelope
             var mp = p.Multiple.Value;
             if (p.MustTripWithin is { } t && m < mp && OffsetBound.Stretch(m * Lo(p), mp, u) is var s && !double.IsInfinity(s))
             {
-                maximums.Add(p.TripEdge(carried: false) with { Limit = Seconds.Of(t.Value * s), Requirement = Offset(p, m, s) });
+                maximums.Add(p.TripEdge(carried: false) with { Limit = Seconds.Of(t.Value * s), Requirement = worded ? Offset(p, m, s) : p.Requirement });
             }
 
             if (p.MustHoldFor is { } h && m > mp && OffsetBound.Shrink(m * Hi(p), mp, u) is var k && k > 0)
             {
-                minimums.Add(p.HoldEdge(carried: false) with { Limit = Seconds.Of(h.Value * k), Requirement = Offset(p, m, k) });
+                minimums.Add(p.HoldEdge(carried: false) with { Limit = Seconds.Of(h.Value * k), Requirement = worded ? Offset(p, m, k) : p.Requirement });
             }
         }
 
@@ -113,9 +125,9 @@ public sealed class PointWindowEnvelope : ITripEnvelope
     private List<BandEdge> Moved(IReadOnlyList<BandEdge> edges, double m, bool minimum)
     {
         var moved = new List<BandEdge>(edges.Count + 2);
-        foreach (var e in edges)
+        for (var i = 0; i < edges.Count; i++)
         {
-            if (Moved(e, m, minimum) is { } kept)
+            if (Moved(edges[i], m, minimum) is { } kept)
             {
                 moved.Add(kept);
             }
@@ -156,17 +168,36 @@ public sealed class PointWindowEnvelope : ITripEnvelope
         return e;
     }
 
-    private string MovedRequirement(string requirement) =>
-        LazyInitializer.EnsureInitialized(ref _movedRequirements, static () => new(StringComparer.Ordinal))
-            .GetOrAdd(requirement, static (r, note) => r + note, _ambientNote);
+    // An envelope is made for nearly every ambient a fleet's tests were run at, and moves only a few requirements: a
+    // short list replaced whole (a race between two readers can lose an entry, never change one) is all it needs.
+    private string MovedRequirement(string requirement)
+    {
+        var moved = Volatile.Read(ref _movedRequirements);
+        foreach (var (from, to) in moved)
+        {
+            if (string.Equals(from, requirement, StringComparison.Ordinal))
+            {
+                return to;
+            }
+        }
+
+        var made = requirement + _ambientNote;
+        if (moved.Length < MostMovedKept)
+        {
+            Volatile.Write(ref _movedRequirements, [.. moved, (requirement, made)]);
+        }
+
+        return made;
+    }
 
     private NormativePoint? Labelled(string label)
     {
-        foreach (var p in Points)
+        var points = Points;
+        for (var i = 0; i < points.Count; i++)
         {
-            if (p.Label == label)
+            if (points[i].Label == label)
             {
-                return p;
+                return points[i];
             }
         }
 

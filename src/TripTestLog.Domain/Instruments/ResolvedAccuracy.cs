@@ -1,3 +1,4 @@
+using System.Collections.Concurrent;
 using TripTestLog.Domain.Quantities;
 
 namespace TripTestLog.Domain.Instruments;
@@ -18,7 +19,9 @@ namespace TripTestLog.Domain.Instruments;
 public sealed record ResolvedAccuracy(double TimePercent, double TimeSeconds, double CurrentPercent, double CurrentAmperes, double ResistancePercent,
     double ResistanceMicroOhms, double InsulationPercent, double CoverageFactor, IReadOnlyList<string> FromDefaults)
 {
+    private const int MostWordsKept = 1024;
     private static readonly double Root3 = Math.Sqrt(3);
+    private static readonly ConcurrentDictionary<WordsKey, string> WordsKept = new();
 
     /// <summary>The standard uncertainty of a time reading <paramref name="time"/>, s.</summary>
     public double TimeStandard(Seconds time) => (TimePercent / 100 * time.Value + TimeSeconds) / Root3;
@@ -34,6 +37,50 @@ public sealed record ResolvedAccuracy(double TimePercent, double TimeSeconds, do
 
     /// <summary>The accuracy figures in words, e.g. "time ±(0.5 % + 0.01 s), current ±2 %, k = 2".</summary>
     public string Words(bool time, bool current, bool resistance, bool insulation)
+    {
+        // Every test judged puts its instrument's figures in words, and a fleet has few instruments: the words are kept
+        // by the figures and names they say (bounded, so a register of any size cannot grow it without end).
+        var key = new WordsKey(Bits(TimePercent), Bits(TimeSeconds), Bits(CurrentPercent), Bits(CurrentAmperes), Bits(ResistancePercent),
+            Bits(ResistanceMicroOhms), Bits(InsulationPercent), Bits(CoverageFactor), (time ? 1 : 0) | (current ? 2 : 0) | (resistance ? 4 : 0) | (insulation ? 8 : 0),
+            DefaultsCode(time, current, resistance, insulation));
+        if (WordsKept.TryGetValue(key, out var kept))
+        {
+            return kept;
+        }
+
+        if (WordsKept.Count >= MostWordsKept)
+        {
+            WordsKept.Clear();
+        }
+
+        return WordsKept[key] = WordsOf(time, current, resistance, insulation);
+    }
+
+    private readonly record struct WordsKey(long Tp, long Ts, long Cp, long Ca, long Rp, long Rm, long Ip, long K, int Asked, int Defaults);
+
+    private static long Bits(double x) => BitConverter.DoubleToInt64Bits(x);
+
+    // The defaults the words name, in their order: a digit in base 5 for each (time 1, current 2, resistance 3, insulation 4).
+    private int DefaultsCode(bool time, bool current, bool resistance, bool insulation)
+    {
+        var code = 0;
+        for (var i = 0; i < FromDefaults.Count; i++)
+        {
+            var digit = FromDefaults[i] switch
+            {
+                "time" when time => 1,
+                "current" when current => 2,
+                "resistance" when resistance => 3,
+                "insulation" when insulation => 4,
+                _ => 0,
+            };
+            code = digit == 0 ? code : (code * 5) + digit;
+        }
+
+        return code;
+    }
+
+    private string WordsOf(bool time, bool current, bool resistance, bool insulation)
     {
         static string Part(string name, double pct, double fixedPart, string unit) =>
             fixedPart == 0 ? Invariant($"{name} ±{pct:0.###} %") : pct == 0 ? Invariant($"{name} ±{fixedPart:0.####} {unit}") : Invariant($"{name} ±({pct:0.###} % + {fixedPart:0.####} {unit})");

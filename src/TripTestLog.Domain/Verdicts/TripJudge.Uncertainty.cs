@@ -211,9 +211,10 @@ public static partial class TripJudge
         };
     }
 
-    // The band a step below and a step above the test current, read once for every edge's slope.
+    // The band a step below and a step above the test current, read once for every edge's slope; only its limits and
+    // which requirement each is are used, so the offset's words are not written.
     private static (AppliedBand Below, AppliedBand Above) Neighbours(PointWindowEnvelope envelope, Amperes current, TestConditions conditions) =>
-        (envelope.At(Amperes.Of(current.Value * (1 - SlopeStep))).For(conditions), envelope.At(Amperes.Of(current.Value * (1 + SlopeStep))).For(conditions));
+        (envelope.LimitsAt(Amperes.Of(current.Value * (1 - SlopeStep))).For(conditions), envelope.LimitsAt(Amperes.Of(current.Value * (1 + SlopeStep))).For(conditions));
 
     // The same requirement on both sides of the current: a point's limit moved for the offset keeps its requirement's
     // words before the "; tested ... %" that says how far it moved.

@@ -210,4 +210,27 @@ public sealed class DecisionRuleTests
         Assert.Equal(["current", "resistance", "insulation", "k"], resolved.FromDefaults);
         Assert.Contains("current from the lab policy's defaults", resolved.Words(true, true, false, false));
     }
+
+    [Fact]
+    public void TheWordsSayEachAccuracysOwnFiguresAndDefaults_WhateverWasWordedBefore()
+    {
+        // Words are kept by what they say, so two accuracies alike in figures but not in what came from the defaults, or
+        // asked for other quantities, must not share them (the tool's own wording; GUM 4.3.7 behind the figures).
+        var defaults = InstrumentAccuracy.Of(timePercent: 0.5, timeSeconds: 0.01, currentPercent: 2, coverageFactor: 2);
+        var fromRegister = InstrumentAccuracy.Of(timePercent: 0.5, timeSeconds: 0.01, currentPercent: 2, coverageFactor: 2).Over(defaults);
+        var fromDefaults = InstrumentAccuracy.None.Over(defaults);
+        var timeOnly = InstrumentAccuracy.Of(timePercent: 0.5, timeSeconds: 0.01).Over(defaults);
+
+        var words = new[]
+        {
+            fromRegister.Words(true, true, false, false), fromDefaults.Words(true, true, false, false), timeOnly.Words(true, true, false, false),
+            fromDefaults.Words(true, false, false, false), fromRegister.Words(true, true, false, false),
+        };
+
+        Assert.Equal("time ±(0.5 % + 0.01 s), current ±2 %, k = 2", words[0]);
+        Assert.Equal("time ±(0.5 % + 0.01 s), current ±2 %, k = 2; time and current from the lab policy's defaults (not in the instrument register)", words[1]);
+        Assert.Equal("time ±(0.5 % + 0.01 s), current ±2 %, k = 2; current from the lab policy's defaults (not in the instrument register)", words[2]);
+        Assert.Equal("time ±(0.5 % + 0.01 s), k = 2; time from the lab policy's defaults (not in the instrument register)", words[3]);
+        Assert.Same(words[0], words[4]);
+    }
 }
