@@ -39,12 +39,22 @@ public static class FindingsPipeline
         }
 
         peers.Seal();
-        foreach (var device in ReadAhead.Of(source.Devices(only, withResistance: true), 8, cancel))
+
+        // As check does: the store is read on one thread, each device judged and its findings raised on a second, and
+        // the caller writes on its own. The peer groups are sealed, so the second stage only reads them.
+        var devices = ReadAhead.Of(source.Devices(only, withResistance: true), 8, cancel);
+        foreach (var report in ReadAhead.Of(devices.Select(d => ReportOf(d, judge, peers, policy, asOf, cancel)), 2, cancel))
         {
-            cancel.ThrowIfCancellationRequested();
-            var trips = judge.Judge(device).ToList();
-            yield return new DeviceReport(device, trips, DeviceFindings.Of(device, trips, peers, policy, judge.Instruments, asOf));
+            yield return report;
         }
+    }
+
+    private static DeviceReport ReportOf(DeviceRecords device, DeviceJudge judge, PeerGroups peers, FindingPolicy policy, DateOnly asOf,
+        CancellationToken cancel)
+    {
+        cancel.ThrowIfCancellationRequested();
+        var trips = judge.Judge(device).ToList();
+        return new DeviceReport(device, trips, DeviceFindings.Of(device, trips, peers, policy, judge.Instruments, asOf));
     }
 
     // The peer groups from the places the store keeps (for one device, its peers'; for the whole fleet, every device's),
