@@ -32,7 +32,10 @@ public sealed class ReportWriter : IDisposable
         _devicePages = devicePages;
         _fleet = new FleetReport(30) { Models = new FleetModels(context.Policy, context.Instruments, context.AsOf) };
         Directory.CreateDirectory(Path.Combine(folder, "devices"));
-        var writers = devicePages ? Math.Max(1, Environment.ProcessorCount) : 0;
+        // Two page writers a core: each page is made durable (fsync, then a rename) before the next, and while one
+        // writer waits on the disk the other keeps its core drawing. At one a core, a 10,000-page report spent about a
+        // quarter of each writer's time waiting.
+        var writers = devicePages ? 2 * Math.Max(1, Environment.ProcessorCount) : 0;
         _waiting = devicePages ? new BlockingCollection<DeviceReport>(2 * writers) : null;
         _pageWriters = [.. Enumerable.Range(0, writers).Select(_ => Task.Factory.StartNew(WritePages, CancellationToken.None, TaskCreationOptions.LongRunning, TaskScheduler.Default))];
     }
