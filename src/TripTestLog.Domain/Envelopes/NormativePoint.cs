@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using TripTestLog.Domain.Measurements;
 using TripTestLog.Domain.Quantities;
 
@@ -45,18 +46,40 @@ public sealed record NormativePoint(
     public bool IsNoTripPoint => MustHoldFor is not null && MustTripWithin is null;
 
     /// <summary>The point's no-trip limit as a minimum edge; <paramref name="carried"/> when used below the point's current.</summary>
-    public BandEdge HoldEdge(bool carried) => new(MustHoldFor, EdgeSource.NormativePoint,
-        carried ? $"{Requirement}, carried to lower currents" : Requirement, Start)
-    {
-        Strict = HoldStrict, AnyStart = AnyStart, Loading = Loading, PointLabel = Label, Carried = carried,
-    };
+    public BandEdge HoldEdge(bool carried) => EdgesOf(this).Hold(carried);
 
     /// <summary>The point's trip-by limit as a maximum edge; <paramref name="carried"/> when used above the point's current.</summary>
-    public BandEdge TripEdge(bool carried) => new(MustTripWithin, EdgeSource.NormativePoint,
-        carried ? $"{Requirement}, carried to higher currents" : Requirement, Start)
+    public BandEdge TripEdge(bool carried) => EdgesOf(this).Trip(carried);
+
+    // The judge asks every point for its edges at every test, a million times in a large check: each point's four edges
+    // are made once and shared (an edge cannot change). They are kept beside the point, not in it, so a point's value
+    // (and its equality) stays its fields alone.
+    private static readonly ConditionalWeakTable<NormativePoint, Edges> EdgesKept = new();
+
+    private static Edges EdgesOf(NormativePoint point) => EdgesKept.GetValue(point, static p => new Edges(p));
+
+    private sealed class Edges(NormativePoint p)
     {
-        Strict = TripStrict, AnyStart = AnyStart, Loading = Loading, PointLabel = Label, Carried = carried,
-    };
+        private BandEdge? _hold, _holdCarried, _trip, _tripCarried;
+
+        public BandEdge Hold(bool carried) => carried
+            ? _holdCarried ??= HoldEdge(p, $"{p.Requirement}, carried to lower currents", carried: true)
+            : _hold ??= HoldEdge(p, p.Requirement, carried: false);
+
+        public BandEdge Trip(bool carried) => carried
+            ? _tripCarried ??= TripEdge(p, $"{p.Requirement}, carried to higher currents", carried: true)
+            : _trip ??= TripEdge(p, p.Requirement, carried: false);
+
+        private static BandEdge HoldEdge(NormativePoint p, string requirement, bool carried) => new(p.MustHoldFor, EdgeSource.NormativePoint, requirement, p.Start)
+        {
+            Strict = p.HoldStrict, AnyStart = p.AnyStart, Loading = p.Loading, PointLabel = p.Label, Carried = carried,
+        };
+
+        private static BandEdge TripEdge(NormativePoint p, string requirement, bool carried) => new(p.MustTripWithin, EdgeSource.NormativePoint, requirement, p.Start)
+        {
+            Strict = p.TripStrict, AnyStart = p.AnyStart, Loading = p.Loading, PointLabel = p.Label, Carried = carried,
+        };
+    }
 
     /// <summary>Whether <paramref name="multiple"/> lies within <paramref name="window"/> (relative) of the point's current.</summary>
     public bool Within(double multiple, double window) => Math.Abs(multiple / Multiple.Value - 1.0) <= window + 1e-12;

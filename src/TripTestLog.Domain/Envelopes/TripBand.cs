@@ -28,9 +28,22 @@ public sealed record TripBand(
 
     /// <summary>A band from its edges; with no guaranteed edge on either side it has no requirement, and <paramref name="whyNone"/> says why.</summary>
     public static TripBand Of(Amperes current, CurrentMultiple multiple, IReadOnlyList<BandEdge> minimums, IReadOnlyList<BandEdge> maximums, string whyNone) =>
-        minimums.Any(e => e.Strength == EdgeStrength.Guaranteed) || maximums.Any(e => e.Strength == EdgeStrength.Guaranteed)
+        AnyGuaranteed(minimums) || AnyGuaranteed(maximums)
             ? new TripBand(current, multiple, minimums, maximums, null)
             : new TripBand(current, multiple, minimums, maximums, whyNone);
+
+    private static bool AnyGuaranteed(IReadOnlyList<BandEdge> edges)
+    {
+        for (var i = 0; i < edges.Count; i++)
+        {
+            if (edges[i].Strength == EdgeStrength.Guaranteed)
+            {
+                return true;
+            }
+        }
+
+        return false;
+    }
 
     /// <summary>
     /// The band a test under <paramref name="conditions"/> is held to: the latest guaranteed minimum it could break (one

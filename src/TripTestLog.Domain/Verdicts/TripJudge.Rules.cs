@@ -59,16 +59,16 @@ public static partial class TripJudge
         }
 
         // 2. A guaranteed edge is broken, but it assumes conditions the test did not meet: the band reported is the one cited.
-        var guaranteedMins = band.Minimums.Where(e => e.Strength == EdgeStrength.Guaranteed).ToList();
-        var guaranteedMaxs = band.Maximums.Where(e => e.Strength == EdgeStrength.Guaranteed).ToList();
-        if (outcome.Tripped && guaranteedMins.FirstOrDefault(e => !e.IsOpen && e.TripIsBefore(t)) is { Requirement: not null } early)
+        var guaranteedMins = Guaranteed(band.Minimums);
+        var guaranteedMaxs = Guaranteed(band.Maximums);
+        if (outcome.Tripped && FirstEarly(guaranteedMins, t) is { Requirement: not null } early)
         {
             return new(Verdict.NotAssessable,
                 $"{what}, before the {early.Limit} minimum, but that limit assumes {early.Assumes()} and this test ({conditions}) trips sooner, so it proves nothing ({early.Requirement}); repeat {Repeat(early)}",
                 early, [], [], applied with { Minimum = early });
         }
 
-        if (guaranteedMaxs.FirstOrDefault(e => e.Limit is { } l && (outcome.Tripped ? e.TripIsAfter(t) : t >= l)) is { Requirement: not null } late)
+        if (FirstLate(guaranteedMaxs, outcome) is { Requirement: not null } late)
         {
             return new(Verdict.NotAssessable,
                 $"{what}, past the {late.Limit} maximum, but that limit assumes {late.Assumes()} and this test ({conditions}) trips later, so it proves nothing ({late.Requirement}); repeat {Repeat(late)}",
@@ -100,6 +100,48 @@ public static partial class TripJudge
 
     private static Judged NotAssessable(string reason) => new(Verdict.NotAssessable, reason, null, [], [], null);
 
+    // Every test is judged through these, so they walk the band's short lists by index, with no delegate to make.
+    private static List<BandEdge> Guaranteed(IReadOnlyList<BandEdge> edges)
+    {
+        var guaranteed = new List<BandEdge>(edges.Count);
+        for (var i = 0; i < edges.Count; i++)
+        {
+            if (edges[i].Strength == EdgeStrength.Guaranteed)
+            {
+                guaranteed.Add(edges[i]);
+            }
+        }
+
+        return guaranteed;
+    }
+
+    private static BandEdge? FirstEarly(List<BandEdge> minimums, Seconds t)
+    {
+        foreach (var e in minimums)
+        {
+            if (!e.IsOpen && e.TripIsBefore(t))
+            {
+                return e;
+            }
+        }
+
+        return null;
+    }
+
+    private static BandEdge? FirstLate(List<BandEdge> maximums, TripOutcome outcome)
+    {
+        var t = outcome.Time;
+        foreach (var e in maximums)
+        {
+            if (e.Limit is { } l && (outcome.Tripped ? e.TripIsAfter(t) : t >= l))
+            {
+                return e;
+            }
+        }
+
+        return null;
+    }
+
     // A trip proves a trip-by limit it came within at a current no higher than the limit's (within the window above it),
     // run no hotter than assumed; and a no-trip limit it came after at a current no lower (within the window below),
     // run at least as hot. Settings, the relay formula in its range and curve-table rows prove at their own current.
@@ -125,9 +167,22 @@ public static partial class TripJudge
             }
         }
 
-        proofs.AddRange(maxs.Where(e => Proves(e, c) && !e.TripIsAfter(t) && e.TestAtMostAsHot(c.Conditions)).Select(e => new Proof(e.Requirement, e, null)));
-        proofs.AddRange(mins.Where(e => Proves(e, c) && !e.IsOpen && e.Limit is not null && !e.TripIsBefore(t) && e.TestAtLeastAsHot(c.Conditions))
-            .Select(e => new Proof(e.Requirement, e, null)));
+        foreach (var e in maxs)
+        {
+            if (Proves(e, c) && !e.TripIsAfter(t) && e.TestAtMostAsHot(c.Conditions))
+            {
+                proofs.Add(new Proof(e.Requirement, e, null));
+            }
+        }
+
+        foreach (var e in mins)
+        {
+            if (Proves(e, c) && !e.IsOpen && e.Limit is not null && !e.TripIsBefore(t) && e.TestAtLeastAsHot(c.Conditions))
+            {
+                proofs.Add(new Proof(e.Requirement, e, null));
+            }
+        }
+
         return Nearest(proofs, c);
     }
 
@@ -184,9 +239,10 @@ public static partial class TripJudge
         e.Source is EdgeSource.Setting or EdgeSource.Characteristic or EdgeSource.CurveTable or EdgeSource.Instantaneous
         && (e.Anchor is { } anchor ? Math.Abs(c.Multiple / anchor - 1.0) <= c.Envelope.Window + 1e-12 : !e.Carried);
 
-    // The point nearest the test current first: it is the one the test was most likely aimed at.
+    // The point nearest the test current first: it is the one the test was most likely aimed at (a stable order, so
+    // proofs as near keep the order they were found in; one proof or none is already in order).
     private static List<Proof> Nearest(List<Proof> proofs, Case c) =>
-        proofs.OrderBy(p => p.Point is { } pt ? Math.Abs(Math.Log(c.Multiple / pt.Multiple.Value)) : 0.0).ToList();
+        proofs.Count <= 1 ? proofs : proofs.OrderBy(p => p.Point is { } pt ? Math.Abs(Math.Log(c.Multiple / pt.Multiple.Value)) : 0.0).ToList();
 
     private static List<string> PassNotes(Case c, List<BandEdge> mins, List<BandEdge> maxs)
     {

@@ -51,7 +51,7 @@ public static partial class TripJudge
         return new TripAssessment(measurement, judged.Band ?? applied, judged.Verdict, BasisOf(judged), point, margin, judged.Reason)
         {
             Notes = judged.Notes,
-            Proved = judged.Verdict == Verdict.Pass ? string.Join("; ", judged.Proved.Select(p => p.Requirement).Distinct()) : null,
+            Proved = judged.Verdict == Verdict.Pass ? ProvedWords(judged.Proved) : null,
             RetestAt = judged.Verdict == Verdict.NotAssessable ? aimedAt ?? Nearest(windowed, multiple, conditions, outcome.Tripped) : null,
 
             // An advisory qualifies a pass; on a failure or an open question it would only repeat the reason.
@@ -72,12 +72,28 @@ public static partial class TripJudge
         return judged.Edge is { } edge && Normative(edge) ? VerdictBasis.Normative : VerdictBasis.Band;
     }
 
-    private static NormativePoint? AimedAt(PointWindowEnvelope envelope, double multiple, TestConditions conditions) =>
-        envelope.Points
-            .Where(p => (p.AnyStart || p.Start == conditions.Start) && (p.Loading is null || p.Loading == conditions.Loading))
-            .Where(p => p.Within(multiple, envelope.Window))
-            .OrderBy(p => Math.Abs(multiple / p.Multiple.Value - 1.0))
-            .FirstOrDefault();
+    // The point with the test's start and loading whose window holds it, the nearest first (the first found of equals).
+    private static NormativePoint? AimedAt(PointWindowEnvelope envelope, double multiple, TestConditions conditions)
+    {
+        NormativePoint? aimed = null;
+        var nearest = double.PositiveInfinity;
+        var points = envelope.Points;
+        for (var i = 0; i < points.Count; i++)
+        {
+            var p = points[i];
+            if ((p.AnyStart || p.Start == conditions.Start) && (p.Loading is null || p.Loading == conditions.Loading) && p.Within(multiple, envelope.Window)
+                && Math.Abs(multiple / p.Multiple.Value - 1.0) is var off && (aimed is null || off < nearest))
+            {
+                (aimed, nearest) = (p, off);
+            }
+        }
+
+        return aimed;
+    }
+
+    // Each requirement proved, once, in the order found; one proof (the usual case) is its own words.
+    private static string ProvedWords(IReadOnlyList<Proof> proved) =>
+        proved.Count == 1 ? proved[0].Requirement : string.Join("; ", proved.Select(p => p.Requirement).Distinct());
 
     private static IReadOnlyList<Advisory> Advisories(AppliedBand band, TripOutcome outcome)
     {
