@@ -24,7 +24,23 @@ internal sealed class VerdictJson(TextWriter writer) : IVerdictWriter
 
     public void Finish() => _output.Raw(_started ? "\n]\n" : "[]\n");
 
+    // A report writes each test to the JSON file and then the CSV file: the row made for the one serves the other.
+    [ThreadStatic]
+    private static (JudgedTrip Trip, VerdictRow Row)? _lastRow;
+
     internal static VerdictRow Row(JudgedTrip r)
+    {
+        if (_lastRow is { } last && ReferenceEquals(last.Trip, r))
+        {
+            return last.Row;
+        }
+
+        var row = NewRow(r);
+        _lastRow = (r, row);
+        return row;
+    }
+
+    private static VerdictRow NewRow(JudgedTrip r)
     {
         var m = r.Trip.Measurement;
         var a = r.Assessment;

@@ -109,12 +109,22 @@ internal static class ChartStyle
 
     // The plot library's own SVG export draws every chart twice: once to a bitmap, to lay it out, then to the SVG
     // canvas. Laying it out on a canvas that draws nothing gives the same layout (the text is measured by the font, not
-    // the canvas) without rasterising a bitmap that is thrown away, which was half of each chart's time.
+    // the canvas) without rasterising a bitmap that is thrown away, which was half of each chart's time. The layout pass
+    // also skips the steps that only draw (below).
     private static string SvgOf(Plot plot, int width, int height)
     {
-        using (var layout = new SKNoDrawCanvas(width, height))
+        var actions = plot.RenderManager.RenderActions;
+        var all = actions.ToArray();
+        actions.RemoveAll(DrawsOnly);
+        try
         {
+            using var layout = new SKNoDrawCanvas(width, height);
             plot.Render(layout, width, height);
+        }
+        finally
+        {
+            actions.Clear();
+            actions.AddRange(all);
         }
 
         using var stream = new MemoryStream();
@@ -132,6 +142,13 @@ internal static class ChartStyle
 
         return Encoding.UTF8.GetString(stream.GetBuffer(), 0, (int)stream.Length);
     }
+
+    // The render steps that draw and decide nothing the next render reads: the backgrounds, the grids and the marks. The
+    // legends and the panels stay: a legend outside the data area is sized as it is drawn, and moves the layout.
+    private static bool DrawsOnly(IRenderAction action) => action is ScottPlot.Rendering.RenderActions.RenderFigureBackground
+        or ScottPlot.Rendering.RenderActions.RenderDataBackground or ScottPlot.Rendering.RenderActions.RenderGridsBelowPlottables
+        or ScottPlot.Rendering.RenderActions.RenderPlottables or ScottPlot.Rendering.RenderActions.RenderGridsAbovePlottables
+        or ScottPlot.Rendering.RenderActions.RenderPlottablesLast;
 }
 
 /// <summary>How a test is marked on a chart.</summary>
