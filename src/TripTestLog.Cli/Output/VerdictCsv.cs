@@ -26,7 +26,7 @@ internal sealed class VerdictCsv : IVerdictWriter
 
     public void Add(JudgedTrip judged)
     {
-        var row = VerdictJson.Row(judged);
+        object row = VerdictJson.Row(judged);
         foreach (var field in Fields)
         {
             _csv.Cell(field.Get!(row));

@@ -92,7 +92,9 @@ internal sealed class VerdictJson(TextWriter writer) : IVerdictWriter
     private static bool HeldPastTheMaximum(Domain.Measurements.TripMeasurement m, Domain.Envelopes.AppliedBand band) =>
         !m.Outcome.Tripped && band.Maximum.Limit is { } max && m.Outcome.Time >= max;
 
-    internal sealed record VerdictRow(
+    // A value, not an object: one is made for every test written, a million in a large check, and the JSON writer
+    // takes it as it is (the CSV writer boxes it once a row to read its fields).
+    internal readonly record struct VerdictRow(
         string AssetTag,
         string TestedAt,
         string Stage,

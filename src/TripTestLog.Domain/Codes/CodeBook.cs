@@ -63,9 +63,11 @@ public sealed class CodeBook<T>
     /// <summary>The code of a value.</summary>
     public string Of(T value)
     {
+        // The runtime's comparer for T compares without boxing: Equals(object) boxed every value looked up, and a check
+        // looks up several codes for every test it writes.
         foreach (var (v, code) in _entries)
         {
-            if (v.Equals(value))
+            if (EqualityComparer<T>.Default.Equals(v, value))
             {
                 return code;
             }
