@@ -62,13 +62,27 @@ public sealed class StagedPipelineTests
     [Fact]
     public void AFailureWhileReading_ReachesTheCheckAndTheFindingsCaller_AsItself()
     {
-        var source = new FailingSource(Fleet(), after: 7);
-
-        var check = Assert.Throws<IOException>(() => CheckPipeline.Run(source).ToList());
-        var findings = Assert.Throws<IOException>(() => FindingsPipeline.Run(source, FindingPolicy.Default, AsOf).ToList());
+        // Findings reads the fleet twice; the source fails only in the second read, the staged one, with the readings.
+        var check = Assert.Throws<IOException>(() => CheckPipeline.Run(new FailingSource(Fleet(), after: 7)).ToList());
+        var findingsSource = new FailingSource(Fleet(), after: 7, onlyWithReadings: true);
+        var findings = Assert.Throws<IOException>(() => FindingsPipeline.Run(findingsSource, FindingPolicy.Default, AsOf).ToList());
 
         Assert.Equal("the disk went away after 7 devices", check.Message);
         Assert.Equal("the disk went away after 7 devices", findings.Message);
+        Assert.Equal(2, findingsSource.Reads);
+    }
+
+    [Fact]
+    public void ACallerThatStopsEarly_StopsTheReading_AndTheReadIsClosed()
+    {
+        var source = new FailingSource(Fleet(), after: int.MaxValue);
+
+        var first = CheckPipeline.Run(source).Take(3).ToList();
+
+        Assert.Equal(3, first.Count);
+        Assert.Equal(1, source.Reads);
+        Assert.Equal(1, source.Closed);
+        Assert.InRange(source.Yielded, 1, 8);
     }
 
     [Fact]
@@ -93,19 +107,36 @@ public sealed class StagedPipelineTests
     private static string Line(JudgedTrip j) =>
         $"{j.Trip.Tag.Value} {j.Trip.SourceLine} {j.Assessment.Verdict} {j.Assessment.Reason} {j.Assessment.Band.Range}";
 
-    private sealed class FailingSource(MemorySource inner, int after) : ITripSource
+    // A store that fails after so many devices (in every read, or only in one with contact and insulation readings),
+    // and counts its reads, the devices it gave and the reads closed.
+    private sealed class FailingSource(MemorySource inner, int after, bool onlyWithReadings = false) : ITripSource
     {
+        public int Reads { get; private set; }
+
+        public int Yielded { get; private set; }
+
+        public int Closed { get; private set; }
+
         public IEnumerable<DeviceRecords> Devices(AssetTag? only = null, bool withResistance = false)
         {
-            var n = 0;
-            foreach (var device in inner.Devices(only, withResistance))
+            Reads++;
+            try
             {
-                if (n++ == after)
+                var n = 0;
+                foreach (var device in inner.Devices(only, withResistance))
                 {
-                    throw new IOException($"the disk went away after {after} devices");
-                }
+                    if (n++ == after && (withResistance || !onlyWithReadings))
+                    {
+                        throw new IOException($"the disk went away after {after} devices");
+                    }
 
-                yield return device;
+                    Yielded++;
+                    yield return device;
+                }
+            }
+            finally
+            {
+                Closed++;
             }
         }
 

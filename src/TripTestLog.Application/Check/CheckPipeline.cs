@@ -31,6 +31,8 @@ public static class CheckPipeline
         var devices = ReadAhead.Of(source.Devices(only), 2, cancel);
         foreach (var judged in ReadAhead.Of(devices.Select(d => JudgeAll(judge, d, cancel)), 2, cancel))
         {
+            // A stop asked for ends the output at a device's end, not after the devices already judged ahead.
+            cancel.ThrowIfCancellationRequested();
             foreach (var trip in judged)
             {
                 yield return trip;

@@ -45,6 +45,7 @@ public static class FindingsPipeline
         var devices = ReadAhead.Of(source.Devices(only, withResistance: true), 8, cancel);
         foreach (var report in ReadAhead.Of(devices.Select(d => ReportOf(d, judge, peers, policy, asOf, cancel)), 2, cancel))
         {
+            cancel.ThrowIfCancellationRequested();
             yield return report;
         }
     }

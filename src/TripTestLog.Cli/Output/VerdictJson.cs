@@ -24,7 +24,7 @@ internal sealed class VerdictJson(TextWriter writer) : IVerdictWriter
 
     public void Finish() => _output.Raw(_started ? "\n]\n" : "[]\n");
 
-    // A report writes each test to the JSON file and then the CSV file: the row made for the one serves the other.
+    // A report writes each test to its CSV file and then its JSON file: the row made for the one serves the other.
     [ThreadStatic]
     private static (JudgedTrip Trip, VerdictRow Row)? _lastRow;
 

@@ -100,7 +100,7 @@ public static partial class TripJudge
 
     private static Judged NotAssessable(string reason) => new(Verdict.NotAssessable, reason, null, [], [], null);
 
-    // Every test is judged through these, so they walk the band's short lists by index, with no delegate to make.
+    // Every test is judged through these, so they walk the band's short lists with no delegate or closure to make.
     private static List<BandEdge> Guaranteed(IReadOnlyList<BandEdge> edges)
     {
         var guaranteed = new List<BandEdge>(edges.Count);

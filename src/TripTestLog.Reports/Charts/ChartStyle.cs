@@ -143,8 +143,9 @@ internal static class ChartStyle
         return Encoding.UTF8.GetString(stream.GetBuffer(), 0, (int)stream.Length);
     }
 
-    // The render steps that draw and decide nothing the next render reads: the backgrounds, the grids and the marks. The
-    // legends and the panels stay: a legend outside the data area is sized as it is drawn, and moves the layout.
+    // The render steps that only draw: the backgrounds, the grids and the marks (what they set, the data area of each
+    // mark's axes, the SVG render sets again before it reads it). The legends and the panels stay: a legend outside
+    // the data area is sized as it is drawn, and moves the layout.
     private static bool DrawsOnly(IRenderAction action) => action is ScottPlot.Rendering.RenderActions.RenderFigureBackground
         or ScottPlot.Rendering.RenderActions.RenderDataBackground or ScottPlot.Rendering.RenderActions.RenderGridsBelowPlottables
         or ScottPlot.Rendering.RenderActions.RenderPlottables or ScottPlot.Rendering.RenderActions.RenderGridsAbovePlottables

@@ -224,13 +224,14 @@ public sealed class DecisionRuleTests
         var words = new[]
         {
             fromRegister.Words(true, true, false, false), fromDefaults.Words(true, true, false, false), timeOnly.Words(true, true, false, false),
-            fromDefaults.Words(true, false, false, false), fromRegister.Words(true, true, false, false),
+            fromDefaults.Words(true, false, false, false), fromRegister.Words(true, false, false, false), fromRegister.Words(true, true, false, false),
         };
 
         Assert.Equal("time ±(0.5 % + 0.01 s), current ±2 %, k = 2", words[0]);
         Assert.Equal("time ±(0.5 % + 0.01 s), current ±2 %, k = 2; time and current from the lab policy's defaults (not in the instrument register)", words[1]);
         Assert.Equal("time ±(0.5 % + 0.01 s), current ±2 %, k = 2; current from the lab policy's defaults (not in the instrument register)", words[2]);
         Assert.Equal("time ±(0.5 % + 0.01 s), k = 2; time from the lab policy's defaults (not in the instrument register)", words[3]);
-        Assert.Same(words[0], words[4]);
+        Assert.Equal("time ±(0.5 % + 0.01 s), k = 2", words[4]);
+        Assert.Equal(words[0], words[5]);
     }
 }
