@@ -11,7 +11,23 @@ namespace TripTestLog.Storage;
 /// </summary>
 internal static class SettingsJsonReader
 {
+    /// <summary>
+    /// The fields of <paramref name="json"/>; text that is not a settings object (malformed, or a value of the wrong
+    /// type) is refused with <see cref="InvalidDataException"/> naming it, as a stored value that cannot be read.
+    /// </summary>
     public static SettingsCodec.Dto Read(string json)
+    {
+        try
+        {
+            return Fields(json);
+        }
+        catch (Exception e) when (e is JsonException or InvalidOperationException or FormatException)
+        {
+            throw new InvalidDataException($"settings_json cannot be read ({e.Message}): {json}", e);
+        }
+    }
+
+    private static SettingsCodec.Dto Fields(string json)
     {
         var reader = new Utf8JsonReader(Encoding.UTF8.GetBytes(json));
         if (!reader.Read() || reader.TokenType != JsonTokenType.StartObject)

@@ -34,6 +34,19 @@ public sealed class ReportCommandTests(SampleFleetDatabase fleet) : IClassFixtur
         Assert.Equal(2239, File.ReadLines(Path.Combine(folder, "verdicts.csv")).Count() - 1);
     }
 
+    [Fact]
+    public void TheReportsVerdictFiles_AreWhatCheckWritesAsCsvAndAsJson_RowForRow()
+    {
+        // The report makes each test's row once for both files: each must still be the check's own, test for test.
+        var folder = Path.Combine(fleet.Folder, "report-verdict-files");
+
+        var (exit, _, _) = CliRun.Run("report", "--db", fleet.Database, "--out", folder, "--device-pages", "none");
+
+        Assert.Equal(0, exit);
+        Assert.Equal(CliRun.Run("check", "--csv", "--db", fleet.Database).Out, File.ReadAllText(Path.Combine(folder, "verdicts.csv")));
+        Assert.Equal(CliRun.Run("check", "--json", "--db", fleet.Database).Out, File.ReadAllText(Path.Combine(folder, "verdicts.json")));
+    }
+
     [Theory]
     // ARW-DB1-Q07, path 1-E on 2021-03-05: 6518 MOhm read at 20.5 °C. Halving per 10 K (common practice): x 2^0.05 =
     // 1.0353, 6748 MOhm at 20 °C. The solid-insulation columns (tenfold per 50 K, from memory): x 10^0.01 = 1.0233,

@@ -72,4 +72,16 @@ public sealed class SettingsCodecTests
 
         Assert.Contains("[1]", error.Message);
     }
+
+    [Theory]
+    [InlineData("{\"kind\":\"relay-idmt\",\"tms\":\"0.1\"}")]
+    [InlineData("{\"kind\":\"iec60898\",\"curve\":4}")]
+    [InlineData("{\"kind\":\"iec60898\",\"curve\":\"C\"")]
+    public void AValueOfTheWrongType_OrTextCutShort_IsRefusedAsAStoredValue_WithTheText(string json)
+    {
+        // A stored value that cannot be read is the person's to mend (the tool says so in one sentence), not a fault.
+        var error = Assert.Throws<InvalidDataException>(() => SettingsJsonReader.Read(json));
+
+        Assert.Contains(json, error.Message);
+    }
 }

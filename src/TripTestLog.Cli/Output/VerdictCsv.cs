@@ -17,16 +17,19 @@ internal sealed class VerdictCsv : IVerdictWriter
     private static readonly IReadOnlyList<JsonPropertyInfo> Fields = VerdictJsonContext.Default.VerdictRow.Properties.OrderBy(p => p.Order).ToArray();
 
     private readonly CsvOutput _csv;
+    private readonly VerdictRows? _rows;
 
-    public VerdictCsv(TextWriter writer)
+    /// <summary>Writes to <paramref name="writer"/>; given <paramref name="rows"/>, takes each test's row from there.</summary>
+    public VerdictCsv(TextWriter writer, VerdictRows? rows = null)
     {
         _csv = new CsvOutput(writer);
+        _rows = rows;
         _csv.Header(Fields.Select(f => f.Name));
     }
 
     public void Add(JudgedTrip judged)
     {
-        object row = VerdictJson.Row(judged);
+        object row = _rows is { } shared ? shared.Of(judged) : VerdictJson.Row(judged);
         foreach (var field in Fields)
         {
             _csv.Cell(field.Get!(row));

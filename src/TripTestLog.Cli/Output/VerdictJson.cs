@@ -6,9 +6,10 @@ namespace TripTestLog.Cli.Output;
 
 /// <summary>
 /// The verdicts for programs: a JSON array, one object per trip test. The field names and meanings are documented in
-/// the README ("check --json") and pinned by a golden test; add fields at the end, never rename.
+/// the README ("check --json") and pinned by a golden test; add fields at the end, never rename. Given
+/// <paramref name="rows"/>, it takes each test's row from there, shared with another writer of the same tests.
 /// </summary>
-internal sealed class VerdictJson(TextWriter writer) : IVerdictWriter
+internal sealed class VerdictJson(TextWriter writer, VerdictRows? rows = null) : IVerdictWriter
 {
     private readonly JsonOutput _output = new(writer, indented: false);
     private bool _started;
@@ -17,30 +18,14 @@ internal sealed class VerdictJson(TextWriter writer) : IVerdictWriter
     public void Add(JudgedTrip judged)
     {
         _output.Raw(_started ? ",\n  " : "[\n  ");
-        JsonSerializer.Serialize(_output.Json, Row(judged), VerdictJsonContext.Default.VerdictRow);
+        JsonSerializer.Serialize(_output.Json, rows is { } shared ? shared.Of(judged) : Row(judged), VerdictJsonContext.Default.VerdictRow);
         _output.Flush();
         _started = true;
     }
 
     public void Finish() => _output.Raw(_started ? "\n]\n" : "[]\n");
 
-    // A report writes each test to its CSV file and then its JSON file: the row made for the one serves the other.
-    [ThreadStatic]
-    private static (JudgedTrip Trip, VerdictRow Row)? _lastRow;
-
     internal static VerdictRow Row(JudgedTrip r)
-    {
-        if (_lastRow is { } last && ReferenceEquals(last.Trip, r))
-        {
-            return last.Row;
-        }
-
-        var row = NewRow(r);
-        _lastRow = (r, row);
-        return row;
-    }
-
-    private static VerdictRow NewRow(JudgedTrip r)
     {
         var m = r.Trip.Measurement;
         var a = r.Assessment;

@@ -33,7 +33,7 @@ internal static class ReportRun
         using var verdictsJsonDone = new CompletedFile(Path.Combine(folder, "verdicts.json"));
         using var findingsJson = new FindingJson(findingsJsonDone.Writer);
         var files = new Files(writer, new FindingCsv(findingsCsvDone.Writer), findingsJson,
-            new VerdictWriters(new VerdictCsv(verdictsCsvDone.Writer), new VerdictJson(verdictsJsonDone.Writer), new VerdictCounts()), alsoEach);
+            VerdictFiles(verdictsCsvDone.Writer, verdictsJsonDone.Writer), alsoEach);
         await ReportPipeline.RunAsync(store, context.Policy, context.AsOf, selection, files, progress is null ? null : progress.Step, cancel).ConfigureAwait(false);
 
         findingsJson.Finish();
@@ -47,6 +47,13 @@ internal static class ReportRun
     }
 
     // Each device to its page and its rows in the four data files.
+    // The verdicts as CSV and JSON, each test's row made once for both files.
+    private static VerdictWriters VerdictFiles(TextWriter csv, TextWriter json)
+    {
+        var rows = new VerdictRows();
+        return new VerdictWriters(new VerdictCsv(csv, rows), new VerdictJson(json, rows), new VerdictCounts());
+    }
+
     private sealed class Files(ReportWriter pages, FindingCsv findingsCsv, FindingJson findingsJson, VerdictWriters verdicts, Action<DeviceReport>? alsoEach)
         : IDeviceReportSink
     {
